@@ -1,0 +1,111 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import { errorStatus, type ErrorBody, type ErrorCode, type FieldIssue } from '@wickstone/contracts';
+
+/** The one error type services throw; the error handler turns it into the one error shape. */
+export class AppError extends Error {
+  readonly code: ErrorCode;
+  readonly details: unknown;
+
+  constructor(code: ErrorCode, message: string, details: unknown = null) {
+    super(message);
+    this.name = 'AppError';
+    this.code = code;
+    this.details = details;
+  }
+
+  get status(): number {
+    return errorStatus[this.code];
+  }
+}
+
+export const notFound = (what = 'Resource'): AppError => new AppError('not_found', `${what} not found`);
+
+/** Turn zod issues into field issues whose `field` names where the bad value was (`body.email`). */
+export function fieldIssues(error: ZodError, where: string): FieldIssue[] {
+  return error.issues.flatMap((issue) => {
+    // An unrecognised key is reported on the object; name each extra key as its own field.
+    if (issue.code === 'unrecognized_keys') {
+      return issue.keys.map((key) => ({
+        field: [where, ...issue.path.map(String), key].join('.'),
+        message: 'Unknown field',
+      }));
+    }
+    const path = [where, ...issue.path.map(String)].join('.');
+    return [{ field: path, message: issue.message }];
+  });
+}
+
+export function validationError(error: ZodError, where: string): AppError {
+  const fields = fieldIssues(error, where);
+  const named = [...new Set(fields.map((f) => f.field))].join(', ');
+  return new AppError('validation_failed', `Invalid request: check ${named}`, { fields });
+}
+
+/**
+ * Parse one part of a request with its zod schema; a failure becomes a 400 naming each bad field.
+ */
+export function parseRequest<T>(
+  schema: { safeParse(data: unknown): { success: true; data: T } | { success: false; error: ZodError } },
+  data: unknown,
+  where: 'body' | 'query' | 'params',
+): T {
+  const result = schema.safeParse(data);
+  if (!result.success) throw validationError(result.error, where);
+  return result.data;
+}
+
+export const notFoundHandler: RequestHandler = (req, _res, next) => {
+  next(new AppError('not_found', `No route for ${req.method} ${req.path}`));
+};
+
+function body(code: ErrorCode, message: string, details: unknown): ErrorBody {
+  return { error: { code, message, details: details ?? null } };
+}
+
+interface HttpishError {
+  status?: number;
+  statusCode?: number;
+  type?: string;
+  expose?: boolean;
+  message?: string;
+}
+
+/** The last middleware: every failure leaves as `{ error: { code, message, details } }`, never a stack. */
+export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
+  if (res.headersSent) {
+    res.end();
+    return;
+  }
+  if (err instanceof AppError) {
+    if (err.status >= 500) req.log?.error({ err }, err.message);
+    res.status(err.status).json(body(err.code, err.message, err.details));
+    return;
+  }
+  if (err instanceof ZodError) {
+    const e = validationError(err, 'body');
+    res.status(400).json(body(e.code, e.message, e.details));
+    return;
+  }
+  const h = (typeof err === 'object' && err !== null ? err : {}) as HttpishError;
+  const status = h.status ?? h.statusCode;
+  // body-parser and other http-errors style failures carry their own client status.
+  if (h.type === 'entity.too.large' || status === 413) {
+    res.status(413).json(body('payload_too_large', 'Request body is too large', null));
+    return;
+  }
+  if (h.type === 'entity.parse.failed') {
+    res.status(400).json(body('bad_request', 'Request body is not valid JSON', { fields: [{ field: 'body', message: 'Malformed JSON' }] }));
+    return;
+  }
+  if (h.type === 'encoding.unsupported' || h.type === 'charset.unsupported' || status === 415) {
+    res.status(415).json(body('unsupported_media_type', 'Unsupported content encoding or charset', null));
+    return;
+  }
+  if (typeof status === 'number' && status >= 400 && status < 500) {
+    res.status(status).json(body('bad_request', h.expose && h.message ? h.message : 'Bad request', null));
+    return;
+  }
+  req.log?.error({ err }, 'unhandled error');
+  res.status(500).json(body('internal', 'Something went wrong on our side', null));
+};

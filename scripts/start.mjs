@@ -1,0 +1,69 @@
+// `npm start`: install, build, start a private MariaDB, migrate, seed the demo, then run the fake
+// SMTP server and the app until Ctrl-C, which stops everything this script started.
+import path from 'node:path';
+import { ensureDatabase, ensureMariaDBInstalled, instance, startMariaDB, stopMariaDB } from './lib/mariadb.mjs';
+import { isAlive, log, readPid, root, run, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
+import { build, ensureNodeModules } from './lib/setup.mjs';
+
+const port = Number(process.env.PORT ?? 5180);
+const dbPort = Number(process.env.DB_PORT ?? 3307);
+const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
+const mailHttpPort = Number(process.env.FAKE_MAIL_HTTP_PORT ?? 8025);
+
+const db = instance(path.join(root, 'var', 'mariadb'), dbPort);
+const children = [];
+let startedDb = false;
+
+async function shutdown(code = 0) {
+  for (const child of children.reverse()) await stopPid(child.pid, 10_000);
+  if (startedDb) await stopMariaDB(db);
+  process.exit(code);
+}
+process.on('SIGINT', () => void shutdown(0));
+process.on('SIGTERM', () => void shutdown(0));
+
+try {
+  ensureNodeModules();
+  ensureMariaDBInstalled();
+  build();
+
+  const wasRunning = isAlive(readPid(db.pidFile));
+  await startMariaDB(db);
+  startedDb = !wasRunning;
+  const dbEnv = { DB_HOST: '127.0.0.1', DB_PORT: String(dbPort), DB_NAME: 'wickstone', DB_USER: 'wickstone', DB_PASSWORD: 'wickstone-local' };
+  ensureDatabase(db, { database: dbEnv.DB_NAME, user: dbEnv.DB_USER, password: dbEnv.DB_PASSWORD });
+
+  const env = {
+    ...process.env,
+    ...dbEnv,
+    NODE_ENV: 'development',
+    PORT: String(port),
+    HOST: '127.0.0.1',
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: String(smtpPort),
+    FAKE_MAIL_API_URL: `http://127.0.0.1:${mailHttpPort}`,
+  };
+  run('node', ['apps/server/dist/cli/migrate.js'], { env });
+  run('node', ['apps/server/dist/cli/seed.js'], { env });
+
+  children.push(
+    startChild('mail', 'node', ['scripts/fake-smtp.mjs'], {
+      env: { ...env, FAKE_MAIL_HTTP_PORT: String(mailHttpPort), FAKE_MAIL_FILE: path.join(root, 'var', 'mail', 'messages.jsonl') },
+    }),
+  );
+  const server = startChild('app', 'node', ['apps/server/dist/index.js'], { env });
+  children.push(server);
+  server.on('exit', (code) => {
+    if (code !== 0 && code !== null) {
+      log(`the app exited with ${code}`);
+      void shutdown(1);
+    }
+  });
+
+  await waitForHttp(`http://127.0.0.1:${port}/api/v1/health`);
+  log(`Wickstone is running at http://127.0.0.1:${port}  (Ctrl-C stops it)`);
+  log(`fake mailbox: http://127.0.0.1:${port}/dev/mail`);
+} catch (err) {
+  console.error(`[wickstone] start failed: ${err instanceof Error ? err.message : err}`);
+  await shutdown(1);
+}

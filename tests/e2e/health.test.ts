@@ -1,0 +1,45 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchBrowser } from '../support/browser.js';
+import { startApp, type RunningApp } from '../support/server.js';
+
+describe('dashboard in Chromium', () => {
+  let app: RunningApp;
+  let browser: Browser;
+  beforeAll(async () => {
+    app = await startApp();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await app?.stop();
+  });
+
+  it('shows the product name and the live health status from the server', async () => {
+    const page = await browser.newPage();
+    const failed: string[] = [];
+    page.on('requestfailed', (r) => failed.push(r.url()));
+    await page.goto(app.url);
+    await expect.poll(() => page.locator('h1').textContent()).toBe('Wickstone');
+    const status = page.locator('[data-health="ok"]');
+    await status.waitFor({ timeout: 10_000 });
+    expect(await status.textContent()).toMatch(/database round trip [\d.]+ ms/);
+    // The font ships with the app: every request stayed on our own origin.
+    const fontLoaded = await page.evaluate(async () => {
+      await document.fonts.ready;
+      return document.fonts.check('16px Manrope');
+    });
+    expect(fontLoaded).toBe(true);
+    expect(failed).toEqual([]);
+    await page.close();
+  });
+
+  it('serves the dashboard for client-side routes and 404 JSON for unknown API routes', async () => {
+    const html = await fetch(`${app.url}/some/client/route`, { headers: { accept: 'text/html' } });
+    expect(html.status).toBe(200);
+    expect(await html.text()).toContain('<div id="root">');
+    const api = await fetch(`${app.url}/api/v1/missing`);
+    expect(api.status).toBe(404);
+    expect((await api.json()).error.code).toBe('not_found');
+  });
+});

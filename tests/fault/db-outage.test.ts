@@ -1,0 +1,68 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import type { AddressInfo } from 'node:net';
+import type { Server } from 'node:http';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createApp } from '@wickstone/server/app';
+import { loadConfig } from '@wickstone/server/config';
+import { createLogger } from '@wickstone/server/logger';
+import { createSequelize } from '@wickstone/server/db';
+import { errorBodySchema, healthResponseSchema } from '@wickstone/contracts';
+import { ensureDatabase, instance, startMariaDB, stopMariaDB, type MariaDBInstance } from '../../scripts/lib/mariadb.mjs';
+
+// A MariaDB of this test's own, so stopping it harms no other test.
+describe('health when the database goes away and comes back', () => {
+  let dir: string;
+  let inst: MariaDBInstance;
+  let server: Server;
+  let url: string;
+  let closePool: () => Promise<void>;
+
+  beforeAll(async () => {
+    dir = mkdtempSync(path.join(tmpdir(), 'wst-outage-'));
+    inst = instance(dir, 3399);
+    await startMariaDB(inst, { quiet: true });
+    ensureDatabase(inst, { database: 'outage', user: 'outage', password: 'outage-pass' });
+    const config = loadConfig({ DB_PORT: '3399', DB_NAME: 'outage', DB_USER: 'outage', DB_PASSWORD: 'outage-pass', LOG_LEVEL: 'silent', NODE_ENV: 'test' });
+    const sequelize = createSequelize(config.db);
+    closePool = () => sequelize.close();
+    const app = createApp({ config, sequelize, logger: createLogger(config) });
+    server = await new Promise((resolve) => {
+      const s = app.listen(0, '127.0.0.1', () => resolve(s));
+    });
+    url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/v1/health`;
+  });
+
+  afterAll(async () => {
+    server?.closeAllConnections();
+    await new Promise((r) => server?.close(r));
+    await closePool?.();
+    if (inst) await stopMariaDB(inst, { quiet: true });
+    rmSync(dir, { recursive: true, force: true });
+  });
+
+  it('answers 200 while the database is up', async () => {
+    const res = await fetch(url);
+    expect(res.status).toBe(200);
+    expect(healthResponseSchema.parse(await res.json()).database.status).toBe('up');
+  });
+
+  it('answers 503 with the error shape while it is down, within seconds', async () => {
+    await stopMariaDB(inst, { quiet: true });
+    const t0 = Date.now();
+    const res = await fetch(url);
+    expect(res.status).toBe(503);
+    const body = errorBodySchema.parse(await res.json());
+    expect(body.error.code).toBe('service_unavailable');
+    expect(body.error.details).toMatchObject({ database: { status: 'down' } });
+    expect(Date.now() - t0).toBeLessThan(10_000);
+  });
+
+  it('recovers once the database is back', async () => {
+    await startMariaDB(inst, { quiet: true });
+    await expect
+      .poll(async () => (await fetch(url)).status, { timeout: 20_000, interval: 250 })
+      .toBe(200);
+  });
+});
