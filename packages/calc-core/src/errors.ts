@@ -1,0 +1,37 @@
+/** One bad argument or input field: which one, a stable code, and a sentence for a person. */
+export interface FieldIssue {
+  readonly field: string;
+  readonly code: string;
+  readonly message: string;
+}
+
+/**
+ * The one error type for bad arguments and bad calculator inputs.
+ *
+ * A formula function throws it with a single issue naming the argument; `calculate` throws it with
+ * every bad field at once, so a form can mark them all in one pass. `code` and `field` repeat the
+ * first issue so that callers that only care about one field need not look into `issues`.
+ */
+export class CalcInputError extends Error {
+  override readonly name = 'CalcInputError';
+  /** `INVALID_INPUTS` when several fields are bad, otherwise the single issue's code. */
+  readonly code: string;
+  /** The first bad field or argument. */
+  readonly field: string;
+  readonly issues: readonly FieldIssue[];
+
+  constructor(issues: FieldIssue | readonly FieldIssue[]) {
+    const list = Array.isArray(issues) ? [...(issues as readonly FieldIssue[])] : [issues as FieldIssue];
+    const first = list[0];
+    if (first === undefined) throw new TypeError('CalcInputError needs at least one issue');
+    super(list.length === 1 ? first.message : list.map((i) => `${i.field}: ${i.message}`).join('; '));
+    this.code = list.length === 1 ? first.code : 'INVALID_INPUTS';
+    this.field = first.field;
+    this.issues = list;
+  }
+
+  /** Plain data for an API error body: `{ code, message, issues }`. */
+  toJSON(): { code: string; message: string; issues: FieldIssue[] } {
+    return { code: this.code, message: this.message, issues: this.issues.map((i) => ({ ...i })) };
+  }
+}

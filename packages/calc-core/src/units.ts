@@ -1,0 +1,241 @@
+import { CalcInputError } from './errors.js';
+import { finite } from './guards.js';
+
+/** The physical quantities that calculator inputs and outputs are measured in. */
+export type QuantityKind =
+  | 'length'
+  | 'area'
+  | 'force'
+  | 'pressure'
+  | 'surfaceTension'
+  | 'density'
+  | 'temperature'
+  | 'angle'
+  | 'viscosity'
+  | 'time'
+  | 'acceleration'
+  | 'dimensionless';
+
+export const quantityKinds: readonly QuantityKind[] = [
+  'length',
+  'area',
+  'force',
+  'pressure',
+  'surfaceTension',
+  'density',
+  'temperature',
+  'angle',
+  'viscosity',
+  'time',
+  'acceleration',
+  'dimensionless',
+];
+
+export interface UnitDefinition {
+  readonly kind: QuantityKind;
+  /** What to print after a number, e.g. `mN/m`, `°C`, `µm`. */
+  readonly symbol: string;
+  readonly name: string;
+  /** canonical value = (value + offset) × factor. */
+  readonly factor: number;
+  readonly offset: number;
+}
+
+// Exact definitions, NIST SP 811 (2008) Appendix B: the inch and the foot are exact in metres,
+// the pound is exactly 0.45359237 kg and standard gravity exactly 9.806 65 m/s². Derived factors are
+// computed from them rather than typed in, so a rounded table value cannot creep in.
+const INCH_M = 0.0254;
+const FOOT_M = 0.3048;
+const POUND_KG = 0.45359237;
+/** Standard acceleration of gravity gₙ in m/s² (exact, CGPM 1901; NIST SP 811). */
+export const STANDARD_GRAVITY = 9.80665;
+// 0.45359237 × 9.80665 is exactly 4.4482216152605, and that product is exact in binary64 too.
+const POUND_FORCE_N = POUND_KG * STANDARD_GRAVITY;
+const SQUARE_INCH_M2 = 0.00064516;
+const SQUARE_FOOT_M2 = 0.09290304;
+const CUBIC_FOOT_M3 = 0.028316846592;
+
+function unit(kind: QuantityKind, symbol: string, name: string, factor: number, offset = 0): UnitDefinition {
+  return { kind, symbol, name, factor, offset };
+}
+
+/**
+ * Every unit calc-core knows. The canonical unit of each kind (factor 1, offset 0) is the one
+ * `calculate` takes and returns: SI, except that angles are in degrees and temperatures in
+ * degrees Celsius, both accepted for use with the SI and the way every source here states them.
+ */
+export const units = {
+  // length, canonical m
+  m: unit('length', 'm', 'metre', 1),
+  cm: unit('length', 'cm', 'centimetre', 0.01),
+  mm: unit('length', 'mm', 'millimetre', 0.001),
+  um: unit('length', 'µm', 'micrometre', 1e-6),
+  nm: unit('length', 'nm', 'nanometre', 1e-9),
+  in: unit('length', 'in', 'inch', INCH_M),
+  ft: unit('length', 'ft', 'foot', FOOT_M),
+  // area, canonical m²
+  m2: unit('area', 'm²', 'square metre', 1),
+  cm2: unit('area', 'cm²', 'square centimetre', 1e-4),
+  mm2: unit('area', 'mm²', 'square millimetre', 1e-6),
+  in2: unit('area', 'in²', 'square inch', SQUARE_INCH_M2),
+  ft2: unit('area', 'ft²', 'square foot', SQUARE_FOOT_M2),
+  // force, canonical N
+  N: unit('force', 'N', 'newton', 1),
+  mN: unit('force', 'mN', 'millinewton', 1e-3),
+  uN: unit('force', 'µN', 'micronewton', 1e-6),
+  dyn: unit('force', 'dyn', 'dyne', 1e-5),
+  lbf: unit('force', 'lbf', 'pound-force', POUND_FORCE_N),
+  // pressure, canonical Pa
+  Pa: unit('pressure', 'Pa', 'pascal', 1),
+  kPa: unit('pressure', 'kPa', 'kilopascal', 1e3),
+  psi: unit('pressure', 'psi', 'pound-force per square inch', POUND_FORCE_N / SQUARE_INCH_M2),
+  psf: unit('pressure', 'psf', 'pound-force per square foot', POUND_FORCE_N / SQUARE_FOOT_M2),
+  // NIST SP 811 B.8: conventional inch of water = 0.0254 m × 1000 kg/m³ × gₙ = 249.088 91 Pa exactly.
+  inH2O: unit('pressure', 'inH₂O', 'inch of water (conventional)', 249.08891),
+  // surface tension, canonical N/m
+  'N/m': unit('surfaceTension', 'N/m', 'newton per metre', 1),
+  'mN/m': unit('surfaceTension', 'mN/m', 'millinewton per metre', 1e-3),
+  'dyn/cm': unit('surfaceTension', 'dyn/cm', 'dyne per centimetre', 1e-3),
+  'lbf/ft': unit('surfaceTension', 'lbf/ft', 'pound-force per foot', POUND_FORCE_N / FOOT_M),
+  // density, canonical kg/m³
+  kg_m3: unit('density', 'kg/m³', 'kilogram per cubic metre', 1),
+  g_cm3: unit('density', 'g/cm³', 'gram per cubic centimetre', 1000),
+  lb_ft3: unit('density', 'lb/ft³', 'pound per cubic foot', POUND_KG / CUBIC_FOOT_M3),
+  // temperature, canonical °C; NIST SP 811 4.2.1.1: t/°C = T/K − 273.15 and t/°C = (t/°F − 32)/1.8
+  degC: unit('temperature', '°C', 'degree Celsius', 1),
+  degF: unit('temperature', '°F', 'degree Fahrenheit', 1 / 1.8, -32),
+  K: unit('temperature', 'K', 'kelvin', 1, -273.15),
+  // angle, canonical degree
+  deg: unit('angle', '°', 'degree', 1),
+  rad: unit('angle', 'rad', 'radian', 180 / Math.PI),
+  // dynamic viscosity, canonical Pa·s
+  'Pa*s': unit('viscosity', 'Pa·s', 'pascal second', 1),
+  'mPa*s': unit('viscosity', 'mPa·s', 'millipascal second', 1e-3),
+  cP: unit('viscosity', 'cP', 'centipoise', 1e-3),
+  // time, canonical s
+  s: unit('time', 's', 'second', 1),
+  min: unit('time', 'min', 'minute', 60),
+  h: unit('time', 'h', 'hour', 3600),
+  day: unit('time', 'day', 'day', 86400),
+  // acceleration, canonical m/s²
+  'm/s2': unit('acceleration', 'm/s²', 'metre per second squared', 1),
+  'ft/s2': unit('acceleration', 'ft/s²', 'foot per second squared', FOOT_M),
+  // pure numbers
+  '1': unit('dimensionless', '', 'dimensionless', 1),
+} as const satisfies Record<string, UnitDefinition>;
+
+export type UnitId = keyof typeof units;
+
+/** Spellings people type for a few units; mapped onto the ids above. */
+const aliases: Readonly<Record<string, UnitId>> = {
+  'kg/m3': 'kg_m3',
+  'g/cm3': 'g_cm3',
+  'lb/ft3': 'lb_ft3',
+  'µm': 'um',
+  '°C': 'degC',
+  '°F': 'degF',
+  '°': 'deg',
+  'Pa·s': 'Pa*s',
+  'mPa·s': 'mPa*s',
+  'm/s²': 'm/s2',
+  'ft/s²': 'ft/s2',
+};
+
+/** The canonical (calculate-facing) unit of each kind. */
+export const canonicalUnits: Readonly<Record<QuantityKind, UnitId>> = {
+  length: 'm',
+  area: 'm2',
+  force: 'N',
+  pressure: 'Pa',
+  surfaceTension: 'N/m',
+  density: 'kg_m3',
+  temperature: 'degC',
+  angle: 'deg',
+  viscosity: 'Pa*s',
+  time: 's',
+  acceleration: 'm/s2',
+  dimensionless: '1',
+};
+
+export type UnitSystemId = 'si' | 'us';
+
+/**
+ * The unit each kind is shown in by default. US practice keeps dyn/cm for surface tension (it is
+ * what US laboratory reports and ASTM D971 used before mN/m, and lbf/ft gives numbers like 0.005),
+ * and cP for viscosity.
+ */
+export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<QuantityKind, UnitId>>>> = {
+  si: {
+    length: 'm',
+    area: 'cm2',
+    force: 'mN',
+    pressure: 'kPa',
+    surfaceTension: 'mN/m',
+    density: 'kg_m3',
+    temperature: 'degC',
+    angle: 'deg',
+    viscosity: 'mPa*s',
+    time: 's',
+    acceleration: 'm/s2',
+    dimensionless: '1',
+  },
+  us: {
+    length: 'in',
+    area: 'in2',
+    force: 'lbf',
+    pressure: 'psi',
+    surfaceTension: 'dyn/cm',
+    density: 'lb_ft3',
+    temperature: 'degF',
+    angle: 'deg',
+    viscosity: 'cP',
+    time: 's',
+    acceleration: 'ft/s2',
+    dimensionless: '1',
+  },
+};
+
+/** The definition of a unit id or alias; throws CalcInputError (`UNKNOWN_UNIT`) for anything else. */
+export function getUnit(id: string, field = 'unit'): UnitDefinition & { id: UnitId } {
+  const key = (Object.hasOwn(units, id) ? id : aliases[id]) as UnitId | undefined;
+  if (key === undefined || !Object.hasOwn(units, key)) {
+    throw new CalcInputError({ field, code: 'UNKNOWN_UNIT', message: `unknown unit "${id}"` });
+  }
+  return { ...units[key], id: key };
+}
+
+/** The display unit of a kind in a unit system. */
+export function displayUnit(kind: QuantityKind, system: UnitSystemId): UnitId {
+  return unitSystems[system][kind];
+}
+
+/**
+ * Converts `value` from one unit to another of the same kind (e.g. `convert(1, 'in', 'mm')` → 25.4).
+ * Throws CalcInputError `UNIT_KIND_MISMATCH` across kinds, `UNKNOWN_UNIT` for an unknown id and
+ * `NOT_A_NUMBER`/`NOT_FINITE` for a non-finite value.
+ */
+export function convert(value: number, fromUnit: string, toUnit: string): number {
+  finite('value', value);
+  const from = getUnit(fromUnit, 'fromUnit');
+  const to = getUnit(toUnit, 'toUnit');
+  if (from.kind !== to.kind) {
+    throw new CalcInputError({
+      field: 'toUnit',
+      code: 'UNIT_KIND_MISMATCH',
+      message: `cannot convert ${from.kind} (${from.symbol}) to ${to.kind} (${to.symbol})`,
+    });
+  }
+  if (from.id === to.id) return value;
+  const canonical = (value + from.offset) * from.factor;
+  return canonical / to.factor - to.offset;
+}
+
+/** A value in a kind's canonical unit, from any unit of that kind. */
+export function toCanonical(value: number, fromUnit: string): number {
+  return convert(value, fromUnit, canonicalUnits[getUnit(fromUnit, 'fromUnit').kind]);
+}
+
+/** A canonical value of a unit's kind, expressed in that unit. */
+export function fromCanonical(value: number, toUnit: string): number {
+  return convert(value, canonicalUnits[getUnit(toUnit, 'toUnit').kind], toUnit);
+}
