@@ -9,7 +9,8 @@ function fail(field: string, code: string, message: string): never {
 
 /** Throws unless `value` is a finite number. */
 export function finite(field: string, value: number): number {
-  if (typeof value !== 'number' || Number.isNaN(value)) fail(field, 'NOT_A_NUMBER', `${field} must be a number`);
+  if (typeof value !== 'number' || Number.isNaN(value))
+    fail(field, 'NOT_A_NUMBER', `${field} must be a number`);
   if (!Number.isFinite(value)) fail(field, 'NOT_FINITE', `${field} must be finite`);
   return value;
 }

@@ -98,9 +98,9 @@ export const units = {
   'dyn/cm': unit('surfaceTension', 'dyn/cm', 'dyne per centimetre', 1e-3),
   'lbf/ft': unit('surfaceTension', 'lbf/ft', 'pound-force per foot', POUND_FORCE_N / FOOT_M),
   // density, canonical kg/m³
-  kg_m3: unit('density', 'kg/m³', 'kilogram per cubic metre', 1),
-  g_cm3: unit('density', 'g/cm³', 'gram per cubic centimetre', 1000),
-  lb_ft3: unit('density', 'lb/ft³', 'pound per cubic foot', POUND_KG / CUBIC_FOOT_M3),
+  'kg/m3': unit('density', 'kg/m³', 'kilogram per cubic metre', 1),
+  'g/cm3': unit('density', 'g/cm³', 'gram per cubic centimetre', 1000),
+  'lb/ft3': unit('density', 'lb/ft³', 'pound per cubic foot', POUND_KG / CUBIC_FOOT_M3),
   // temperature, canonical °C; NIST SP 811 4.2.1.1: t/°C = T/K − 273.15 and t/°C = (t/°F − 32)/1.8
   degC: unit('temperature', '°C', 'degree Celsius', 1),
   degF: unit('temperature', '°F', 'degree Fahrenheit', 1 / 1.8, -32),
@@ -128,10 +128,7 @@ export type UnitId = keyof typeof units;
 
 /** Spellings people type for a few units; mapped onto the ids above. */
 const aliases: Readonly<Record<string, UnitId>> = {
-  'kg/m3': 'kg_m3',
-  'g/cm3': 'g_cm3',
-  'lb/ft3': 'lb_ft3',
-  'µm': 'um',
+  µm: 'um',
   '°C': 'degC',
   '°F': 'degF',
   '°': 'deg',
@@ -148,7 +145,7 @@ export const canonicalUnits: Readonly<Record<QuantityKind, UnitId>> = {
   force: 'N',
   pressure: 'Pa',
   surfaceTension: 'N/m',
-  density: 'kg_m3',
+  density: 'kg/m3',
   temperature: 'degC',
   angle: 'deg',
   viscosity: 'Pa*s',
@@ -171,7 +168,7 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     force: 'mN',
     pressure: 'kPa',
     surfaceTension: 'mN/m',
-    density: 'kg_m3',
+    density: 'kg/m3',
     temperature: 'degC',
     angle: 'deg',
     viscosity: 'mPa*s',
@@ -185,7 +182,7 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     force: 'lbf',
     pressure: 'psi',
     surfaceTension: 'dyn/cm',
-    density: 'lb_ft3',
+    density: 'lb/ft3',
     temperature: 'degF',
     angle: 'deg',
     viscosity: 'cP',

@@ -1,0 +1,229 @@
+import { CalcInputError, type FieldIssue } from '../errors.js';
+import { canonicalJson, sha256Hex } from '../hash.js';
+import { canonicalUnits, units } from '../units.js';
+import { VERSION } from '../version.js';
+import type {
+  Band,
+  BandBasis,
+  CalculationResult,
+  CalculatorDefinition,
+  InputDefinition,
+  InputValues,
+  Outputs,
+  QuantityInput,
+} from './types.js';
+
+function isPlainObject(value: unknown): value is Readonly<Record<string, unknown>> {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) return false;
+  const proto: unknown = Object.getPrototypeOf(value);
+  return proto === Object.prototype || proto === null;
+}
+
+function rangeText(input: QuantityInput): string {
+  const symbol = units[canonicalUnits[input.kind]].symbol;
+  const unit = symbol === '' ? '' : symbol === '°' || symbol === '°C' ? symbol : ` ${symbol}`;
+  return `from ${input.min}${unit} to ${input.max}${unit}`;
+}
+
+/**
+ * Checks raw inputs against a definition and fills defaults. Choice inputs are resolved first
+ * because they decide which other inputs apply.
+ * @returns the resolved inputs, in the definition's order, only those that apply
+ * @throws CalcInputError listing every bad field at once
+ */
+export function resolveInputs(def: CalculatorDefinition, raw: unknown): InputValues {
+  if (!isPlainObject(raw)) {
+    throw new CalcInputError({
+      field: 'inputs',
+      code: 'NOT_AN_OBJECT',
+      message: 'inputs must be an object keyed by input id',
+    });
+  }
+  const issues: FieldIssue[] = [];
+  const known = new Set(def.inputs.map((i) => i.id));
+  for (const key of Object.keys(raw)) {
+    if (!known.has(key))
+      issues.push({ field: key, code: 'UNKNOWN_INPUT', message: `${def.id} has no input "${key}"` });
+  }
+
+  const choices = new Map<string, string>();
+  const badChoices = new Set<string>();
+  for (const input of def.inputs) {
+    if (input.kind !== 'choice') continue;
+    const value = raw[input.id] === undefined ? input.default : raw[input.id];
+    if (typeof value === 'string' && input.options.some((o) => o.value === value))
+      choices.set(input.id, value);
+    else badChoices.add(input.id);
+  }
+
+  const byId = new Map(def.inputs.map((i) => [i.id, i] as const));
+  const applies = (input: InputDefinition, depth = 0): boolean =>
+    depth < 8 &&
+    (input.appliesWhen ?? []).every((cond) => {
+      const parent = byId.get(cond.input);
+      const value = choices.get(cond.input);
+      return (
+        parent !== undefined &&
+        value !== undefined &&
+        cond.values.includes(value) &&
+        applies(parent, depth + 1)
+      );
+    });
+
+  const resolved: Record<string, number | string> = {};
+  for (const input of def.inputs) {
+    if (!applies(input)) continue;
+    if (input.kind === 'choice') {
+      const value = choices.get(input.id);
+      if (value !== undefined) resolved[input.id] = value;
+      // A bad value only matters for a choice that applies, as with numbers.
+      if (badChoices.has(input.id)) {
+        issues.push({
+          field: input.id,
+          code: 'NOT_AN_OPTION',
+          message: `${input.label} must be one of: ${input.options.map((o) => o.value).join(', ')}`,
+        });
+      }
+      continue;
+    }
+    const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];
+    const fail = (code: string, message: string): void => {
+      issues.push({ field: input.id, code, message: `${input.label} ${message}` });
+    };
+    if (value === null) fail('REQUIRED', 'needs a value');
+    else if (typeof value !== 'number' || Number.isNaN(value)) fail('NOT_A_NUMBER', 'must be a number');
+    else if (!Number.isFinite(value)) fail('NOT_FINITE', 'must be finite');
+    else if (value < input.min || value > input.max) {
+      fail(value > input.max ? 'ABOVE_MAX' : 'BELOW_MIN', `must be ${rangeText(input)}`);
+    } else resolved[input.id] = value;
+  }
+  if (issues.length > 0) throw new CalcInputError(issues);
+  return resolved;
+}
+
+function checkSolution(def: CalculatorDefinition, outputs: Outputs, warningCodes: readonly string[]): void {
+  // A definition that breaks its own contract is a bug in calc-core, not a bad input: plain Error.
+  for (const out of def.outputs) {
+    const v = outputs[out.id];
+    if (v === undefined || (v !== null && !Number.isFinite(v))) {
+      throw new Error(`${def.id}: output ${out.id} is ${String(v)}`);
+    }
+  }
+  const declared = new Set(def.warnings.map((w) => w.code));
+  for (const code of warningCodes) {
+    if (!declared.has(code)) throw new Error(`${def.id}: warning ${code} is not declared`);
+  }
+}
+
+/** The stable hash of a calculator's resolved inputs: SHA-256 hex of `{ calculator, inputs }`. */
+export function hashInputs(calculatorId: string, inputs: InputValues): string {
+  return sha256Hex(canonicalJson({ calculator: calculatorId, inputs }));
+}
+
+/**
+ * Runs one calculator: validates, solves, stamps the version and the input hash. Deterministic
+ * and JSON-serialisable, so the server can re-run a visitor's inputs and compare.
+ * @param raw inputs keyed by input id, canonical units (SI, angles in degrees, temperatures in °C)
+ * @throws CalcInputError listing every bad field
+ */
+export function runCalculation(def: CalculatorDefinition, raw: unknown): CalculationResult {
+  const inputs = resolveInputs(def, raw);
+  let solution;
+  try {
+    solution = def.solve(inputs);
+  } catch (err) {
+    if (err instanceof RangeError) {
+      throw new CalcInputError({ field: 'inputs', code: 'OUT_OF_RANGE', message: err.message });
+    }
+    throw err;
+  }
+  checkSolution(
+    def,
+    solution.outputs,
+    solution.warnings.map((w) => w.code),
+  );
+  return {
+    calculator: def.id,
+    inputs,
+    outputs: solution.outputs,
+    warnings: solution.warnings,
+    working: solution.working,
+    band: solution.band,
+    version: VERSION,
+    inputHash: hashInputs(def.id, inputs),
+  };
+}
+
+/** `runCalculation` bound to one definition: the `run` each calculator subpath exports. */
+export function runner(def: CalculatorDefinition): (inputs: unknown) => CalculationResult {
+  return (inputs) => runCalculation(def, inputs);
+}
+
+/**
+ * The range of every output over all corners of the spread inputs (2ⁿ evaluations, n ≤ 3 here),
+ * nominal included. Exact for outputs monotonic in each spread input, which all of ours are.
+ * @returns null when no input has a spread
+ */
+export function bandOver(
+  basis: readonly BandBasis[],
+  nominal: Outputs,
+  evaluate: (values: Readonly<Record<string, number>>) => Outputs,
+): Band | null {
+  if (basis.length === 0) return null;
+  const ranges: Record<string, { low: number; high: number }> = {};
+  const take = (outputs: Outputs): void => {
+    for (const [id, v] of Object.entries(outputs)) {
+      if (v === null) continue;
+      const r = ranges[id];
+      if (r === undefined) ranges[id] = { low: v, high: v };
+      else {
+        r.low = Math.min(r.low, v);
+        r.high = Math.max(r.high, v);
+      }
+    }
+  };
+  take(nominal);
+  for (let mask = 0; mask < 1 << basis.length; mask++) {
+    const values: Record<string, number> = {};
+    basis.forEach((b, i) => {
+      values[b.input] = mask & (1 << i) ? b.high : b.low;
+    });
+    take(evaluate(values));
+  }
+  return { basis, outputs: ranges };
+}
+
+function close(a: number, b: number, tol: number): boolean {
+  return a === b || Math.abs(a - b) <= tol * Math.max(Math.abs(a), Math.abs(b));
+}
+
+/**
+ * Whether two results of the same run agree: same calculator, version, inputs hash and warning
+ * codes, and every output and band edge within a relative tolerance. Exact equality is not the
+ * test because Math.exp, Math.pow and Math.cos may differ in the last bit between JavaScript
+ * engines (the language leaves them implementation-approximated).
+ * @param relativeTolerance dimensionless; 1e-9 by default
+ */
+export function resultsAgree(a: CalculationResult, b: CalculationResult, relativeTolerance = 1e-9): boolean {
+  if (a.calculator !== b.calculator || a.version !== b.version || a.inputHash !== b.inputHash) return false;
+  const codes = (r: CalculationResult): string => r.warnings.map((w) => w.code).join(',');
+  if (codes(a) !== codes(b)) return false;
+  const keys = new Set([...Object.keys(a.outputs), ...Object.keys(b.outputs)]);
+  for (const k of keys) {
+    const x = a.outputs[k];
+    const y = b.outputs[k];
+    if (x === undefined || y === undefined) return false;
+    if (x === null || y === null ? x !== y : !close(x, y, relativeTolerance)) return false;
+  }
+  if ((a.band === null) !== (b.band === null)) return false;
+  if (a.band !== null && b.band !== null) {
+    const bandKeys = new Set([...Object.keys(a.band.outputs), ...Object.keys(b.band.outputs)]);
+    for (const k of bandKeys) {
+      const x = a.band.outputs[k];
+      const y = b.band.outputs[k];
+      if (x === undefined || y === undefined) return false;
+      if (!close(x.low, y.low, relativeTolerance) || !close(x.high, y.high, relativeTolerance)) return false;
+    }
+  }
+  return true;
+}

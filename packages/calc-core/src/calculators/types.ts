@@ -1,0 +1,153 @@
+import type { Basis } from '../properties/liquids.js';
+import type { QuantityKind, UnitId, UnitSystemId } from '../units.js';
+
+// A calculator is data plus one pure function. Everything but `solve` survives JSON.stringify, so
+// the widget, the dashboard's editor and the server can all render or store a definition as-is.
+
+/** Holds when the choice input `input` currently has one of `values`. */
+export interface Condition {
+  readonly input: string;
+  readonly values: readonly string[];
+}
+
+interface InputCommon {
+  /** Stable camelCase id: the key in `calculate`'s inputs. Never renamed once released. */
+  readonly id: string;
+  readonly label: string;
+  readonly help?: string;
+  /**
+   * The input takes part only while every condition holds; otherwise a form hides it, `calculate`
+   * ignores any value sent for it and it is left out of the input hash.
+   */
+  readonly appliesWhen?: readonly Condition[];
+}
+
+/** A range of an input that a source gives; the result's band is drawn from it. Canonical units. */
+export interface Spread {
+  readonly low: number;
+  readonly high: number;
+  readonly source: string;
+}
+
+export interface QuantityInput extends InputCommon {
+  readonly kind: QuantityKind;
+  /** Canonical units (see `canonicalUnits`): SI, angles in degrees, temperatures in °C. */
+  readonly default: number;
+  /** Inclusive bounds, canonical units: physical limits of the formulas, not of the form. */
+  readonly min: number;
+  readonly max: number;
+  readonly spread?: Spread;
+  /** A better display unit than the unit system's default for this kind (a bore in mm, not m). */
+  readonly display?: Partial<Readonly<Record<UnitSystemId, UnitId>>>;
+}
+
+export interface ChoiceOption {
+  readonly value: string;
+  readonly label: string;
+  readonly help?: string;
+}
+
+export interface ChoiceInput extends InputCommon {
+  readonly kind: 'choice';
+  readonly options: readonly ChoiceOption[];
+  readonly default: string;
+}
+
+export type InputDefinition = QuantityInput | ChoiceInput;
+
+export interface OutputDefinition {
+  readonly id: string;
+  readonly label: string;
+  readonly kind: QuantityKind;
+  readonly help?: string;
+  readonly display?: Partial<Readonly<Record<UnitSystemId, UnitId>>>;
+}
+
+/** A validity check a calculator can raise: stable code, and what it means in general. */
+export interface WarningDefinition {
+  readonly code: string;
+  readonly summary: string;
+}
+
+export interface Caution {
+  readonly code: string;
+  readonly text: string;
+}
+
+export interface Reference {
+  readonly id: string;
+  readonly citation: string;
+  readonly usedFor: string;
+  readonly basis: Basis;
+}
+
+/** Resolved inputs: canonical numbers and choice values, keyed by input id. */
+export type InputValues = Readonly<Record<string, number | string>>;
+
+/** One line of working, what an engineer checks: formula, the numbers put in, the value out. */
+export interface WorkingStep {
+  readonly label: string;
+  readonly formula: string;
+  readonly substituted: string;
+  /** Canonical units. */
+  readonly value: number;
+  readonly unit: UnitId;
+  readonly source?: string;
+}
+
+export interface Warning {
+  readonly code: string;
+  readonly message: string;
+  /** Input ids the warning is about, for a form to highlight. */
+  readonly fields: readonly string[];
+}
+
+export interface BandBasis {
+  readonly input: string;
+  readonly low: number;
+  readonly high: number;
+  readonly source: string;
+}
+
+/** The range of each output over the corners of the spread inputs. */
+export interface Band {
+  readonly basis: readonly BandBasis[];
+  readonly outputs: Readonly<Record<string, { readonly low: number; readonly high: number }>>;
+}
+
+/** Output values in canonical units; null where an output does not apply to the chosen mode. */
+export type Outputs = Readonly<Record<string, number | null>>;
+
+export interface Solution {
+  readonly outputs: Outputs;
+  readonly working: readonly WorkingStep[];
+  readonly warnings: readonly Warning[];
+  readonly band: Band | null;
+}
+
+export interface CalculatorDefinition {
+  /** kebab-case, stable: used in subpath exports, stored runs and embed configuration. */
+  readonly id: string;
+  readonly title: string;
+  readonly summary: string;
+  readonly inputs: readonly InputDefinition[];
+  readonly outputs: readonly OutputDefinition[];
+  readonly warnings: readonly WarningDefinition[];
+  readonly cautions: readonly Caution[];
+  readonly references: readonly Reference[];
+  /** Pure: resolved inputs in, solution out. Throws CalcInputError for combinations no single field shows. */
+  readonly solve: (inputs: InputValues) => Solution;
+}
+
+export interface CalculationResult {
+  readonly calculator: string;
+  /** The inputs actually used (defaults filled in, inputs that do not apply left out). */
+  readonly inputs: InputValues;
+  readonly outputs: Outputs;
+  readonly warnings: readonly Warning[];
+  readonly working: readonly WorkingStep[];
+  readonly band: Band | null;
+  readonly version: string;
+  /** SHA-256 (hex) of the canonical JSON of `{ calculator, inputs }`. */
+  readonly inputHash: string;
+}

@@ -1,0 +1,125 @@
+import { CalcInputError } from '../errors.js';
+import { contactAngle, cosDeg, finiteResult, positive } from '../guards.js';
+import { STANDARD_GRAVITY } from '../units.js';
+
+// Capillary rise between a liquid and air. Air density is neglected against the liquid's (0.12 %
+// for water), as in every source cited here. All SI: N/m, kg/m³, m, m/s².
+
+export interface RiseArgs {
+  /** N/m */
+  readonly surfaceTension: number;
+  /** degrees, 0–180 */
+  readonly contactAngleDeg: number;
+  /** kg/m³ */
+  readonly density: number;
+  /** m/s²; standard gravity when absent */
+  readonly gravity?: number;
+}
+
+function common(args: RiseArgs): { sigma: number; cos: number; rho: number; g: number } {
+  return {
+    sigma: positive('surfaceTension', args.surfaceTension),
+    cos: cosDeg(contactAngle('contactAngleDeg', args.contactAngleDeg)),
+    rho: positive('density', args.density),
+    g: positive('gravity', args.gravity ?? STANDARD_GRAVITY),
+  };
+}
+
+/**
+ * Jurin's law, h = 4σ·cos θ / (ρ·g·d): equilibrium height of the bottom of the meniscus above the
+ * free surface, for a bore that is small against the capillary length.
+ * @param args.diameter bore diameter in m
+ * @returns rise in m; negative for a depression (θ > 90°)
+ */
+export function jurinRise(args: RiseArgs & { readonly diameter: number }): number {
+  const { sigma, cos, rho, g } = common(args);
+  const d = positive('diameter', args.diameter);
+  return finiteResult('capillary rise', (4 * sigma * cos) / (rho * g * d));
+}
+
+/**
+ * Rise between two parallel walls a gap w apart, h = 2σ·cos θ / (ρ·g·w): the force balance of
+ * Jurin's law per unit length of a slot, half the rise of a tube whose diameter equals the gap.
+ * @param args.gap distance between the walls in m
+ * @returns rise in m; negative for a depression
+ */
+export function slotRise(args: RiseArgs & { readonly gap: number }): number {
+  const { sigma, cos, rho, g } = common(args);
+  const w = positive('gap', args.gap);
+  return finiteResult('capillary rise', (2 * sigma * cos) / (rho * g * w));
+}
+
+/**
+ * Capillary length ℓc = √(σ / (ρ·g)): a bore is "small" when its radius is well below it.
+ * @param args.surfaceTension N/m
+ * @param args.density kg/m³
+ * @param args.gravity m/s², standard gravity when absent
+ * @returns capillary length in m
+ */
+export function capillaryLength(args: {
+  readonly surfaceTension: number;
+  readonly density: number;
+  readonly gravity?: number;
+}): number {
+  const sigma = positive('surfaceTension', args.surfaceTension);
+  const rho = positive('density', args.density);
+  const g = positive('gravity', args.gravity ?? STANDARD_GRAVITY);
+  return finiteResult('capillary length', Math.sqrt(sigma / (rho * g)));
+}
+
+function wettingAngle(angleDeg: number): number {
+  contactAngle('contactAngleDeg', angleDeg);
+  if (angleDeg > 90) {
+    throw new CalcInputError({
+      field: 'contactAngleDeg',
+      code: 'MENISCUS_NOT_CONCAVE',
+      message: 'the meniscus-weight correction is for a wetting (concave) meniscus, θ ≤ 90°',
+    });
+  }
+  return angleDeg;
+}
+
+/**
+ * Meniscus-weight correction for a tube: the height of the liquid held in the meniscus above its
+ * lowest point, spread over the bore, so that Jurin's rise minus it is the rise to the bottom of
+ * the meniscus. For θ = 0 (a hemisphere) it is Rayleigh's r/3 (Rayleigh 1915, Proc. R. Soc. A 92,
+ * 184: σ = ρ·g·r·(h + r/3) / (2 cos θ)); for 0 < θ ≤ 90° the same spherical-cap geometry with radius
+ * r/cos θ, derived here. Only the first term of Rayleigh's series: good while r ≪ ℓc.
+ * @param args.diameter bore diameter in m
+ * @param args.contactAngleDeg degrees, 0–90
+ * @returns correction in m (≥ 0)
+ */
+export function meniscusCorrection(args: {
+  readonly diameter: number;
+  readonly contactAngleDeg: number;
+}): number {
+  const r = positive('diameter', args.diameter) / 2;
+  const angle = wettingAngle(args.contactAngleDeg);
+  if (angle === 90) return 0;
+  const R = r / cosDeg(angle);
+  const sag = R * (1 - Math.sin((angle * Math.PI) / 180));
+  const capVolume = (Math.PI * sag * sag * (3 * R - sag)) / 3;
+  return sag - capVolume / (Math.PI * r * r);
+}
+
+/**
+ * The slot form of the meniscus-weight correction: a cylindrical meniscus of radius (w/2)/cos θ,
+ * liquid above its lowest point spread over the gap; (1/2 − π/8)·w at θ = 0. The two-dimensional
+ * analogue of Rayleigh's r/3, derived here from the same geometry.
+ * @param args.gap distance between the walls in m
+ * @param args.contactAngleDeg degrees, 0–90
+ * @returns correction in m (≥ 0)
+ */
+export function slotMeniscusCorrection(args: {
+  readonly gap: number;
+  readonly contactAngleDeg: number;
+}): number {
+  const w = positive('gap', args.gap);
+  const angle = wettingAngle(args.contactAngleDeg);
+  if (angle === 90) return 0;
+  const R = w / 2 / cosDeg(angle);
+  const sag = R * (1 - Math.sin((angle * Math.PI) / 180));
+  const half = Math.PI / 2 - (angle * Math.PI) / 180;
+  const segment = R * R * (half - Math.sin(half) * Math.cos(half));
+  return sag - segment / w;
+}

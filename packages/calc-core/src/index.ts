@@ -1,0 +1,111 @@
+// Public API of @wickstone/calc-core. Each calculator is also its own subpath
+// (`@wickstone/calc-core/calculators/<id>`) so a widget bundles only the one it shows.
+
+export { VERSION } from './version.js';
+export { CalcInputError, type FieldIssue } from './errors.js';
+
+export {
+  convert,
+  displayUnit,
+  fromCanonical,
+  getUnit,
+  toCanonical,
+  canonicalUnits,
+  quantityKinds,
+  STANDARD_GRAVITY,
+  units,
+  unitSystems,
+  type QuantityKind,
+  type UnitDefinition,
+  type UnitId,
+  type UnitSystemId,
+} from './units.js';
+
+export {
+  water,
+  waterSurfaceTension,
+  waterDensity,
+  waterViscosity,
+  iapws2008Viscosity,
+  SURFACE_TENSION_RANGE_C,
+  DENSITY_RANGE_C,
+  VISCOSITY_RANGE_C,
+  IAPWS2008_RANGE_K,
+  type DensityFormulation,
+  type WaterDensity,
+} from './properties/water.js';
+export {
+  liquids,
+  getLiquid,
+  MERCURY_HAZARD,
+  type Basis,
+  type Liquid,
+  type SourcedValue,
+} from './properties/liquids.js';
+export {
+  contactAnglePresets,
+  getContactAnglePreset,
+  type ContactAnglePreset,
+} from './properties/contactAngles.js';
+
+export {
+  jurinRise,
+  slotRise,
+  capillaryLength,
+  meniscusCorrection,
+  slotMeniscusCorrection,
+  type RiseArgs,
+} from './formulas/capillary.js';
+export { laplacePressure, bubblePressure, poreEntryPressure } from './formulas/laplace.js';
+export {
+  wilhelmyForce,
+  wilhelmySurfaceTension,
+  wilhelmyRodForce,
+  wilhelmyRodSurfaceTension,
+  duNouySurfaceTension,
+  platePerimeter,
+  type RingResult,
+} from './formulas/tensiometry.js';
+export {
+  hazenCapillaryRise,
+  capillaryBreakCheck,
+  HAZEN_C_RANGE_M2,
+  type CapillaryBreakResult,
+} from './formulas/soil.js';
+export {
+  washburnTime,
+  washburnLength,
+  gravityRestrainedRiseTime,
+  type WashburnArgs,
+} from './formulas/wicking.js';
+
+export { canonicalJson, sha256Hex, type JsonValue } from './hash.js';
+export { runCalculation, resolveInputs, hashInputs, resultsAgree } from './calculators/engine.js';
+export { calculators, calculatorIds, getCalculator, calculate, type CalculatorId } from './registry.js';
+export { calculator as tubeRiseCalculator } from './calculators/tube-rise.js';
+export { calculator as slotRiseCalculator } from './calculators/slot-rise.js';
+export { calculator as soilCapillaryRiseCalculator } from './calculators/soil-capillary-rise.js';
+export { calculator as interfacePressureCalculator } from './calculators/interface-pressure.js';
+export { calculator as wettingForceCalculator } from './calculators/wetting-force.js';
+export { calculator as wickingTimeCalculator } from './calculators/wicking-time.js';
+export type {
+  Band,
+  BandBasis,
+  CalculationResult,
+  CalculatorDefinition,
+  Caution,
+  ChoiceInput,
+  ChoiceOption,
+  Condition,
+  InputDefinition,
+  InputValues,
+  OutputDefinition,
+  Outputs,
+  QuantityInput,
+  Reference,
+  Solution,
+  Spread,
+  Warning,
+  WarningDefinition,
+  WorkingStep,
+} from './calculators/types.js';

@@ -1,0 +1,184 @@
+import fc from 'fast-check';
+import { unit as mathUnit } from 'mathjs';
+import { describe, expect, it } from 'vitest';
+import { CalcInputError } from './errors.js';
+import {
+  canonicalUnits,
+  convert,
+  displayUnit,
+  fromCanonical,
+  getUnit,
+  quantityKinds,
+  toCanonical,
+  units,
+  unitSystems,
+  type UnitId,
+} from './units.js';
+
+// mathjs is an independent implementation of the same definitions: every factor is checked
+// against it. Its spelling of each unit, or null where it has none.
+const mathjsName: Readonly<Record<UnitId, string | null>> = {
+  m: 'm',
+  cm: 'cm',
+  mm: 'mm',
+  um: 'um',
+  nm: 'nm',
+  in: 'inch',
+  ft: 'ft',
+  m2: 'm^2',
+  cm2: 'cm^2',
+  mm2: 'mm^2',
+  in2: 'inch^2',
+  ft2: 'ft^2',
+  N: 'N',
+  mN: 'mN',
+  uN: 'uN',
+  dyn: 'dyn',
+  lbf: 'lbf',
+  Pa: 'Pa',
+  kPa: 'kPa',
+  // mathjs's own `psi` constant is rounded (6894.75729276459); lbf/inch² is built from its exact lbf and inch.
+  psi: 'lbf/inch^2',
+  psf: 'lbf/ft^2',
+  inH2O: null,
+  'N/m': 'N/m',
+  'mN/m': 'mN/m',
+  'dyn/cm': 'dyn/cm',
+  'lbf/ft': 'lbf/ft',
+  'kg/m3': 'kg/m^3',
+  'g/cm3': 'g/cm^3',
+  'lb/ft3': 'lbm/ft^3',
+  degC: 'degC',
+  degF: 'degF',
+  K: 'K',
+  deg: 'deg',
+  rad: 'rad',
+  'Pa*s': 'Pa s',
+  'mPa*s': 'mPa s',
+  // mathjs has no poise; a centipoise is a millipascal second by definition (NIST SP 811 B.9).
+  cP: 'mPa s',
+  s: 's',
+  min: 'min',
+  h: 'h',
+  day: 'day',
+  'm/s2': 'm/s^2',
+  'ft/s2': 'ft/s^2',
+  '1': null,
+};
+
+const ids = Object.keys(units) as UnitId[];
+
+describe('unit factors against mathjs', () => {
+  const rows = ids.filter((id) => mathjsName[id] !== null && units[id].kind !== 'temperature');
+  it.each(rows)('1 %s in canonical units matches mathjs (relative 1e-14)', (id) => {
+    const canonical = canonicalUnits[units[id].kind];
+    const expected = mathUnit(1, mathjsName[id] ?? '').toNumber(mathjsName[canonical] ?? '');
+    const actual = convert(1, id, canonical);
+    expect(Math.abs(actual / expected - 1)).toBeLessThanOrEqual(1e-14);
+  });
+
+  it.each([-40, 0, 32, 98.6, 212, 451])('%s °F in °C and K matches mathjs', (f) => {
+    expect(convert(f, 'degF', 'degC')).toBeCloseTo(mathUnit(f, 'degF').toNumber('degC'), 12);
+    expect(convert(f, 'degF', 'K')).toBeCloseTo(mathUnit(f, 'degF').toNumber('K'), 12);
+  });
+
+  it('mathjs’s psi constant differs from lbf/in² by under 1e-10 relative, so ours follows the exact definition', () => {
+    const exact = convert(1, 'psi', 'Pa');
+    expect(Math.abs(mathUnit(1, 'psi').toNumber('Pa') / exact - 1)).toBeLessThan(1e-10);
+  });
+});
+
+describe('unit factors against NIST SP 811', () => {
+  // [unit, value in canonical units, tolerance (absolute), source]
+  const nist: [UnitId, number, number, string][] = [
+    ['in', 0.0254, 0, 'NIST SP 811 B.8, exact'],
+    ['ft', 0.3048, 0, 'NIST SP 811 B.8, exact'],
+    ['lbf', 4.4482216152605, 0, 'NIST SP 811 B.8: 0.45359237 kg × 9.80665 m/s², exact'],
+    ['psi', 6894.757293168, 1e-9, 'NIST SP 811 B.8 via REFERENCES.md, printed'],
+    ['lbf/ft', 14.59390294, 1e-8, 'NIST SP 811 B.8 via REFERENCES.md, printed'],
+    ['dyn/cm', 1e-3, 0, 'NIST SP 811 B.8, exact'],
+    ['inH2O', 249.08891, 1e-10, 'NIST SP 811 B.8: conventional inch of water, printed'],
+    ['psf', 47.88026, 1e-5, 'NIST SP 811 B.8: 4.788 026 E+01, from memory'],
+    ['lb/ft3', 16.01846, 1e-5, 'NIST SP 811 B.8: 1.601 846 E+01, from memory'],
+    ['cP', 1e-3, 0, 'NIST SP 811 B.8, exact'],
+    ['day', 86400, 0, 'NIST SP 811 B.8, exact'],
+  ];
+  it.each(nist)('1 %s = %s canonical ±%s (%s)', (id, expected, tol) => {
+    expect(Math.abs(toCanonical(1, id) - expected)).toBeLessThanOrEqual(tol);
+  });
+
+  it('°C = (°F − 32)/1.8 and K = °C + 273.15 (NIST SP 811 4.2.1.1, exact)', () => {
+    expect(convert(212, 'degF', 'degC')).toBeCloseTo(100, 12);
+    expect(convert(32, 'degF', 'degC')).toBe(0);
+    expect(convert(0, 'K', 'degC')).toBe(-273.15);
+    expect(convert(-40, 'degC', 'degF')).toBeCloseTo(-40, 12);
+  });
+
+  it('conventional inch of water is 0.0254 m × 1000 kg/m³ × gₙ (NIST SP 811 B.8)', () => {
+    expect(toCanonical(1, 'inH2O')).toBeCloseTo(0.0254 * 1000 * 9.80665, 10);
+  });
+});
+
+describe('convert', () => {
+  it('round-trips between every pair of units of a kind', () => {
+    const byKind = new Map<string, UnitId[]>();
+    for (const id of ids) byKind.set(units[id].kind, [...(byKind.get(units[id].kind) ?? []), id]);
+    const pairs = [...byKind.values()].flatMap((list) =>
+      list.flatMap((a) => list.map((b) => [a, b] as const)),
+    );
+    fc.assert(
+      fc.property(fc.constantFrom(...pairs), fc.double({ min: -1e6, max: 1e6, noNaN: true }), ([a, b], v) => {
+        const back = convert(convert(v, a, b), b, a);
+        expect(Math.abs(back - v)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(v)));
+      }),
+    );
+  });
+
+  it('is linear through zero for every kind but temperature (no hidden offsets)', () => {
+    const linear = ids.filter((id) => units[id].kind !== 'temperature');
+    fc.assert(
+      fc.property(fc.constantFrom(...linear), fc.double({ min: -1e6, max: 1e6, noNaN: true }), (id, v) => {
+        expect(toCanonical(0, id)).toBe(0);
+        expect(toCanonical(2 * v, id)).toBeCloseTo(2 * toCanonical(v, id), 6);
+      }),
+    );
+  });
+
+  it('throws a CalcInputError between kinds, for unknown units and for non-finite values', () => {
+    expect(() => convert(1, 'm', 'N')).toThrow(CalcInputError);
+    expect(() => convert(1, 'm', 'N')).toThrow(/cannot convert length/);
+    expect(() => convert(1, 'furlong', 'm')).toThrow(
+      expect.objectContaining({ code: 'UNKNOWN_UNIT', field: 'fromUnit' }),
+    );
+    expect(() => convert(1, 'furlong', 'm')).toThrow(CalcInputError);
+    expect(() => convert(Number.NaN, 'm', 'mm')).toThrow(/value must be a number/);
+    expect(() => convert(Infinity, 'm', 'mm')).toThrow(/finite/);
+  });
+
+  it('accepts the spellings people type', () => {
+    expect(convert(1, 'g/cm3', 'kg/m3')).toBe(1000);
+    expect(convert(1, 'µm', 'm')).toBe(1e-6);
+    expect(convert(1, 'Pa·s', 'cP')).toBeCloseTo(1000, 9);
+    expect(getUnit('°C').id).toBe('degC');
+    expect(fromCanonical(1, 'mm')).toBe(1000);
+  });
+});
+
+describe('unit systems', () => {
+  it('give a display unit of the right kind for every quantity kind in si and us', () => {
+    for (const system of ['si', 'us'] as const) {
+      for (const kind of quantityKinds) {
+        expect(units[displayUnit(kind, system)].kind).toBe(kind);
+      }
+      expect(Object.keys(unitSystems[system]).sort()).toEqual([...quantityKinds].sort());
+    }
+    expect(displayUnit('length', 'us')).toBe('in');
+    expect(displayUnit('temperature', 'us')).toBe('degF');
+  });
+
+  it('have a canonical unit with factor 1 and offset 0 for every kind', () => {
+    for (const kind of quantityKinds) {
+      expect(units[canonicalUnits[kind]]).toMatchObject({ kind, factor: 1, offset: 0 });
+    }
+  });
+});
