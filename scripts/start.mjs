@@ -9,6 +9,8 @@ const port = Number(process.env.PORT ?? 5180);
 const dbPort = Number(process.env.DB_PORT ?? 3307);
 const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
 const mailHttpPort = Number(process.env.FAKE_MAIL_HTTP_PORT ?? 8025);
+const demoPort = Number(process.env.DEMO_SITE_PORT ?? 5181);
+const demoSnippets = path.join(root, 'var', 'demo-site.json');
 
 const db = instance(path.join(root, 'var', 'mariadb'), dbPort);
 const children = [];
@@ -42,6 +44,8 @@ try {
     SMTP_HOST: '127.0.0.1',
     SMTP_PORT: String(smtpPort),
     FAKE_MAIL_API_URL: `http://127.0.0.1:${mailHttpPort}`,
+    DEMO_SITE_PORT: String(demoPort),
+    DEMO_SITE_FILE: demoSnippets,
   };
   run('node', ['apps/server/dist/cli/migrate.js'], { env });
   run('node', ['apps/server/dist/cli/seed.js'], { env });
@@ -61,6 +65,9 @@ try {
   });
 
   await waitForHttp(`http://127.0.0.1:${port}/api/v1/health`);
+  children.push(startChild('site', 'node', ['scripts/demo-site.mjs'], { env: { ...env, DEMO_SITE_SNIPPETS: demoSnippets } }));
+  await waitForHttp(`http://127.0.0.1:${demoPort}/`);
+  log(`the demo consultancy's website, with two embedded widgets: http://localhost:${demoPort}`);
   log(`Wickstone is running at http://127.0.0.1:${port}  (Ctrl-C stops it)`);
   log(`fake mailbox: http://127.0.0.1:${port}/dev/mail`);
 } catch (err) {

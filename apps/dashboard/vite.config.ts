@@ -7,7 +7,22 @@ export default defineConfig({
   plugins: [react(), tailwindcss()],
   server: {
     port: 5173,
-    proxy: { '/api': 'http://127.0.0.1:5180' },
+    proxy: { '/api': 'http://127.0.0.1:5180', '/releases': 'http://127.0.0.1:5180' },
   },
-  build: { outDir: 'dist', sourcemap: true },
+  build: {
+    outDir: 'dist',
+    sourcemap: true,
+    rolldownOptions: {
+      output: {
+        // Framework code changes far less often than ours: its own chunks stay cached across releases.
+        codeSplitting: {
+          groups: [
+            { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler)[\\/]/, priority: 30 },
+            { name: 'router', test: /node_modules[\\/]react-router[\\/]/, priority: 20 },
+            { name: 'vendor', test: /node_modules[\\/]/, priority: 10 },
+          ],
+        },
+      },
+    },
+  },
 });

@@ -1,5 +1,5 @@
 import type { AddressInfo } from 'node:net';
-import type { Server } from 'node:http';
+import { createServer, type Server } from 'node:http';
 import { createApp } from '@wickstone/server/app';
 import { createLogger } from '@wickstone/server/logger';
 import { createTestDatabase, type TestDatabase } from '@wickstone/server/testing';
@@ -10,16 +10,36 @@ export interface RunningApp {
   stop(): Promise<void>;
 }
 
-/** The real app (built dashboard included) on a free loopback port, over a fresh test database. */
-export async function startApp(env: NodeJS.ProcessEnv = {}): Promise<RunningApp> {
-  const db = await createTestDatabase(env);
-  const app = createApp({ config: db.config, sequelize: db.sequelize, logger: createLogger(db.config) });
-  const server: Server = await new Promise((resolve) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
+function listen(server: Server): Promise<number> {
+  return new Promise((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(0, '127.0.0.1', () => resolve((server.address() as AddressInfo).port));
   });
-  const { port } = server.address() as AddressInfo;
+}
+
+/**
+ * The real app (built dashboard included) on a free loopback port, over a fresh test database.
+ * The port is taken before the config is built, so links the app e-mails (built from PORT or
+ * PUBLIC_URL) point back at this very server; `env` overrides anything else in the config.
+ */
+export async function startApp(env: NodeJS.ProcessEnv = {}): Promise<RunningApp> {
+  const server = createServer();
+  const port = await listen(server);
+  const url = `http://127.0.0.1:${port}`;
+  let db: TestDatabase;
+  try {
+    db = await createTestDatabase({ HOST: '127.0.0.1', PORT: String(port), PUBLIC_URL: url, ...env });
+  } catch (err) {
+    server.close();
+    throw err;
+  }
+  // Nothing can have connected yet (nobody knows the port): the app takes over every request from here.
+  server.on(
+    'request',
+    createApp({ config: db.config, sequelize: db.sequelize, logger: createLogger(db.config) }),
+  );
   return {
-    url: `http://127.0.0.1:${port}`,
+    url,
     db,
     async stop() {
       server.closeAllConnections();

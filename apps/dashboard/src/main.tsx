@@ -1,11 +1,14 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router';
 import { router } from './router';
+import { queryClient } from './lib/query-client';
+import { refreshCsrf } from './lib/api';
 import './theme.css';
 
-const queryClient = new QueryClient({ defaultOptions: { queries: { staleTime: 15_000 } } });
+// Ask for the CSRF token at start, so the first form sent does not wait for it.
+void refreshCsrf();
 
 const rootEl = document.getElementById('root');
 if (!rootEl) throw new Error('index.html has no #root element');

@@ -2,6 +2,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import express, { type Express } from 'express';
+import cookieParser from 'cookie-parser';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
@@ -10,11 +11,58 @@ import { errorHandler, notFoundHandler } from './errors.js';
 import { createHealthService } from './health/service.js';
 import { healthRouter } from './health/router.js';
 import { serverVersion } from './version.js';
+import { createAuditService } from './audit/service.js';
+import { auditRoutes } from './audit/router.js';
+import { createAuthService } from './auth/service.js';
+import { authRoutes } from './auth/router.js';
+import { createDevMailService } from './dev-mail/service.js';
+import { devMailRoutes } from './dev-mail/router.js';
+import { createCsrf } from './http/csrf.js';
+import { createRateLimits } from './http/rate-limit.js';
+import { ApiRoutes, type RouteRecord } from './http/routes.js';
+import { createSessions } from './http/session.js';
+import { createInvitationService } from './invitations/service.js';
+import { invitationRoutes } from './invitations/router.js';
+import { createSmtpMailer, type Mailer } from './mail/mailer.js';
+import { createOrgService } from './orgs/service.js';
+import { orgRoutes } from './orgs/router.js';
+import { createAssetService } from './assets/service.js';
+import { assetRoutes } from './assets/router.js';
+import { createEmbedService } from './embed/service.js';
+import { embedRouter } from './embed/router.js';
+import { createReleaseService } from './releases/service.js';
+import { releasesRouter } from './releases/router.js';
+import { defaultReleasesDir } from './releases/paths.js';
+import { createWidgetService } from './widgets/service.js';
+import { widgetRoutes } from './widgets/router.js';
+import { createRunService } from './runs/service.js';
+import { runRoutes } from './runs/router.js';
+import { createUsageService } from './usage/service.js';
+import { usageRoutes } from './usage/router.js';
+import { createLeadService } from './leads/service.js';
+import { leadRoutes } from './leads/router.js';
+import { createRetentionService } from './retention/service.js';
+import { retentionRoutes } from './retention/router.js';
 
 export interface AppDeps {
   config: Config;
   sequelize: Sequelize;
   logger: Logger;
+  /** Defaults to nodemailer over the configured SMTP server. */
+  mailer?: Mailer;
+}
+
+const API_BASE = '/api/v1';
+const registries = new WeakMap<Express, readonly RouteRecord[]>();
+
+/**
+ * Every route the app declared through `ApiRoutes`, with who may call it: the table the permission
+ * matrix and bad-input tests are generated from.
+ */
+export function routeTable(app: Express): readonly RouteRecord[] {
+  const table = registries.get(app);
+  if (!table) throw new Error('not an app made by createApp');
+  return table;
 }
 
 const defaultDashboardDir = fileURLToPath(new URL('../../dashboard/dist', import.meta.url));
@@ -34,6 +82,44 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  const mailer = deps.mailer ?? createSmtpMailer(config.mail);
+  const csrf = createCsrf(config);
+  const sessions = createSessions(config, logger);
+  const limits = createRateLimits(config);
+  const audit = createAuditService();
+  const auth = createAuthService({ config, sequelize, audit, mailer, logger });
+  const orgs = createOrgService({ sequelize, audit });
+  const invitations = createInvitationService({ config, sequelize, audit, mailer, logger });
+  const releasesDir = config.releasesDir ?? defaultReleasesDir;
+  const releases = createReleaseService(releasesDir, config.publicUrl);
+  const widgets = createWidgetService({ sequelize, releases, publicUrl: config.publicUrl, widgetVersion: serverVersion });
+  const assets = createAssetService(config.publicUrl);
+  const embed = createEmbedService({ sequelize, mailer, logger, publicUrl: config.publicUrl });
+  const runs = createRunService({ sequelize });
+  const usage = createUsageService({ sequelize });
+  const leads = createLeadService({ sequelize, runs });
+  // The purge itself runs on a timer that index.ts starts; the app only serves the setting.
+  const retention = createRetentionService({ sequelize, chunkSize: config.retention.chunkSize });
+
+  const routes = new ApiRoutes(API_BASE, csrf);
+  authRoutes(routes, { auth, sessions, csrf, limits });
+  orgRoutes(routes, orgs);
+  invitationRoutes(routes, { invitations, auth, sessions, limits });
+  auditRoutes(routes, audit);
+  widgetRoutes(routes, widgets);
+  assetRoutes(routes, assets);
+  runRoutes(routes, runs);
+  usageRoutes(routes, usage);
+  leadRoutes(routes, leads);
+  retentionRoutes(routes, retention);
+  // Only while the fake SMTP server is in use; with a real relay the route does not exist.
+  if (config.mail.fakeApiUrl) devMailRoutes(routes, createDevMailService(config.mail.fakeApiUrl));
+  registries.set(app, routes.records);
+
+  // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
+  app.use('/releases', releasesRouter(releasesDir));
+  app.use(`${API_BASE}/embed`, embedRouter(embed, config.embed));
+
   const api = express.Router();
   api.use(express.json({ limit: '64kb' }));
   api.use((_req, res, next) => {
@@ -41,8 +127,11 @@ export function createApp(deps: AppDeps): Express {
     next();
   });
   api.use(healthRouter(createHealthService(sequelize, serverVersion)));
+  api.use(cookieParser());
+  api.use(sessions.load);
+  api.use(routes.router);
   api.use(notFoundHandler);
-  app.use('/api/v1', api);
+  app.use(API_BASE, api);
   app.use('/api', notFoundHandler);
 
   const dashboardDir = config.dashboardDir ?? defaultDashboardDir;

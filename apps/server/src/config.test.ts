@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { loadConfig } from './config.js';
+import { DEFAULT_BCRYPT_COST, loadConfig } from './config.js';
 
 describe('loadConfig', () => {
   it('has defaults for a local run', () => {
@@ -13,5 +13,26 @@ describe('loadConfig', () => {
     expect(() => loadConfig({ PORT: 'eighty' })).toThrow(/PORT/);
     expect(() => loadConfig({ DB_NAME: 'x; DROP DATABASE y' })).toThrow(/DB_NAME/);
     expect(() => loadConfig({ JWT_SECRET: 'short' })).toThrow(/JWT_SECRET/);
+  });
+
+  it('hashes at the measured cost by default (bench/bcrypt.ts: cost 12 took 0.26 s here), and tests may lower it', () => {
+    expect(DEFAULT_BCRYPT_COST).toBe(12);
+    expect(loadConfig({}).auth.bcryptCost).toBe(12);
+    expect(loadConfig({ BCRYPT_COST: '4' }).auth.bcryptCost).toBe(4);
+    expect(() => loadConfig({ BCRYPT_COST: '3' })).toThrow(/BCRYPT_COST/);
+  });
+
+  it('makes cookies Secure everywhere but loopback http', () => {
+    expect(loadConfig({}).auth.secureCookies).toBe(false);
+    expect(loadConfig({ PUBLIC_URL: 'http://localhost:5180' }).auth.secureCookies).toBe(false);
+    expect(loadConfig({ PUBLIC_URL: 'https://wickstone.example' }).auth.secureCookies).toBe(true);
+    expect(loadConfig({ PUBLIC_URL: 'http://wickstone.example' }).auth.secureCookies).toBe(true);
+  });
+
+  it('refuses the development secret and the fake mailbox in production', () => {
+    const prod = { NODE_ENV: 'production', JWT_SECRET: 'a-production-secret-of-at-least-32-chars' };
+    expect(() => loadConfig(prod)).not.toThrow();
+    expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow(/JWT_SECRET/);
+    expect(() => loadConfig({ ...prod, FAKE_MAIL_API_URL: 'http://127.0.0.1:8025' })).toThrow(/FAKE_MAIL_API_URL/);
   });
 });

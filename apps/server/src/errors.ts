@@ -36,10 +36,17 @@ export function fieldIssues(error: ZodError, where: string): FieldIssue[] {
   });
 }
 
-export function validationError(error: ZodError, where: string): AppError {
-  const fields = fieldIssues(error, where);
+/** A 400 naming each field, in the same shape a schema failure has: `{ fields: [{ field, message }] }`. */
+export function fieldsError(fields: FieldIssue[]): AppError {
   const named = [...new Set(fields.map((f) => f.field))].join(', ');
   return new AppError('validation_failed', `Invalid request: check ${named}`, { fields });
+}
+
+/** A 400 for one field that passed its schema but not a rule only the server can check. */
+export const fieldError = (field: string, message: string): AppError => fieldsError([{ field, message }]);
+
+export function validationError(error: ZodError, where: string): AppError {
+  return fieldsError(fieldIssues(error, where));
 }
 
 /**
@@ -56,7 +63,7 @@ export function parseRequest<T>(
 }
 
 export const notFoundHandler: RequestHandler = (req, _res, next) => {
-  next(new AppError('not_found', `No route for ${req.method} ${req.path}`));
+  next(new AppError('not_found', `No route for ${req.method} ${req.baseUrl}${req.path}`));
 };
 
 function body(code: ErrorCode, message: string, details: unknown): ErrorBody {

@@ -3,12 +3,19 @@ import { createLogger } from './logger.js';
 import { createSequelize } from './db/sequelize.js';
 import { initModels } from './db/models/index.js';
 import { createApp } from './app.js';
+import { createRetentionService } from './retention/service.js';
+import { startRetentionSchedule } from './retention/schedule.js';
 
 const config = loadConfig();
 const logger = createLogger(config);
 const sequelize = createSequelize(config.db);
 initModels(sequelize);
 const app = createApp({ config, sequelize, logger });
+// Daily purge by each organisation's retention setting; tests call the service directly instead.
+const retentionSchedule = startRetentionSchedule(createRetentionService({ sequelize, chunkSize: config.retention.chunkSize }), logger, {
+  intervalMs: config.retention.purgeIntervalMs,
+  firstDelayMs: config.retention.firstPurgeDelayMs,
+});
 
 const server = app.listen(config.port, config.host, () => {
   logger.info({ url: `http://${config.host}:${config.port}` }, 'wickstone server listening');
@@ -19,6 +26,7 @@ async function shutdown(signal: string): Promise<void> {
   if (stopping) return;
   stopping = true;
   logger.info({ signal }, 'shutting down');
+  retentionSchedule.stop();
   // Stop taking connections, let requests in flight finish, then close the pool.
   server.close(async () => {
     await sequelize.close().catch(() => undefined);

@@ -1,9 +1,17 @@
-import pino, { type Logger } from 'pino';
+import pino, { type DestinationStream, type Logger } from 'pino';
 import type { Config } from './config.js';
 
-export function createLogger(config: Pick<Config, 'logLevel'>): Logger {
-  return pino({
-    level: config.logLevel,
-    redact: { paths: ['req.headers.cookie', 'req.headers.authorization', 'req.headers["x-csrf-token"]'], remove: true },
-  });
+/** `destination` is for tests that read what would be logged; the app logs to stdout. */
+export function createLogger(config: Pick<Config, 'logLevel'>, destination?: DestinationStream): Logger {
+  return pino(
+    {
+      level: config.logLevel,
+      // Session and CSRF tokens travel in these headers, both ways: they never reach the log.
+      redact: {
+        paths: ['req.headers.cookie', 'req.headers.authorization', 'req.headers["x-csrf-token"]', 'res.headers["set-cookie"]'],
+        remove: true,
+      },
+    },
+    destination,
+  );
 }

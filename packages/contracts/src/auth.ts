@@ -70,6 +70,20 @@ export const memberParamsSchema = z.strictObject({
   userId: z.coerce.number().int().positive(),
 });
 
+export const invitationParamsSchema = z.strictObject({
+  orgId: z.coerce.number().int().positive(),
+  invitationId: z.coerce.number().int().positive(),
+});
+
+/** `GET /orgs/:orgId`: the organisation and the caller's role in it. */
+export const organizationResponseSchema = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  slug: z.string(),
+  role: roleSchema,
+});
+export type OrganizationResponse = z.infer<typeof organizationResponseSchema>;
+
 export const memberSchema = z.object({
   userId: z.number().int(),
   name: z.string(),
@@ -136,6 +150,11 @@ export const auditEntrySchema = z.object({
 });
 export const auditResponseSchema = z.object({ items: z.array(auditEntrySchema), total: z.number().int() });
 export type AuditEntry = z.infer<typeof auditEntrySchema>;
+
+export const devMailQuerySchema = z.strictObject({
+  to: emailSchema.optional(),
+  limit: z.coerce.number().int().min(1).max(500).default(100),
+});
 
 export const devMailMessageSchema = z.object({
   id: z.string(),

@@ -1,38 +1,38 @@
-import { useQuery } from '@tanstack/react-query';
-import { healthQuery } from '../queries/health';
-import { ApiError } from '../lib/api';
+import { redirect } from 'react-router';
+import { queryClient } from '../lib/query-client';
+import { meQuery } from '../queries/session';
+import { homeFor } from '../lib/session';
+import { usePageTitle } from '../lib/use-page-title';
+import { ButtonLink } from '../components/ui';
 
-function HealthStatus() {
-  const { data, error, isPending } = useQuery(healthQuery());
-  if (isPending) {
-    return <p role="status" className="text-ink-soft">Checking the service…</p>;
+/** Signed-in people go straight to their organisation; everyone else gets the front door. */
+export async function homeLoader() {
+  try {
+    const me = await queryClient.ensureQueryData(meQuery());
+    if (me) return redirect(homeFor(me));
+  } catch {
+    // The API is down: the front door still shows, with the service status in its footer.
   }
-  if (error) {
-    const message = error instanceof ApiError ? error.body.message : 'The server cannot be reached';
-    return (
-      <p role="status" data-health="down" className="rounded-lg border border-bad bg-bad-tint px-4 py-3 text-bad">
-        Service degraded: {message}
-      </p>
-    );
-  }
-  return (
-    <p role="status" data-health="ok" className="rounded-lg border border-ok bg-ok-tint px-4 py-3 text-ok">
-      Service healthy · database round trip {data.database.roundTripMs} ms · server {data.version}
-    </p>
-  );
+  return null;
 }
 
 export function HomePage() {
+  usePageTitle('Welcome');
   return (
     <section className="space-y-6">
-      <div className="space-y-2">
+      <div className="space-y-3">
         <h1 className="text-3xl font-bold tracking-tight">Wickstone</h1>
-        <p className="max-w-2xl text-ink-soft">
+        <p className="text-ink-soft">
           Publish your firm's capillary-rise, interface-pressure, wetting-force and wicking calculators as
           branded widgets on your own website, and see who uses them.
         </p>
       </div>
-      <HealthStatus />
+      <div className="flex flex-wrap gap-3">
+        <ButtonLink to="/login" tone="primary">
+          Sign in
+        </ButtonLink>
+        <ButtonLink to="/signup">Set up your firm</ButtonLink>
+      </div>
     </section>
   );
 }

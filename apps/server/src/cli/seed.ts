@@ -1,14 +1,34 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
 import { loadConfig } from '../config.js';
 import { createSequelize } from '../db/sequelize.js';
-import { initModels } from '../db/models/index.js';
+import { initModels, Membership, Organization } from '../db/models/index.js';
 import { seedDemo } from '../db/seed/demo.js';
+import { demoSiteOrigins, seedDemoWidgets } from '../db/seed/demo-widgets.js';
+import { createReleaseService } from '../releases/service.js';
+import { defaultReleasesDir } from '../releases/paths.js';
+import { createWidgetService } from '../widgets/service.js';
+import { serverVersion } from '../version.js';
 
 const config = loadConfig();
 const sequelize = createSequelize(config.db);
 initModels(sequelize);
 try {
-  const summary = await seedDemo(sequelize);
-  console.log(summary);
+  const summary = await seedDemo(sequelize, { bcryptCost: config.auth.bcryptCost });
+  const org = await Organization.findOne({ where: { slug: 'brackenridge-ground' } });
+  const owner = org && (await Membership.findOne({ where: { organizationId: org.id, role: 'owner' }, order: [['id', 'ASC']] }));
+  const lines = [summary];
+  if (org && owner) {
+    const releases = createReleaseService(config.releasesDir ?? defaultReleasesDir, config.publicUrl);
+    const widgets = createWidgetService({ sequelize, releases, publicUrl: config.publicUrl, widgetVersion: serverVersion });
+    const demo = await seedDemoWidgets(widgets, org.id, owner.userId, demoSiteOrigins(config.demo.sitePort));
+    lines.push(...demo.lines);
+    if (config.demo.snippetsFile) {
+      mkdirSync(path.dirname(config.demo.snippetsFile), { recursive: true });
+      writeFileSync(config.demo.snippetsFile, JSON.stringify({ widgets: demo.widgets.map((w) => ({ name: w.name, snippet: w.embed.snippet })) }, null, 2));
+    }
+  }
+  console.log(lines.join('\n'));
 } finally {
   await sequelize.close();
 }

@@ -1,7 +1,19 @@
 import * as createOrganizations from './20261201000000-create-organizations.js';
+import * as createAccounts from './20261202000000-create-accounts.js';
+import * as createAuditEvents from './20261202000100-create-audit-events.js';
+import * as createWidgets from './20261202010000-create-widgets.js';
+import * as createRunsAndLeads from './20261202010100-create-runs-and-leads.js';
+import * as usageRollupsAndRetention from './20261202020600-usage-rollups-and-retention.js';
 
 /**
  * Every migration, in order, listed explicitly so the same list runs from the TypeScript sources
  * (tests) and from the build (start), with no file globbing. Names are timestamp-first.
  */
-export const migrations = [{ name: '20261201000000-create-organizations', ...createOrganizations }];
+export const migrations = [
+  { name: '20261201000000-create-organizations', ...createOrganizations },
+  { name: '20261202000000-create-accounts', ...createAccounts },
+  { name: '20261202000100-create-audit-events', ...createAuditEvents },
+  { name: '20261202010000-create-widgets', ...createWidgets },
+  { name: '20261202010100-create-runs-and-leads', ...createRunsAndLeads },
+  { name: '20261202020600-usage-rollups-and-retention', ...usageRollupsAndRetention },
+];

@@ -1,0 +1,23 @@
+import type { Permission } from '@wickstone/contracts';
+
+/**
+ * The signed-in navigation. Each entry names the permission that shows it; later screens (widgets,
+ * usage, leads, embed keys) are added here and nowhere else. Hiding is a courtesy: the server decides.
+ */
+export interface NavEntry {
+  label: string;
+  /** The path under `/orgs/:orgId`, '' for the overview. */
+  path: string;
+  permission: Permission;
+}
+
+export const orgNav: readonly NavEntry[] = [
+  { label: 'Overview', path: '', permission: 'org:read' },
+  { label: 'Widgets', path: 'widgets', permission: 'widgets:read' },
+  { label: 'Team', path: 'team', permission: 'members:read' },
+  { label: 'Audit log', path: 'audit', permission: 'audit:read' },
+];
+
+export function orgPath(orgId: number, path = ''): string {
+  return path ? `/orgs/${orgId}/${path}` : `/orgs/${orgId}`;
+}

@@ -1,0 +1,47 @@
+import { imageSize } from 'image-size';
+import { AppError } from '../errors.js';
+
+export const MAX_LOGO_BYTES = 512 * 1024;
+const MAX_SIDE_PX = 4096;
+
+export type ImageType = 'image/png' | 'image/jpeg' | 'image/webp';
+
+/** Magic numbers: PNG (ISO/IEC 15948 signature), JPEG (SOI + marker), WebP (RIFF container, "WEBP" form). */
+function sniff(buf: Buffer): ImageType | null {
+  if (buf.length >= 8 && buf.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]))) {
+    return 'image/png';
+  }
+  if (buf.length >= 3 && buf[0] === 0xff && buf[1] === 0xd8 && buf[2] === 0xff) return 'image/jpeg';
+  if (buf.length >= 12 && buf.toString('latin1', 0, 4) === 'RIFF' && buf.toString('latin1', 8, 12) === 'WEBP') {
+    return 'image/webp';
+  }
+  return null;
+}
+
+const typeNames: Record<string, ImageType> = { png: 'image/png', jpg: 'image/jpeg', webp: 'image/webp' };
+
+const refuse = (message: string) =>
+  new AppError('validation_failed', message, { fields: [{ field: 'file', message }] });
+
+/**
+ * Decide what an uploaded file is from its bytes alone (its name and declared type are ignored),
+ * and read its dimensions. Only PNG, JPEG and WebP pass; SVG never does (it can carry script).
+ */
+export function inspectImage(buf: Buffer): { contentType: ImageType; width: number; height: number } {
+  if (buf.length === 0) throw refuse('The file is empty');
+  if (buf.length > MAX_LOGO_BYTES) throw refuse(`The file is larger than ${MAX_LOGO_BYTES / 1024} KB`);
+  const sniffed = sniff(buf);
+  if (!sniffed) throw refuse('Only PNG, JPEG or WebP images are accepted (checked by content, not by name)');
+  let dims: ReturnType<typeof imageSize>;
+  try {
+    dims = imageSize(buf);
+  } catch {
+    throw refuse('The image cannot be read: it is damaged or not what its first bytes claim');
+  }
+  if (typeNames[dims.type ?? ''] !== sniffed) throw refuse('The image content does not match its format');
+  const { width, height } = dims;
+  if (!width || !height || width > MAX_SIDE_PX || height > MAX_SIDE_PX) {
+    throw refuse(`Image sides must be between 1 and ${MAX_SIDE_PX} pixels`);
+  }
+  return { contentType: sniffed, width, height };
+}

@@ -1,0 +1,57 @@
+import {
+  displayUnit,
+  fromCanonical,
+  units,
+  type CalculationResult,
+  type CalculatorDefinition,
+  type UnitId,
+  type UnitSystemId,
+} from '@wickstone/calc-core';
+
+/** Four significant figures: what the widget shows, and enough for an estimate. */
+export function formatNumber(v: number): string {
+  if (v === 0) return '0';
+  const a = Math.abs(v);
+  if (a >= 1e6 || a < 1e-3) return v.toPrecision(4);
+  return Number(v.toPrecision(4)).toString();
+}
+
+function shown(value: number, kind: Parameters<typeof displayUnit>[0], system: UnitSystemId, override?: Partial<Record<UnitSystemId, UnitId>>) {
+  const unit = override?.[system] ?? displayUnit(kind, system);
+  const symbol = units[unit].symbol;
+  return `${formatNumber(fromCanonical(value, unit))}${symbol ? ` ${symbol}` : ''}`;
+}
+
+/**
+ * The result as plain lines, in the widget's unit system, for the copy e-mailed to a visitor and
+ * the firm's notification: inputs, outputs, band, warnings and the working in canonical units.
+ */
+export function resultLines(calc: CalculatorDefinition, result: CalculationResult, system: UnitSystemId): string[] {
+  const lines: string[] = [`${calc.title}`, '', 'Inputs'];
+  for (const input of calc.inputs) {
+    const v = result.inputs[input.id];
+    if (v === undefined) continue;
+    if (input.kind === 'choice') {
+      lines.push(`  ${input.label}: ${input.options.find((o) => o.value === v)?.label ?? String(v)}`);
+    } else if (typeof v === 'number') {
+      lines.push(`  ${input.label}: ${shown(v, input.kind, system, input.display)}`);
+    }
+  }
+  lines.push('', 'Result');
+  for (const out of calc.outputs) {
+    const v = result.outputs[out.id];
+    if (v === undefined || v === null) continue;
+    const band = result.band?.outputs[out.id];
+    const range = band ? ` (band ${shown(band.low, out.kind, system, out.display)} to ${shown(band.high, out.kind, system, out.display)})` : '';
+    lines.push(`  ${out.label}: ${shown(v, out.kind, system, out.display)}${range}`);
+  }
+  if (result.warnings.length) {
+    lines.push('', 'Validity warnings');
+    for (const w of result.warnings) lines.push(`  [${w.code}] ${w.message}`);
+  }
+  lines.push('', 'Working');
+  for (const step of result.working) {
+    lines.push(`  ${step.label}: ${step.formula}`, `    = ${step.substituted}`, `    = ${formatNumber(step.value)} ${units[step.unit].symbol}`);
+  }
+  return lines;
+}

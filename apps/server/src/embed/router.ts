@@ -1,0 +1,128 @@
+import express, { type NextFunction, type Request, type Response, type Router } from 'express';
+import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
+import { z } from 'zod';
+import { embedLeadBodySchema, embedRunBodySchema, publicKeySchema } from '@wickstone/contracts';
+import { AppError, parseRequest } from '../errors.js';
+import type { EmbedService } from './service.js';
+
+export interface EmbedLimits {
+  windowMs: number;
+  leadsPerIp: number;
+  leadsPerWidget: number;
+}
+
+const keyParams = z.strictObject({ publicKey: publicKeySchema });
+const assetParams = z.strictObject({ assetId: z.coerce.number().int().positive(), hash: z.string().regex(/^[0-9a-f]{16}$/) });
+
+/**
+ * The widget sends JSON as text/plain so its requests are CORS-simple (no preflight); JSON
+ * proper is accepted too. A body that is not JSON is named as the bad field.
+ */
+function jsonBody(req: Request, _res: Response, next: NextFunction): void {
+  if (typeof req.body !== 'string') {
+    if (req.body === undefined || (typeof req.body === 'object' && req.body !== null && Object.keys(req.body).length === 0)) {
+      req.body = undefined;
+    }
+    return next();
+  }
+  try {
+    req.body = JSON.parse(req.body);
+    next();
+  } catch {
+    next(new AppError('bad_request', 'Request body is not valid JSON', { fields: [{ field: 'body', message: 'Malformed JSON' }] }));
+  }
+}
+
+/**
+ * `/api/v1/embed`: what widgets on the firms' sites call. No cookies and no CSRF token: a browser
+ * may read an answer only when the page's origin is one a live widget allows (CORS), and each
+ * call checks the origin against its own widget.
+ */
+export function embedRouter(service: EmbedService, limits: EmbedLimits): Router {
+  const router = express.Router();
+  const known = new Map<string, { ok: boolean; until: number }>();
+
+  async function originAllowed(origin: string): Promise<boolean> {
+    const now = Date.now();
+    const hit = known.get(origin);
+    if (hit && hit.until > now) return hit.ok;
+    const ok = await service.originKnown(origin);
+    if (known.size > 10_000) known.clear();
+    known.set(origin, { ok, until: now + 5_000 });
+    return ok;
+  }
+
+  router.use(async (req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    res.vary('Origin');
+    const origin = req.get('origin');
+    if (origin && (await originAllowed(origin.toLowerCase()))) {
+      res.set('Access-Control-Allow-Origin', origin);
+    }
+    if (req.method === 'OPTIONS') {
+      if (res.get('Access-Control-Allow-Origin')) {
+        res.set('Access-Control-Allow-Methods', 'GET, POST');
+        res.set('Access-Control-Allow-Headers', 'Content-Type');
+        res.set('Access-Control-Max-Age', '600');
+      }
+      res.status(204).end();
+      return;
+    }
+    next();
+  });
+  router.use(express.text({ type: ['text/plain', 'application/json'], limit: '32kb' }), jsonBody);
+
+  const limited = (name: string, limit: number, key: (req: Request) => string) =>
+    rateLimit({
+      windowMs: limits.windowMs,
+      limit,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      identifier: name,
+      keyGenerator: key,
+      handler: (_req, _res, next) => next(new AppError('rate_limited', 'Too many requests from here: wait a while and try again')),
+    });
+  const leadsPerIp = limited('leads-per-ip', limits.leadsPerIp, (req) => ipKeyGenerator(req.ip ?? 'unknown'));
+  const leadsPerWidget = limited('leads-per-widget', limits.leadsPerWidget, (req) =>
+    String((req.body as { publicKey?: unknown } | undefined)?.publicKey ?? ''),
+  );
+
+  router.get('/widgets/:publicKey', async (req, res) => {
+    // Any page may read this route's answer: a refused origin then learns at once that there is no
+    // widget for it (403, no data) instead of waiting out retries on what looks like a network error.
+    const origin = req.get('origin');
+    if (origin) res.set('Access-Control-Allow-Origin', origin);
+    const { publicKey } = parseRequest(keyParams, req.params, 'params');
+    res.json(await service.widgetFor(publicKey, req.get('origin')));
+  });
+
+  router.post('/runs', async (req, res) => {
+    const body = parseRequest(embedRunBodySchema, req.body, 'body');
+    const result = await service.recordRun(body, req.get('origin'));
+    res.status(result.duplicate ? 200 : 201).json(result);
+  });
+
+  router.post('/leads', leadsPerIp, (req, res, next) => {
+    // Validate before counting against the widget, so a malformed body cannot use up its quota.
+    res.locals.leadBody = parseRequest(embedLeadBodySchema, req.body, 'body');
+    next();
+  }, leadsPerWidget, async (_req, res) => {
+    res.status(201).json(await service.recordLead(res.locals.leadBody, res.req.get('origin')));
+  });
+
+  router.get('/assets/:assetId/:hash', async (req, res) => {
+    const { assetId, hash } = parseRequest(assetParams, req.params, 'params');
+    const asset = await service.asset(assetId);
+    if (!asset || !asset.sha256.startsWith(hash)) throw new AppError('not_found', 'Image not found');
+    res.set({
+      'Content-Type': asset.contentType,
+      'Cache-Control': 'public, max-age=31536000, immutable',
+      'Content-Security-Policy': "default-src 'none'",
+      'X-Content-Type-Options': 'nosniff',
+      'Cross-Origin-Resource-Policy': 'cross-origin',
+    });
+    res.send(asset.data);
+  });
+
+  return router;
+}

@@ -1,0 +1,197 @@
+import { Op, QueryTypes, type Order, type Sequelize, type WhereOptions } from 'sequelize';
+import type { Lead as LeadDto, LeadDetail, LeadFilters, LeadListQuery, LeadListResponse, UpdateLeadBody } from '@wickstone/contracts';
+import { Lead, Membership, User, Widget } from '../db/models/index.js';
+import { AppError, fieldError, notFound } from '../errors.js';
+import { keysetCsv } from '../export/csv.js';
+import type { RunService } from '../runs/service.js';
+import { retryOnDeadlock } from '../runs/store.js';
+import { nextDay } from '../usage/days.js';
+import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
+
+export interface LeadService {
+  list(orgId: number, query: LeadListQuery): Promise<LeadListResponse>;
+  /** One lead with the run it came from and that run's working (null once the run is gone). */
+  get(orgId: number, leadId: number): Promise<LeadDetail>;
+  update(orgId: number, leadId: number, body: UpdateLeadBody): Promise<LeadDto>;
+  /**
+   * Erase the visitor's personal data (name, contact details, message, site address) and the
+   * firm's notes about them; status and timestamps stay, `erasedAt` is set, and the run stays but
+   * is no longer linked. Erasing again changes nothing.
+   */
+  erase(orgId: number, leadId: number): Promise<LeadDto>;
+  exportCsv(orgId: number, filters: LeadFilters): AsyncGenerator<string>;
+}
+
+const EXPORT_CHUNK = 1000;
+
+/** `LIKE` matches these literally only when escaped; a search for "50%" means the characters. */
+const likeContains = (q: string) => `%${q.replace(/[\\%_]/g, '\\$&')}%`;
+
+function leadsWhere(orgId: number, f: LeadFilters): WhereOptions<Lead> {
+  const and: WhereOptions<Lead>[] = [{ organizationId: orgId }];
+  if (f.status) and.push({ status: f.status });
+  if (f.widgetId !== undefined) and.push({ widgetId: f.widgetId });
+  if (f.assigneeId !== undefined) and.push({ assigneeId: f.assigneeId === 'none' ? null : f.assigneeId });
+  if (f.from) and.push({ createdAt: { [Op.gte]: new Date(`${f.from}T00:00:00Z`) } });
+  if (f.to) and.push({ createdAt: { [Op.lt]: new Date(`${nextDay(f.to)}T00:00:00Z`) } });
+  if (f.q) {
+    const pattern = likeContains(f.q);
+    and.push({ [Op.or]: [{ name: { [Op.like]: pattern } }, { email: { [Op.like]: pattern } }, { company: { [Op.like]: pattern } }] });
+  }
+  return { [Op.and]: and };
+}
+
+const sortOf = (sort: LeadFilters['sort']) => {
+  const column = sort.endsWith('updatedAt') ? ('updatedAt' as const) : ('createdAt' as const);
+  const dir = sort.startsWith('-') ? ('DESC' as const) : ('ASC' as const);
+  return { column, dir, order: [[column, dir], ['id', dir]] as Order };
+};
+
+export function createLeadService(deps: { sequelize: Sequelize; runs: RunService }): LeadService {
+  const { sequelize, runs } = deps;
+
+  async function lookups(orgId: number, leads: Lead[]) {
+    const assigneeIds = [...new Set(leads.map((l) => l.assigneeId).filter((id): id is number => id !== null))];
+    const [widgets, users] = await Promise.all([
+      Widget.findAll({ where: { organizationId: orgId }, attributes: ['id', 'name'] }),
+      assigneeIds.length ? User.findAll({ where: { id: assigneeIds }, attributes: ['id', 'name', 'email'] }) : Promise.resolve([]),
+    ]);
+    return { widgets: new Map(widgets.map((w) => [w.id, w.name])), users: new Map(users.map((u) => [u.id, u])) };
+  }
+
+  function toDto(l: Lead, look: Awaited<ReturnType<typeof lookups>>): LeadDto {
+    const a = l.assigneeId === null ? undefined : look.users.get(l.assigneeId);
+    return {
+      id: l.id,
+      createdAt: l.createdAt.toISOString(),
+      updatedAt: l.updatedAt.toISOString(),
+      status: l.status,
+      widget: { id: l.widgetId, name: look.widgets.get(l.widgetId) ?? `Widget ${l.widgetId}` },
+      runId: l.runId,
+      name: l.name,
+      email: l.email,
+      company: l.company,
+      phone: l.phone,
+      message: l.message,
+      siteAddress: l.siteAddress,
+      origin: l.origin,
+      consentText: l.consentText,
+      consentAt: l.consentAt.toISOString(),
+      sendCopy: l.sendCopy,
+      assignee: a ? { id: a.id, name: a.name, email: a.email } : null,
+      notes: l.notes,
+      erasedAt: l.erasedAt?.toISOString() ?? null,
+    };
+  }
+
+  async function one(orgId: number, leadId: number): Promise<Lead> {
+    const lead = await Lead.findOne({ where: { id: leadId, organizationId: orgId } });
+    if (!lead) throw notFound('Lead');
+    return lead;
+  }
+
+  const dtoOf = async (orgId: number, lead: Lead) => toDto(lead, await lookups(orgId, [lead]));
+
+  return {
+    async list(orgId, q) {
+      const { rows, count } = await Lead.findAndCountAll({
+        where: leadsWhere(orgId, q),
+        order: sortOf(q.sort).order,
+        limit: q.pageSize,
+        offset: (q.page - 1) * q.pageSize,
+      });
+      const look = await lookups(orgId, rows);
+      return { items: rows.map((l) => toDto(l, look)), total: count };
+    },
+
+    async get(orgId, leadId) {
+      const lead = await one(orgId, leadId);
+      // The link is cleared when a run is purged; a run missing anyway is shown as gone, not as an error.
+      const run = lead.runId
+        ? await runs.get(orgId, lead.runId).catch((e: unknown) => {
+            if (e instanceof AppError && e.code === 'not_found') return null;
+            throw e;
+          })
+        : null;
+      return { ...(await dtoOf(orgId, lead)), run };
+    },
+
+    async update(orgId, leadId, body) {
+      const lead = await one(orgId, leadId);
+      if (body.assigneeId != null) {
+        const member = await Membership.count({ where: { organizationId: orgId, userId: body.assigneeId } });
+        if (!member) throw fieldError('body.assigneeId', 'Not a member of this organisation');
+      }
+      const changes: Partial<Pick<Lead, 'status' | 'assigneeId' | 'notes'>> = {};
+      if (body.status !== undefined) changes.status = body.status;
+      if (body.assigneeId !== undefined) changes.assigneeId = body.assigneeId;
+      if (body.notes !== undefined) changes.notes = body.notes === null || body.notes.trim() === '' ? null : body.notes;
+      if (Object.keys(changes).length) await lead.update(changes);
+      return dtoOf(orgId, lead);
+    },
+
+    async erase(orgId, leadId) {
+      const seen = await one(orgId, leadId);
+      const erased = await retryOnDeadlock(() =>
+        sequelize.transaction(async (transaction) => {
+          // Run first, then lead: the order the purge locks them in, so the two cannot deadlock.
+          const run = seen.runId
+            ? (
+                await sequelize.query<RollupColumnsRow & { id: string }>(
+                  `SELECT r.id, ${ROLLUP_COLUMNS} FROM runs r WHERE r.id = ? AND r.organization_id = ? FOR UPDATE`,
+                  { replacements: [seen.runId, orgId], type: QueryTypes.SELECT, transaction },
+                )
+              )[0]
+            : undefined;
+          const lead = await Lead.findOne({ where: { id: leadId, organizationId: orgId }, lock: transaction.LOCK.UPDATE, transaction });
+          if (!lead) throw notFound('Lead');
+          // A link only ever goes from a run to none, so a lead still linked is linked to the run locked above.
+          if (lead.runId && run && lead.runId === run.id) await countLeads(sequelize, [rollupRunOf(run)], -1, transaction);
+          await lead.update(
+            {
+              name: null,
+              email: null,
+              company: null,
+              phone: null,
+              message: null,
+              siteAddress: null,
+              notes: null,
+              runId: null,
+              erasedAt: lead.erasedAt ?? new Date(),
+            },
+            // The lead's own timestamps are kept; erasedAt says when this happened.
+            { transaction, silent: true },
+          );
+          return lead;
+        }),
+      );
+      return dtoOf(orgId, erased);
+    },
+
+    async *exportCsv(orgId, f) {
+      const where = leadsWhere(orgId, f);
+      const { column, dir, order } = sortOf(f.sort);
+      const after = dir === 'DESC' ? Op.lt : Op.gt;
+      yield* keysetCsv<Lead, { at: Date; id: number }>({
+        header: ['Lead', 'Received (UTC)', 'Updated (UTC)', 'Status', 'Widget', 'Name', 'E-mail', 'Company', 'Phone', 'Site address', 'Message', 'Assignee', 'Notes', 'Site', 'Run', 'Erased (UTC)'],
+        chunk: EXPORT_CHUNK,
+        page: (cursor) =>
+          Lead.findAll({
+            where: cursor
+              ? { [Op.and]: [where, { [Op.or]: [{ [column]: { [after]: cursor.at } }, { [column]: cursor.at, id: { [after]: cursor.id } }] }] }
+              : where,
+            order,
+            limit: EXPORT_CHUNK,
+          }),
+        cursor: (last) => ({ at: last[column], id: last.id }),
+        cells: async (rows) => {
+          const look = await lookups(orgId, rows);
+          return rows.map((row) => {
+            const l = toDto(row, look);
+            return [l.id, l.createdAt, l.updatedAt, l.status, l.widget.name, l.name, l.email, l.company, l.phone, l.siteAddress, l.message, l.assignee?.name ?? null, l.notes, l.origin, l.runId, l.erasedAt];
+          });
+        },
+      });
+    },
+  };
+}

@@ -1,0 +1,240 @@
+import { randomBytes } from 'node:crypto';
+import type { Sequelize } from 'sequelize';
+import { CalcInputError, getCalculator, resolveInputs, type CalculatorDefinition } from '@wickstone/calc-core';
+import {
+  defaultWidgetSettings,
+  type Widget as WidgetDto,
+  type WidgetSettings,
+  type WidgetStatus,
+  type createWidgetBodySchema,
+  type updateWidgetBodySchema,
+} from '@wickstone/contracts';
+import type { z } from 'zod';
+import { Asset, User, Widget, WidgetRevision } from '../db/models/index.js';
+import { AppError } from '../errors.js';
+import type { ReleaseService } from '../releases/service.js';
+import { diff } from './diff.js';
+
+type CreateBody = z.output<typeof createWidgetBodySchema>;
+type UpdateBody = z.output<typeof updateWidgetBodySchema>;
+
+export interface WidgetService {
+  list(orgId: number, page: number, pageSize: number): Promise<{ items: WidgetDto[]; total: number }>;
+  get(orgId: number, widgetId: number): Promise<WidgetDto>;
+  create(orgId: number, actorId: number, body: CreateBody): Promise<WidgetDto>;
+  update(orgId: number, widgetId: number, actorId: number, body: UpdateBody): Promise<WidgetDto>;
+  revisions(orgId: number, widgetId: number, page: number, pageSize: number): Promise<{ items: RevisionDto[]; total: number }>;
+  toDto(widget: Widget): WidgetDto;
+}
+
+export interface RevisionDto {
+  id: number;
+  widgetId: number;
+  author: { id: number; name: string } | null;
+  changes: { path: string; before: unknown; after: unknown }[];
+  createdAt: string;
+}
+
+const fieldError = (field: string, message: string) =>
+  new AppError('validation_failed', `Invalid request: check ${field}`, { fields: [{ field, message }] });
+
+function newPublicKey(): string {
+  // 20 characters of [a-z0-9]: about 103 bits, unguessable, safe in a URL and an HTML attribute.
+  const alphabet = 'abcdefghijklmnopqrstuvwxyz0123456789';
+  const bytes = randomBytes(20);
+  return `wk_${Array.from(bytes, (b) => alphabet[b % 36]).join('')}`;
+}
+
+export function assetUrl(publicUrl: string, asset: { id: number; sha256: string }): string {
+  return `${publicUrl.replace(/\/$/, '')}/api/v1/embed/assets/${asset.id}/${asset.sha256.slice(0, 16)}`;
+}
+
+/**
+ * Check a widget's input settings against its calculator: every key is one of its inputs, and
+ * every default is a value the calculator accepts (calc-core decides, naming each bad field).
+ */
+function checkInputSettings(calc: CalculatorDefinition, settings: WidgetSettings, where: string): void {
+  const known = new Set(calc.inputs.map((i) => i.id));
+  const fields: { field: string; message: string }[] = [];
+  const defaults: Record<string, number | string> = {};
+  for (const [id, s] of Object.entries(settings.inputs)) {
+    if (!known.has(id)) fields.push({ field: `${where}.inputs.${id}`, message: `${calc.title} has no input "${id}"` });
+    else if (s.default !== undefined) defaults[id] = s.default;
+  }
+  if (fields.length === 0) {
+    try {
+      resolveInputs(calc, defaults);
+    } catch (e) {
+      if (!(e instanceof CalcInputError)) throw e;
+      for (const issue of e.issues) fields.push({ field: `${where}.inputs.${issue.field}.default`, message: issue.message });
+    }
+  }
+  if (fields.length) {
+    throw new AppError('validation_failed', `Invalid request: check ${fields.map((f) => f.field).join(', ')}`, { fields });
+  }
+}
+
+export function createWidgetService(deps: { sequelize: Sequelize; releases: ReleaseService; publicUrl: string; widgetVersion: string }): WidgetService {
+  const { sequelize, releases, publicUrl } = deps;
+
+  async function logoUrl(orgId: number, assetId: number | null): Promise<string | null> {
+    if (assetId === null) return null;
+    const asset = await Asset.findOne({ where: { id: assetId, organizationId: orgId }, attributes: ['id', 'sha256'] });
+    return asset ? assetUrl(publicUrl, asset) : null;
+  }
+
+  async function checkLogo(orgId: number, settings: WidgetSettings, where: string): Promise<void> {
+    const id = settings.look.logoAssetId;
+    if (id === null) return;
+    const found = await Asset.count({ where: { id, organizationId: orgId } });
+    if (!found) throw fieldError(`${where}.look.logoAssetId`, 'No such image in this organisation');
+  }
+
+  function calculatorOf(id: string, field: string): CalculatorDefinition {
+    const calc = getCalculator(id);
+    if (!calc) throw fieldError(field, `No calculator "${id}"`);
+    return calc;
+  }
+
+  function embed(w: Widget): WidgetDto['embed'] {
+    const script = releases.script(w.release, w.calculatorId);
+    if (!script) return { scriptUrl: '', integrity: '', snippet: '' };
+    const snippet =
+      `<script async src="${script.url}" integrity="${script.integrity}" crossorigin="anonymous" ` +
+      `data-wickstone-key="${w.publicKey}"></script>`;
+    return { scriptUrl: script.url, integrity: script.integrity, snippet };
+  }
+
+  function toDto(w: Widget, logo: string | null = null): WidgetDto {
+    return {
+      id: w.id,
+      publicKey: w.publicKey,
+      name: w.name,
+      calculatorId: w.calculatorId,
+      status: w.status,
+      allowedOrigins: w.allowedOrigins,
+      settings: w.settings,
+      release: w.release,
+      logoUrl: logo,
+      embed: embed(w),
+      createdAt: w.createdAt.toISOString(),
+      updatedAt: w.updatedAt.toISOString(),
+    };
+  }
+
+  async function dto(w: Widget): Promise<WidgetDto> {
+    return toDto(w, await logoUrl(w.organizationId, w.settings.look.logoAssetId));
+  }
+
+  async function find(orgId: number, widgetId: number): Promise<Widget> {
+    const w = await Widget.findOne({ where: { id: widgetId, organizationId: orgId } });
+    if (!w) throw new AppError('not_found', 'Widget not found');
+    return w;
+  }
+
+  const snapshot = (w: { name: string; status: WidgetStatus; allowedOrigins: string[]; settings: WidgetSettings; release: string }) => ({
+    name: w.name,
+    status: w.status,
+    allowedOrigins: w.allowedOrigins,
+    settings: w.settings,
+    release: w.release,
+  });
+
+  return {
+    toDto: (w) => toDto(w),
+
+    async list(orgId, page, pageSize) {
+      const { rows, count } = await Widget.findAndCountAll({
+        where: { organizationId: orgId },
+        order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+        limit: pageSize,
+        offset: (page - 1) * pageSize,
+      });
+      return { items: await Promise.all(rows.map(dto)), total: count };
+    },
+
+    async get(orgId, widgetId) {
+      return dto(await find(orgId, widgetId));
+    },
+
+    async create(orgId, actorId, body) {
+      const calc = calculatorOf(body.calculatorId, 'body.calculatorId');
+      const settings = body.settings ?? defaultWidgetSettings();
+      checkInputSettings(calc, settings, 'body.settings');
+      await checkLogo(orgId, settings, 'body.settings');
+      const release = releases.latest()?.version ?? deps.widgetVersion;
+      const w = await sequelize.transaction(async (transaction) => {
+        const created = await Widget.create(
+          {
+            organizationId: orgId,
+            publicKey: newPublicKey(),
+            name: body.name,
+            calculatorId: calc.id,
+            status: 'draft',
+            allowedOrigins: body.allowedOrigins ?? [],
+            settings,
+            release,
+          },
+          { transaction },
+        );
+        const snap = snapshot({ ...created.get(), status: 'draft' });
+        await WidgetRevision.create(
+          { widgetId: created.id, organizationId: orgId, authorId: actorId, changes: diff({}, snap), snapshot: snap },
+          { transaction },
+        );
+        return created;
+      });
+      return dto(w);
+    },
+
+    async update(orgId, widgetId, actorId, body) {
+      return sequelize.transaction(async (transaction) => {
+        const w = await Widget.findOne({ where: { id: widgetId, organizationId: orgId }, lock: transaction.LOCK.UPDATE, transaction });
+        if (!w) throw new AppError('not_found', 'Widget not found');
+        const calc = calculatorOf(w.calculatorId, 'calculatorId');
+        if (body.settings) {
+          checkInputSettings(calc, body.settings, 'body.settings');
+          await checkLogo(orgId, body.settings, 'body.settings');
+        }
+        const before = snapshot(w);
+        const after = {
+          ...before,
+          ...(body.name !== undefined ? { name: body.name } : {}),
+          ...(body.status !== undefined ? { status: body.status } : {}),
+          ...(body.allowedOrigins !== undefined ? { allowedOrigins: [...new Set(body.allowedOrigins)] } : {}),
+          ...(body.settings !== undefined ? { settings: body.settings } : {}),
+        };
+        if (after.status === 'live' && after.allowedOrigins.length === 0) {
+          throw fieldError('body.allowedOrigins', 'A live widget needs at least one site allowed to embed it');
+        }
+        const changes = diff(before, after);
+        if (changes.length === 0) return dto(w);
+        await w.update(after, { transaction });
+        await WidgetRevision.create({ widgetId: w.id, organizationId: orgId, authorId: actorId, changes, snapshot: after }, { transaction });
+        return dto(w);
+      });
+    },
+
+    async revisions(orgId, widgetId, page, pageSize) {
+      await find(orgId, widgetId);
+      const { rows, count } = await WidgetRevision.findAndCountAll({
+        where: { widgetId, organizationId: orgId },
+        order: [['id', 'DESC']],
+        limit: pageSize,
+        offset: (page - 1) * pageSize,
+      });
+      const authorIds = [...new Set(rows.map((r) => r.authorId).filter((x): x is number => x !== null))];
+      const authors = new Map((await User.findAll({ where: { id: authorIds }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+      return {
+        items: rows.map((r) => ({
+          id: r.id,
+          widgetId: r.widgetId,
+          author: r.authorId !== null ? { id: r.authorId, name: authors.get(r.authorId) ?? 'former member' } : null,
+          changes: r.changes,
+          createdAt: r.createdAt.toISOString(),
+        })),
+        total: count,
+      };
+    },
+  };
+}

@@ -1,0 +1,231 @@
+import { z } from 'zod';
+import { contrastRatio, hexColorPattern, WCAG_AA_TEXT } from './color.js';
+import { emailSchema } from './auth.js';
+
+export const widgetStatuses = ['draft', 'live', 'paused'] as const;
+export type WidgetStatus = (typeof widgetStatuses)[number];
+export const unitSystems = ['si', 'us'] as const;
+export type UnitSystem = (typeof unitSystems)[number];
+/** Fonts the widget bundle ships or can rely on: nothing is fetched from elsewhere. */
+export const widgetFonts = ['manrope', 'system-sans', 'system-serif'] as const;
+export const cornerStyles = ['square', 'soft', 'round'] as const;
+export const inputModes = ['editable', 'locked', 'hidden'] as const;
+export type InputMode = (typeof inputModes)[number];
+export const leadFieldIds = ['name', 'email', 'company', 'phone', 'message', 'siteAddress'] as const;
+export type LeadFieldId = (typeof leadFieldIds)[number];
+export const leadFieldModes = ['off', 'optional', 'required'] as const;
+export type LeadFieldMode = (typeof leadFieldModes)[number];
+
+export const publicKeySchema = z.string().regex(/^wk_[a-z0-9]{20}$/, 'Not a widget key');
+
+/** An exact origin such as https://www.brackenridge-ground.example (no path, query or trailing slash). */
+export const originSchema = z
+  .string()
+  .trim()
+  .max(200, 'At most 200 characters')
+  .refine((value) => {
+    try {
+      const u = new URL(value);
+      return (u.protocol === 'https:' || u.protocol === 'http:') && u.origin === value.toLowerCase() && !u.username;
+    } catch {
+      return false;
+    }
+  }, 'Not an origin: use scheme://host[:port] with nothing after it')
+  .transform((v) => v.toLowerCase());
+
+const hexColor = z.string().regex(hexColorPattern, 'Use a #rrggbb colour');
+
+export const widgetColorsSchema = z
+  .strictObject({
+    background: hexColor,
+    text: hexColor,
+    primary: hexColor,
+    primaryText: hexColor,
+  })
+  .superRefine((c, ctx) => {
+    const pairs = [
+      ['text', 'background', 'text and background'],
+      ['primaryText', 'primary', 'button text and button colour'],
+    ] as const;
+    for (const [fg, bg, label] of pairs) {
+      if (!hexColorPattern.test(c[fg]) || !hexColorPattern.test(c[bg])) continue;
+      const ratio = contrastRatio(c[fg], c[bg]);
+      if (ratio < WCAG_AA_TEXT) {
+        ctx.addIssue({
+          code: 'custom',
+          path: [fg],
+          message: `Contrast between ${label} is ${ratio.toFixed(2)}:1; WCAG AA needs at least ${WCAG_AA_TEXT}:1`,
+          params: { ratio: Math.round(ratio * 100) / 100 },
+        });
+      }
+    }
+  });
+
+export const inputSettingSchema = z.strictObject({
+  mode: z.enum(inputModes),
+  /** SI default (or a choice value) overriding the calculator's own. */
+  default: z.union([z.number().finite(), z.string().max(60)]).optional(),
+});
+
+export const leadFormSchema = z.strictObject({
+  enabled: z.boolean(),
+  fields: z.strictObject(
+    Object.fromEntries(leadFieldIds.map((id) => [id, z.enum(leadFieldModes)])) as Record<
+      LeadFieldId,
+      z.ZodEnum<{ off: 'off'; optional: 'optional'; required: 'required' }>
+    >,
+  ),
+  consentText: z.string().trim().min(10, 'At least 10 characters').max(600, 'At most 600 characters'),
+  /** Who in the firm is e-mailed about each new lead. */
+  notify: z.array(emailSchema).max(10, 'At most 10 recipients'),
+});
+
+export const widgetSettingsSchema = z.strictObject({
+  inputs: z.record(z.string().regex(/^[a-zA-Z][a-zA-Z0-9]{0,39}$/), inputSettingSchema),
+  units: z.strictObject({ system: z.enum(unitSystems), visitorMaySwitch: z.boolean() }),
+  look: z.strictObject({
+    colors: widgetColorsSchema,
+    font: z.enum(widgetFonts),
+    corner: z.enum(cornerStyles),
+    logoAssetId: z.number().int().positive().nullable(),
+  }),
+  /** The firm's own cautions, shown under every result beside the calculator's built-in ones. */
+  cautions: z.string().trim().max(2000, 'At most 2000 characters'),
+  leadForm: leadFormSchema,
+});
+export type WidgetSettings = z.infer<typeof widgetSettingsSchema>;
+
+export function defaultWidgetSettings(): WidgetSettings {
+  return {
+    inputs: {},
+    units: { system: 'si', visitorMaySwitch: true },
+    look: {
+      colors: { background: '#ffffff', text: '#1b2a30', primary: '#1d4e5f', primaryText: '#ffffff' },
+      font: 'manrope',
+      corner: 'soft',
+      logoAssetId: null,
+    },
+    cautions: '',
+    leadForm: {
+      enabled: true,
+      fields: { name: 'required', email: 'required', company: 'optional', phone: 'optional', message: 'optional', siteAddress: 'optional' },
+      consentText: 'I agree that the firm may contact me about this request and keep my details for that purpose.',
+      notify: [],
+    },
+  };
+}
+
+export const widgetNameSchema = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters');
+
+export const createWidgetBodySchema = z.strictObject({
+  name: widgetNameSchema,
+  calculatorId: z.string().min(1).max(60),
+  allowedOrigins: z.array(originSchema).max(20).optional(),
+  settings: widgetSettingsSchema.optional(),
+});
+export const updateWidgetBodySchema = z.strictObject({
+  name: widgetNameSchema.optional(),
+  status: z.enum(widgetStatuses).optional(),
+  allowedOrigins: z.array(originSchema).max(20, 'At most 20 origins').optional(),
+  settings: widgetSettingsSchema.optional(),
+});
+export const widgetParamsSchema = z.strictObject({
+  orgId: z.coerce.number().int().positive(),
+  widgetId: z.coerce.number().int().positive(),
+});
+
+export const widgetSchema = z.object({
+  id: z.number().int(),
+  publicKey: z.string(),
+  name: z.string(),
+  calculatorId: z.string(),
+  status: z.enum(widgetStatuses),
+  allowedOrigins: z.array(z.string()),
+  settings: widgetSettingsSchema,
+  release: z.string(),
+  logoUrl: z.string().nullable(),
+  embed: z.object({ scriptUrl: z.string(), integrity: z.string(), snippet: z.string() }),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Widget = z.infer<typeof widgetSchema>;
+export const widgetListSchema = z.object({ items: z.array(widgetSchema), total: z.number().int() });
+
+export const widgetRevisionSchema = z.object({
+  id: z.number().int(),
+  widgetId: z.number().int(),
+  author: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  changes: z.array(z.object({ path: z.string(), before: z.unknown(), after: z.unknown() })),
+  createdAt: z.string(),
+});
+export const widgetRevisionListSchema = z.object({ items: z.array(widgetRevisionSchema), total: z.number().int() });
+
+export const assetSchema = z.object({
+  id: z.number().int(),
+  url: z.string(),
+  contentType: z.enum(['image/png', 'image/jpeg', 'image/webp']),
+  bytes: z.number().int(),
+  width: z.number().int().nullable(),
+  height: z.number().int().nullable(),
+});
+export type Asset = z.infer<typeof assetSchema>;
+
+// ---- The public embed API (no cookies; CORS only for a widget's allowed origins) ----
+
+/** What a live widget needs to render: never the firm's notification list or origins. */
+export const embedWidgetSchema = z.object({
+  publicKey: z.string(),
+  name: z.string(),
+  calculatorId: z.string(),
+  release: z.string(),
+  settings: z.object({
+    inputs: widgetSettingsSchema.shape.inputs,
+    units: widgetSettingsSchema.shape.units,
+    look: z.object({
+      colors: z.object({ background: z.string(), text: z.string(), primary: z.string(), primaryText: z.string() }),
+      font: z.enum(widgetFonts),
+      corner: z.enum(cornerStyles),
+      logoUrl: z.string().nullable(),
+    }),
+    cautions: z.string(),
+    leadForm: z.object({ enabled: z.boolean(), fields: leadFormSchema.shape.fields, consentText: z.string() }),
+  }),
+});
+export type EmbedWidget = z.infer<typeof embedWidgetSchema>;
+
+const inputValue = z.union([z.number().finite(), z.string().max(60)]);
+
+export const embedRunBodySchema = z.strictObject({
+  /** Made in the browser, so a retried report is stored once. */
+  id: z.uuid(),
+  publicKey: publicKeySchema,
+  inputs: z.record(z.string().max(40), inputValue).refine((r) => Object.keys(r).length <= 40, 'At most 40 inputs'),
+  unitSystem: z.enum(unitSystems),
+  result: z.strictObject({
+    outputs: z.record(z.string().max(40), z.number().finite().nullable()),
+    warnings: z.array(z.string().max(60)).max(50),
+    inputHash: z.string().max(128),
+    version: z.string().max(40),
+  }),
+  pageUrl: z.url().max(2000).optional(),
+});
+export type EmbedRunBody = z.infer<typeof embedRunBodySchema>;
+export const embedRunResponseSchema = z.object({ id: z.string(), agreed: z.boolean(), duplicate: z.boolean() });
+
+const leadText = (max: number) => z.string().trim().min(1, 'Required').max(max, `At most ${max} characters`);
+export const embedLeadBodySchema = z.strictObject({
+  runId: z.uuid(),
+  publicKey: publicKeySchema,
+  fields: z.strictObject({
+    name: leadText(120).optional(),
+    email: emailSchema.optional(),
+    company: leadText(160).optional(),
+    phone: z.string().trim().regex(/^[+0-9 ()./-]{5,32}$/, 'Enter a phone number').optional(),
+    message: leadText(2000).optional(),
+    siteAddress: leadText(300).optional(),
+  }),
+  consent: z.literal(true, 'Consent is required'),
+  sendCopy: z.boolean().default(false),
+});
+export type EmbedLeadBody = z.infer<typeof embedLeadBodySchema>;
+export const embedLeadResponseSchema = z.object({ id: z.number().int() });

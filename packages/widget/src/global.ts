@@ -1,0 +1,75 @@
+import type { EmbedWidget } from '@wickstone/contracts';
+
+/** What `Wickstone.mount` takes. */
+export interface MountOptions {
+  /** The widget's settings, as the embed API answers them (or the dashboard's unsaved draft). */
+  readonly widget: EmbedWidget;
+  /** Render only: never fetch settings, report runs or send leads. */
+  readonly preview?: boolean;
+  /** Origin (or base URL) of the Wickstone server for runs and leads; defaults to the bundle's own origin. */
+  readonly apiBase?: string;
+}
+
+/** A mounted widget: re-render with new options (same calculator), or take it out of the page. */
+export interface MountHandle {
+  update(options: MountOptions): void;
+  unmount(): void;
+}
+
+/** One loaded calculator bundle. */
+export interface BundleEntry {
+  readonly calculatorId: string;
+  readonly version: string;
+  readonly calcCoreVersion: string;
+  mount(element: Element, options: MountOptions): MountHandle;
+}
+
+/** `window.Wickstone`: the only name any bundle puts on the page, shared by every bundle loaded. */
+export interface WickstoneGlobal {
+  /** The release of the bundle that created this object. */
+  readonly version: string;
+  /** Loaded bundles by calculator id (the latest loaded for an id wins). */
+  readonly bundles: Record<string, BundleEntry>;
+  /** Renders `options.widget` into `element` with the bundle of its calculator. */
+  mount(element: Element, options: MountOptions): MountHandle;
+}
+
+declare global {
+  interface Window {
+    Wickstone?: WickstoneGlobal;
+  }
+}
+
+function isGlobal(value: unknown): value is WickstoneGlobal {
+  const v = value as Partial<WickstoneGlobal> | null | undefined;
+  return typeof v === 'object' && v !== null && typeof v.mount === 'function' && typeof v.bundles === 'object' && v.bundles !== null;
+}
+
+/**
+ * The shared `Wickstone` object on `host` (normally `window`), created by the first bundle to run.
+ * A later bundle of any release only adds itself to `bundles`, so the dispatching `mount` keeps
+ * working for every calculator on the page.
+ */
+export function installGlobal(host: { Wickstone?: unknown }, version: string, entry: BundleEntry): WickstoneGlobal {
+  const existing = host.Wickstone;
+  let g: WickstoneGlobal;
+  if (isGlobal(existing)) g = existing;
+  else {
+    const bundles: Record<string, BundleEntry> = Object.create(null) as Record<string, BundleEntry>;
+    g = {
+      version,
+      bundles,
+      mount(element, options) {
+        const id = options?.widget?.calculatorId;
+        const bundle = typeof id === 'string' ? bundles[id] : undefined;
+        if (bundle === undefined) {
+          throw new Error(`Wickstone: no bundle for calculator "${String(id)}" is loaded on this page`);
+        }
+        return bundle.mount(element, options);
+      },
+    };
+    host.Wickstone = g;
+  }
+  g.bundles[entry.calculatorId] = entry;
+  return g;
+}

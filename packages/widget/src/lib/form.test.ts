@@ -1,0 +1,66 @@
+import { run as runTube, calculator as tube } from '@wickstone/calc-core/calculators/tube-rise';
+import { CalcInputError } from '@wickstone/calc-core';
+import { describe, expect, it } from 'vitest';
+import { applicable, collectInputs, initialForm, issueMessage, reformat, typed } from './form.js';
+import { resolveInputSettings } from './settings.js';
+
+const inputs = resolveInputSettings(tube, { gravity: { mode: 'hidden' }, contactAnglePreset: { mode: 'locked', default: 'water-clean-glass' } });
+const input = (id: string) => inputs.find((i) => i.def.id === id)!;
+
+describe('form state', () => {
+  it('shows defaults in the unit system but keeps the exact canonical value', () => {
+    const us = initialForm(inputs, 'us');
+    expect(us.diameter).toEqual({ text: '0.0393701', value: 0.001 });
+    expect(us.temperatureC).toEqual({ text: '68', value: 20 });
+    expect(collectInputs(inputs, us).diameter).toBe(0.001);
+  });
+
+  it('reads typed text in the box’s unit', () => {
+    expect(typed(input('diameter'), '0.5', 'si')).toEqual({ text: '0.5', value: 0.0005 });
+    expect(typed(input('diameter'), '1', 'us').value).toBeCloseTo(0.0254, 15);
+    expect(typed(input('diameter'), '', 'si').value).toBeNull();
+    expect(typed(input('diameter'), 'x', 'si').value).toBeNaN();
+  });
+
+  it('re-shows numbers after a unit switch and leaves unreadable text alone', () => {
+    let state = initialForm(inputs, 'si');
+    state = { ...state, diameter: typed(input('diameter'), '2', 'si'), temperatureC: typed(input('temperatureC'), 'warm', 'si') };
+    const us = reformat(state, inputs, 'us');
+    expect(us.diameter).toEqual({ text: '0.0787402', value: 0.002 });
+    expect(us.temperatureC?.text).toBe('warm');
+    expect(reformat(us, inputs, 'si').diameter?.text).toBe('2');
+  });
+
+  it('sends only inputs that apply, and the firm’s values for locked and hidden ones', () => {
+    let state = initialForm(inputs, 'si');
+    // A locked or hidden value cannot be changed by whatever the form holds for it.
+    state = { ...state, gravity: { text: '1', value: 1 }, contactAnglePreset: { text: 'custom', value: 'custom' } };
+    const sent = collectInputs(inputs, state);
+    expect(sent.gravity).toBe(9.80665);
+    expect(sent.contactAnglePreset).toBe('water-clean-glass');
+    expect(Object.keys(sent)).toEqual(['liquid', 'temperatureC', 'contactAnglePreset', 'diameter', 'gravity']);
+    const ethanol = { ...state, liquid: { text: 'ethanol', value: 'ethanol' } };
+    expect(applicable(inputs, ethanol).map((i) => i.def.id)).not.toContain('temperatureC');
+    expect(collectInputs(inputs, ethanol)).not.toHaveProperty('temperatureC');
+    const free = resolveInputSettings(tube, {});
+    const custom = { ...initialForm(free, 'si'), contactAnglePreset: { text: 'custom', value: 'custom' } };
+    expect(runTube(collectInputs(free, custom)).inputs).toHaveProperty('contactAngleDeg', 0);
+  });
+
+  it('words calc-core’s range problems in the visitor’s units', () => {
+    const state = { ...initialForm(inputs, 'us'), diameter: typed(input('diameter'), '3', 'us') };
+    let caught: unknown;
+    try {
+      runTube(collectInputs(inputs, state));
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(CalcInputError);
+    const issue = (caught as CalcInputError).issues.find((i) => i.field === 'diameter')!;
+    expect(issue.code).toBe('ABOVE_MAX');
+    expect(issueMessage(issue, input('diameter'), 'us')).toBe('Use a value from 0.0000393701 in to 1.9685 in');
+    expect(issueMessage(issue, input('diameter'), 'si')).toBe('Use a value from 0.001 mm to 50 mm');
+    expect(issueMessage({ field: 'diameter', code: 'REQUIRED', message: 'x' }, input('diameter'), 'si')).toBe('Enter a value');
+    expect(issueMessage({ field: 'inputs', code: 'OUT_OF_RANGE', message: 'no solution' }, undefined, 'si')).toBe('no solution');
+  });
+});

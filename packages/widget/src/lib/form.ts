@@ -1,0 +1,87 @@
+import type { FieldIssue, QuantityInput, UnitSystemId } from '@wickstone/calc-core';
+import { applies, type ResolvedInput } from './settings.js';
+import { formatInput, fromDisplay, parseNumber, toDisplay, unitFor, unitSymbol } from './units.js';
+
+/**
+ * One input as the form holds it. `value` is canonical and exact: a default shown as 0.0393701 in
+ * still sends exactly 0.001 m, because the text is derived from the value, not the other way
+ * round, until the visitor types. null = empty, NaN = unreadable text.
+ */
+export interface FieldState {
+  readonly text: string;
+  readonly value: number | string | null;
+}
+
+export type FormState = Readonly<Record<string, FieldState>>;
+
+function shown(value: number | string, input: ResolvedInput, system: UnitSystemId): string {
+  if (typeof value === 'string') return value;
+  return formatInput(toDisplay(value, unitFor(input.def as QuantityInput, system)));
+}
+
+/** Every input at its starting value, texts in the unit system's units. */
+export function initialForm(inputs: readonly ResolvedInput[], system: UnitSystemId): FormState {
+  const state: Record<string, FieldState> = {};
+  for (const input of inputs) state[input.def.id] = { text: shown(input.initial, input, system), value: input.initial };
+  return state;
+}
+
+/** What a visitor typed into a quantity box, read in the box's current unit. */
+export function typed(input: ResolvedInput, text: string, system: UnitSystemId): FieldState {
+  const n = parseNumber(text);
+  if (n === null || Number.isNaN(n)) return { text, value: n };
+  return { text, value: fromDisplay(n, unitFor(input.def as QuantityInput, system)) };
+}
+
+/** The form after a unit switch: every readable number re-shown in the new units; unreadable text kept as typed. */
+export function reformat(state: FormState, inputs: readonly ResolvedInput[], system: UnitSystemId): FormState {
+  const next: Record<string, FieldState> = { ...state };
+  for (const input of inputs) {
+    const f = state[input.def.id];
+    if (f === undefined || typeof f.value !== 'number' || Number.isNaN(f.value)) continue;
+    next[input.def.id] = { text: shown(f.value, input, system), value: f.value };
+  }
+  return next;
+}
+
+/** The value each input takes now: what the form holds, except that locked and hidden inputs keep the firm's. */
+export function effectiveValues(inputs: readonly ResolvedInput[], state: FormState): Record<string, string | number | null> {
+  const out: Record<string, string | number | null> = {};
+  for (const input of inputs) out[input.def.id] = input.mode === 'editable' ? (state[input.def.id]?.value ?? null) : input.initial;
+  return out;
+}
+
+/** The inputs that take part now, in the calculator's order. */
+export function applicable(inputs: readonly ResolvedInput[], state: FormState): ResolvedInput[] {
+  const byId = new Map(inputs.map((i) => [i.def.id, i.def] as const));
+  const values = effectiveValues(inputs, state);
+  return inputs.filter((i) => applies(i.def, byId, values));
+}
+
+/**
+ * The raw inputs handed to calc-core's `run`: every input that takes part. Locked and hidden
+ * inputs always send their starting value, whatever the form holds.
+ */
+export function collectInputs(inputs: readonly ResolvedInput[], state: FormState): Record<string, number | string | null> {
+  const values = effectiveValues(inputs, state);
+  const out: Record<string, number | string | null> = {};
+  for (const input of applicable(inputs, state)) out[input.def.id] = values[input.def.id] ?? null;
+  return out;
+}
+
+/**
+ * A field problem from calc-core, worded for the form. Range messages are re-stated in the unit the
+ * visitor sees (calc-core states them in SI, which reads wrongly beside a box in inches).
+ */
+export function issueMessage(issue: FieldIssue, input: ResolvedInput | undefined, system: UnitSystemId): string {
+  if (input === undefined || input.def.kind === 'choice') return issue.message;
+  if (issue.code === 'REQUIRED') return 'Enter a value';
+  if (issue.code === 'NOT_A_NUMBER' || issue.code === 'NOT_FINITE') return 'Enter a number, such as 0.5';
+  if (issue.code !== 'BELOW_MIN' && issue.code !== 'ABOVE_MAX') return issue.message;
+  const def = input.def;
+  const unit = unitFor(def, system);
+  const symbol = unitSymbol(unit);
+  const suffix = symbol === '' ? '' : symbol === '°' ? '°' : ` ${symbol}`;
+  const edge = (v: number): string => formatInput(toDisplay(v, unit)) + suffix;
+  return `Use a value from ${edge(def.min)} to ${edge(def.max)}`;
+}

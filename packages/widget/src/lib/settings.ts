@@ -1,0 +1,61 @@
+import type { CalculatorDefinition, InputDefinition } from '@wickstone/calc-core';
+import type { EmbedWidget, InputMode } from '@wickstone/contracts';
+
+type InputSettings = EmbedWidget['settings']['inputs'];
+
+/** How the widget treats one calculator input: its mode and the canonical value it starts from. */
+export interface ResolvedInput {
+  readonly def: InputDefinition;
+  readonly mode: InputMode;
+  /** Canonical number (SI, degrees, °C) or a choice value: the firm's default if usable, else the calculator's. */
+  readonly initial: number | string;
+  /** The firm's default could not be used (wrong type or not an option) and the calculator's was taken. */
+  readonly defaultRejected: boolean;
+}
+
+const MODES: readonly InputMode[] = ['editable', 'locked', 'hidden'];
+
+/**
+ * Applies a widget's input settings to a calculator's inputs, in the calculator's order.
+ * A setting for an input the calculator does not have is ignored (the calculator may have been
+ * changed under a saved widget); an unknown mode counts as editable, so nothing is hidden by mistake.
+ * A firm's numeric default is used as set, even outside the input's range: calc-core then names the
+ * problem, which is better than silently using another number than the firm chose.
+ */
+export function resolveInputSettings(def: CalculatorDefinition, settings: InputSettings): ResolvedInput[] {
+  return def.inputs.map((input) => {
+    const s = Object.hasOwn(settings, input.id) ? settings[input.id] : undefined;
+    const mode: InputMode = s !== undefined && MODES.includes(s.mode) ? s.mode : 'editable';
+    const wanted = s?.default;
+    let initial: number | string = input.default;
+    let defaultRejected = false;
+    if (wanted !== undefined) {
+      const usable =
+        input.kind === 'choice'
+          ? typeof wanted === 'string' && input.options.some((o) => o.value === wanted)
+          : typeof wanted === 'number' && Number.isFinite(wanted);
+      if (usable) initial = wanted;
+      else defaultRejected = true;
+    }
+    return { def: input, mode, initial, defaultRejected };
+  });
+}
+
+/**
+ * Whether an input takes part given the current choice values: every `appliesWhen` condition holds
+ * and the input it depends on takes part itself (calc-core's own rule, so the form shows exactly the
+ * inputs `calculate` will use).
+ */
+export function applies(
+  input: InputDefinition,
+  byId: ReadonlyMap<string, InputDefinition>,
+  choices: Readonly<Record<string, string | number | null>>,
+  depth = 0,
+): boolean {
+  if (depth >= 8) return false;
+  return (input.appliesWhen ?? []).every((cond) => {
+    const parent = byId.get(cond.input);
+    const value = choices[cond.input];
+    return parent !== undefined && typeof value === 'string' && cond.values.includes(value) && applies(parent, byId, choices, depth + 1);
+  });
+}

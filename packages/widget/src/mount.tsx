@@ -1,0 +1,102 @@
+import type { CalculationResult, CalculatorDefinition } from '@wickstone/calc-core';
+import { render } from 'preact';
+import type { MountHandle, MountOptions } from './global.js';
+import { registerManrope } from './lib/look.js';
+import { createReporter, type Reporter } from './lib/reporter.js';
+import { App } from './ui/App.js';
+import css from './ui/styles.css?inline';
+
+export const HOST_TAG = 'wickstone-widget';
+
+let sheet: CSSStyleSheet | null = null;
+
+/**
+ * Styles go into the shadow root only. A constructed sheet is shared by every widget of this
+ * bundle on the page (parsed once) and is not an inline style a page's CSP would block; where
+ * that API is missing, a <style> inside the shadow root.
+ */
+function adoptStyles(root: ShadowRoot): void {
+  if ('adoptedStyleSheets' in root && typeof CSSStyleSheet.prototype.replaceSync === 'function') {
+    sheet ??= new CSSStyleSheet();
+    if (sheet.cssRules.length === 0) sheet.replaceSync(css);
+    if (!root.adoptedStyleSheets.includes(sheet)) root.adoptedStyleSheets = [...root.adoptedStyleSheets, sheet];
+    return;
+  }
+  if (root.querySelector('style[data-wickstone]') === null) {
+    const style = document.createElement('style');
+    style.setAttribute('data-wickstone', 'styles');
+    style.textContent = css;
+    root.prepend(style);
+  }
+}
+
+/** The host element to render into: `element` itself when it is one of ours, else one made inside it. */
+function hostIn(element: Element, calculatorId: string): { host: HTMLElement; made: boolean } {
+  if (element.localName === HOST_TAG && element instanceof HTMLElement) return { host: element, made: false };
+  const existing = [...element.children].find((c): c is HTMLElement => c.localName === HOST_TAG && c instanceof HTMLElement);
+  // Another calculator's bundle rendered here before: its runtime owns that tree, so start afresh.
+  if (existing && existing.getAttribute('data-calculator') === calculatorId) return { host: existing, made: false };
+  existing?.remove();
+  const host = document.createElement(HOST_TAG);
+  element.append(host);
+  return { host, made: true };
+}
+
+export interface Bundle {
+  readonly calculator: CalculatorDefinition;
+  readonly run: (inputs: unknown) => CalculationResult;
+  /** The release folder this bundle was loaded from (fonts), or null when unknown. */
+  readonly releaseBase: string | null;
+  /** The server the bundle came from: the default for runs and leads. */
+  readonly defaultApiBase: string | null;
+}
+
+/**
+ * Renders a widget into a shadow root on `element` (or on a host made inside it). Rendering again
+ * into the same element updates it in place, keeping what the visitor typed.
+ */
+export function mountWidget(bundle: Bundle, element: Element, first: MountOptions): MountHandle {
+  const { calculator } = bundle;
+  const { host, made } = hostIn(element, calculator.id);
+  host.setAttribute('data-wickstone', 'host');
+  host.setAttribute('data-calculator', calculator.id);
+  const shadow = host.shadowRoot ?? host.attachShadow({ mode: 'open' });
+  adoptStyles(shadow);
+  let container = shadow.querySelector<HTMLElement>('div[data-wickstone="mount"]');
+  if (container === null) {
+    container = document.createElement('div');
+    container.setAttribute('data-wickstone', 'mount');
+    shadow.append(container);
+  }
+  const target = container;
+
+  let reporter: Reporter | null = null;
+  let reporterKey = '';
+  const draw = (options: MountOptions): void => {
+    const { widget } = options;
+    if (widget.calculatorId !== calculator.id) {
+      throw new Error(`Wickstone: this bundle renders "${calculator.id}", not "${widget.calculatorId}"`);
+    }
+    const preview = options.preview === true;
+    const apiBase = preview ? null : (options.apiBase ?? bundle.defaultApiBase)?.replace(/\/+$/, '') ?? null;
+    if (!preview && apiBase === null) throw new Error('Wickstone: apiBase is needed outside preview');
+    const key = `${apiBase ?? ''} ${widget.publicKey}`;
+    if (apiBase === null) reporter = null;
+    else if (reporter === null || key !== reporterKey) {
+      reporter = createReporter({ apiBase, publicKey: widget.publicKey, href: () => location.href });
+    }
+    reporterKey = key;
+    if (widget.settings.look.font === 'manrope' && bundle.releaseBase !== null) registerManrope(document.fonts, bundle.releaseBase);
+    host.setAttribute('data-mode', preview ? 'preview' : 'live');
+    host.setAttribute('data-state', 'ready');
+    render(<App widget={widget} calculator={calculator} run={bundle.run} apiBase={apiBase} reporter={reporter} />, target);
+  };
+  draw(first);
+  return {
+    update: draw,
+    unmount() {
+      render(null, target);
+      if (made) host.remove();
+    },
+  };
+}

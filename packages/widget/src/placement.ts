@@ -1,0 +1,73 @@
+/** Set on a snippet's script once a widget has been placed for it, so no other bundle run takes it again. */
+export const PLACED_ATTR = 'data-wickstone-placed';
+const KEY = /^wk_[a-z0-9]{20}$/;
+
+/** Whether a script URL is this calculator's bundle (any release, any server). */
+export function isBundleSrc(src: string, calculatorId: string): boolean {
+  try {
+    return new URL(src).pathname.endsWith(`/wickstone-${calculatorId}.js`);
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * The Wickstone server a placed widget talks to, without a trailing slash: `data-wickstone-api`
+ * when given as an http(s) URL (a firm proxying the API under its own path), else the origin the
+ * script came from.
+ */
+export function apiBaseFor(src: string, override: string | null): string | null {
+  if (override !== null && override.trim() !== '') {
+    try {
+      const u = new URL(override.trim());
+      if (u.protocol === 'https:' || u.protocol === 'http:') return (u.origin + u.pathname).replace(/\/+$/, '');
+    } catch {
+      // fall through to the script's own origin
+    }
+  }
+  try {
+    const u = new URL(src);
+    return u.protocol === 'https:' || u.protocol === 'http:' ? u.origin : null;
+  } catch {
+    return null;
+  }
+}
+
+/** The release folder a bundle was loaded from (where its fonts sit), ending in `/`. */
+export function releaseBaseFor(src: string): string | null {
+  try {
+    return new URL('.', src).href;
+  } catch {
+    return null;
+  }
+}
+
+export function isPublicKey(key: string | undefined): key is string {
+  return key !== undefined && KEY.test(key);
+}
+
+/**
+ * The script element this bundle run belongs to: `document.currentScript` while it is one of
+ * ours; otherwise (a loader that runs scripts from elsewhere) the first snippet for this
+ * calculator not yet placed, else any script tag loading it (a preview page without a key).
+ */
+export function findOwnScript(doc: Document, calculatorId: string): HTMLScriptElement | null {
+  const current = doc.currentScript;
+  if (current instanceof HTMLScriptElement && isBundleSrc(current.src, calculatorId)) return current;
+  const scripts = [...doc.querySelectorAll<HTMLScriptElement>('script[src]')].filter((s) => isBundleSrc(s.src, calculatorId));
+  return scripts.find((s) => s.hasAttribute('data-wickstone-key') && !s.hasAttribute(PLACED_ATTR)) ?? scripts[0] ?? null;
+}
+
+/** Puts a host element right after the script (or into the body, for a script placed in the head). */
+export function insertHost(script: HTMLScriptElement, host: HTMLElement): void {
+  const doc = script.ownerDocument;
+  if (script.parentNode !== null && !doc.head?.contains(script)) {
+    script.after(host);
+    return;
+  }
+  const append = (): void => {
+    doc.body.append(host);
+  };
+  if (doc.body) append();
+  else doc.addEventListener('DOMContentLoaded', append, { once: true });
+}

@@ -1,0 +1,223 @@
+import { CalcInputError, type CalculationResult, type CalculatorDefinition, type FieldIssue, type UnitSystemId } from '@wickstone/calc-core';
+import type { EmbedWidget } from '@wickstone/contracts';
+import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
+import { applicable, collectInputs, initialForm, issueMessage, reformat, typed, type FormState } from '../lib/form.js';
+import { lookVariables } from '../lib/look.js';
+import type { Reporter } from '../lib/reporter.js';
+import { resolveInputSettings, type ResolvedInput } from '../lib/settings.js';
+import { formatValue, outputUnitFor, toDisplay, withUnit } from '../lib/units.js';
+import { controlId, Field } from './Field.js';
+import { LeadForm, type LeadTarget } from './LeadForm.js';
+import { Result, warningId } from './Result.js';
+
+export interface AppProps {
+  readonly widget: EmbedWidget;
+  readonly calculator: CalculatorDefinition;
+  readonly run: (inputs: unknown) => CalculationResult;
+  /** Where runs and leads go; null in preview, where nothing is sent. */
+  readonly apiBase: string | null;
+  /** null in preview: runs are not reported and leads not sent. */
+  readonly reporter: Reporter | null;
+}
+
+interface Outcome {
+  readonly result: CalculationResult;
+  readonly target: LeadTarget | null;
+}
+
+/** A logo URL the widget will show: http(s), or a blob/data image the dashboard's preview made. */
+export function safeLogoUrl(url: string | null, base: string): string | null {
+  if (url === null || url === '') return null;
+  try {
+    const u = new URL(url, base);
+    if (u.protocol === 'https:' || u.protocol === 'http:' || u.protocol === 'blob:') return u.href;
+    return u.protocol === 'data:' && /^data:image\/(png|jpeg|webp);/i.test(url) ? url : null;
+  } catch {
+    return null;
+  }
+}
+
+function UnitSwitch({ system, onChange }: { system: UnitSystemId; onChange: (s: UnitSystemId) => void }) {
+  const options: readonly [UnitSystemId, string, string][] = [
+    ['si', 'Metric', 'Metric (SI) units'],
+    ['us', 'US', 'US customary units'],
+  ];
+  return (
+    <div class="units" role="radiogroup" aria-label="Units" data-wickstone="unit-switch">
+      {options.map(([value, text, title]) => (
+        <label key={value} title={title}>
+          <input type="radio" name="wk-units" value={value} data-unit={value} checked={system === value} aria-label={title} onChange={() => onChange(value)} />
+          <span>{text}</span>
+        </label>
+      ))}
+    </div>
+  );
+}
+
+/** The whole widget: header, inputs, result and lead form for one calculator. */
+export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
+  const { settings } = widget;
+  const inputs = useMemo(() => resolveInputSettings(calculator, settings.inputs), [calculator, settings.inputs]);
+  const [system, setSystem] = useState<UnitSystemId>(settings.units.system);
+  const [form, setForm] = useState<FormState>(() => initialForm(inputs, settings.units.system));
+  const [issues, setIssues] = useState<readonly FieldIssue[]>([]);
+  const [outcome, setOutcome] = useState<Outcome | null>(null);
+  const [stale, setStale] = useState(false);
+  const [report, setReport] = useState<'pending' | 'stored' | 'failed' | null>(null);
+  const [announcement, setAnnouncement] = useState('');
+  const rootRef = useRef<HTMLDivElement>(null);
+
+  // New settings (the dashboard's preview as an admin edits): start the form again from them.
+  const settingsKey = JSON.stringify([settings.inputs, settings.units]);
+  const firstKey = useRef(settingsKey);
+  useEffect(() => {
+    if (firstKey.current === settingsKey) return;
+    firstKey.current = settingsKey;
+    setSystem(settings.units.system);
+    setForm(initialForm(inputs, settings.units.system));
+    setIssues([]);
+    setOutcome(null);
+    setReport(null);
+  }, [settingsKey]);
+
+  const shownSystem: UnitSystemId = settings.units.visitorMaySwitch ? system : settings.units.system;
+  const visible = applicable(inputs, form).filter((i) => i.mode !== 'hidden');
+  const byId = new Map(inputs.map((i) => [i.def.id, i] as const));
+  const fieldErrors = new Map<string, string>();
+  const otherErrors: string[] = [];
+  for (const issue of issues) {
+    const input = byId.get(issue.field);
+    if (input && input.mode !== 'hidden' && visible.includes(input)) {
+      const note = input.mode === 'locked' ? ' (a value set by the firm)' : '';
+      if (!fieldErrors.has(issue.field)) fieldErrors.set(issue.field, issueMessage(issue, input, shownSystem) + note);
+    } else {
+      // Hidden inputs and whole-calculation problems have no field to sit beside.
+      const label = input ? `${input.def.label}: ` : '';
+      otherErrors.push(label + issueMessage(issue, input, shownSystem) + (input?.mode === 'hidden' ? ' (a value set by the firm)' : ''));
+    }
+  }
+
+  const warnedFields = new Map<string, string[]>();
+  if (outcome && !stale) {
+    for (const w of outcome.result.warnings) {
+      for (const f of w.fields) warnedFields.set(f, [...(warnedFields.get(f) ?? []), warningId(w.code)]);
+    }
+  }
+
+  const edit = (next: FormState): void => {
+    setForm(next);
+    if (outcome) setStale(true);
+  };
+  const onText = (input: ResolvedInput, text: string): void => edit({ ...form, [input.def.id]: typed(input, text, shownSystem) });
+  const onChoice = (input: ResolvedInput, value: string): void => edit({ ...form, [input.def.id]: { text: value, value } });
+  const onSystem = (next: UnitSystemId): void => {
+    setSystem(next);
+    setForm(reformat(form, inputs, next));
+  };
+
+  const calculate = (e: Event): void => {
+    e.preventDefault();
+    let result: CalculationResult;
+    try {
+      result = run(collectInputs(inputs, form));
+    } catch (err) {
+      // A calc-core bug must not take the host page's script down with it: say so in the form.
+      if (!(err instanceof CalcInputError)) console.error('Wickstone: calculation failed', err);
+      const found: readonly FieldIssue[] =
+        err instanceof CalcInputError ? err.issues : [{ field: 'inputs', code: 'FAILED', message: 'The calculation could not be completed with these inputs.' }];
+      setIssues(found);
+      const n = found.length;
+      setAnnouncement(`${n === 1 ? 'One input needs' : `${n} inputs need`} attention: ${found.map((i) => issueMessage(i, byId.get(i.field), shownSystem)).join('; ')}`);
+      const first = found.find((i) => byId.get(i.field)?.mode === 'editable');
+      if (first) rootRef.current?.querySelector<HTMLElement>(`#${controlId(first.field)}`)?.focus();
+      return;
+    }
+    setIssues([]);
+    setStale(false);
+    const figures = calculator.outputs
+      .filter((o) => typeof result.outputs[o.id] === 'number')
+      .map((o) => {
+        const v = result.outputs[o.id] as number;
+        const unit = outputUnitFor(o, shownSystem, v);
+        return `${o.label} ${withUnit(formatValue(toDisplay(v, unit)), unit)}`;
+      });
+    const w = result.warnings.length;
+    setAnnouncement(`Result: ${figures.join('; ')}.${w > 0 ? ` ${w === 1 ? 'One validity warning' : `${w} validity warnings`}.` : ''}`);
+    if (reporter === null) {
+      setOutcome({ result, target: null });
+      return;
+    }
+    const sent = reporter.report(result, shownSystem);
+    setOutcome({ result, target: { runId: sent.id, stored: sent.stored } });
+    setReport('pending');
+    void sent.stored.then((ok) => setReport((current) => (current === 'pending' ? (ok ? 'stored' : 'failed') : current)));
+  };
+
+  const preview = reporter === null;
+  const logo = safeLogoUrl(settings.look.logoUrl, apiBase ?? location.href);
+  const leadTarget: LeadTarget | null = outcome?.target ?? null;
+  return (
+    <div class="root" ref={rootRef} style={lookVariables(settings.look)} data-wickstone="root" data-calculator={calculator.id} data-system={shownSystem}>
+      <header class="head">
+        <div class="brand">
+          {logo && <img class="logo" src={logo} alt="" data-wickstone="logo" />}
+          <div class="titles">
+            <p class="widget-name">{widget.name}</p>
+            <h2 class="title">{calculator.title}</h2>
+          </div>
+        </div>
+        {settings.units.visitorMaySwitch && <UnitSwitch system={shownSystem} onChange={onSystem} />}
+      </header>
+      <p class="summary">{calculator.summary}</p>
+      <form class="body" data-wickstone="form" noValidate onSubmit={calculate} aria-label={`${calculator.title}: inputs`}>
+        <div class="grid">
+          {visible.map((input) => (
+            <Field
+              key={input.def.id}
+              input={input}
+              state={form[input.def.id] ?? { text: '', value: null }}
+              system={shownSystem}
+              error={fieldErrors.get(input.def.id)}
+              warningIds={warnedFields.get(input.def.id) ?? []}
+              onText={onText}
+              onChoice={onChoice}
+            />
+          ))}
+        </div>
+        {otherErrors.length > 0 && (
+          <div class="form-error" data-wickstone="form-error">
+            <div>
+              {otherErrors.map((m, i) => (
+                <p key={i}>{m}</p>
+              ))}
+            </div>
+          </div>
+        )}
+        <div class="actions">
+          <button class="btn" type="submit" data-wickstone="calculate">
+            Calculate
+          </button>
+          <span class="hint">Worked out in your browser, instantly.</span>
+        </div>
+      </form>
+      <div class="sr" aria-live="polite" data-wickstone="announcer">
+        {announcement}
+      </div>
+      {outcome && (
+        <Result
+          calculator={calculator}
+          result={outcome.result}
+          system={shownSystem}
+          stale={stale}
+          firmCautions={settings.cautions}
+          runId={leadTarget?.runId ?? null}
+          report={report}
+        />
+      )}
+      {/* In preview the form shows from the start, so an admin sees the fields as they set them. */}
+      {(outcome !== null || preview) && settings.leadForm.enabled && (
+        <LeadForm form={settings.leadForm} publicKey={widget.publicKey} apiBase={preview ? null : apiBase} target={leadTarget} />
+      )}
+    </div>
+  );
+}

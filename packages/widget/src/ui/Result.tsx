@@ -1,0 +1,165 @@
+import type { CalculationResult, CalculatorDefinition, UnitId, UnitSystemId } from '@wickstone/calc-core';
+import { formatValue, outputUnitFor, toDisplay, unitFor, unitKind, unitSymbol, withUnit } from '../lib/units.js';
+
+export const DISCLAIMER =
+  'Results are estimates. They do not replace a site investigation or the judgement of a licensed professional working to local codes.';
+
+/** A warning's DOM id, so the fields it names can point at it. */
+export const warningId = (code: string): string => `wk-warn-${code}`;
+
+interface ResultProps {
+  readonly calculator: CalculatorDefinition;
+  readonly result: CalculationResult;
+  readonly system: UnitSystemId;
+  readonly stale: boolean;
+  readonly firmCautions: string;
+  readonly runId: string | null;
+  readonly report: 'pending' | 'stored' | 'failed' | null;
+}
+
+function Figure({ value, unit }: { value: number; unit: UnitId }) {
+  const symbol = unitSymbol(unit);
+  const text = formatValue(toDisplay(value, unit));
+  return (
+    <span class="figure">
+      {symbol === '°' ? `${text}°` : text}
+      {symbol !== '' && symbol !== '°' && <span class="u">{symbol}</span>}
+    </span>
+  );
+}
+
+/** The firm's own cautions: one per paragraph or line, blank lines ignored. */
+export function splitCautions(text: string): string[] {
+  return text
+    .split(/\r?\n/)
+    .map((l) => l.trim())
+    .filter((l) => l !== '');
+}
+
+/** The result of the last calculation: figures, band, warnings, working, cautions and the standing disclaimer. */
+export function Result({ calculator, result, system, stale, firmCautions, runId, report }: ResultProps) {
+  const outputs = calculator.outputs.filter((o) => typeof result.outputs[o.id] === 'number');
+  const band = result.band;
+  const inputLabel = (id: string): string => calculator.inputs.find((i) => i.id === id)?.label ?? id;
+  const firm = splitCautions(firmCautions);
+  return (
+    <section
+      class={stale ? 'result is-stale' : 'result'}
+      data-wickstone="result"
+      data-result=""
+      data-stale={stale ? '' : undefined}
+      data-run-id={runId ?? undefined}
+      data-report={report ?? undefined}
+      aria-labelledby="wk-result-title"
+    >
+      <h3 class="section-title" id="wk-result-title">
+        Result
+      </h3>
+      {stale && (
+        <p class="stale" data-wickstone="stale">
+          The inputs have changed since this result. Calculate again to update it.
+        </p>
+      )}
+      <dl class="readouts">
+        {outputs.map((o) => {
+          const value = result.outputs[o.id] as number;
+          const unit = outputUnitFor(o, system, value);
+          const range = band?.outputs[o.id];
+          return (
+            <div class="readout" key={o.id} data-output={o.id} data-value={String(value)} data-unit={unit}>
+              <dt>{o.label}</dt>
+              <dd>
+                <Figure value={value} unit={unit} />
+                {range && range.low !== range.high && (
+                  <span class="band" data-band={o.id}>
+                    Likely range {withUnit(`${formatValue(toDisplay(range.low, unit))} – ${formatValue(toDisplay(range.high, unit))}`, unit)}
+                  </span>
+                )}
+                {o.help && <span class="band">{o.help}</span>}
+              </dd>
+            </div>
+          );
+        })}
+      </dl>
+      {band && band.basis.length > 0 && (
+        <p class="band-basis" data-wickstone="band-basis">
+          Likely ranges follow the published spread of{' '}
+          {band.basis
+            .map((b) => {
+              const input = calculator.inputs.find((x) => x.id === b.input);
+              const unit = input && input.kind !== 'choice' ? unitFor(input, system) : null;
+              const edges = unit ? withUnit(`${formatValue(toDisplay(b.low, unit))} to ${formatValue(toDisplay(b.high, unit))}`, unit) : `${b.low} to ${b.high}`;
+              return `${inputLabel(b.input)}, ${edges} (${b.source})`;
+            })
+            .join('; ')}
+          .
+        </p>
+      )}
+
+      {result.warnings.length > 0 && (
+        <div class="warnings" role="group" aria-label="Validity warnings">
+          {result.warnings.map((w) => (
+            <div class="warning" key={w.code} id={warningId(w.code)} data-warning={w.code}>
+              <span class="code">{w.code}</span>
+              <span>
+                {w.message}
+                {w.fields.length > 0 && <span class="note"> Check: {w.fields.map(inputLabel).join(', ')}.</span>}
+              </span>
+            </div>
+          ))}
+        </div>
+      )}
+
+      <details class="working" data-wickstone="working">
+        <summary>How this was worked out</summary>
+        <ol class="steps">
+          {result.working.map((step, i) => {
+            // Working is stated in SI, as the formulas are; the value is repeated in the visitor's units.
+            const shown = unitFor({ kind: unitKind(step.unit) }, system);
+            const converted = shown !== step.unit;
+            return (
+              <li class="step" key={i} data-step={i}>
+                <p class="step-label">{step.label}</p>
+                <code class="math">{step.formula}</code>
+                <code class="math">{step.substituted}</code>
+                <p class="step-value">
+                  = {withUnit(formatValue(step.value), step.unit)}
+                  {converted && <span class="note"> ({withUnit(formatValue(toDisplay(step.value, shown)), shown)})</span>}
+                </p>
+                {step.source && <p class="step-source">{step.source}</p>}
+              </li>
+            );
+          })}
+        </ol>
+        {calculator.references.length > 0 && (
+          <ul class="refs" aria-label="Sources">
+            {calculator.references.map((r) => (
+              <li key={r.id}>
+                {r.citation} — {r.usedFor}
+              </li>
+            ))}
+          </ul>
+        )}
+      </details>
+
+      <div class="cautions" data-wickstone="cautions">
+        <h4 class="label">Before relying on this</h4>
+        <ul>
+          {calculator.cautions.map((c) => (
+            <li key={c.code} data-caution={c.code}>
+              {c.text}
+            </li>
+          ))}
+          {firm.map((text, i) => (
+            <li key={`firm-${i}`} class="firm" data-caution="firm">
+              {text}
+            </li>
+          ))}
+        </ul>
+        <p class="disclaimer" data-wickstone="disclaimer">
+          {DISCLAIMER}
+        </p>
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,30 @@
+// The demo consultancy's own website, on its own origin (default http://localhost:5181), with two
+// widgets placed by their embed snippets exactly as a firm would paste them. The snippets come from
+// the file the demo seed writes (var/demo-site.json).
+import { createServer } from 'node:http';
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+
+const port = Number(process.env.DEMO_SITE_PORT ?? 5181);
+const root = new URL('..', import.meta.url).pathname;
+const template = readFileSync(path.join(root, 'scripts', 'demo-site', 'index.html'), 'utf8');
+const snippetsFile = process.env.DEMO_SITE_SNIPPETS ?? path.join(root, 'var', 'demo-site.json');
+
+function page() {
+  const { widgets } = JSON.parse(readFileSync(snippetsFile, 'utf8'));
+  return template.replace('{{WIDGET_1}}', widgets[0]?.snippet ?? '').replace('{{WIDGET_2}}', widgets[1]?.snippet ?? '');
+}
+
+const server = createServer((req, res) => {
+  if (req.url === '/' || req.url === '/index.html') {
+    res.writeHead(200, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' });
+    res.end(page());
+    return;
+  }
+  res.writeHead(404, { 'content-type': 'text/plain' });
+  res.end('not found');
+});
+server.listen(port, '127.0.0.1', () => console.log(`demo consultancy site on http://localhost:${port}`));
+const stop = () => server.close(() => process.exit(0));
+process.on('SIGTERM', stop);
+process.on('SIGINT', stop);
