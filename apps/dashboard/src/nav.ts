@@ -14,6 +14,8 @@ export interface NavEntry {
 export const orgNav: readonly NavEntry[] = [
   { label: 'Overview', path: '', permission: 'org:read' },
   { label: 'Widgets', path: 'widgets', permission: 'widgets:read' },
+  { label: 'Usage', path: 'usage', permission: 'usage:read' },
+  { label: 'Leads', path: 'leads', permission: 'leads:read' },
   { label: 'Team', path: 'team', permission: 'members:read' },
   { label: 'Audit log', path: 'audit', permission: 'audit:read' },
 ];

@@ -22,6 +22,7 @@ import { TeamPage } from './routes/team';
 import { AuditPage } from './routes/audit';
 import { AccountPage } from './routes/account';
 import { widgetRoutes } from './routes/widgets-routes';
+import { usageRoutes } from './routes/usage-routes';
 
 const guarded = (permission: Permission, screen: ReactNode) => (
   <RequirePermission permission={permission}>{screen}</RequirePermission>
@@ -62,6 +63,7 @@ export const router = createBrowserRouter([
               { path: 'team', element: guarded('members:read', <TeamPage />) },
               { path: 'audit', element: guarded('audit:read', <AuditPage />) },
               ...widgetRoutes,
+              ...usageRoutes,
               { path: '*', element: <NotFoundPage /> },
             ],
           },

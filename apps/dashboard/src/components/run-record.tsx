@@ -7,8 +7,16 @@ interface StoredStep {
   label: string;
   formula: string;
   substituted: string;
+  /** Four significant figures, as the widget shows it; `exact` is the stored number in full. */
   value: string;
+  exact: string;
   unit: string;
+}
+
+function shortNumber(v: number): string {
+  if (v === 0 || !Number.isFinite(v)) return String(v);
+  const a = Math.abs(v);
+  return a >= 1e-3 && a < 1e6 ? String(Number(v.toPrecision(4))) : v.toPrecision(4);
 }
 
 const text = (v: unknown): string =>
@@ -27,7 +35,8 @@ function storedSteps(result: RunDetail['serverResult']): StoredStep[] {
       label: text(s.label),
       formula: text(s.formula),
       substituted: text(s.substituted),
-      value: text(s.value),
+      value: typeof s.value === 'number' ? shortNumber(s.value) : text(s.value),
+      exact: text(s.value),
       unit: text(s.unit),
     };
   });
@@ -46,7 +55,6 @@ function ValueList({ title, values }: { title: string; values: readonly ShownVal
               <dt className="text-ink-soft">{v.label}</dt>
               <dd className="text-right font-semibold tabular-nums">
                 {v.text}
-                {v.unit ? <span className="ml-1 font-normal text-ink-soft">{v.unit}</span> : null}
               </dd>
             </div>
           ))}
@@ -112,7 +120,7 @@ export function RunRecord({ run }: { run: RunDetail }) {
                 <p className="mt-1 font-mono text-sm">{s.formula}</p>
                 <p className="font-mono text-sm text-ink-soft">{s.substituted}</p>
                 <p className="mt-1 text-sm">
-                  = <strong className="tabular-nums">{s.value}</strong> {s.unit}
+                  = <strong className="tabular-nums" title={`${s.exact} ${s.unit} as stored`}>{s.value}</strong> {s.unit}
                 </p>
               </li>
             ))}
