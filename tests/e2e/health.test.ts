@@ -18,7 +18,12 @@ describe('dashboard in Chromium', () => {
   it('shows the product name and the live health status from the server', async () => {
     const page = await browser.newPage();
     const failed: string[] = [];
-    page.on('requestfailed', (r) => failed.push(r.url()));
+    const requested: string[] = [];
+    page.on('request', (r) => requested.push(r.url()));
+    // A request the page itself abandons (a client-side redirect cancels the icon) is not a failure.
+    page.on('requestfailed', (r) => {
+      if (r.failure()?.errorText !== 'net::ERR_ABORTED') failed.push(`${r.url()} ${r.failure()?.errorText}`);
+    });
     await page.goto(app.url);
     await expect.poll(() => page.locator('h1').textContent()).toBe('Wickstone');
     const status = page.locator('[data-health="ok"]');
@@ -31,6 +36,8 @@ describe('dashboard in Chromium', () => {
     });
     expect(fontLoaded).toBe(true);
     expect(failed).toEqual([]);
+    expect(requested.length).toBeGreaterThan(0);
+    expect(requested.filter((u) => !u.startsWith(`${app.url}/`) && !u.startsWith('data:'))).toEqual([]);
     await page.close();
   });
 

@@ -13,22 +13,26 @@ import { createUsageService } from '../src/usage/service.js';
 import { args, benchOrganization, openBenchDatabase } from './common.js';
 
 const ITERATIONS = Number(args.iterations);
-const WARM_UP = 2;
+const RAW_ITERATIONS = Number(args['raw-iterations']);
 
-async function time(label: string, fn: () => Promise<unknown>): Promise<{ label: string; p50: number; p95: number }> {
-  for (let i = 0; i < WARM_UP; i++) await fn();
+async function time(label: string, fn: () => Promise<unknown>, iterations = ITERATIONS): Promise<{ label: string; n: number; p50: number; p95: number }> {
+  await fn(); // warm-up: plans, pool connections, pages in the buffer pool
   const ms: number[] = [];
-  for (let i = 0; i < ITERATIONS; i++) {
+  for (let i = 0; i < iterations; i++) {
     const t0 = performance.now();
     await fn();
     ms.push(performance.now() - t0);
   }
   ms.sort((a, b) => a - b);
   const at = (q: number) => ms[Math.min(ms.length - 1, Math.ceil(q * ms.length) - 1)] ?? 0;
-  return { label, p50: at(0.5), p95: at(0.95) };
+  return { label, n: iterations, p50: at(0.5), p95: at(0.95) };
 }
 
-/** The summary's question over the raw runs: the same groupings, counted from a million rows. */
+/**
+ * The summary's question over the raw runs, as plainly as it can be asked: one GROUP BY over the
+ * period's runs (day × widget × calculator × site, with warnings, disagreements and leads counted),
+ * folded into the four breakdowns here; one over their warning codes; one for the period before.
+ */
 async function rawSummary(sequelize: Sequelize, orgId: number, from: string, to: string) {
   const prevFrom = addDays(from, -(Math.round((Date.parse(to) - Date.parse(from)) / 86_400_000) + 1));
   const range = [orgId, `${from} 00:00:00`, `${addDays(to, 1)} 00:00:00`];
@@ -36,11 +40,8 @@ async function rawSummary(sequelize: Sequelize, orgId: number, from: string, to:
   const sums = `COUNT(*) AS runs, SUM(r.has_warning) AS warned, SUM(NOT r.agreed) AS disagreed,
     SUM(EXISTS (SELECT 1 FROM leads l WHERE l.run_id = r.id)) AS led`;
   const q = (sql: string, replacements: unknown[]) => sequelize.query<Record<string, unknown>>(sql, { replacements, type: QueryTypes.SELECT });
-  const [perDay, byWidget, byCalculator, bySite, previous, warnings] = await Promise.all([
-    q(`SELECT DATE(r.created_at) AS day, ${sums} FROM runs r WHERE ${where} GROUP BY DATE(r.created_at)`, range),
-    q(`SELECT r.widget_id, ${sums} FROM runs r WHERE ${where} GROUP BY r.widget_id`, range),
-    q(`SELECT r.calculator_id, ${sums} FROM runs r WHERE ${where} GROUP BY r.calculator_id`, range),
-    q(`SELECT r.origin, ${sums} FROM runs r WHERE ${where} GROUP BY r.origin`, range),
+  const [groups, previous, warnings] = await Promise.all([
+    q(`SELECT DATE_FORMAT(DATE(r.created_at), '%Y-%m-%d') AS day, r.widget_id, r.calculator_id, r.origin, ${sums} FROM runs r WHERE ${where} GROUP BY 1, 2, 3, 4`, range),
     q(`SELECT ${sums} FROM runs r WHERE ${where}`, [orgId, `${prevFrom} 00:00:00`, `${from} 00:00:00`]),
     q(
       `SELECT r.widget_id, w.code, COUNT(*) AS runs FROM runs r, JSON_TABLE(r.warning_codes, '$[*]' COLUMNS (code VARCHAR(60) PATH '$')) w
@@ -48,7 +49,18 @@ async function rawSummary(sequelize: Sequelize, orgId: number, from: string, to:
       range,
     ),
   ]);
-  return { perDay, byWidget, byCalculator, bySite, previous, warnings };
+  const fold = (key: string) => {
+    const out = new Map<string, { runs: number; led: number }>();
+    for (const g of groups) {
+      const k = String(g[key]);
+      const o = out.get(k) ?? { runs: 0, led: 0 };
+      o.runs += Number(g.runs);
+      o.led += Number(g.led);
+      out.set(k, o);
+    }
+    return out;
+  };
+  return { perDay: fold('day'), byWidget: fold('widget_id'), byCalculator: fold('calculator_id'), bySite: fold('origin'), previous, warnings };
 }
 
 /** The page's question over the raw runs: a plain COUNT(*) for the total, a plain LIMIT/OFFSET for the rows. */
@@ -98,10 +110,15 @@ try {
   // Both ways must give the same answer, or the timing means nothing.
   const s: UsageSummary = await usage.summary(org.id, { from, to });
   const raw = await rawSummary(sequelize, org.id, from, to);
-  const rawRuns = raw.byWidget.reduce((n, r) => n + Number(r.runs), 0);
-  const rawLed = raw.byWidget.reduce((n, r) => n + Number(r.led), 0);
+  const rawRuns = [...raw.byWidget.values()].reduce((n, r) => n + r.runs, 0);
+  const rawLed = [...raw.byWidget.values()].reduce((n, r) => n + r.led, 0);
   if (s.totals.runs !== rawRuns || s.totals.withLead !== rawLed || s.previous.totals.runs !== Number(raw.previous[0]?.runs ?? 0))
     throw new Error(`summary disagrees with the raw GROUP BY: ${JSON.stringify(s.totals)} vs ${rawRuns} runs, ${rawLed} led`);
+  const differs = [
+    ...s.perDay.filter((d) => d.runs !== (raw.perDay.get(d.day)?.runs ?? 0)).map((d) => d.day),
+    ...s.bySite.filter((d) => d.runs !== raw.bySite.get(d.origin)?.runs || d.withLead !== raw.bySite.get(d.origin)?.led).map((d) => d.origin),
+  ];
+  if (differs.length) throw new Error(`summary disagrees with the raw GROUP BY on ${differs.slice(0, 5).join(', ')}`);
   const yearPage: RunListQuery = { hasWarning: true, from, to, page: 3, pageSize: 50, sort: '-createdAt' };
   for (const q of [page, yearPage]) {
     const listed = await runs.list(org.id, q);
@@ -111,22 +128,23 @@ try {
   }
 
   console.log(
-    `${runsStored.toLocaleString('en')} runs in ${args.db} (MariaDB ${config.db.host}:${config.db.port}); ${ITERATIONS} timed runs of each after ${WARM_UP} warm-up, node ${process.version}`,
+    `${runsStored.toLocaleString('en')} runs in ${args.db} (MariaDB ${config.db.host}:${config.db.port}), node ${process.version}; each question timed n times after one warm-up`,
   );
   console.log(`(a) summary ${from}..${to}: ${s.totals.runs.toLocaleString('en')} runs, ${s.perDay.length} days, ${s.byWidget.length} widgets, ${s.bySite.length} sites, ${s.topWarnings.length} warnings, previous year ${s.previous.totals.runs.toLocaleString('en')}`);
   console.log(`(b) runs page: widget "${widget.name}", has a warning, ${monthFrom}..${monthTo}, page 3 of 50: total ${(await runs.list(org.id, page)).total.toLocaleString('en')}`);
   console.log(`(c) runs page: any widget, has a warning, the whole year, page 3 of 50: total ${(await runs.list(org.id, yearPage)).total.toLocaleString('en')}`);
   const results = [
     await time('(a) summary, from the daily rollups', () => usage.summary(org.id, { from, to })),
-    await time('(a) summary, GROUP BY over raw runs', () => rawSummary(sequelize, org.id, from, to)),
+    await time('(a) summary, GROUP BY over raw runs', () => rawSummary(sequelize, org.id, from, to), RAW_ITERATIONS),
     await time('(b) month page, API (rollup total, index, units)', () => runs.list(org.id, page)),
-    await time('(b) month page, COUNT(*) + OFFSET on raw', () => rawPage(sequelize, org.id, page)),
+    await time('(b) month page, COUNT(*) + OFFSET on raw', () => rawPage(sequelize, org.id, page), RAW_ITERATIONS * 4),
     await time('(c) year page, API (rollup total, index, units)', () => runs.list(org.id, yearPage)),
-    await time('(c) year page, COUNT(*) + OFFSET on raw', () => rawPage(sequelize, org.id, yearPage)),
+    await time('(c) year page, COUNT(*) + OFFSET on raw', () => rawPage(sequelize, org.id, yearPage), RAW_ITERATIONS * 4),
   ];
   const width = Math.max(...results.map((r) => r.label.length));
-  console.log(`${'question'.padEnd(width)}   p50 ms    p95 ms`);
-  for (const r of results) console.log(`${r.label.padEnd(width)}  ${r.p50.toFixed(1).padStart(7)}  ${r.p95.toFixed(1).padStart(8)}`);
+  console.log(`${'question'.padEnd(width)}   n     p50 ms     p95 ms`);
+  for (const r of results)
+    console.log(`${r.label.padEnd(width)}  ${String(r.n).padStart(2)}  ${r.p50.toFixed(1).padStart(9)}  ${r.p95.toFixed(1).padStart(9)}`);
 
   // The CSV export of the whole year, once: streamed in keyset chunks, so memory stays flat.
   const rss0 = process.memoryUsage().rss;
