@@ -2,6 +2,7 @@
 // (`@wickstone/calc-core/calculators/<id>`) so a widget bundles only the one it shows.
 
 export { VERSION } from './version.js';
+export { formatValue, formatInput, parseNumber } from './format.js';
 export { CalcInputError, type FieldIssue } from './errors.js';
 
 export {

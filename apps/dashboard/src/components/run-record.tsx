@@ -1,3 +1,4 @@
+import { formatValue } from '@wickstone/calc-core/format';
 import type { RunDetail, ShownValue } from '@wickstone/contracts';
 import { formatDateTime } from '../lib/labels';
 import { Badge, Card, Notice } from './ui';
@@ -13,11 +14,6 @@ interface StoredStep {
   unit: string;
 }
 
-function shortNumber(v: number): string {
-  if (v === 0 || !Number.isFinite(v)) return String(v);
-  const a = Math.abs(v);
-  return a >= 1e-3 && a < 1e6 ? String(Number(v.toPrecision(4))) : v.toPrecision(4);
-}
 
 const text = (v: unknown): string =>
   typeof v === 'string' ? v : typeof v === 'number' ? String(v) : v == null ? '' : JSON.stringify(v);
@@ -35,7 +31,7 @@ function storedSteps(result: RunDetail['serverResult']): StoredStep[] {
       label: text(s.label),
       formula: text(s.formula),
       substituted: text(s.substituted),
-      value: typeof s.value === 'number' ? shortNumber(s.value) : text(s.value),
+      value: typeof s.value === 'number' ? formatValue(s.value) : text(s.value),
       exact: text(s.value),
       unit: text(s.unit),
     };

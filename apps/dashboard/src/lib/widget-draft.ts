@@ -1,3 +1,4 @@
+import { formatInput as formatNumber, parseNumber } from '@wickstone/calc-core/format';
 import {
   displayUnit,
   fromCanonical,
@@ -68,29 +69,8 @@ export function withUnit(text: string, unit: UnitId): string {
   return symbol === '°' ? `${text}°` : `${text} ${symbol}`;
 }
 
-/**
- * A number for an input box: six significant figures (1 mm shows as 0.0393701 in), plain digits a
- * person can edit, no exponent while that stays short.
- */
-export function formatNumber(value: number): string {
-  if (!Number.isFinite(value)) return '';
-  const rounded = Number(value.toPrecision(6));
-  const text = String(rounded);
-  if (!/e/i.test(text)) return text;
-  const abs = Math.abs(rounded);
-  if (abs >= 1e-9 && abs < 1e-6)
-    return rounded.toFixed(5 - Math.floor(Math.log10(abs))).replace(/\.?0+$/, '');
-  return text;
-}
-
-/** What was typed, as a number: empty → null, unreadable → NaN. One comma is taken as a decimal mark. */
-export function parseNumber(text: string): number | null {
-  let t = text.trim().replace(/^[−–]/, '-');
-  if (t === '') return null;
-  if (!t.includes('.') && /^-?\d*,\d+$/.test(t)) t = t.replace(',', '.');
-  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return Number.NaN;
-  return Number(t);
-}
+/** Numbers typed into the editor read and print as in the widget (calc-core's input format). */
+export { formatNumber, parseNumber };
 
 /** The calculator's default of a quantity input as a number in the unit it is typed in. */
 export function calculatorDefaultNumber(input: QuantityInput, system: UnitSystemId): string {

@@ -1,3 +1,4 @@
+import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 import {
   displayUnit,
   fromCanonical,
@@ -7,14 +8,6 @@ import {
   type UnitId,
   type UnitSystemId,
 } from '@wickstone/calc-core';
-
-/** Four significant figures: what the widget shows, and enough for an estimate. */
-export function formatNumber(v: number): string {
-  if (v === 0) return '0';
-  const a = Math.abs(v);
-  if (a >= 1e6 || a < 1e-3) return v.toPrecision(4);
-  return Number(v.toPrecision(4)).toString();
-}
 
 function shown(value: number, kind: Parameters<typeof displayUnit>[0], system: UnitSystemId, override?: Partial<Record<UnitSystemId, UnitId>>) {
   const unit = override?.[system] ?? displayUnit(kind, system);

@@ -1,11 +1,9 @@
 import type { CalculationResult, CalculatorDefinition, UnitSystemId } from '@wickstone/calc-core';
 import type { Lead } from '../db/models/index.js';
 import type { OutgoingMail } from '../mail/mailer.js';
+import { escapeHtml, oneLine } from '../mail/templates.js';
 import { resultLines } from './format.js';
 
-const escapeHtml = (s: string): string =>
-  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
-const oneLine = (s: string): string => s.replace(/[\r\n\t]+/g, ' ').trim();
 
 /** The estimate disclaimer every copy of a result carries, as the widget shows it. */
 export const ESTIMATE_NOTE =

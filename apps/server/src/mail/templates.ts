@@ -1,14 +1,14 @@
 import type { Role } from '@wickstone/contracts';
 import type { OutgoingMail } from './mailer.js';
 
-const escapeHtml = (s: string): string =>
+export const escapeHtml = (s: string): string =>
   s.replace(
     /[&<>"']/g,
     (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c,
   );
 
 /** Names come from users: keep them on one line in a subject. */
-const oneLine = (s: string): string => s.replace(/[\r\n\t]+/g, ' ').trim();
+export const oneLine = (s: string): string => s.replace(/[\r\n\t]+/g, ' ').trim();
 
 function layout(
   title: string,

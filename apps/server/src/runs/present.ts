@@ -9,7 +9,7 @@ import {
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { ShownValue, WidgetSettings } from '@wickstone/contracts';
-import { formatNumber } from '../embed/format.js';
+import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 
 /** A value in the unit the widget shows it in: the definition's own choice for the system, else the system's unit for its kind. */
 function shown(def: InputDefinition | OutputDefinition, raw: number | string, system: UnitSystemId): ShownValue {
