@@ -12,6 +12,9 @@ import { errorBodySchema, healthResponseSchema } from '@wickstone/contracts';
 import { ensureDatabase, instance, startMariaDB, stopMariaDB, type MariaDBInstance } from '../../scripts/lib/mariadb.mjs';
 
 // A MariaDB of this test's own, so stopping it harms no other test.
+// Its own MariaDB instance; the port can be moved so that several checkouts can test at once.
+const faultDbPort = process.env.TEST_FAULT_DB_PORT ?? '3399';
+
 describe('health when the database goes away and comes back', () => {
   let dir: string;
   let inst: MariaDBInstance;
@@ -21,10 +24,10 @@ describe('health when the database goes away and comes back', () => {
 
   beforeAll(async () => {
     dir = mkdtempSync(path.join(tmpdir(), 'wst-outage-'));
-    inst = instance(dir, 3399);
+    inst = instance(dir, Number(faultDbPort));
     await startMariaDB(inst, { quiet: true });
     ensureDatabase(inst, { database: 'outage', user: 'outage', password: 'outage-pass' });
-    const config = loadConfig({ DB_PORT: '3399', DB_NAME: 'outage', DB_USER: 'outage', DB_PASSWORD: 'outage-pass', LOG_LEVEL: 'silent', NODE_ENV: 'test' });
+    const config = loadConfig({ DB_PORT: faultDbPort, DB_NAME: 'outage', DB_USER: 'outage', DB_PASSWORD: 'outage-pass', LOG_LEVEL: 'silent', NODE_ENV: 'test' });
     const sequelize = createSequelize(config.db);
     closePool = () => sequelize.close();
     const app = createApp({ config, sequelize, logger: createLogger(config) });
@@ -56,7 +59,16 @@ describe('health when the database goes away and comes back', () => {
     const body = errorBodySchema.parse(await res.json());
     expect(body.error.code).toBe('service_unavailable');
     expect(body.error.details).toMatchObject({ database: { status: 'down' } });
+    expect(res.headers.get('retry-after')).toMatch(/^\d+$/);
     expect(Date.now() - t0).toBeLessThan(10_000);
+  });
+
+  it('answers an API route 503 with Retry-After, not 500, while the database is down', async () => {
+    const res = await fetch(url.replace('/health', '/embed/widgets/wk_does_not_matter'), { headers: { origin: 'http://site.example' } });
+    expect(res.status).toBe(503);
+    expect(Number(res.headers.get('retry-after'))).toBeGreaterThan(0);
+    const body = errorBodySchema.parse(await res.json());
+    expect(body.error.code).toBe('service_unavailable');
   });
 
   it('recovers once the database is back', async () => {

@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ConnectionError } from 'sequelize';
 import { ZodError } from 'zod';
 import { errorStatus, type ErrorBody, type ErrorCode, type FieldIssue } from '@wickstone/contracts';
 
@@ -78,6 +79,39 @@ interface HttpishError {
   message?: string;
 }
 
+/** Connector codes that mean the database could not be reached or dropped the connection. */
+const UNREACHABLE_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'ER_GET_CONNECTION_TIMEOUT',
+  'ER_CONNECTION_TIMEOUT',
+  'ER_SOCKET_UNEXPECTED_CLOSE',
+  'ER_CONNECTION_ALREADY_CLOSED',
+  'ER_CLOSING_POOL',
+  'ER_POOL_ALREADY_CLOSED',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CONNECTION_KILLED',
+]);
+
+/** Seconds a client is asked to wait after an outage answer: about how long a restart takes. */
+export const OUTAGE_RETRY_AFTER_S = 5;
+
+/**
+ * Whether a failure means the database is unreachable (an outage, answered 503 with Retry-After)
+ * rather than a defect (500). Sequelize wraps connector errors; the original is on `parent`/`original`.
+ */
+export function isDatabaseUnavailable(err: unknown): boolean {
+  if (err instanceof ConnectionError) return true;
+  for (let e: unknown = err, depth = 0; e && typeof e === 'object' && depth < 4; depth++) {
+    const code = (e as { code?: unknown }).code;
+    if (typeof code === 'string' && UNREACHABLE_CODES.has(code)) return true;
+    e = (e as { parent?: unknown; original?: unknown; cause?: unknown }).parent ?? (e as { original?: unknown }).original ?? (e as { cause?: unknown }).cause;
+  }
+  return false;
+}
+
 /** The last middleware: every failure leaves as `{ error: { code, message, details } }`, never a stack. */
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   if (res.headersSent) {
@@ -86,6 +120,7 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   }
   if (err instanceof AppError) {
     if (err.status >= 500) req.log?.error({ err }, err.message);
+    if (err.code === 'service_unavailable' && !res.getHeader('Retry-After')) res.setHeader('Retry-After', String(OUTAGE_RETRY_AFTER_S));
     res.status(err.status).json(body(err.code, err.message, err.details));
     return;
   }
@@ -111,6 +146,14 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   }
   if (typeof status === 'number' && status >= 400 && status < 500) {
     res.status(status).json(body('bad_request', h.expose && h.message ? h.message : 'Bad request', null));
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    req.log?.warn({ err }, 'database unavailable');
+    res.setHeader('Retry-After', String(OUTAGE_RETRY_AFTER_S));
+    res
+      .status(503)
+      .json(body('service_unavailable', 'Temporarily unavailable: try again in a few seconds', { retryAfterS: OUTAGE_RETRY_AFTER_S }));
     return;
   }
   req.log?.error({ err }, 'unhandled error');
