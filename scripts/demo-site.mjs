@@ -12,7 +12,9 @@ const snippetsFile = process.env.DEMO_SITE_SNIPPETS ?? path.join(root, 'var', 'd
 
 function page() {
   const { widgets } = JSON.parse(readFileSync(snippetsFile, 'utf8'));
-  return template.replace('{{WIDGET_1}}', widgets[0]?.snippet ?? '').replace('{{WIDGET_2}}', widgets[1]?.snippet ?? '');
+  return template
+    .replace('{{WIDGET_1}}', widgets[0]?.snippet ?? '')
+    .replace('{{WIDGET_2}}', widgets[1]?.snippet ?? '');
 }
 
 const server = createServer((req, res) => {

@@ -65,7 +65,9 @@ const http = createServer((req, res) => {
   const url = new URL(req.url ?? '/', 'http://127.0.0.1');
   if (url.pathname === '/messages' && req.method === 'GET') {
     const to = url.searchParams.get('to');
-    const list = to ? messages.filter((m) => m.to.some((a) => a.toLowerCase() === to.toLowerCase())) : messages;
+    const list = to
+      ? messages.filter((m) => m.to.some((a) => a.toLowerCase() === to.toLowerCase()))
+      : messages;
     res.writeHead(200, { 'content-type': 'application/json' });
     res.end(JSON.stringify({ items: [...list].reverse() }));
     return;

@@ -1,7 +1,13 @@
 // `npm start`: install, build, start a private MariaDB, migrate, seed the demo, then run the fake
 // SMTP server and the app until Ctrl-C, which stops everything this script started.
 import path from 'node:path';
-import { ensureDatabase, ensureMariaDBInstalled, instance, startMariaDB, stopMariaDB } from './lib/mariadb.mjs';
+import {
+  ensureDatabase,
+  ensureMariaDBInstalled,
+  instance,
+  startMariaDB,
+  stopMariaDB,
+} from './lib/mariadb.mjs';
 import { isAlive, log, readPid, root, run, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
 import { build, ensureNodeModules } from './lib/setup.mjs';
 
@@ -32,7 +38,13 @@ try {
   const wasRunning = isAlive(readPid(db.pidFile));
   await startMariaDB(db);
   startedDb = !wasRunning;
-  const dbEnv = { DB_HOST: '127.0.0.1', DB_PORT: String(dbPort), DB_NAME: 'wickstone', DB_USER: 'wickstone', DB_PASSWORD: 'wickstone-local' };
+  const dbEnv = {
+    DB_HOST: '127.0.0.1',
+    DB_PORT: String(dbPort),
+    DB_NAME: 'wickstone',
+    DB_USER: 'wickstone',
+    DB_PASSWORD: 'wickstone-local',
+  };
   ensureDatabase(db, { database: dbEnv.DB_NAME, user: dbEnv.DB_USER, password: dbEnv.DB_PASSWORD });
 
   const env = {
@@ -52,7 +64,11 @@ try {
 
   children.push(
     startChild('mail', 'node', ['scripts/fake-smtp.mjs'], {
-      env: { ...env, FAKE_MAIL_HTTP_PORT: String(mailHttpPort), FAKE_MAIL_FILE: path.join(root, 'var', 'mail', 'messages.jsonl') },
+      env: {
+        ...env,
+        FAKE_MAIL_HTTP_PORT: String(mailHttpPort),
+        FAKE_MAIL_FILE: path.join(root, 'var', 'mail', 'messages.jsonl'),
+      },
     }),
   );
   const server = startChild('app', 'node', ['apps/server/dist/index.js'], { env });
@@ -65,7 +81,11 @@ try {
   });
 
   await waitForHttp(`http://127.0.0.1:${port}/api/v1/health`);
-  children.push(startChild('site', 'node', ['scripts/demo-site.mjs'], { env: { ...env, DEMO_SITE_SNIPPETS: demoSnippets } }));
+  children.push(
+    startChild('site', 'node', ['scripts/demo-site.mjs'], {
+      env: { ...env, DEMO_SITE_SNIPPETS: demoSnippets },
+    }),
+  );
   await waitForHttp(`http://127.0.0.1:${demoPort}/`);
   log(`the demo consultancy's website, with two embedded widgets: http://localhost:${demoPort}`);
   log(`Wickstone is running at http://127.0.0.1:${port}  (Ctrl-C stops it)`);

@@ -3,7 +3,14 @@
 // exits with the test runner's code.
 import path from 'node:path';
 import { rmSync } from 'node:fs';
-import { ensureDatabase, ensureMariaDBInstalled, instance, sql, startMariaDB, stopMariaDB } from './lib/mariadb.mjs';
+import {
+  ensureDatabase,
+  ensureMariaDBInstalled,
+  instance,
+  sql,
+  startMariaDB,
+  stopMariaDB,
+} from './lib/mariadb.mjs';
 import { log, root, run, runStatus, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
 import { build, ensureChromium, ensureNodeModules } from './lib/setup.mjs';
 
@@ -33,9 +40,20 @@ try {
   await stopMariaDB(db, { quiet: true });
   rmSync(db.dir, { recursive: true, force: true });
   await startMariaDB(db);
-  const dbEnv = { DB_HOST: '127.0.0.1', DB_PORT: String(dbPort), DB_NAME: 'wickstone_test', DB_USER: 'wickstone_test', DB_PASSWORD: 'wickstone-test' };
+  const dbEnv = {
+    DB_HOST: '127.0.0.1',
+    DB_PORT: String(dbPort),
+    DB_NAME: 'wickstone_test',
+    DB_USER: 'wickstone_test',
+    DB_PASSWORD: 'wickstone-test',
+  };
   // Tests make a database per file, so the test user may create databases.
-  ensureDatabase(db, { database: dbEnv.DB_NAME, user: dbEnv.DB_USER, password: dbEnv.DB_PASSWORD, allDatabases: true });
+  ensureDatabase(db, {
+    database: dbEnv.DB_NAME,
+    user: dbEnv.DB_USER,
+    password: dbEnv.DB_PASSWORD,
+    allDatabases: true,
+  });
   sql(db, 'SELECT 1');
 
   const env = {
@@ -48,7 +66,11 @@ try {
     FAKE_MAIL_API_URL: `http://127.0.0.1:${mailHttpPort}`,
     CHROMIUM_PATH: '/usr/bin/chromium',
   };
-  children.push(startChild('mail', 'node', ['scripts/fake-smtp.mjs'], { env: { ...env, FAKE_MAIL_HTTP_PORT: String(mailHttpPort) } }));
+  children.push(
+    startChild('mail', 'node', ['scripts/fake-smtp.mjs'], {
+      env: { ...env, FAKE_MAIL_HTTP_PORT: String(mailHttpPort) },
+    }),
+  );
   await waitForHttp(`http://127.0.0.1:${mailHttpPort}/messages`);
 
   log('running every test (vitest run)');

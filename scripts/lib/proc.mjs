@@ -104,8 +104,14 @@ export function ensureDebianPackage(binary, packages, why) {
     const [cmd, ...rest] = [...sudo, 'apt-get', ...args];
     return spawnSync(cmd, rest, { stdio: 'inherit', env }).status;
   };
-  if (aptGet(['update']) !== 0 || aptGet(['install', '-y', '--no-install-recommends', ...packages]) !== 0 || !existsSync(binary)) {
-    throw new Error(`Could not install ${packages.join(' ')} with apt-get; install it by hand, then run again.`);
+  if (
+    aptGet(['update']) !== 0 ||
+    aptGet(['install', '-y', '--no-install-recommends', ...packages]) !== 0 ||
+    !existsSync(binary)
+  ) {
+    throw new Error(
+      `Could not install ${packages.join(' ')} with apt-get; install it by hand, then run again.`,
+    );
   }
 }
 

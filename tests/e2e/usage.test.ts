@@ -17,7 +17,11 @@ import { startApp, type RunningApp } from '../support/server.js';
 const run = `${Date.now().toString(36)}${randomBytes(2).toString('hex')}`;
 const firm = 'Brackenridge Ground & Damp';
 const SITE = 'https://www.brackenridge-ground.example';
-const visitor = { name: 'Ffion Aldercott', email: `ffion.aldercott.${run}@old-mill-cottage.example`, siteAddress: '3 Weir Lane, Brackenridge' };
+const visitor = {
+  name: 'Ffion Aldercott',
+  email: `ffion.aldercott.${run}@old-mill-cottage.example`,
+  siteAddress: '3 Weir Lane, Brackenridge',
+};
 
 /** A signed-in API session over plain fetch: the session cookie and the CSRF token it needs. */
 class ApiSession {
@@ -86,14 +90,19 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     app.db.sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
 
   async function liveWidget(owner: ApiSession, name: string, calculatorId: string): Promise<LiveWidget> {
-    const created = await owner.json<{ id: number; publicKey: string; settings: { units: { system: 'si' | 'us' } } }>(
-      'POST',
-      `/orgs/${org.id}/widgets`,
-      { name, calculatorId, allowedOrigins: [SITE] },
-      201,
-    );
+    const created = await owner.json<{
+      id: number;
+      publicKey: string;
+      settings: { units: { system: 'si' | 'us' } };
+    }>('POST', `/orgs/${org.id}/widgets`, { name, calculatorId, allowedOrigins: [SITE] }, 201);
     await owner.json('PATCH', `/orgs/${org.id}/widgets/${created.id}`, { status: 'live' }, 200);
-    return { id: created.id, name, calculatorId, publicKey: created.publicKey, system: created.settings.units.system };
+    return {
+      id: created.id,
+      name,
+      calculatorId,
+      publicKey: created.publicKey,
+      system: created.settings.units.system,
+    };
   }
 
   /** What the widget's script sends after a visitor's calculation: a text/plain beacon from the firm's page. */
@@ -105,7 +114,12 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
       publicKey: w.publicKey,
       inputs: r.inputs,
       unitSystem: w.system,
-      result: { outputs: r.outputs, warnings: r.warnings.map((x) => x.code), inputHash: r.inputHash, version: r.version },
+      result: {
+        outputs: r.outputs,
+        warnings: r.warnings.map((x) => x.code),
+        inputHash: r.inputHash,
+        version: r.version,
+      },
       pageUrl: `${SITE}/advice/rising-damp`,
     };
     const res = await fetch(`${app.url}/api/v1/embed/runs`, {
@@ -119,7 +133,8 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
   }
 
   const runsTotal = () => page.getByTestId('runs-total').textContent();
-  const rowIds = () => page.locator('[data-run-row]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-run-row')));
+  const rowIds = () =>
+    page.locator('[data-run-row]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-run-row')));
 
   beforeAll(async () => {
     app = await startApp({
@@ -129,7 +144,12 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     });
     org = await seedOrgWithTeam(firm);
     const owner = new ApiSession(app.url);
-    await owner.json('POST', '/auth/login', { email: org.users.owner.email, password: org.users.owner.password }, 200);
+    await owner.json(
+      'POST',
+      '/auth/login',
+      { email: org.users.owner.email, password: org.users.owner.password },
+      200,
+    );
     tube = await liveWidget(owner, 'Rising damp in a pore', 'tube-rise');
     soil = await liveWidget(owner, 'Slab moisture check', 'soil-capillary-rise');
     for (const diameter of [0.0005, 0.0008, 0.004, 0.006]) await report(tube, { diameter });
@@ -168,13 +188,20 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     await page.getByLabel('Password', { exact: true }).fill(org.users.analyst.password);
     await page.getByRole('button', { name: 'Sign in', exact: true }).click();
     await page.waitForURL(/\/orgs\/\d+$/);
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Usage', exact: true }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Usage', exact: true })
+      .click();
     await page.waitForURL(/\/usage$/);
 
     await expect.poll(runsTotal).toBe(`${reported.length} runs match`);
     expect(await page.locator('[data-total="runs"]').textContent()).toBe(String(reported.length));
     expect(await page.locator('[data-total="withLead"]').textContent()).toBe('1');
-    await expect.poll(() => page.getByRole('img', { name: new RegExp(`^${reported.length} runs over 30 days`) }).count()).toBe(1);
+    await expect
+      .poll(() =>
+        page.getByRole('img', { name: new RegExp(`^${reported.length} runs over 30 days`) }).count(),
+      )
+      .toBe(1);
     await page.screenshot({ path: '/tmp/shots/usage-summary.png', fullPage: true });
 
     await page.getByLabel('Warnings').selectOption('true');
@@ -194,10 +221,15 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
   });
 
   it('downloads the filtered runs as CSV', async () => {
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download CSV' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Download CSV' }).click(),
+    ]);
     const csv = (await readFile(await download.path(), 'utf8')).replace(/^\uFEFF/, '');
     const lines = csv.trim().split(/\r?\n/);
-    expect(lines[0]).toBe('Time (UTC),Run,Widget ID,Widget,Calculator,Inputs,Outputs,Units,Warnings,Site,Page,Release,Agreed,Lead');
+    expect(lines[0]).toBe(
+      'Time (UTC),Run,Widget ID,Widget,Calculator,Inputs,Outputs,Units,Warnings,Site,Page,Release,Agreed,Lead',
+    );
     // Only the chosen widget's runs, the same filter as the table.
     expect(lines).toHaveLength(1 + reported.filter((r) => r.widget === soil).length);
     for (const r of reported.filter((x) => x.widget === soil)) expect(csv).toContain(r.id);
@@ -210,8 +242,12 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     await page.locator(`[data-run-row="${leadRunId}"] a`).click();
     await page.waitForURL(new RegExp(`/usage/runs/${leadRunId}$`));
     await page.getByRole('heading', { name: 'Working, as stored' }).waitFor();
-    const [stored] = await q<{ server_result: unknown }>('SELECT server_result FROM runs WHERE id = ?', [leadRunId]);
-    const serverResult = (typeof stored!.server_result === 'string' ? JSON.parse(stored!.server_result) : stored!.server_result) as {
+    const [stored] = await q<{ server_result: unknown }>('SELECT server_result FROM runs WHERE id = ?', [
+      leadRunId,
+    ]);
+    const serverResult = (
+      typeof stored!.server_result === 'string' ? JSON.parse(stored!.server_result) : stored!.server_result
+    ) as {
       working: { label: string }[];
     };
     expect(await page.locator('[data-working-step]').count()).toBe(serverResult.working.length);
@@ -229,13 +265,19 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     await page.getByLabel('Notes').fill('Rang back; survey pencilled in for Thursday.');
     await page.getByRole('button', { name: 'Save', exact: true }).click();
     await page.getByText('Saved: the lead is contacted.').waitFor();
-    const [row] = await q<{ status: string; notes: string | null }>('SELECT status, notes FROM leads WHERE id = ? AND organization_id = ?', [leadId, org.id]);
+    const [row] = await q<{ status: string; notes: string | null }>(
+      'SELECT status, notes FROM leads WHERE id = ? AND organization_id = ?',
+      [leadId, org.id],
+    );
     expect(row).toEqual({ status: 'contacted', notes: 'Rang back; survey pencilled in for Thursday.' });
     await page.screenshot({ path: '/tmp/shots/usage-lead.png', fullPage: true });
   });
 
   it('lists the lead under its new status', async () => {
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Leads', exact: true }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Leads', exact: true })
+      .click();
     await page.locator(`[data-lead-row="${leadId}"]`).waitFor();
     await page.getByLabel('Status').selectOption('new');
     await page.getByText('No lead matches these filters').waitFor();

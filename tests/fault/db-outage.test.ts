@@ -9,7 +9,13 @@ import { loadConfig } from '@wickstone/server/config';
 import { createLogger } from '@wickstone/server/logger';
 import { createSequelize } from '@wickstone/server/db';
 import { errorBodySchema, healthResponseSchema } from '@wickstone/contracts';
-import { ensureDatabase, instance, startMariaDB, stopMariaDB, type MariaDBInstance } from '../../scripts/lib/mariadb.mjs';
+import {
+  ensureDatabase,
+  instance,
+  startMariaDB,
+  stopMariaDB,
+  type MariaDBInstance,
+} from '../../scripts/lib/mariadb.mjs';
 
 // A MariaDB of this test's own, so stopping it harms no other test.
 // Its own MariaDB instance; the port can be moved so that several checkouts can test at once.
@@ -27,7 +33,14 @@ describe('health when the database goes away and comes back', () => {
     inst = instance(dir, Number(faultDbPort));
     await startMariaDB(inst, { quiet: true });
     ensureDatabase(inst, { database: 'outage', user: 'outage', password: 'outage-pass' });
-    const config = loadConfig({ DB_PORT: faultDbPort, DB_NAME: 'outage', DB_USER: 'outage', DB_PASSWORD: 'outage-pass', LOG_LEVEL: 'silent', NODE_ENV: 'test' });
+    const config = loadConfig({
+      DB_PORT: faultDbPort,
+      DB_NAME: 'outage',
+      DB_USER: 'outage',
+      DB_PASSWORD: 'outage-pass',
+      LOG_LEVEL: 'silent',
+      NODE_ENV: 'test',
+    });
     const sequelize = createSequelize(config.db);
     closePool = () => sequelize.close();
     const app = createApp({ config, sequelize, logger: createLogger(config) });
@@ -64,7 +77,9 @@ describe('health when the database goes away and comes back', () => {
   });
 
   it('answers an API route 503 with Retry-After, not 500, while the database is down', async () => {
-    const res = await fetch(url.replace('/health', '/embed/widgets/wk_does_not_matter'), { headers: { origin: 'http://site.example' } });
+    const res = await fetch(url.replace('/health', '/embed/widgets/wk_does_not_matter'), {
+      headers: { origin: 'http://site.example' },
+    });
     expect(res.status).toBe(503);
     expect(Number(res.headers.get('retry-after'))).toBeGreaterThan(0);
     const body = errorBodySchema.parse(await res.json());
@@ -73,8 +88,6 @@ describe('health when the database goes away and comes back', () => {
 
   it('recovers once the database is back', async () => {
     await startMariaDB(inst, { quiet: true });
-    await expect
-      .poll(async () => (await fetch(url)).status, { timeout: 20_000, interval: 250 })
-      .toBe(200);
+    await expect.poll(async () => (await fetch(url)).status, { timeout: 20_000, interval: 250 }).toBe(200);
   });
 });

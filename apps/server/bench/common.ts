@@ -24,12 +24,21 @@ export const args = parseArgs({
 }).values;
 
 /** The configured MariaDB, but a database of the benchmark's own (never the app's or the tests'). */
-export async function openBenchDatabase(opts: { fresh?: boolean } = {}): Promise<{ sequelize: Sequelize; config: Config }> {
+export async function openBenchDatabase(
+  opts: { fresh?: boolean } = {},
+): Promise<{ sequelize: Sequelize; config: Config }> {
   const config = loadConfig({ ...process.env, LOG_LEVEL: 'silent', DB_NAME: args.db });
-  const admin = await mariadb.createConnection({ host: config.db.host, port: config.db.port, user: config.db.user, password: config.db.password });
+  const admin = await mariadb.createConnection({
+    host: config.db.host,
+    port: config.db.port,
+    user: config.db.user,
+    password: config.db.password,
+  });
   try {
     if (opts.fresh) await admin.query(`DROP DATABASE IF EXISTS \`${config.db.name}\``);
-    await admin.query(`CREATE DATABASE IF NOT EXISTS \`${config.db.name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
+    await admin.query(
+      `CREATE DATABASE IF NOT EXISTS \`${config.db.name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+    );
   } finally {
     await admin.end();
   }

@@ -42,19 +42,63 @@ interface WidgetPlan {
   inputs: () => Record<string, number | string>;
 }
 const PLAN: WidgetPlan[] = [
-  { name: 'Rising damp: capillary rise in a pore', calculatorId: 'tube-rise', share: 0.4, system: 'si', inputs: () => ({ diameter: between(0.0001, 0.006), temperatureC: Math.round(between(2, 30)) }) },
-  { name: 'Slab check: soil capillary rise', calculatorId: 'soil-capillary-rise', share: 0.3, system: 'us', inputs: () => ({ d10: between(0.00001, 0.0008), waterTableDepth: between(0.3, 4) }) },
-  { name: 'Crack wicking: rise between walls', calculatorId: 'slot-rise', share: 0.2, system: 'si', inputs: () => ({ gap: between(0.0001, 0.008) }) },
-  { name: 'Render soak time', calculatorId: 'wicking-time', share: 0.1, system: 'si', inputs: () => ({ length: between(0.005, 0.3), poreRadius: between(1e-6, 5e-5) }) },
+  {
+    name: 'Rising damp: capillary rise in a pore',
+    calculatorId: 'tube-rise',
+    share: 0.4,
+    system: 'si',
+    inputs: () => ({ diameter: between(0.0001, 0.006), temperatureC: Math.round(between(2, 30)) }),
+  },
+  {
+    name: 'Slab check: soil capillary rise',
+    calculatorId: 'soil-capillary-rise',
+    share: 0.3,
+    system: 'us',
+    inputs: () => ({ d10: between(0.00001, 0.0008), waterTableDepth: between(0.3, 4) }),
+  },
+  {
+    name: 'Crack wicking: rise between walls',
+    calculatorId: 'slot-rise',
+    share: 0.2,
+    system: 'si',
+    inputs: () => ({ gap: between(0.0001, 0.008) }),
+  },
+  {
+    name: 'Render soak time',
+    calculatorId: 'wicking-time',
+    share: 0.1,
+    system: 'si',
+    inputs: () => ({ length: between(0.005, 0.3), poreRadius: between(1e-6, 5e-5) }),
+  },
 ];
 const FIRST = ['Hester', 'Owain', 'Priya', 'Caspar', 'Maud', 'Idris', 'Nell', 'Tobias', 'Wren', 'Anselm'];
-const LAST = ['Quayle', 'Brightwell', 'Venn', 'Doyle', 'Farrant', 'Lusk', 'Orme', 'Pennick', 'Straker', 'Tull'];
+const LAST = [
+  'Quayle',
+  'Brightwell',
+  'Venn',
+  'Doyle',
+  'Farrant',
+  'Lusk',
+  'Orme',
+  'Pennick',
+  'Straker',
+  'Tull',
+];
 
-async function makeOrganization(): Promise<{ org: Organization; widgets: (Widget & { plan: WidgetPlan })[] }> {
-  const org = await Organization.create({ name: 'Brackenridge Ground & Damp (benchmark)', slug: BENCH_ORG_SLUG });
+async function makeOrganization(): Promise<{
+  org: Organization;
+  widgets: (Widget & { plan: WidgetPlan })[];
+}> {
+  const org = await Organization.create({
+    name: 'Brackenridge Ground & Damp (benchmark)',
+    slug: BENCH_ORG_SLUG,
+  });
   const widgets = [];
   for (const [i, plan] of PLAN.entries()) {
-    const settings: WidgetSettings = { ...defaultWidgetSettings(), units: { system: plan.system, visitorMaySwitch: true } };
+    const settings: WidgetSettings = {
+      ...defaultWidgetSettings(),
+      units: { system: plan.system, visitorMaySwitch: true },
+    };
     const w = await Widget.create({
       organizationId: org.id,
       publicKey: `wk_bench${String(i).padStart(15, '0')}`,
@@ -75,7 +119,9 @@ try {
   let org = await benchOrganization();
   const have = org ? await Run.count({ where: { organizationId: org.id } }) : 0;
   if (org && have >= TOTAL) {
-    console.log(`${args.db}: ${have.toLocaleString('en')} runs already seeded for ${org.name}; use --fresh to seed again`);
+    console.log(
+      `${args.db}: ${have.toLocaleString('en')} runs already seeded for ${org.name}; use --fresh to seed again`,
+    );
   } else {
     if (org) {
       console.log(`${args.db}: only ${have.toLocaleString('en')} runs; starting again`);
@@ -84,7 +130,12 @@ try {
     const made = await makeOrganization();
     org = made.org;
     // A pool of real calculations per widget: each run takes one, as visitors repeat common inputs.
-    const pools = new Map<number, CalculationResult[]>(made.widgets.map((w) => [w.id, Array.from({ length: 400 }, () => calculate(w.calculatorId, w.plan.inputs()))]));
+    const pools = new Map<number, CalculationResult[]>(
+      made.widgets.map((w) => [
+        w.id,
+        Array.from({ length: 400 }, () => calculate(w.calculatorId, w.plan.inputs())),
+      ]),
+    );
     const chooseWidget = () => {
       let x = rnd();
       for (const w of made.widgets) if ((x -= w.plan.share) < 0) return w;
@@ -92,7 +143,8 @@ try {
     };
 
     // Runs per day: weekdays busier than weekends, and the firm growing over the year.
-    const end = Date.UTC(new Date().getUTCFullYear(), new Date().getUTCMonth(), new Date().getUTCDate()) + DAY;
+    const end =
+      Date.UTC(new Date().getUTCFullYear(), new Date().getUTCMonth(), new Date().getUTCDate()) + DAY;
     const start = end - DAYS * DAY;
     const weights = Array.from({ length: DAYS }, (_, d) => {
       const weekday = new Date(start + d * DAY).getUTCDay();
@@ -120,11 +172,15 @@ try {
       leads += linked.length;
       if (done % 100_000 < rows.length || done === TOTAL) {
         const s = (performance.now() - t0) / 1000;
-        console.log(`  ${done.toLocaleString('en')} runs, ${leads.toLocaleString('en')} leads, ${s.toFixed(0)} s (${Math.round(done / s).toLocaleString('en')} runs/s)`);
+        console.log(
+          `  ${done.toLocaleString('en')} runs, ${leads.toLocaleString('en')} leads, ${s.toFixed(0)} s (${Math.round(done / s).toLocaleString('en')} runs/s)`,
+        );
       }
     };
     for (let d = 0; d < DAYS; d++) {
-      const times = Array.from({ length: perDay[d]! }, () => start + d * DAY + Math.floor(rnd() * DAY)).sort((a, b) => a - b);
+      const times = Array.from({ length: perDay[d]! }, () => start + d * DAY + Math.floor(rnd() * DAY)).sort(
+        (a, b) => a - b,
+      );
       for (const at of times) {
         const w = chooseWidget();
         const origin = site();
@@ -164,7 +220,9 @@ try {
     }
     if (batch.length) await flush();
     const seeding = performance.now() - t0;
-    console.log(`seeded ${done.toLocaleString('en')} runs and ${leads.toLocaleString('en')} leads in ${seconds(seeding)} (${Math.round(done / (seeding / 1000)).toLocaleString('en')} runs/s, batches of ${BATCH}, rollups in the same transactions)`);
+    console.log(
+      `seeded ${done.toLocaleString('en')} runs and ${leads.toLocaleString('en')} leads in ${seconds(seeding)} (${Math.round(done / (seeding / 1000)).toLocaleString('en')} runs/s, batches of ${BATCH}, rollups in the same transactions)`,
+    );
   }
 
   const t1 = performance.now();

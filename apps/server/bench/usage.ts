@@ -15,7 +15,11 @@ import { args, benchOrganization, openBenchDatabase } from './common.js';
 const ITERATIONS = Number(args.iterations);
 const RAW_ITERATIONS = Number(args['raw-iterations']);
 
-async function time(label: string, fn: () => Promise<unknown>, iterations = ITERATIONS): Promise<{ label: string; n: number; p50: number; p95: number }> {
+async function time(
+  label: string,
+  fn: () => Promise<unknown>,
+  iterations = ITERATIONS,
+): Promise<{ label: string; n: number; p50: number; p95: number }> {
   await fn(); // warm-up: plans, pool connections, pages in the buffer pool
   const ms: number[] = [];
   for (let i = 0; i < iterations; i++) {
@@ -39,9 +43,13 @@ async function rawSummary(sequelize: Sequelize, orgId: number, from: string, to:
   const where = 'r.organization_id = ? AND r.created_at >= ? AND r.created_at < ?';
   const sums = `COUNT(*) AS runs, SUM(r.has_warning) AS warned, SUM(NOT r.agreed) AS disagreed,
     SUM(EXISTS (SELECT 1 FROM leads l WHERE l.run_id = r.id)) AS led`;
-  const q = (sql: string, replacements: unknown[]) => sequelize.query<Record<string, unknown>>(sql, { replacements, type: QueryTypes.SELECT });
+  const q = (sql: string, replacements: unknown[]) =>
+    sequelize.query<Record<string, unknown>>(sql, { replacements, type: QueryTypes.SELECT });
   const [groups, previous, warnings] = await Promise.all([
-    q(`SELECT DATE_FORMAT(DATE(r.created_at), '%Y-%m-%d') AS day, r.widget_id, r.calculator_id, r.origin, ${sums} FROM runs r WHERE ${where} GROUP BY 1, 2, 3, 4`, range),
+    q(
+      `SELECT DATE_FORMAT(DATE(r.created_at), '%Y-%m-%d') AS day, r.widget_id, r.calculator_id, r.origin, ${sums} FROM runs r WHERE ${where} GROUP BY 1, 2, 3, 4`,
+      range,
+    ),
     q(`SELECT ${sums} FROM runs r WHERE ${where}`, [orgId, `${prevFrom} 00:00:00`, `${from} 00:00:00`]),
     q(
       `SELECT r.widget_id, w.code, COUNT(*) AS runs FROM runs r, JSON_TABLE(r.warning_codes, '$[*]' COLUMNS (code VARCHAR(60) PATH '$')) w
@@ -60,7 +68,14 @@ async function rawSummary(sequelize: Sequelize, orgId: number, from: string, to:
     }
     return out;
   };
-  return { perDay: fold('day'), byWidget: fold('widget_id'), byCalculator: fold('calculator_id'), bySite: fold('origin'), previous, warnings };
+  return {
+    perDay: fold('day'),
+    byWidget: fold('widget_id'),
+    byCalculator: fold('calculator_id'),
+    bySite: fold('origin'),
+    previous,
+    warnings,
+  };
 }
 
 /** The page's question over the raw runs: a plain COUNT(*) for the total, a plain LIMIT/OFFSET for the rows. */
@@ -77,7 +92,10 @@ async function rawPage(sequelize: Sequelize, orgId: number, q: RunListQuery) {
   }
   const where = conds.join(' AND ');
   const [count, rows] = await Promise.all([
-    sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM runs r WHERE ${where}`, { replacements: params, type: QueryTypes.SELECT }),
+    sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM runs r WHERE ${where}`, {
+      replacements: params,
+      type: QueryTypes.SELECT,
+    }),
     sequelize.query<{ id: string }>(
       `SELECT r.id, r.created_at, r.widget_id, r.calculator_id, r.origin, r.page_url, r.\`release\`, r.unit_system, r.inputs,
               JSON_EXTRACT(r.client_result, '$.outputs') AS outputs, r.warning_codes, r.agreed,
@@ -103,22 +121,45 @@ try {
   const from = addDays(to, -364);
   // A whole month in the middle of the year.
   const month = new Date(Date.parse(`${addDays(to, -180)}T00:00:00Z`));
-  const monthFrom = new Date(Date.UTC(month.getUTCFullYear(), month.getUTCMonth(), 1)).toISOString().slice(0, 10);
-  const monthTo = new Date(Date.UTC(month.getUTCFullYear(), month.getUTCMonth() + 1, 0)).toISOString().slice(0, 10);
-  const page: RunListQuery = { widgetId: widget.id, hasWarning: true, from: monthFrom, to: monthTo, page: 3, pageSize: 50, sort: '-createdAt' };
+  const monthFrom = new Date(Date.UTC(month.getUTCFullYear(), month.getUTCMonth(), 1))
+    .toISOString()
+    .slice(0, 10);
+  const monthTo = new Date(Date.UTC(month.getUTCFullYear(), month.getUTCMonth() + 1, 0))
+    .toISOString()
+    .slice(0, 10);
+  const page: RunListQuery = {
+    widgetId: widget.id,
+    hasWarning: true,
+    from: monthFrom,
+    to: monthTo,
+    page: 3,
+    pageSize: 50,
+    sort: '-createdAt',
+  };
 
   // Both ways must give the same answer, or the timing means nothing.
   const s: UsageSummary = await usage.summary(org.id, { from, to });
   const raw = await rawSummary(sequelize, org.id, from, to);
   const rawRuns = [...raw.byWidget.values()].reduce((n, r) => n + r.runs, 0);
   const rawLed = [...raw.byWidget.values()].reduce((n, r) => n + r.led, 0);
-  if (s.totals.runs !== rawRuns || s.totals.withLead !== rawLed || s.previous.totals.runs !== Number(raw.previous[0]?.runs ?? 0))
-    throw new Error(`summary disagrees with the raw GROUP BY: ${JSON.stringify(s.totals)} vs ${rawRuns} runs, ${rawLed} led`);
+  if (
+    s.totals.runs !== rawRuns ||
+    s.totals.withLead !== rawLed ||
+    s.previous.totals.runs !== Number(raw.previous[0]?.runs ?? 0)
+  )
+    throw new Error(
+      `summary disagrees with the raw GROUP BY: ${JSON.stringify(s.totals)} vs ${rawRuns} runs, ${rawLed} led`,
+    );
   const differs = [
     ...s.perDay.filter((d) => d.runs !== (raw.perDay.get(d.day)?.runs ?? 0)).map((d) => d.day),
-    ...s.bySite.filter((d) => d.runs !== raw.bySite.get(d.origin)?.runs || d.withLead !== raw.bySite.get(d.origin)?.led).map((d) => d.origin),
+    ...s.bySite
+      .filter(
+        (d) => d.runs !== raw.bySite.get(d.origin)?.runs || d.withLead !== raw.bySite.get(d.origin)?.led,
+      )
+      .map((d) => d.origin),
   ];
-  if (differs.length) throw new Error(`summary disagrees with the raw GROUP BY on ${differs.slice(0, 5).join(', ')}`);
+  if (differs.length)
+    throw new Error(`summary disagrees with the raw GROUP BY on ${differs.slice(0, 5).join(', ')}`);
   const yearPage: RunListQuery = { hasWarning: true, from, to, page: 3, pageSize: 50, sort: '-createdAt' };
   for (const q of [page, yearPage]) {
     const listed = await runs.list(org.id, q);
@@ -130,21 +171,41 @@ try {
   console.log(
     `${runsStored.toLocaleString('en')} runs in ${args.db} (MariaDB ${config.db.host}:${config.db.port}), node ${process.version}; each question timed n times after one warm-up`,
   );
-  console.log(`(a) summary ${from}..${to}: ${s.totals.runs.toLocaleString('en')} runs, ${s.perDay.length} days, ${s.byWidget.length} widgets, ${s.bySite.length} sites, ${s.topWarnings.length} warnings, previous year ${s.previous.totals.runs.toLocaleString('en')}`);
-  console.log(`(b) runs page: widget "${widget.name}", has a warning, ${monthFrom}..${monthTo}, page 3 of 50: total ${(await runs.list(org.id, page)).total.toLocaleString('en')}`);
-  console.log(`(c) runs page: any widget, has a warning, the whole year, page 3 of 50: total ${(await runs.list(org.id, yearPage)).total.toLocaleString('en')}`);
+  console.log(
+    `(a) summary ${from}..${to}: ${s.totals.runs.toLocaleString('en')} runs, ${s.perDay.length} days, ${s.byWidget.length} widgets, ${s.bySite.length} sites, ${s.topWarnings.length} warnings, previous year ${s.previous.totals.runs.toLocaleString('en')}`,
+  );
+  console.log(
+    `(b) runs page: widget "${widget.name}", has a warning, ${monthFrom}..${monthTo}, page 3 of 50: total ${(await runs.list(org.id, page)).total.toLocaleString('en')}`,
+  );
+  console.log(
+    `(c) runs page: any widget, has a warning, the whole year, page 3 of 50: total ${(await runs.list(org.id, yearPage)).total.toLocaleString('en')}`,
+  );
   const results = [
     await time('(a) summary, from the daily rollups', () => usage.summary(org.id, { from, to })),
-    await time('(a) summary, GROUP BY over raw runs', () => rawSummary(sequelize, org.id, from, to), RAW_ITERATIONS),
+    await time(
+      '(a) summary, GROUP BY over raw runs',
+      () => rawSummary(sequelize, org.id, from, to),
+      RAW_ITERATIONS,
+    ),
     await time('(b) month page, API (rollup total, index, units)', () => runs.list(org.id, page)),
-    await time('(b) month page, COUNT(*) + OFFSET on raw', () => rawPage(sequelize, org.id, page), RAW_ITERATIONS * 4),
+    await time(
+      '(b) month page, COUNT(*) + OFFSET on raw',
+      () => rawPage(sequelize, org.id, page),
+      RAW_ITERATIONS * 4,
+    ),
     await time('(c) year page, API (rollup total, index, units)', () => runs.list(org.id, yearPage)),
-    await time('(c) year page, COUNT(*) + OFFSET on raw', () => rawPage(sequelize, org.id, yearPage), RAW_ITERATIONS * 4),
+    await time(
+      '(c) year page, COUNT(*) + OFFSET on raw',
+      () => rawPage(sequelize, org.id, yearPage),
+      RAW_ITERATIONS * 4,
+    ),
   ];
   const width = Math.max(...results.map((r) => r.label.length));
   console.log(`${'question'.padEnd(width)}   n     p50 ms     p95 ms`);
   for (const r of results)
-    console.log(`${r.label.padEnd(width)}  ${String(r.n).padStart(2)}  ${r.p50.toFixed(1).padStart(9)}  ${r.p95.toFixed(1).padStart(9)}`);
+    console.log(
+      `${r.label.padEnd(width)}  ${String(r.n).padStart(2)}  ${r.p50.toFixed(1).padStart(9)}  ${r.p95.toFixed(1).padStart(9)}`,
+    );
 
   // The CSV export of the whole year, once: streamed in keyset chunks, so memory stays flat.
   const rss0 = process.memoryUsage().rss;

@@ -77,7 +77,8 @@ export function createApp(deps: AppDeps): Express {
   app.use(
     pinoHttp({
       logger,
-      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
+      customLogLevel: (_req, res, err) =>
+        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
       autoLogging: { ignore: (req) => req.url === '/api/v1/health' },
     }),
   );
@@ -92,7 +93,12 @@ export function createApp(deps: AppDeps): Express {
   const invitations = createInvitationService({ config, sequelize, audit, mailer, logger });
   const releasesDir = config.releasesDir ?? defaultReleasesDir;
   const releases = createReleaseService(releasesDir, config.publicUrl);
-  const widgets = createWidgetService({ sequelize, releases, publicUrl: config.publicUrl, widgetVersion: serverVersion });
+  const widgets = createWidgetService({
+    sequelize,
+    releases,
+    publicUrl: config.publicUrl,
+    widgetVersion: serverVersion,
+  });
   const assets = createAssetService(config.publicUrl);
   const embed = createEmbedService({ sequelize, mailer, logger, publicUrl: config.publicUrl });
   const runs = createRunService({ sequelize });

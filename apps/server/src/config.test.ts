@@ -33,6 +33,8 @@ describe('loadConfig', () => {
     const prod = { NODE_ENV: 'production', JWT_SECRET: 'a-production-secret-of-at-least-32-chars' };
     expect(() => loadConfig(prod)).not.toThrow();
     expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow(/JWT_SECRET/);
-    expect(() => loadConfig({ ...prod, FAKE_MAIL_API_URL: 'http://127.0.0.1:8025' })).toThrow(/FAKE_MAIL_API_URL/);
+    expect(() => loadConfig({ ...prod, FAKE_MAIL_API_URL: 'http://127.0.0.1:8025' })).toThrow(
+      /FAKE_MAIL_API_URL/,
+    );
   });
 });

@@ -16,7 +16,10 @@ const envSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   DB_HOST: z.string().default('127.0.0.1'),
   DB_PORT: z.coerce.number().int().min(1).max(65535).default(3307),
-  DB_NAME: z.string().regex(/^[A-Za-z0-9_]+$/).default('wickstone'),
+  DB_NAME: z
+    .string()
+    .regex(/^[A-Za-z0-9_]+$/)
+    .default('wickstone'),
   DB_USER: z.string().default('wickstone'),
   DB_PASSWORD: z.string().default('wickstone-local'),
   DB_POOL_MAX: z.coerce.number().int().min(1).max(200).default(10),
@@ -24,13 +27,28 @@ const envSchema = z.object({
   /** bcrypt work factor; the default takes about 0.25 s per hash on the project's 2-core machine (bench/bcrypt.ts). */
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(DEFAULT_BCRYPT_COST),
   /** A session cookie lives this long and is renewed while it is used... */
-  SESSION_TTL_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(30),
+  SESSION_TTL_MINUTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 60)
+    .default(30),
   /** ...but never past this long after the sign-in. */
-  SESSION_MAX_HOURS: z.coerce.number().int().min(1).max(24 * 30).default(12),
+  SESSION_MAX_HOURS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 30)
+    .default(12),
   /** Failed sign-ins allowed per e-mail address and per client address in one window. */
   LOGIN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).max(10_000).default(10),
   LOGIN_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(50),
-  RATE_LIMIT_WINDOW_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(15),
+  RATE_LIMIT_WINDOW_MINUTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 60)
+    .default(15),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
   /** Implicit TLS (port 465 style); otherwise STARTTLS is used when the server offers it. */
@@ -49,8 +67,16 @@ const envSchema = z.object({
   LEAD_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(10),
   LEAD_LIMIT_PER_WIDGET: z.coerce.number().int().min(1).max(1_000_000).default(200),
   /** How often the retention purge runs, and how long after start the first one does. */
-  RETENTION_PURGE_INTERVAL_HOURS: z.coerce.number().min(1).max(24 * 7).default(24),
-  RETENTION_FIRST_PURGE_MINUTES: z.coerce.number().min(0).max(24 * 60).default(5),
+  RETENTION_PURGE_INTERVAL_HOURS: z.coerce
+    .number()
+    .min(1)
+    .max(24 * 7)
+    .default(24),
+  RETENTION_FIRST_PURGE_MINUTES: z.coerce
+    .number()
+    .min(0)
+    .max(24 * 60)
+    .default(5),
   /** Runs or leads deleted per purge transaction: short transactions, short row locks. */
   RETENTION_PURGE_CHUNK: z.coerce.number().int().min(10).max(50_000).default(2000),
   TRUST_PROXY: bool.default(false),
@@ -100,7 +126,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   if (e.NODE_ENV === 'production') {
     const wrong: string[] = [];
     if (e.JWT_SECRET === DEV_JWT_SECRET) wrong.push('  JWT_SECRET: set a secret of your own in production');
-    if (e.FAKE_MAIL_API_URL) wrong.push('  FAKE_MAIL_API_URL: the fake mailbox is for local runs, not production');
+    if (e.FAKE_MAIL_API_URL)
+      wrong.push('  FAKE_MAIL_API_URL: the fake mailbox is for local runs, not production');
     if (wrong.length) throw new Error(`Invalid configuration:\n${wrong.join('\n')}`);
   }
   const publicUrl = e.PUBLIC_URL ?? `http://${e.HOST}:${e.PORT}`;
@@ -142,7 +169,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     dashboardDir: e.DASHBOARD_DIR,
     releasesDir: e.RELEASES_DIR,
     demo: { sitePort: e.DEMO_SITE_PORT, snippetsFile: e.DEMO_SITE_FILE },
-    embed: { leadsPerIp: e.LEAD_LIMIT_PER_IP, leadsPerWidget: e.LEAD_LIMIT_PER_WIDGET, windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000 },
+    embed: {
+      leadsPerIp: e.LEAD_LIMIT_PER_IP,
+      leadsPerWidget: e.LEAD_LIMIT_PER_WIDGET,
+      windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
+    },
     retention: {
       purgeIntervalMs: e.RETENTION_PURGE_INTERVAL_HOURS * 3_600_000,
       firstPurgeDelayMs: e.RETENTION_FIRST_PURGE_MINUTES * 60_000,

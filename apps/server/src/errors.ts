@@ -107,7 +107,10 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   for (let e: unknown = err, depth = 0; e && typeof e === 'object' && depth < 4; depth++) {
     const code = (e as { code?: unknown }).code;
     if (typeof code === 'string' && UNREACHABLE_CODES.has(code)) return true;
-    e = (e as { parent?: unknown; original?: unknown; cause?: unknown }).parent ?? (e as { original?: unknown }).original ?? (e as { cause?: unknown }).cause;
+    e =
+      (e as { parent?: unknown; original?: unknown; cause?: unknown }).parent ??
+      (e as { original?: unknown }).original ??
+      (e as { cause?: unknown }).cause;
   }
   return false;
 }
@@ -120,7 +123,8 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   }
   if (err instanceof AppError) {
     if (err.status >= 500) req.log?.error({ err }, err.message);
-    if (err.code === 'service_unavailable' && !res.getHeader('Retry-After')) res.setHeader('Retry-After', String(OUTAGE_RETRY_AFTER_S));
+    if (err.code === 'service_unavailable' && !res.getHeader('Retry-After'))
+      res.setHeader('Retry-After', String(OUTAGE_RETRY_AFTER_S));
     res.status(err.status).json(body(err.code, err.message, err.details));
     return;
   }
@@ -137,7 +141,13 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     return;
   }
   if (h.type === 'entity.parse.failed') {
-    res.status(400).json(body('bad_request', 'Request body is not valid JSON', { fields: [{ field: 'body', message: 'Malformed JSON' }] }));
+    res
+      .status(400)
+      .json(
+        body('bad_request', 'Request body is not valid JSON', {
+          fields: [{ field: 'body', message: 'Malformed JSON' }],
+        }),
+      );
     return;
   }
   if (h.type === 'encoding.unsupported' || h.type === 'charset.unsupported' || status === 415) {
@@ -153,7 +163,11 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     res.setHeader('Retry-After', String(OUTAGE_RETRY_AFTER_S));
     res
       .status(503)
-      .json(body('service_unavailable', 'Temporarily unavailable: try again in a few seconds', { retryAfterS: OUTAGE_RETRY_AFTER_S }));
+      .json(
+        body('service_unavailable', 'Temporarily unavailable: try again in a few seconds', {
+          retryAfterS: OUTAGE_RETRY_AFTER_S,
+        }),
+      );
     return;
   }
   req.log?.error({ err }, 'unhandled error');

@@ -12,10 +12,14 @@ const sequelize = createSequelize(config.db);
 initModels(sequelize);
 const app = createApp({ config, sequelize, logger });
 // Daily purge by each organisation's retention setting; tests call the service directly instead.
-const retentionSchedule = startRetentionSchedule(createRetentionService({ sequelize, chunkSize: config.retention.chunkSize }), logger, {
-  intervalMs: config.retention.purgeIntervalMs,
-  firstDelayMs: config.retention.firstPurgeDelayMs,
-});
+const retentionSchedule = startRetentionSchedule(
+  createRetentionService({ sequelize, chunkSize: config.retention.chunkSize }),
+  logger,
+  {
+    intervalMs: config.retention.purgeIntervalMs,
+    firstDelayMs: config.retention.firstPurgeDelayMs,
+  },
+);
 
 const server = app.listen(config.port, config.host, () => {
   logger.info({ url: `http://${config.host}:${config.port}` }, 'wickstone server listening');

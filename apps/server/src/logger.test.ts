@@ -13,9 +13,14 @@ describe('request logging', () => {
     app.get('/', (_req, res) => {
       res.cookie('wst_session', 'SESSION-SECRET').json({});
     });
-    await request(app).get('/').set('Cookie', 'wst_session=COOKIE-SECRET').set('x-csrf-token', 'CSRF-SECRET').expect(200);
+    await request(app)
+      .get('/')
+      .set('Cookie', 'wst_session=COOKIE-SECRET')
+      .set('x-csrf-token', 'CSRF-SECRET')
+      .expect(200);
     const log = lines.join('');
     expect(log).toContain('"statusCode":200');
-    for (const secret of ['SESSION-SECRET', 'COOKIE-SECRET', 'CSRF-SECRET']) expect(log).not.toContain(secret);
+    for (const secret of ['SESSION-SECRET', 'COOKIE-SECRET', 'CSRF-SECRET'])
+      expect(log).not.toContain(secret);
   });
 });

@@ -8,7 +8,12 @@ export function createLogger(config: Pick<Config, 'logLevel'>, destination?: Des
       level: config.logLevel,
       // Session and CSRF tokens travel in these headers, both ways: they never reach the log.
       redact: {
-        paths: ['req.headers.cookie', 'req.headers.authorization', 'req.headers["x-csrf-token"]', 'res.headers["set-cookie"]'],
+        paths: [
+          'req.headers.cookie',
+          'req.headers.authorization',
+          'req.headers["x-csrf-token"]',
+          'res.headers["set-cookie"]',
+        ],
         remove: true,
       },
     },

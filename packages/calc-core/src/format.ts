@@ -31,7 +31,8 @@ export function formatInput(value: number): string {
   if (!/e/i.test(text)) return text;
   // Very small or large values: print without an exponent while that stays short enough to edit.
   const abs = Math.abs(rounded);
-  if (abs >= 1e-9 && abs < 1e-6) return rounded.toFixed(5 - Math.floor(Math.log10(abs))).replace(/\.?0+$/, '');
+  if (abs >= 1e-9 && abs < 1e-6)
+    return rounded.toFixed(5 - Math.floor(Math.log10(abs))).replace(/\.?0+$/, '');
   return text;
 }
 

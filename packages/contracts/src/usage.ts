@@ -19,11 +19,16 @@ const page = z.coerce.number().int().min(1).max(MAX_PAGE).default(1);
 const pageSize = z.coerce.number().int().min(1).max(200, 'At most 200').default(50);
 export const calculatorIdSchema = z.string().regex(/^[a-z][a-z0-9-]{0,59}$/, 'Not a calculator id');
 
-function dayRangeIssue(v: { from?: string | undefined; to?: string | undefined }, ctx: z.RefinementCtx, maxDays?: number) {
+function dayRangeIssue(
+  v: { from?: string | undefined; to?: string | undefined },
+  ctx: z.RefinementCtx,
+  maxDays?: number,
+) {
   if (!v.from || !v.to) return;
   const days = (Date.parse(v.to) - Date.parse(v.from)) / 86_400_000 + 1;
   if (days < 1) ctx.addIssue({ code: 'custom', path: ['to'], message: 'Must not be before from' });
-  else if (maxDays !== undefined && days > maxDays) ctx.addIssue({ code: 'custom', path: ['to'], message: `At most ${maxDays} days from from` });
+  else if (maxDays !== undefined && days > maxDays)
+    ctx.addIssue({ code: 'custom', path: ['to'], message: `At most ${maxDays} days from from` });
 }
 
 // ---- Runs ----
@@ -43,9 +48,13 @@ const runFilterShape = {
   agreed: queryBool.optional(),
   sort: z.enum(runSorts).default('-createdAt'),
 };
-export const runListQuerySchema = z.strictObject({ ...runFilterShape, page, pageSize }).superRefine((v, ctx) => dayRangeIssue(v, ctx));
+export const runListQuerySchema = z
+  .strictObject({ ...runFilterShape, page, pageSize })
+  .superRefine((v, ctx) => dayRangeIssue(v, ctx));
 export type RunListQuery = z.output<typeof runListQuerySchema>;
-export const runExportQuerySchema = z.strictObject(runFilterShape).superRefine((v, ctx) => dayRangeIssue(v, ctx));
+export const runExportQuerySchema = z
+  .strictObject(runFilterShape)
+  .superRefine((v, ctx) => dayRangeIssue(v, ctx));
 export type RunFilters = z.output<typeof runExportQuerySchema>;
 
 export const runParamsSchema = z.strictObject({ orgId: id, runId: z.uuid('Not a run id') });
@@ -139,11 +148,15 @@ export const usageSummarySchema = z.object({
   previous: z.object({ from: z.string(), to: z.string(), totals: usageCountsSchema }),
   /** Every day of the period, oldest first, zeros included. */
   perDay: z.array(z.object({ day: z.string(), ...countsShape })),
-  byWidget: z.array(z.object({ widgetId: z.number().int(), name: z.string(), calculatorId: z.string(), ...countsShape })),
+  byWidget: z.array(
+    z.object({ widgetId: z.number().int(), name: z.string(), calculatorId: z.string(), ...countsShape }),
+  ),
   byCalculator: z.array(z.object({ calculatorId: z.string(), title: z.string(), ...countsShape })),
   bySite: z.array(z.object({ origin: z.string(), ...countsShape })),
   /** The validity warnings raised most often in the period, most frequent first (at most 10). */
-  topWarnings: z.array(z.object({ code: z.string(), calculatorId: z.string(), summary: z.string(), runs: z.number().int() })),
+  topWarnings: z.array(
+    z.object({ code: z.string(), calculatorId: z.string(), summary: z.string(), runs: z.number().int() }),
+  ),
 });
 export type UsageSummary = z.infer<typeof usageSummarySchema>;
 
@@ -161,9 +174,13 @@ const leadFilterShape = {
   q: z.string().trim().min(1, 'Required').max(200, 'At most 200 characters').optional(),
   sort: z.enum(leadSorts).default('-createdAt'),
 };
-export const leadListQuerySchema = z.strictObject({ ...leadFilterShape, page, pageSize }).superRefine((v, ctx) => dayRangeIssue(v, ctx));
+export const leadListQuerySchema = z
+  .strictObject({ ...leadFilterShape, page, pageSize })
+  .superRefine((v, ctx) => dayRangeIssue(v, ctx));
 export type LeadListQuery = z.output<typeof leadListQuerySchema>;
-export const leadExportQuerySchema = z.strictObject(leadFilterShape).superRefine((v, ctx) => dayRangeIssue(v, ctx));
+export const leadExportQuerySchema = z
+  .strictObject(leadFilterShape)
+  .superRefine((v, ctx) => dayRangeIssue(v, ctx));
 export type LeadFilters = z.output<typeof leadExportQuerySchema>;
 
 export const leadParamsSchema = z.strictObject({ orgId: id, leadId: id });

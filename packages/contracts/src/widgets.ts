@@ -26,7 +26,9 @@ export const originSchema = z
   .refine((value) => {
     try {
       const u = new URL(value);
-      return (u.protocol === 'https:' || u.protocol === 'http:') && u.origin === value.toLowerCase() && !u.username;
+      return (
+        (u.protocol === 'https:' || u.protocol === 'http:') && u.origin === value.toLowerCase() && !u.username
+      );
     } catch {
       return false;
     }
@@ -108,8 +110,16 @@ export function defaultWidgetSettings(): WidgetSettings {
     cautions: '',
     leadForm: {
       enabled: true,
-      fields: { name: 'required', email: 'required', company: 'optional', phone: 'optional', message: 'optional', siteAddress: 'optional' },
-      consentText: 'I agree that the firm may contact me about this request and keep my details for that purpose.',
+      fields: {
+        name: 'required',
+        email: 'required',
+        company: 'optional',
+        phone: 'optional',
+        message: 'optional',
+        siteAddress: 'optional',
+      },
+      consentText:
+        'I agree that the firm may contact me about this request and keep my details for that purpose.',
       notify: [],
     },
   };
@@ -158,7 +168,10 @@ export const widgetRevisionSchema = z.object({
   changes: z.array(z.object({ path: z.string(), before: z.unknown(), after: z.unknown() })),
   createdAt: z.string(),
 });
-export const widgetRevisionListSchema = z.object({ items: z.array(widgetRevisionSchema), total: z.number().int() });
+export const widgetRevisionListSchema = z.object({
+  items: z.array(widgetRevisionSchema),
+  total: z.number().int(),
+});
 
 export const assetSchema = z.object({
   id: z.number().int(),
@@ -182,13 +195,22 @@ export const embedWidgetSchema = z.object({
     inputs: widgetSettingsSchema.shape.inputs,
     units: widgetSettingsSchema.shape.units,
     look: z.object({
-      colors: z.object({ background: z.string(), text: z.string(), primary: z.string(), primaryText: z.string() }),
+      colors: z.object({
+        background: z.string(),
+        text: z.string(),
+        primary: z.string(),
+        primaryText: z.string(),
+      }),
       font: z.enum(widgetFonts),
       corner: z.enum(cornerStyles),
       logoUrl: z.string().nullable(),
     }),
     cautions: z.string(),
-    leadForm: z.object({ enabled: z.boolean(), fields: leadFormSchema.shape.fields, consentText: z.string() }),
+    leadForm: z.object({
+      enabled: z.boolean(),
+      fields: leadFormSchema.shape.fields,
+      consentText: z.string(),
+    }),
   }),
 });
 export type EmbedWidget = z.infer<typeof embedWidgetSchema>;
@@ -199,7 +221,9 @@ export const embedRunBodySchema = z.strictObject({
   /** Made in the browser, so a retried report is stored once. */
   id: z.uuid(),
   publicKey: publicKeySchema,
-  inputs: z.record(z.string().max(40), inputValue).refine((r) => Object.keys(r).length <= 40, 'At most 40 inputs'),
+  inputs: z
+    .record(z.string().max(40), inputValue)
+    .refine((r) => Object.keys(r).length <= 40, 'At most 40 inputs'),
   unitSystem: z.enum(unitSystems),
   result: z.strictObject({
     outputs: z.record(z.string().max(40), z.number().finite().nullable()),
@@ -210,7 +234,11 @@ export const embedRunBodySchema = z.strictObject({
   pageUrl: z.url().max(2000).optional(),
 });
 export type EmbedRunBody = z.infer<typeof embedRunBodySchema>;
-export const embedRunResponseSchema = z.object({ id: z.string(), agreed: z.boolean(), duplicate: z.boolean() });
+export const embedRunResponseSchema = z.object({
+  id: z.string(),
+  agreed: z.boolean(),
+  duplicate: z.boolean(),
+});
 
 const leadText = (max: number) => z.string().trim().min(1, 'Required').max(max, `At most ${max} characters`);
 export const embedLeadBodySchema = z.strictObject({
@@ -220,7 +248,11 @@ export const embedLeadBodySchema = z.strictObject({
     name: leadText(120).optional(),
     email: emailSchema.optional(),
     company: leadText(160).optional(),
-    phone: z.string().trim().regex(/^[+0-9 ()./-]{5,32}$/, 'Enter a phone number').optional(),
+    phone: z
+      .string()
+      .trim()
+      .regex(/^[+0-9 ()./-]{5,32}$/, 'Enter a phone number')
+      .optional(),
     message: leadText(2000).optional(),
     siteAddress: leadText(300).optional(),
   }),

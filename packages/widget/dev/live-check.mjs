@@ -17,10 +17,20 @@ const { samples } = await import('./samples.js');
 
 const SITE = 'http://www.brackenridge-ground.example';
 const API = 'http://wickstone.example';
-const KEYS = { a: 'wk_aaaaaaaaaaaaaaaaaaaa', b: 'wk_bbbbbbbbbbbbbbbbbbbb', c: 'wk_cccccccccccccccccccc', denied: 'wk_dddddddddddddddddddd' };
+const KEYS = {
+  a: 'wk_aaaaaaaaaaaaaaaaaaaa',
+  b: 'wk_bbbbbbbbbbbbbbbbbbbb',
+  c: 'wk_cccccccccccccccccccc',
+  denied: 'wk_dddddddddddddddddddd',
+};
 const widgets = {
   [KEYS.a]: { ...samples[0], publicKey: KEYS.a },
-  [KEYS.b]: { ...samples[0], publicKey: KEYS.b, name: 'Second tube widget', settings: { ...samples[0].settings, units: { system: 'us', visitorMaySwitch: true } } },
+  [KEYS.b]: {
+    ...samples[0],
+    publicKey: KEYS.b,
+    name: 'Second tube widget',
+    settings: { ...samples[0].settings, units: { system: 'us', visitorMaySwitch: true } },
+  },
   [KEYS.c]: { ...samples[2], publicKey: KEYS.c },
 };
 for (const w of Object.values(widgets)) w.settings.look = { ...w.settings.look, logoUrl: null };
@@ -43,25 +53,52 @@ const storedRuns = new Set();
 const browser = await chromium.launch({
   executablePath: '/usr/bin/chromium',
   headless: true,
-  args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--no-first-run',
+  ],
 });
 const context = await browser.newContext({ viewport: { width: 1000, height: 900 } });
 const cors = { 'access-control-allow-origin': SITE, 'content-type': 'application/json' };
 await context.route(`${SITE}/**`, (route) =>
-  route.fulfill({ status: 200, contentType: 'text/html', body: route.request().url().endsWith('/blank') ? '<!doctype html><title>blank</title>' : page }),
+  route.fulfill({
+    status: 200,
+    contentType: 'text/html',
+    body: route.request().url().endsWith('/blank') ? '<!doctype html><title>blank</title>' : page,
+  }),
 );
 await context.route(`${API}/**`, async (route) => {
   const req = route.request();
   const url = new URL(req.url());
-  log.push({ method: req.method(), path: url.pathname, type: req.headers()['content-type'] ?? null, body: req.postData() });
+  log.push({
+    method: req.method(),
+    path: url.pathname,
+    type: req.headers()['content-type'] ?? null,
+    body: req.postData(),
+  });
   if (url.pathname.startsWith('/releases/')) {
     const file = path.join(here, 'dist', url.pathname);
-    return route.fulfill({ status: 200, body: readFileSync(file), headers: { 'access-control-allow-origin': '*', 'content-type': file.endsWith('.js') ? 'text/javascript' : 'font/woff2' } });
+    return route.fulfill({
+      status: 200,
+      body: readFileSync(file),
+      headers: {
+        'access-control-allow-origin': '*',
+        'content-type': file.endsWith('.js') ? 'text/javascript' : 'font/woff2',
+      },
+    });
   }
   if (req.method() === 'OPTIONS') return route.fulfill({ status: 500, body: 'no preflight expected' });
   const m = url.pathname.match(/^\/api\/v1\/embed\/widgets\/(wk_[a-z0-9]{20})$/);
   if (m) {
-    if (m[1] === KEYS.denied) return route.fulfill({ status: 403, headers: cors, body: JSON.stringify({ error: { code: 'forbidden', message: 'no', details: {} } }) });
+    if (m[1] === KEYS.denied)
+      return route.fulfill({
+        status: 403,
+        headers: cors,
+        body: JSON.stringify({ error: { code: 'forbidden', message: 'no', details: {} } }),
+      });
     return route.fulfill({ status: 200, headers: cors, body: JSON.stringify(widgets[m[1]]) });
   }
   if (url.pathname === '/api/v1/embed/runs') {
@@ -70,7 +107,11 @@ await context.route(`${API}/**`, async (route) => {
     if (runAttempts === 1) return route.fulfill({ status: 503, headers: cors, body: '{}' });
     const body = embedRunBodySchema.parse(JSON.parse(req.postData()));
     storedRuns.add(body.id);
-    return route.fulfill({ status: 201, headers: cors, body: JSON.stringify({ id: body.id, agreed: true, duplicate: false }) });
+    return route.fulfill({
+      status: 201,
+      headers: cors,
+      body: JSON.stringify({ id: body.id, agreed: true, duplicate: false }),
+    });
   }
   if (url.pathname === '/api/v1/embed/leads') {
     leadAttempts++;
@@ -80,7 +121,15 @@ await context.route(`${API}/**`, async (route) => {
       return route.fulfill({
         status: 400,
         headers: cors,
-        body: JSON.stringify({ error: { code: 'validation_failed', message: 'Invalid request', details: { fields: [{ field: 'body.fields.email', message: 'This address cannot receive mail' }] } } }),
+        body: JSON.stringify({
+          error: {
+            code: 'validation_failed',
+            message: 'Invalid request',
+            details: {
+              fields: [{ field: 'body.fields.email', message: 'This address cannot receive mail' }],
+            },
+          },
+        }),
       });
     }
     return route.fulfill({ status: 201, headers: cors, body: JSON.stringify({ id: 7 }) });
@@ -100,24 +149,46 @@ const baseline = await (async () => {
 })();
 log.length = 0;
 await tab.goto(`${SITE}/`);
-await tab.waitForFunction(() => document.querySelectorAll('wickstone-widget[data-state="ready"]').length === 3 && document.querySelector('wickstone-widget[data-state="unavailable"]'));
+await tab.waitForFunction(
+  () =>
+    document.querySelectorAll('wickstone-widget[data-state="ready"]').length === 3 &&
+    document.querySelector('wickstone-widget[data-state="unavailable"]'),
+);
 
 // Placement: each host right after its own script; the refused one empty and invisible.
 const placement = await tab.evaluate(() =>
   [...document.querySelectorAll('script[data-wickstone-key]')].map((s) => {
     const host = s.nextElementSibling;
-    return { key: s.dataset.wickstoneKey, host: host?.localName, state: host?.dataset.state, height: host?.getBoundingClientRect().height, calc: host?.dataset.calculator };
+    return {
+      key: s.dataset.wickstoneKey,
+      host: host?.localName,
+      state: host?.dataset.state,
+      height: host?.getBoundingClientRect().height,
+      calc: host?.dataset.calculator,
+    };
   }),
 );
-assert.deepEqual(placement.map((p) => p.host), ['wickstone-widget', 'wickstone-widget', 'wickstone-widget', 'wickstone-widget']);
+assert.deepEqual(
+  placement.map((p) => p.host),
+  ['wickstone-widget', 'wickstone-widget', 'wickstone-widget', 'wickstone-widget'],
+);
 assert.equal(placement[3].state, 'unavailable');
 assert.equal(placement[3].height, 0);
 assert.equal(placement[2].calc, 'soil-capillary-rise');
-const added = await tab.evaluate((before) => Object.keys(window).filter((k) => !before.includes(k)), baseline);
+const added = await tab.evaluate(
+  (before) => Object.keys(window).filter((k) => !before.includes(k)),
+  baseline,
+);
 assert.deepEqual(added, ['Wickstone'], `globals added: ${added.join(', ')}`);
-const g = await tab.evaluate(() => ({ version: window.Wickstone.version, bundles: Object.keys(window.Wickstone.bundles).sort() }));
+const g = await tab.evaluate(() => ({
+  version: window.Wickstone.version,
+  bundles: Object.keys(window.Wickstone.bundles).sort(),
+}));
 assert.deepEqual(g, { version, bundles: ['soil-capillary-rise', 'tube-rise'] });
-assert.ok(!log.some((r) => r.path.includes(KEYS.denied) && r.method !== 'GET'), 'nothing but the settings request for a refused key');
+assert.ok(
+  !log.some((r) => r.path.includes(KEYS.denied) && r.method !== 'GET'),
+  'nothing but the settings request for a refused key',
+);
 
 // Widget B starts in US units; A in SI.
 const hostA = tab.locator('wickstone-widget').nth(0);
@@ -159,12 +230,24 @@ await hostA.locator('[data-lead-field="consent"]').check();
 await hostA.locator('[data-lead-field="sendCopy"]').check();
 await hostA.locator('[data-wickstone="lead-submit"]').click();
 await hostA.locator('[data-lead-error="email"]').waitFor();
-assert.equal(await hostA.locator('[data-lead-error="email"]').textContent(), 'This address cannot receive mail');
-assert.equal(await hostA.locator('[data-lead-field="email"]').getAttribute('aria-describedby'), 'wk-lead-email-error');
+assert.equal(
+  await hostA.locator('[data-lead-error="email"]').textContent(),
+  'This address cannot receive mail',
+);
+assert.equal(
+  await hostA.locator('[data-lead-field="email"]').getAttribute('aria-describedby'),
+  'wk-lead-email-error',
+);
 await hostA.locator('[data-wickstone="lead-submit"]').click();
 await hostA.locator('[data-wickstone="lead-confirmation"]').waitFor();
 const lead = JSON.parse(log.filter((r) => r.path === '/api/v1/embed/leads').at(-1).body);
-assert.deepEqual(lead, { runId: run.id, publicKey: KEYS.a, fields: { name: 'Imogen Tarrant', email: 'imogen.tarrant@visitor.example' }, consent: true, sendCopy: true });
+assert.deepEqual(lead, {
+  runId: run.id,
+  publicKey: KEYS.a,
+  fields: { name: 'Imogen Tarrant', email: 'imogen.tarrant@visitor.example' },
+  consent: true,
+  sendCopy: true,
+});
 
 // Field errors from calc-core beside the field, in the visitor's units; nothing reported for them.
 const before = log.length;

@@ -11,12 +11,17 @@ import { chromium } from 'playwright-core';
 
 // SERVER_TESTING points at another build of the server's testing module (a fresher one than the
 // workspace's dist while the server is in progress); the workspace's by default.
-const { createTestApp, seedOrgWithTeam, TestClient } = await import(process.env.SERVER_TESTING ?? '@wickstone/server/testing');
+const { createTestApp, seedOrgWithTeam, TestClient } = await import(
+  process.env.SERVER_TESTING ?? '@wickstone/server/testing'
+);
 
 // The host pages come from real loopback servers too (in this process): Chromium will not let a
 // page it takes for a public site load scripts from a loopback address.
 let pageHtml = '';
-const sites = [createServer((_req, res) => res.writeHead(200, { 'content-type': 'text/html' }).end(pageHtml)), createServer((_req, res) => res.writeHead(200, { 'content-type': 'text/html' }).end(pageHtml))];
+const sites = [
+  createServer((_req, res) => res.writeHead(200, { 'content-type': 'text/html' }).end(pageHtml)),
+  createServer((_req, res) => res.writeHead(200, { 'content-type': 'text/html' }).end(pageHtml)),
+];
 for (const s of sites) await new Promise((resolve) => s.listen(0, '127.0.0.1', resolve));
 const SITE = `http://127.0.0.1:${sites[0].address().port}`;
 const ELSEWHERE = `http://127.0.0.1:${sites[1].address().port}`;
@@ -26,23 +31,52 @@ await new Promise((resolve) => server.listen(0, '127.0.0.1', resolve));
 const port = server.address().port;
 const url = `http://127.0.0.1:${port}`;
 const releases = fileURLToPath(new URL('../dist/releases', import.meta.url));
-const t = await createTestApp({ HOST: '127.0.0.1', PORT: String(port), PUBLIC_URL: url, RELEASES_DIR: releases });
+const t = await createTestApp({
+  HOST: '127.0.0.1',
+  PORT: String(port),
+  PUBLIC_URL: url,
+  RELEASES_DIR: releases,
+});
 server.on('request', t.app);
 let browser;
 try {
   const org = await seedOrgWithTeam('Brackenridge Ground & Damp');
   const owner = new TestClient(t.app);
   await owner.login(org.users.owner.email, org.users.owner.password);
-  const created = (await owner.post(`/orgs/${org.id}/widgets`, { name: 'Damp check', calculatorId: 'tube-rise', allowedOrigins: [SITE] }).expect(201)).body;
-  const settings = { ...created.settings, units: { system: 'us', visitorMaySwitch: true }, cautions: 'Our surveyors measure on site before any quote.', inputs: { gravity: { mode: 'hidden' } } };
-  const widget = (await owner.patch(`/orgs/${org.id}/widgets/${created.id}`, { status: 'live', settings }).expect(200)).body;
-  assert.ok(widget.embed.snippet.includes('integrity="sha384-'), `no snippet: ${JSON.stringify(widget.embed)}`);
+  const created = (
+    await owner
+      .post(`/orgs/${org.id}/widgets`, {
+        name: 'Damp check',
+        calculatorId: 'tube-rise',
+        allowedOrigins: [SITE],
+      })
+      .expect(201)
+  ).body;
+  const settings = {
+    ...created.settings,
+    units: { system: 'us', visitorMaySwitch: true },
+    cautions: 'Our surveyors measure on site before any quote.',
+    inputs: { gravity: { mode: 'hidden' } },
+  };
+  const widget = (
+    await owner.patch(`/orgs/${org.id}/widgets/${created.id}`, { status: 'live', settings }).expect(200)
+  ).body;
+  assert.ok(
+    widget.embed.snippet.includes('integrity="sha384-'),
+    `no snippet: ${JSON.stringify(widget.embed)}`,
+  );
   pageHtml = `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Site</title></head><body><h1>Damp advice</h1>${widget.embed.snippet}<p>After.</p></body></html>`;
 
   browser = await chromium.launch({
     executablePath: '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--no-first-run',
+    ],
   });
   const context = await browser.newContext();
   const tab = await context.newPage();
@@ -66,19 +100,30 @@ try {
   await host.locator('[data-wickstone="lead-confirmation"]').waitFor({ timeout: 15000 });
 
   const q = (sql, replacements) => t.db.sequelize.query(sql, { replacements, type: QueryTypes.SELECT });
-  const runs = await q('SELECT id, agreed, unit_system AS unitSystem FROM runs WHERE widget_id = ?', [widget.id]);
-  assert.deepEqual(runs.map((r) => [r.id, Boolean(r.agreed), r.unitSystem]), [[runId, true, 'us']]);
+  const runs = await q('SELECT id, agreed, unit_system AS unitSystem FROM runs WHERE widget_id = ?', [
+    widget.id,
+  ]);
+  assert.deepEqual(
+    runs.map((r) => [r.id, Boolean(r.agreed), r.unitSystem]),
+    [[runId, true, 'us']],
+  );
   const leads = await q('SELECT run_id AS runId, email FROM leads WHERE widget_id = ?', [widget.id]);
   assert.deepEqual(leads, [{ runId, email: 'imogen.tarrant@visitor.example' }]);
 
   // The same snippet on a site the widget does not allow: nothing shown, nothing reported.
   const other = await context.newPage();
   await other.goto(`${ELSEWHERE}/`);
-  await other.locator('wickstone-widget[data-state="unavailable"]').waitFor({ state: 'attached', timeout: 15000 });
+  await other
+    .locator('wickstone-widget[data-state="unavailable"]')
+    .waitFor({ state: 'attached', timeout: 15000 });
   assert.equal((await other.locator('wickstone-widget').boundingBox())?.height ?? 0, 0);
   assert.equal((await q('SELECT COUNT(*) AS n FROM runs', []))[0].n, 1);
   assert.deepEqual(errors, []);
-  console.log('real server check passed: run', runId, 'stored and agreed, lead stored, unknown origin shown nothing');
+  console.log(
+    'real server check passed: run',
+    runId,
+    'stored and agreed, lead stored, unknown origin shown nothing',
+  );
 } finally {
   await browser?.close();
   for (const s of [server, ...sites]) {

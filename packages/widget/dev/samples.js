@@ -36,9 +36,17 @@ export const samples = [
     settings: {
       inputs: { liquid: { mode: 'locked', default: 'water' }, gap: { mode: 'editable', default: 0.0002 } },
       units: { system: 'us', visitorMaySwitch: true },
-      look: look({ background: '#fbf8f3', text: '#2b2118', primary: '#8a3b12', primaryText: '#ffffff' }, 'system-serif', 'square'),
+      look: look(
+        { background: '#fbf8f3', text: '#2b2118', primary: '#8a3b12', primaryText: '#ffffff' },
+        'system-serif',
+        'square',
+      ),
       cautions: '',
-      leadForm: { enabled: true, fields: fields({ company: 'off', phone: 'required', message: 'off' }), consentText: consent },
+      leadForm: {
+        enabled: true,
+        fields: fields({ company: 'off', phone: 'required', message: 'off' }),
+        consentText: consent,
+      },
     },
   },
   {
@@ -49,8 +57,13 @@ export const samples = [
     settings: {
       inputs: { hazenC: { mode: 'locked' }, d10: { mode: 'editable', default: 0.00005 } },
       units: { system: 'si', visitorMaySwitch: false },
-      look: look({ background: '#10222b', text: '#e9f1f3', primary: '#7fd1c7', primaryText: '#0b1a1f' }, 'manrope', 'round'),
-      cautions: 'Frost-susceptible soils need a separate assessment.\nAsk us about gas membranes when a slab is replaced.',
+      look: look(
+        { background: '#10222b', text: '#e9f1f3', primary: '#7fd1c7', primaryText: '#0b1a1f' },
+        'manrope',
+        'round',
+      ),
+      cautions:
+        'Frost-susceptible soils need a separate assessment.\nAsk us about gas membranes when a slab is replaced.',
       leadForm: { enabled: true, fields: fields({ siteAddress: 'required' }), consentText: consent },
     },
   },
@@ -75,7 +88,11 @@ export const samples = [
     settings: {
       inputs: { method: { mode: 'editable', default: 'ring' } },
       units: { system: 'si', visitorMaySwitch: true },
-      look: look({ background: '#ffffff', text: '#1f1d2b', primary: '#4b3fa8', primaryText: '#ffffff' }, 'manrope', 'round'),
+      look: look(
+        { background: '#ffffff', text: '#1f1d2b', primary: '#4b3fa8', primaryText: '#ffffff' },
+        'manrope',
+        'round',
+      ),
       cautions: '',
       leadForm: { enabled: true, fields: fields({ phone: 'off', siteAddress: 'off' }), consentText: consent },
     },
@@ -88,7 +105,11 @@ export const samples = [
     settings: {
       inputs: { length: { mode: 'editable', default: 0.3 } },
       units: { system: 'us', visitorMaySwitch: true },
-      look: look({ background: '#f4f7f2', text: '#1e2a1c', primary: '#2f6b2a', primaryText: '#ffffff' }, 'manrope', 'square'),
+      look: look(
+        { background: '#f4f7f2', text: '#1e2a1c', primary: '#2f6b2a', primaryText: '#ffffff' },
+        'manrope',
+        'square',
+      ),
       cautions: '',
       leadForm: { enabled: true, fields: fields(), consentText: consent },
     },

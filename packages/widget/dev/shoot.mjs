@@ -8,14 +8,26 @@ import { chromium } from 'playwright-core';
 
 const here = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const ORIGIN = 'http://widget.test';
-const TYPES = { '.html': 'text/html', '.js': 'text/javascript', '.json': 'application/json', '.woff2': 'font/woff2', '.css': 'text/css' };
+const TYPES = {
+  '.html': 'text/html',
+  '.js': 'text/javascript',
+  '.json': 'application/json',
+  '.woff2': 'font/woff2',
+  '.css': 'text/css',
+};
 const only = process.argv[2] ?? null;
 mkdirSync('/tmp/shots', { recursive: true });
 
 const browser = await chromium.launch({
   executablePath: '/usr/bin/chromium',
   headless: true,
-  args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'],
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--no-first-run',
+  ],
 });
 
 async function open(width, query) {
@@ -26,7 +38,10 @@ async function open(width, query) {
     return route.fulfill({
       status: 200,
       body: readFileSync(file),
-      headers: { 'content-type': TYPES[path.extname(file)] ?? 'application/octet-stream', 'access-control-allow-origin': '*' },
+      headers: {
+        'content-type': TYPES[path.extname(file)] ?? 'application/octet-stream',
+        'access-control-allow-origin': '*',
+      },
     });
   });
   const page = await context.newPage();
@@ -44,7 +59,9 @@ async function calculateAll(page) {
   await page.waitForTimeout(200);
 }
 
-const ids = only ? [only] : ['tube-rise', 'slot-rise', 'soil-capillary-rise', 'interface-pressure', 'wetting-force', 'wicking-time'];
+const ids = only
+  ? [only]
+  : ['tube-rise', 'slot-rise', 'soil-capillary-rise', 'interface-pressure', 'wetting-force', 'wicking-time'];
 for (const [width, tag] of [
   [1200, 'desktop'],
   [380, 'phone'],
@@ -52,12 +69,22 @@ for (const [width, tag] of [
   for (const id of ids) {
     const { context, page, problems } = await open(width, `only=${id}`);
     await calculateAll(page);
-    if (id === 'tube-rise' || id === 'soil-capillary-rise') await page.locator('[data-wickstone="working"] summary').first().click();
+    if (id === 'tube-rise' || id === 'soil-capillary-rise')
+      await page.locator('[data-wickstone="working"] summary').first().click();
     await page.screenshot({ path: `/tmp/shots/widget-${id}-${tag}.png`, fullPage: true });
     // Parts at full resolution, to check type and spacing closely.
-    const top = await page.evaluate(() => document.querySelector('wickstone-widget').getBoundingClientRect().top + window.scrollY);
-    await page.screenshot({ path: `/tmp/shots/widget-${id}-${tag}-top.png`, fullPage: true, clip: { x: 0, y: top, width, height: 900 } });
-    await page.locator('[data-wickstone="result"]').first().screenshot({ path: `/tmp/shots/widget-${id}-${tag}-result.png` });
+    const top = await page.evaluate(
+      () => document.querySelector('wickstone-widget').getBoundingClientRect().top + window.scrollY,
+    );
+    await page.screenshot({
+      path: `/tmp/shots/widget-${id}-${tag}-top.png`,
+      fullPage: true,
+      clip: { x: 0, y: top, width, height: 900 },
+    });
+    await page
+      .locator('[data-wickstone="result"]')
+      .first()
+      .screenshot({ path: `/tmp/shots/widget-${id}-${tag}-result.png` });
     const lead = page.locator('[data-wickstone="lead-form"]').first();
     if (await lead.count()) await lead.screenshot({ path: `/tmp/shots/widget-${id}-${tag}-lead.png` });
     if (problems.length) console.log(id, tag, problems);
@@ -71,12 +98,21 @@ for (const [width, tag] of [
   const order = [];
   for (let i = 0; i < 12 && order.at(-1) !== 'calculate'; i++) {
     await page.keyboard.press('Tab');
-    order.push(await page.evaluate(() => {
-      const el = document.querySelector('wickstone-widget')?.shadowRoot?.activeElement;
-      return el ? el.getAttribute('data-input') ?? el.getAttribute('data-unit') ?? el.getAttribute('data-wickstone') ?? el.localName : 'outside';
-    }));
-    if (order.at(-1) === 'diameter') await page.locator('wickstone-widget').screenshot({ path: '/tmp/shots/widget-focus-input.png' });
-    if (order.at(-1) === 'calculate') await page.locator('wickstone-widget').screenshot({ path: '/tmp/shots/widget-focus-button.png' });
+    order.push(
+      await page.evaluate(() => {
+        const el = document.querySelector('wickstone-widget')?.shadowRoot?.activeElement;
+        return el
+          ? (el.getAttribute('data-input') ??
+              el.getAttribute('data-unit') ??
+              el.getAttribute('data-wickstone') ??
+              el.localName)
+          : 'outside';
+      }),
+    );
+    if (order.at(-1) === 'diameter')
+      await page.locator('wickstone-widget').screenshot({ path: '/tmp/shots/widget-focus-input.png' });
+    if (order.at(-1) === 'calculate')
+      await page.locator('wickstone-widget').screenshot({ path: '/tmp/shots/widget-focus-button.png' });
   }
   await page.keyboard.press('Enter');
   await page.locator('[data-result]').waitFor();
@@ -86,17 +122,42 @@ for (const [width, tag] of [
 
 // The same widget with and without hostile page CSS: the computed styles inside must not differ
 // (only the width it is given, which is the page's to decide).
-const PROPS = ['font-family', 'font-size', 'font-weight', 'color', 'text-transform', 'letter-spacing', 'line-height', 'text-decoration-line', 'text-align', 'background-color', 'border-top-width', 'padding-top'];
+const PROPS = [
+  'font-family',
+  'font-size',
+  'font-weight',
+  'color',
+  'text-transform',
+  'letter-spacing',
+  'line-height',
+  'text-decoration-line',
+  'text-align',
+  'background-color',
+  'border-top-width',
+  'padding-top',
+];
 const looks = [];
 for (const hostile of ['0', '1']) {
   const { context, page, problems } = await open(900, `only=tube-rise&hostile=${hostile}`);
   await calculateAll(page);
-  await page.locator('wickstone-widget').first().screenshot({ path: `/tmp/shots/widget-hostile-${hostile}.png` });
+  await page
+    .locator('wickstone-widget')
+    .first()
+    .screenshot({ path: `/tmp/shots/widget-hostile-${hostile}.png` });
   looks.push(
     await page.evaluate((props) => {
       const root = document.querySelector('wickstone-widget').shadowRoot;
       const out = {};
-      for (const sel of ['.title', '.label', '[data-input="diameter"]', '[data-input="liquid"]', '[data-wickstone="calculate"]', '.figure', '.suffix', '.note']) {
+      for (const sel of [
+        '.title',
+        '.label',
+        '[data-input="diameter"]',
+        '[data-input="liquid"]',
+        '[data-wickstone="calculate"]',
+        '.figure',
+        '.suffix',
+        '.note',
+      ]) {
         const cs = getComputedStyle(root.querySelector(sel));
         out[sel] = props.map((p) => `${p}: ${cs.getPropertyValue(p)}`).join('; ');
       }
@@ -107,6 +168,9 @@ for (const hostile of ['0', '1']) {
   await context.close();
 }
 const diffs = Object.keys(looks[0]).filter((k) => looks[0][k] !== looks[1][k]);
-console.log(diffs.length === 0 ? 'hostile CSS: no computed style differs inside the widget' : 'hostile CSS changed:', diffs.map((k) => `${k}\n  ${looks[0][k]}\n  ${looks[1][k]}`).join('\n'));
+console.log(
+  diffs.length === 0 ? 'hostile CSS: no computed style differs inside the widget' : 'hostile CSS changed:',
+  diffs.map((k) => `${k}\n  ${looks[0][k]}\n  ${looks[1][k]}`).join('\n'),
+);
 await browser.close();
 console.log('screenshots in /tmp/shots');

@@ -33,7 +33,8 @@ function calculatorPlugin(calculatorId, probe) {
       return null;
     },
     load(id) {
-      if (id === '\0' + VIRTUAL) return `export { calculator, run } from '@wickstone/calc-core/calculators/${calculatorId}';\n`;
+      if (id === '\0' + VIRTUAL)
+        return `export { calculator, run } from '@wickstone/calc-core/calculators/${calculatorId}';\n`;
       if (id === '\0' + PROBE) return probe;
       return null;
     },
@@ -95,7 +96,9 @@ export async function bundleCalculator(calculatorId, options = {}) {
   const chunks = outputs.filter((o) => o.type === 'chunk');
   const extra = outputs.filter((o) => o.type !== 'chunk');
   if (chunks.length !== 1 || extra.length !== 0) {
-    throw new Error(`${calculatorId}: expected one self-contained file, got ${outputs.map((o) => o.fileName).join(', ')}`);
+    throw new Error(
+      `${calculatorId}: expected one self-contained file, got ${outputs.map((o) => o.fileName).join(', ')}`,
+    );
   }
   const code = chunks[0].code;
   const buffer = Buffer.from(code, 'utf8');
@@ -115,7 +118,8 @@ export function checkContents(calculatorId, code, calculators) {
       problems.push(`carries another calculator (${other.id})`);
     }
   }
-  if (/^\s*(var|let|const)\s+WickstoneBundle\b/.test(code) || code.includes('WickstoneBundle')) problems.push('defines a global WickstoneBundle');
+  if (/^\s*(var|let|const)\s+WickstoneBundle\b/.test(code) || code.includes('WickstoneBundle'))
+    problems.push('defines a global WickstoneBundle');
   return problems;
 }
 

@@ -7,7 +7,14 @@ import { installGlobal } from './global.js';
 import { isEmbedWidget } from './lib/shape.js';
 import { request } from './lib/transport.js';
 import { HOST_TAG, mountWidget, type Bundle } from './mount.js';
-import { apiBaseFor, findOwnScript, insertHost, isPublicKey, PLACED_ATTR, releaseBaseFor } from './placement.js';
+import {
+  apiBaseFor,
+  findOwnScript,
+  insertHost,
+  isPublicKey,
+  PLACED_ATTR,
+  releaseBaseFor,
+} from './placement.js';
 
 const script = findOwnScript(document, calculator.id);
 const bundle: Bundle = {
@@ -42,8 +49,10 @@ async function place(tag: HTMLScriptElement, key: string): Promise<void> {
   const reply = await request(`${apiBase}/api/v1/embed/widgets/${key}`, undefined, { delays: [1000, 3000] });
   if (reply.status === 403) return unavailable('this site is not one the widget may be embedded on');
   if (reply.status === 404) return unavailable('the widget is not live (draft, paused or unknown key)');
-  if (reply.status !== 200 || !isEmbedWidget(reply.body)) return unavailable(`the server answered ${reply.status || 'nothing'}`);
-  if (reply.body.calculatorId !== calculator.id) return unavailable(`it is a ${reply.body.calculatorId} widget, not ${calculator.id}`);
+  if (reply.status !== 200 || !isEmbedWidget(reply.body))
+    return unavailable(`the server answered ${reply.status || 'nothing'}`);
+  if (reply.body.calculatorId !== calculator.id)
+    return unavailable(`it is a ${reply.body.calculatorId} widget, not ${calculator.id}`);
   mountWidget(bundle, host, { widget: reply.body, apiBase });
 }
 

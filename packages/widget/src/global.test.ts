@@ -1,7 +1,10 @@
 import { describe, expect, it, vi } from 'vitest';
 import { installGlobal, type BundleEntry, type MountOptions } from './global.js';
 
-const entry = (calculatorId: string, version = '0.1.0'): BundleEntry & { mount: ReturnType<typeof vi.fn> } => ({
+const entry = (
+  calculatorId: string,
+  version = '0.1.0',
+): BundleEntry & { mount: ReturnType<typeof vi.fn> } => ({
   calculatorId,
   version,
   calcCoreVersion: '0.1.0',
@@ -27,7 +30,9 @@ describe('installGlobal', () => {
 
   it('refuses a calculator no loaded bundle renders', () => {
     const g = installGlobal({}, '0.1.0', entry('tube-rise'));
-    expect(() => g.mount({} as Element, options('wicking-time'))).toThrow(/no bundle for calculator "wicking-time"/);
+    expect(() => g.mount({} as Element, options('wicking-time'))).toThrow(
+      /no bundle for calculator "wicking-time"/,
+    );
   });
 
   it('lets the latest bundle loaded for a calculator win, and replaces a foreign Wickstone value', () => {

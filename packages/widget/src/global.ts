@@ -42,7 +42,13 @@ declare global {
 
 function isGlobal(value: unknown): value is WickstoneGlobal {
   const v = value as Partial<WickstoneGlobal> | null | undefined;
-  return typeof v === 'object' && v !== null && typeof v.mount === 'function' && typeof v.bundles === 'object' && v.bundles !== null;
+  return (
+    typeof v === 'object' &&
+    v !== null &&
+    typeof v.mount === 'function' &&
+    typeof v.bundles === 'object' &&
+    v.bundles !== null
+  );
 }
 
 /**
@@ -50,7 +56,11 @@ function isGlobal(value: unknown): value is WickstoneGlobal {
  * A later bundle of any release only adds itself to `bundles`, so the dispatching `mount` keeps
  * working for every calculator on the page.
  */
-export function installGlobal(host: { Wickstone?: unknown }, version: string, entry: BundleEntry): WickstoneGlobal {
+export function installGlobal(
+  host: { Wickstone?: unknown },
+  version: string,
+  entry: BundleEntry,
+): WickstoneGlobal {
   const existing = host.Wickstone;
   let g: WickstoneGlobal;
   if (isGlobal(existing)) g = existing;

@@ -19,7 +19,8 @@ function adoptStyles(root: ShadowRoot): void {
   if ('adoptedStyleSheets' in root && typeof CSSStyleSheet.prototype.replaceSync === 'function') {
     sheet ??= new CSSStyleSheet();
     if (sheet.cssRules.length === 0) sheet.replaceSync(css);
-    if (!root.adoptedStyleSheets.includes(sheet)) root.adoptedStyleSheets = [...root.adoptedStyleSheets, sheet];
+    if (!root.adoptedStyleSheets.includes(sheet))
+      root.adoptedStyleSheets = [...root.adoptedStyleSheets, sheet];
     return;
   }
   if (root.querySelector('style[data-wickstone]') === null) {
@@ -33,9 +34,12 @@ function adoptStyles(root: ShadowRoot): void {
 /** The host element to render into: `element` itself when it is one of ours, else one made inside it. */
 function hostIn(element: Element, calculatorId: string): { host: HTMLElement; made: boolean } {
   if (element.localName === HOST_TAG && element instanceof HTMLElement) return { host: element, made: false };
-  const existing = [...element.children].find((c): c is HTMLElement => c.localName === HOST_TAG && c instanceof HTMLElement);
+  const existing = [...element.children].find(
+    (c): c is HTMLElement => c.localName === HOST_TAG && c instanceof HTMLElement,
+  );
   // Another calculator's bundle rendered here before: its runtime owns that tree, so start afresh.
-  if (existing && existing.getAttribute('data-calculator') === calculatorId) return { host: existing, made: false };
+  if (existing && existing.getAttribute('data-calculator') === calculatorId)
+    return { host: existing, made: false };
   existing?.remove();
   const host = document.createElement(HOST_TAG);
   element.append(host);
@@ -78,7 +82,9 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
       throw new Error(`Wickstone: this bundle renders "${calculator.id}", not "${widget.calculatorId}"`);
     }
     const preview = options.preview === true;
-    const apiBase = preview ? null : (options.apiBase ?? bundle.defaultApiBase)?.replace(/\/+$/, '') ?? null;
+    const apiBase = preview
+      ? null
+      : ((options.apiBase ?? bundle.defaultApiBase)?.replace(/\/+$/, '') ?? null);
     if (!preview && apiBase === null) throw new Error('Wickstone: apiBase is needed outside preview');
     const key = `${apiBase ?? ''} ${widget.publicKey}`;
     if (apiBase === null) reporter = null;
@@ -86,10 +92,14 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
       reporter = createReporter({ apiBase, publicKey: widget.publicKey, href: () => location.href });
     }
     reporterKey = key;
-    if (widget.settings.look.font === 'manrope' && bundle.releaseBase !== null) registerManrope(document.fonts, bundle.releaseBase);
+    if (widget.settings.look.font === 'manrope' && bundle.releaseBase !== null)
+      registerManrope(document.fonts, bundle.releaseBase);
     host.setAttribute('data-mode', preview ? 'preview' : 'live');
     host.setAttribute('data-state', 'ready');
-    render(<App widget={widget} calculator={calculator} run={bundle.run} apiBase={apiBase} reporter={reporter} />, target);
+    render(
+      <App widget={widget} calculator={calculator} run={bundle.run} apiBase={apiBase} reporter={reporter} />,
+      target,
+    );
   };
   draw(first);
   return {

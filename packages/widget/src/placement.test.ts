@@ -14,7 +14,9 @@ describe('placement helpers', () => {
 
   it('talks to the server the script came from, unless data-wickstone-api says otherwise', () => {
     expect(apiBaseFor(SRC, null)).toBe('https://app.wickstone.example');
-    expect(apiBaseFor(SRC, 'https://www.brackenridge-ground.example/wickstone/')).toBe('https://www.brackenridge-ground.example/wickstone');
+    expect(apiBaseFor(SRC, 'https://www.brackenridge-ground.example/wickstone/')).toBe(
+      'https://www.brackenridge-ground.example/wickstone',
+    );
     expect(apiBaseFor(SRC, 'http://localhost:5180')).toBe('http://localhost:5180');
     expect(apiBaseFor(SRC, 'javascript:alert(1)')).toBe('https://app.wickstone.example');
     expect(apiBaseFor(SRC, '  ')).toBe('https://app.wickstone.example');

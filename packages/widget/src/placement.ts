@@ -20,7 +20,8 @@ export function apiBaseFor(src: string, override: string | null): string | null 
   if (override !== null && override.trim() !== '') {
     try {
       const u = new URL(override.trim());
-      if (u.protocol === 'https:' || u.protocol === 'http:') return (u.origin + u.pathname).replace(/\/+$/, '');
+      if (u.protocol === 'https:' || u.protocol === 'http:')
+        return (u.origin + u.pathname).replace(/\/+$/, '');
     } catch {
       // fall through to the script's own origin
     }
@@ -54,8 +55,14 @@ export function isPublicKey(key: string | undefined): key is string {
 export function findOwnScript(doc: Document, calculatorId: string): HTMLScriptElement | null {
   const current = doc.currentScript;
   if (current instanceof HTMLScriptElement && isBundleSrc(current.src, calculatorId)) return current;
-  const scripts = [...doc.querySelectorAll<HTMLScriptElement>('script[src]')].filter((s) => isBundleSrc(s.src, calculatorId));
-  return scripts.find((s) => s.hasAttribute('data-wickstone-key') && !s.hasAttribute(PLACED_ATTR)) ?? scripts[0] ?? null;
+  const scripts = [...doc.querySelectorAll<HTMLScriptElement>('script[src]')].filter((s) =>
+    isBundleSrc(s.src, calculatorId),
+  );
+  return (
+    scripts.find((s) => s.hasAttribute('data-wickstone-key') && !s.hasAttribute(PLACED_ATTR)) ??
+    scripts[0] ??
+    null
+  );
 }
 
 /** Puts a host element right after the script (or into the body, for a script placed in the head). */

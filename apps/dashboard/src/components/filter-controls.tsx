@@ -54,7 +54,13 @@ export function FilterDate({
       <label htmlFor={id} className="block text-xs font-semibold text-ink-soft">
         {label}
       </label>
-      <input id={id} type="date" value={value} onChange={(e) => onChange(e.target.value)} className={control} />
+      <input
+        id={id}
+        type="date"
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        className={control}
+      />
     </div>
   );
 }
@@ -87,7 +93,13 @@ export function FilterSearch({
         {label}
       </label>
       <div className="flex gap-2">
-        <input id={id} type="search" value={draft} onChange={(e) => setDraft(e.target.value)} className={control} />
+        <input
+          id={id}
+          type="search"
+          value={draft}
+          onChange={(e) => setDraft(e.target.value)}
+          className={control}
+        />
         <Button size="sm" type="submit">
           Search
         </Button>
@@ -99,7 +111,11 @@ export function FilterSearch({
 /** The card the controls sit in. */
 export function FilterBar({ label, children }: { label: string; children: ReactNode }) {
   return (
-    <div role="group" aria-label={label} className="flex flex-wrap items-end gap-3 rounded-lg border border-line bg-card px-4 py-3">
+    <div
+      role="group"
+      aria-label={label}
+      className="flex flex-wrap items-end gap-3 rounded-lg border border-line bg-card px-4 py-3"
+    >
       {children}
     </div>
   );

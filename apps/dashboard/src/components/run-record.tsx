@@ -14,7 +14,6 @@ interface StoredStep {
   unit: string;
 }
 
-
 const text = (v: unknown): string =>
   typeof v === 'string' ? v : typeof v === 'number' ? String(v) : v == null ? '' : JSON.stringify(v);
 
@@ -49,9 +48,7 @@ function ValueList({ title, values }: { title: string; values: readonly ShownVal
           {values.map((v) => (
             <div key={v.id} className="contents">
               <dt className="text-ink-soft">{v.label}</dt>
-              <dd className="text-right font-semibold tabular-nums">
-                {v.text}
-              </dd>
+              <dd className="text-right font-semibold tabular-nums">{v.text}</dd>
             </div>
           ))}
         </dl>
@@ -66,14 +63,17 @@ export function RunRecord({ run }: { run: RunDetail }) {
   return (
     <div className="space-y-4">
       <p className="text-sm text-ink-soft">
-        {run.widget.name} · {run.calculator.title} · <time dateTime={run.createdAt}>{formatDateTime(run.createdAt)}</time> ·{' '}
-        {run.origin} · release {run.release} · calculator version {run.calcVersion}
+        {run.widget.name} · {run.calculator.title} ·{' '}
+        <time dateTime={run.createdAt}>{formatDateTime(run.createdAt)}</time> · {run.origin} · release{' '}
+        {run.release} · calculator version {run.calcVersion}
       </p>
       {run.agreed ? (
         <Notice tone="ok">The server recomputed this run from its inputs and reached the same result.</Notice>
       ) : (
         <Notice tone="bad">
-          <p className="font-semibold">The server&apos;s recomputation did not reproduce what the visitor saw.</p>
+          <p className="font-semibold">
+            The server&apos;s recomputation did not reproduce what the visitor saw.
+          </p>
           {run.mismatch ? (
             <pre className="mt-2 overflow-x-auto text-xs whitespace-pre-wrap" data-testid="run-mismatch">
               {JSON.stringify(run.mismatch, null, 2)}
@@ -108,7 +108,11 @@ export function RunRecord({ run }: { run: RunDetail }) {
         ) : (
           <ol className="space-y-2">
             {steps.map((s, i) => (
-              <li key={`${i}-${s.label}`} className="rounded-md border border-line bg-card px-4 py-3" data-working-step>
+              <li
+                key={`${i}-${s.label}`}
+                className="rounded-md border border-line bg-card px-4 py-3"
+                data-working-step
+              >
                 <p className="font-semibold">
                   <span className="mr-2 text-ink-faint tabular-nums">{i + 1}.</span>
                   {s.label}
@@ -116,7 +120,11 @@ export function RunRecord({ run }: { run: RunDetail }) {
                 <p className="mt-1 font-mono text-sm">{s.formula}</p>
                 <p className="font-mono text-sm text-ink-soft">{s.substituted}</p>
                 <p className="mt-1 text-sm">
-                  = <strong className="tabular-nums" title={`${s.exact} ${s.unit} as stored`}>{s.value}</strong> {s.unit}
+                  ={' '}
+                  <strong className="tabular-nums" title={`${s.exact} ${s.unit} as stored`}>
+                    {s.value}
+                  </strong>{' '}
+                  {s.unit}
                 </p>
               </li>
             ))}

@@ -14,7 +14,10 @@ export function RunsPerDayChart({ perDay }: { perDay: UsageSummary['perDay'] }) 
   const titleId = useId();
   const max = Math.max(1, ...perDay.map((d) => d.runs));
   const total = perDay.reduce((n, d) => n + d.runs, 0);
-  const busiest = perDay.reduce<UsageSummary['perDay'][number] | null>((b, d) => (!b || d.runs > b.runs ? d : b), null);
+  const busiest = perDay.reduce<UsageSummary['perDay'][number] | null>(
+    (b, d) => (!b || d.runs > b.runs ? d : b),
+    null,
+  );
   const width = Math.max(perDay.length * 12, 240);
   const bar = width / Math.max(perDay.length, 1);
   const summary =
@@ -46,7 +49,13 @@ export function RunsPerDayChart({ perDay }: { perDay: UsageSummary['perDay'] }) 
                 <title>{`${formatDate(d.day)}: ${d.runs} runs`}</title>
               </rect>
               {d.withLead > 0 ? (
-                <rect x={i * bar + gap / 2} y={height + 4} width={Math.max(bar - gap, 1)} height={4} className="fill-brand" />
+                <rect
+                  x={i * bar + gap / 2}
+                  y={height + 4}
+                  width={Math.max(bar - gap, 1)}
+                  height={4}
+                  className="fill-brand"
+                />
               ) : null}
             </g>
           );
@@ -65,10 +74,18 @@ export function RunsPerDayChart({ perDay }: { perDay: UsageSummary['perDay'] }) 
             <caption className="sr-only">Runs per day</caption>
             <thead className="sticky top-0 bg-paper text-left text-xs text-ink-soft uppercase">
               <tr>
-                <th scope="col" className="px-3 py-1.5">Day</th>
-                <th scope="col" className="px-3 py-1.5 text-right">Runs</th>
-                <th scope="col" className="px-3 py-1.5 text-right">With a warning</th>
-                <th scope="col" className="px-3 py-1.5 text-right">Led to a lead</th>
+                <th scope="col" className="px-3 py-1.5">
+                  Day
+                </th>
+                <th scope="col" className="px-3 py-1.5 text-right">
+                  Runs
+                </th>
+                <th scope="col" className="px-3 py-1.5 text-right">
+                  With a warning
+                </th>
+                <th scope="col" className="px-3 py-1.5 text-right">
+                  Led to a lead
+                </th>
               </tr>
             </thead>
             <tbody>

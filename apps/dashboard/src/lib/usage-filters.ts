@@ -25,7 +25,11 @@ export function pageParam(params: URLSearchParams): number {
 }
 
 /** Only the named parameters that have a value, in a stable order (it is part of a query key). */
-export function pick(params: URLSearchParams, names: readonly string[], extra: Record<string, string> = {}): string {
+export function pick(
+  params: URLSearchParams,
+  names: readonly string[],
+  extra: Record<string, string> = {},
+): string {
   const out = new URLSearchParams();
   for (const name of names) {
     const v = extra[name] ?? params.get(name);

@@ -31,7 +31,8 @@ function Contact({ lead }: { lead: LeadDetail }) {
       <h2 className="text-lg font-bold tracking-tight">Contact</h2>
       {lead.erasedAt ? (
         <Notice tone="info" className="mt-2">
-          The personal data of this lead was erased on {formatDateTime(lead.erasedAt)}. The run it came from is kept without it.
+          The personal data of this lead was erased on {formatDateTime(lead.erasedAt)}. The run it came from
+          is kept without it.
         </Notice>
       ) : (
         <dl className="mt-2 grid grid-cols-[8rem_minmax(0,1fr)] gap-x-4 gap-y-1.5 text-sm">
@@ -40,7 +41,10 @@ function Contact({ lead }: { lead: LeadDetail }) {
               <dt className="text-ink-soft">{label}</dt>
               <dd className="break-words whitespace-pre-wrap">
                 {label === 'E-mail' && value ? (
-                  <a href={`mailto:${value}`} className="font-semibold text-brand underline underline-offset-4">
+                  <a
+                    href={`mailto:${value}`}
+                    className="font-semibold text-brand underline underline-offset-4"
+                  >
                     {value}
                   </a>
                 ) : (
@@ -68,8 +72,13 @@ function WorkForm({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
   const [notes, setNotes] = useState(lead.notes ?? '');
   const [saved, setSaved] = useState<string | null>(null);
   const fieldError = (field: string) =>
-    isApiError(update.error) ? update.error.fields.find((f) => f.field === `body.${field}`)?.message : undefined;
-  const formError = update.error && !(isApiError(update.error, 400) && update.error.fields.length) ? describeError(update.error) : null;
+    isApiError(update.error)
+      ? update.error.fields.find((f) => f.field === `body.${field}`)?.message
+      : undefined;
+  const formError =
+    update.error && !(isApiError(update.error, 400) && update.error.fields.length)
+      ? describeError(update.error)
+      : null;
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
@@ -164,8 +173,8 @@ function Erase({ lead }: { lead: LeadDetail }) {
     <Card className="space-y-2 p-4">
       <h2 className="text-lg font-bold tracking-tight">Erase personal data</h2>
       <p className="text-sm text-ink-soft">
-        When the visitor asks, remove their name, contact details, message, address and the notes. The run stays, no longer
-        linked to them. This cannot be undone.
+        When the visitor asks, remove their name, contact details, message, address and the notes. The run
+        stays, no longer linked to them. This cannot be undone.
       </p>
       {erase.isError ? <ErrorState title="The data could not be erased" error={erase.error} /> : null}
       <ConfirmAction
@@ -190,7 +199,13 @@ export function LeadPage() {
   if (!valid) body = <ErrorState title="This is not a lead's address" error={null} />;
   else if (lead.isPending) body = <LoadingState label="Loading the lead…" />;
   else if (lead.isError)
-    body = <ErrorState title="This lead could not be loaded" error={lead.error} onRetry={() => void lead.refetch()} />;
+    body = (
+      <ErrorState
+        title="This lead could not be loaded"
+        error={lead.error}
+        onRetry={() => void lead.refetch()}
+      />
+    );
   else {
     const l = lead.data;
     body = (
@@ -211,7 +226,9 @@ export function LeadPage() {
             </>
           ) : (
             <p className="text-sm text-ink-soft">
-              {l.erasedAt ? 'The run was unlinked when the personal data was erased.' : 'The run is no longer kept.'}
+              {l.erasedAt
+                ? 'The run was unlinked when the personal data was erased.'
+                : 'The run is no longer kept.'}
             </p>
           )}
         </section>
@@ -224,7 +241,13 @@ export function LeadPage() {
     <section className="space-y-6">
       <TextLink to={orgPath(orgId, 'leads')}>← Back to leads</TextLink>
       <PageHeader
-        title={lead.data ? (lead.data.erasedAt ? `Lead ${lead.data.id}` : (lead.data.name ?? `Lead ${lead.data.id}`)) : 'Lead'}
+        title={
+          lead.data
+            ? lead.data.erasedAt
+              ? `Lead ${lead.data.id}`
+              : (lead.data.name ?? `Lead ${lead.data.id}`)
+            : 'Lead'
+        }
         lead={lead.data ? <LeadStatusBadge lead={lead.data} /> : undefined}
       />
       {body}

@@ -67,7 +67,9 @@ export function LeadsPage() {
   const [params, set] = useFilterParams();
   const page = pageParam(params);
   const filters = pick(params, filterNames);
-  const leads = useQuery(leadListQuery(orgId, `${filters}${filters ? '&' : ''}page=${page}&pageSize=${pageSize}`));
+  const leads = useQuery(
+    leadListQuery(orgId, `${filters}${filters ? '&' : ''}page=${page}&pageSize=${pageSize}`),
+  );
   const widgets = useQuery(widgetListQuery(orgId, 1, 200));
   const members = useQuery(membersQuery(orgId));
   const current = (name: string) => params.get(name) ?? '';
@@ -76,7 +78,13 @@ export function LeadsPage() {
   let body;
   if (leads.isPending) body = <LoadingState label="Loading the leads…" />;
   else if (leads.isError)
-    body = <ErrorState title="The leads could not be loaded" error={leads.error} onRetry={() => void leads.refetch()} />;
+    body = (
+      <ErrorState
+        title="The leads could not be loaded"
+        error={leads.error}
+        onRetry={() => void leads.refetch()}
+      />
+    );
   else if (leads.data.items.length === 0)
     body =
       page > 1 ? (
@@ -132,7 +140,12 @@ export function LeadsPage() {
         }
       />
       <FilterBar label="Filters">
-        <FilterSelect label="Status" value={current('status')} options={leadStatusOptions} onChange={(v) => set('status', v)} />
+        <FilterSelect
+          label="Status"
+          value={current('status')}
+          options={leadStatusOptions}
+          onChange={(v) => set('status', v)}
+        />
         <FilterSelect
           label="Widget"
           value={current('widgetId')}

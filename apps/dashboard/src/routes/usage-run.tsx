@@ -20,7 +20,10 @@ export function RunPage() {
 
   let body;
   if (run.isPending) body = <LoadingState label="Loading the run…" />;
-  else if (run.isError) body = <ErrorState title="This run could not be loaded" error={run.error} onRetry={() => void run.refetch()} />;
+  else if (run.isError)
+    body = (
+      <ErrorState title="This run could not be loaded" error={run.error} onRetry={() => void run.refetch()} />
+    );
   else {
     const lead = run.data.lead;
     body = (
@@ -29,11 +32,13 @@ export function RunPage() {
         <Card className="p-4">
           <h2 className="text-lg font-bold tracking-tight">Request for an assessment</h2>
           {!lead ? (
-            <p className="mt-1 text-sm text-ink-soft">The visitor did not ask for an assessment from this run.</p>
+            <p className="mt-1 text-sm text-ink-soft">
+              The visitor did not ask for an assessment from this run.
+            </p>
           ) : (
             <p className="mt-1 text-sm">
-              {lead.erasedAt ? 'Personal data erased' : (lead.name ?? 'No name given')} · {leadStatusLabel[lead.status]} · sent{' '}
-              {formatDateTime(lead.createdAt)}
+              {lead.erasedAt ? 'Personal data erased' : (lead.name ?? 'No name given')} ·{' '}
+              {leadStatusLabel[lead.status]} · sent {formatDateTime(lead.createdAt)}
               {can(role, 'leads:read') ? (
                 <>
                   {' · '}
@@ -50,7 +55,10 @@ export function RunPage() {
   return (
     <section className="space-y-6">
       {back}
-      <PageHeader title={run.data ? `Run of ${run.data.widget.name}` : 'Run'} lead="What the visitor entered and saw, and the server's check of it." />
+      <PageHeader
+        title={run.data ? `Run of ${run.data.widget.name}` : 'Run'}
+        lead="What the visitor entered and saw, and the server's check of it."
+      />
       {body}
     </section>
   );

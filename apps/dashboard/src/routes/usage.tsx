@@ -49,7 +49,13 @@ function Totals({ summary }: { summary: UsageSummary }) {
   );
 }
 
-function Breakdown({ title, rows }: { title: string; rows: { key: string; label: string; runs: number; withLead: number }[] }) {
+function Breakdown({
+  title,
+  rows,
+}: {
+  title: string;
+  rows: { key: string; label: string; runs: number; withLead: number }[];
+}) {
   return (
     <Card className="p-4">
       <h3 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">{title}</h3>
@@ -60,15 +66,23 @@ function Breakdown({ title, rows }: { title: string; rows: { key: string; label:
           <caption className="sr-only">{title}</caption>
           <thead className="text-left text-xs text-ink-soft">
             <tr>
-              <th scope="col" className="py-1 font-semibold">Name</th>
-              <th scope="col" className="py-1 pl-3 text-right font-semibold">Runs</th>
-              <th scope="col" className="py-1 pl-3 text-right font-semibold">Leads</th>
+              <th scope="col" className="py-1 font-semibold">
+                Name
+              </th>
+              <th scope="col" className="py-1 pl-3 text-right font-semibold">
+                Runs
+              </th>
+              <th scope="col" className="py-1 pl-3 text-right font-semibold">
+                Leads
+              </th>
             </tr>
           </thead>
           <tbody>
             {rows.map((r) => (
               <tr key={r.key} className="border-t border-line tabular-nums">
-                <th scope="row" className="py-1 pr-2 text-left font-normal break-all">{r.label}</th>
+                <th scope="row" className="py-1 pr-2 text-left font-normal break-all">
+                  {r.label}
+                </th>
                 <td className="py-1 text-right">{r.runs}</td>
                 <td className="py-1 text-right">{r.withLead}</td>
               </tr>
@@ -89,12 +103,23 @@ function SummaryView({ summary }: { summary: UsageSummary }) {
         <RunsPerDayChart perDay={summary.perDay} />
       </Card>
       <div className="grid gap-4 lg:grid-cols-3">
-        <Breakdown title="By widget" rows={summary.byWidget.map((w) => ({ key: String(w.widgetId), label: w.name, ...w }))} />
-        <Breakdown title="By calculator" rows={summary.byCalculator.map((c) => ({ key: c.calculatorId, label: c.title, ...c }))} />
-        <Breakdown title="By site" rows={summary.bySite.map((s) => ({ key: s.origin, label: s.origin, ...s }))} />
+        <Breakdown
+          title="By widget"
+          rows={summary.byWidget.map((w) => ({ key: String(w.widgetId), label: w.name, ...w }))}
+        />
+        <Breakdown
+          title="By calculator"
+          rows={summary.byCalculator.map((c) => ({ key: c.calculatorId, label: c.title, ...c }))}
+        />
+        <Breakdown
+          title="By site"
+          rows={summary.bySite.map((s) => ({ key: s.origin, label: s.origin, ...s }))}
+        />
       </div>
       <Card className="p-4">
-        <h3 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">Warnings raised most often</h3>
+        <h3 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">
+          Warnings raised most often
+        </h3>
         {summary.topWarnings.length === 0 ? (
           <p className="mt-2 text-sm text-ink-soft">No validity warning in this period.</p>
         ) : (
@@ -156,7 +181,9 @@ function RunRow({ run }: { run: RunListItem }) {
         {run.warningCodes.length ? (
           <span className="flex flex-wrap gap-1">
             {run.warningCodes.map((c) => (
-              <Badge key={c} tone="warn">{c}</Badge>
+              <Badge key={c} tone="warn">
+                {c}
+              </Badge>
             ))}
           </span>
         ) : (
@@ -169,7 +196,11 @@ function RunRow({ run }: { run: RunListItem }) {
       </td>
       <td className={tdClass}>
         {run.agreed ? <Badge>Agreed</Badge> : <Badge tone="warn">Differs</Badge>}
-        {run.leadId ? <span className="mt-1 block"><Badge tone="brand">Lead</Badge></span> : null}
+        {run.leadId ? (
+          <span className="mt-1 block">
+            <Badge tone="brand">Lead</Badge>
+          </span>
+        ) : null}
       </td>
     </tr>
   );
@@ -188,26 +219,47 @@ export function UsagePage() {
   const summary = useQuery(usageSummaryQuery(orgId, pick(params, ['from', 'to', 'widgetId'], { from, to })));
   const runs = useQuery(runListQuery(orgId, `${filters}&page=${page}&pageSize=${pageSize}`));
   const widgets = useQuery(widgetListQuery(orgId, 1, 200));
-  const exportHref = `/api/v1/orgs/${orgId}/runs/export?${pick(params, filterNames.filter((n) => n !== 'sort'), { from, to })}`;
+  const exportHref = `/api/v1/orgs/${orgId}/runs/export?${pick(
+    params,
+    filterNames.filter((n) => n !== 'sort'),
+    { from, to },
+  )}`;
 
   const widgetOptions = (widgets.data?.items ?? []).map((w) => ({ value: String(w.id), label: w.name }));
-  const calculatorOptions = (summary.data?.byCalculator ?? []).map((c) => ({ value: c.calculatorId, label: c.title }));
+  const calculatorOptions = (summary.data?.byCalculator ?? []).map((c) => ({
+    value: c.calculatorId,
+    label: c.title,
+  }));
   const siteOptions = (summary.data?.bySite ?? []).map((s) => ({ value: s.origin, label: s.origin }));
   const current = (name: string) => params.get(name) ?? '';
   // A chosen value that is not among this period's options still shows as chosen.
   const keep = (options: { value: string; label: string }[], name: string) =>
-    current(name) && !options.some((o) => o.value === current(name)) ? [...options, { value: current(name), label: current(name) }] : options;
+    current(name) && !options.some((o) => o.value === current(name))
+      ? [...options, { value: current(name), label: current(name) }]
+      : options;
 
   let summaryBody;
   if (summary.isPending) summaryBody = <LoadingState label="Counting the runs…" />;
   else if (summary.isError)
-    summaryBody = <ErrorState title="The summary could not be loaded" error={summary.error} onRetry={() => void summary.refetch()} />;
+    summaryBody = (
+      <ErrorState
+        title="The summary could not be loaded"
+        error={summary.error}
+        onRetry={() => void summary.refetch()}
+      />
+    );
   else summaryBody = <SummaryView summary={summary.data} />;
 
   let runsBody;
   if (runs.isPending) runsBody = <LoadingState label="Loading the runs…" />;
   else if (runs.isError)
-    runsBody = <ErrorState title="The runs could not be loaded" error={runs.error} onRetry={() => void runs.refetch()} />;
+    runsBody = (
+      <ErrorState
+        title="The runs could not be loaded"
+        error={runs.error}
+        onRetry={() => void runs.refetch()}
+      />
+    );
   else if (runs.data.items.length === 0)
     runsBody =
       page > 1 ? (
@@ -263,9 +315,24 @@ export function UsagePage() {
       <FilterBar label="Filters">
         <FilterDate label="From" value={from} onChange={(v) => set('from', v)} />
         <FilterDate label="To" value={to} onChange={(v) => set('to', v)} />
-        <FilterSelect label="Widget" value={current('widgetId')} options={keep(widgetOptions, 'widgetId')} onChange={(v) => set('widgetId', v)} />
-        <FilterSelect label="Calculator" value={current('calculatorId')} options={keep(calculatorOptions, 'calculatorId')} onChange={(v) => set('calculatorId', v)} />
-        <FilterSelect label="Site" value={current('origin')} options={keep(siteOptions, 'origin')} onChange={(v) => set('origin', v)} />
+        <FilterSelect
+          label="Widget"
+          value={current('widgetId')}
+          options={keep(widgetOptions, 'widgetId')}
+          onChange={(v) => set('widgetId', v)}
+        />
+        <FilterSelect
+          label="Calculator"
+          value={current('calculatorId')}
+          options={keep(calculatorOptions, 'calculatorId')}
+          onChange={(v) => set('calculatorId', v)}
+        />
+        <FilterSelect
+          label="Site"
+          value={current('origin')}
+          options={keep(siteOptions, 'origin')}
+          onChange={(v) => set('origin', v)}
+        />
         <FilterSelect
           label="Warnings"
           value={current('hasWarning')}
@@ -285,11 +352,15 @@ export function UsagePage() {
         />
       </FilterBar>
       <section aria-labelledby="usage-summary" className="space-y-3">
-        <h2 id="usage-summary" className="sr-only">Summary of the period</h2>
+        <h2 id="usage-summary" className="sr-only">
+          Summary of the period
+        </h2>
         {summaryBody}
       </section>
       <section aria-labelledby="usage-runs" className="space-y-3">
-        <h2 id="usage-runs" className="text-lg font-bold tracking-tight">Runs</h2>
+        <h2 id="usage-runs" className="text-lg font-bold tracking-tight">
+          Runs
+        </h2>
         {runsBody}
       </section>
     </section>

@@ -23,14 +23,16 @@ describe('inspectImage', () => {
   });
 
   it('refuses SVG, which can carry script', () => {
-    const svg = Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" onload="alert(1)"><rect width="1" height="1"/></svg>');
+    const svg = Buffer.from(
+      '<svg xmlns="http://www.w3.org/2000/svg" onload="alert(1)"><rect width="1" height="1"/></svg>',
+    );
     expect(refusal(svg)).toMatch(/PNG, JPEG or WebP/);
   });
 
   it('refuses a PNG signature followed by junk', () => {
-    expect(refusal(Buffer.concat([makePng(2, 2).subarray(0, 8), Buffer.from('not really a png at all')]))).toMatch(
-      /cannot be read|does not match/,
-    );
+    expect(
+      refusal(Buffer.concat([makePng(2, 2).subarray(0, 8), Buffer.from('not really a png at all')])),
+    ).toMatch(/cannot be read|does not match/);
   });
 
   it('refuses a file over the size limit', () => {

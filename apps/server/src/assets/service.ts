@@ -22,7 +22,10 @@ export function createAssetService(publicUrl: string): AssetService {
     async upload(orgId, userId, data) {
       const info = inspectImage(data);
       const sha256 = createHash('sha256').update(data).digest('hex');
-      const existing = await Asset.findOne({ where: { organizationId: orgId, sha256 }, attributes: { exclude: ['data'] } });
+      const existing = await Asset.findOne({
+        where: { organizationId: orgId, sha256 },
+        attributes: { exclude: ['data'] },
+      });
       if (existing) return dto(existing);
       const a = await Asset.create({
         organizationId: orgId,

@@ -16,16 +16,30 @@ initModels(sequelize);
 try {
   const summary = await seedDemo(sequelize, { bcryptCost: config.auth.bcryptCost });
   const org = await Organization.findOne({ where: { slug: 'brackenridge-ground' } });
-  const owner = org && (await Membership.findOne({ where: { organizationId: org.id, role: 'owner' }, order: [['id', 'ASC']] }));
+  const owner =
+    org &&
+    (await Membership.findOne({ where: { organizationId: org.id, role: 'owner' }, order: [['id', 'ASC']] }));
   const lines = [summary];
   if (org && owner) {
     const releases = createReleaseService(config.releasesDir ?? defaultReleasesDir, config.publicUrl);
-    const widgets = createWidgetService({ sequelize, releases, publicUrl: config.publicUrl, widgetVersion: serverVersion });
+    const widgets = createWidgetService({
+      sequelize,
+      releases,
+      publicUrl: config.publicUrl,
+      widgetVersion: serverVersion,
+    });
     const demo = await seedDemoWidgets(widgets, org.id, owner.userId, demoSiteOrigins(config.demo.sitePort));
     lines.push(...demo.lines);
     if (config.demo.snippetsFile) {
       mkdirSync(path.dirname(config.demo.snippetsFile), { recursive: true });
-      writeFileSync(config.demo.snippetsFile, JSON.stringify({ widgets: demo.widgets.map((w) => ({ name: w.name, snippet: w.embed.snippet })) }, null, 2));
+      writeFileSync(
+        config.demo.snippetsFile,
+        JSON.stringify(
+          { widgets: demo.widgets.map((w) => ({ name: w.name, snippet: w.embed.snippet })) },
+          null,
+          2,
+        ),
+      );
     }
   }
   console.log(lines.join('\n'));

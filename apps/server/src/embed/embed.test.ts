@@ -3,7 +3,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { calculate } from '@wickstone/calc-core';
 import { embedWidgetSchema, errorBodySchema, widgetSchema, type Widget } from '@wickstone/contracts';
-import { createTestApp, mailbox, seedOrgWithTeam, TestClient, uniqueEmail, type FixtureOrg, type TestApp } from '../testing/index.js';
+import {
+  createTestApp,
+  mailbox,
+  seedOrgWithTeam,
+  TestClient,
+  uniqueEmail,
+  type FixtureOrg,
+  type TestApp,
+} from '../testing/index.js';
 import { Lead, Run } from '../db/models/index.js';
 
 const SITE = 'https://www.brackenridge-ground.example';
@@ -24,19 +32,34 @@ describe('public embed API', () => {
     await owner.login(org.users.owner.email, org.users.owner.password);
     notify = uniqueEmail('firm');
     const created = widgetSchema.parse(
-      (await owner.post(`/orgs/${org.id}/widgets`, { name: 'Tube rise', calculatorId: 'tube-rise', allowedOrigins: [SITE] }).expect(201)).body,
+      (
+        await owner
+          .post(`/orgs/${org.id}/widgets`, {
+            name: 'Tube rise',
+            calculatorId: 'tube-rise',
+            allowedOrigins: [SITE],
+          })
+          .expect(201)
+      ).body,
     );
     const settings = structuredClone(created.settings);
     settings.inputs = { gravity: { mode: 'locked', default: 9.80665 } };
     settings.leadForm.notify = [notify];
     settings.leadForm.fields.phone = 'off';
-    widget = widgetSchema.parse((await owner.patch(`/orgs/${org.id}/widgets/${created.id}`, { status: 'live', settings }).expect(200)).body);
+    widget = widgetSchema.parse(
+      (await owner.patch(`/orgs/${org.id}/widgets/${created.id}`, { status: 'live', settings }).expect(200))
+        .body,
+    );
   });
   afterAll(() => t.close());
 
   const embed = () => request(t.app);
   const report = (body: unknown, origin = SITE) =>
-    embed().post('/api/v1/embed/runs').set('Origin', origin).set('Content-Type', 'text/plain;charset=UTF-8').send(JSON.stringify(body));
+    embed()
+      .post('/api/v1/embed/runs')
+      .set('Origin', origin)
+      .set('Content-Type', 'text/plain;charset=UTF-8')
+      .send(JSON.stringify(body));
 
   function runBody(inputs: Record<string, number | string> = { diameter: 0.0008 }) {
     const r = calculate('tube-rise', inputs);
@@ -45,14 +68,22 @@ describe('public embed API', () => {
       publicKey: widget.publicKey,
       inputs: r.inputs,
       unitSystem: 'si',
-      result: { outputs: r.outputs, warnings: r.warnings.map((w) => w.code), inputHash: r.inputHash, version: r.version },
+      result: {
+        outputs: r.outputs,
+        warnings: r.warnings.map((w) => w.code),
+        inputHash: r.inputHash,
+        version: r.version,
+      },
       pageUrl: `${SITE}/services/rising-damp`,
     };
   }
 
   describe('settings', () => {
     it('answers an allowed origin with what the widget needs and nothing private', async () => {
-      const res = await embed().get(`/api/v1/embed/widgets/${widget.publicKey}`).set('Origin', SITE).expect(200);
+      const res = await embed()
+        .get(`/api/v1/embed/widgets/${widget.publicKey}`)
+        .set('Origin', SITE)
+        .expect(200);
       expect(res.headers['access-control-allow-origin']).toBe(SITE);
       const body = embedWidgetSchema.parse(res.body);
       expect(body.calculatorId).toBe('tube-rise');
@@ -61,7 +92,10 @@ describe('public embed API', () => {
     });
 
     it('gives an origin that is not allowed no widget and no settings', async () => {
-      const res = await embed().get(`/api/v1/embed/widgets/${widget.publicKey}`).set('Origin', 'https://copycat.example').expect(403);
+      const res = await embed()
+        .get(`/api/v1/embed/widgets/${widget.publicKey}`)
+        .set('Origin', 'https://copycat.example')
+        .expect(403);
       // readable, so the widget knows at once, but it carries no settings
       expect(res.headers['access-control-allow-origin']).toBe('https://copycat.example');
       expect(Object.keys(res.body)).toEqual(['error']);
@@ -70,7 +104,17 @@ describe('public embed API', () => {
     });
 
     it('answers 404 for a draft or unknown key', async () => {
-      const draft = widgetSchema.parse((await owner.post(`/orgs/${org.id}/widgets`, { name: 'Draft', calculatorId: 'slot-rise', allowedOrigins: [SITE] }).expect(201)).body);
+      const draft = widgetSchema.parse(
+        (
+          await owner
+            .post(`/orgs/${org.id}/widgets`, {
+              name: 'Draft',
+              calculatorId: 'slot-rise',
+              allowedOrigins: [SITE],
+            })
+            .expect(201)
+        ).body,
+      );
       await embed().get(`/api/v1/embed/widgets/${draft.publicKey}`).set('Origin', SITE).expect(404);
       await embed().get('/api/v1/embed/widgets/wk_aaaaaaaaaaaaaaaaaaaa').set('Origin', SITE).expect(404);
       const bad = await embed().get('/api/v1/embed/widgets/not-a-key').set('Origin', SITE).expect(400);
@@ -78,9 +122,16 @@ describe('public embed API', () => {
     });
 
     it('answers a preflight only for known origins', async () => {
-      const ok = await embed().options('/api/v1/embed/runs').set('Origin', SITE).set('Access-Control-Request-Method', 'POST').expect(204);
+      const ok = await embed()
+        .options('/api/v1/embed/runs')
+        .set('Origin', SITE)
+        .set('Access-Control-Request-Method', 'POST')
+        .expect(204);
       expect(ok.headers['access-control-allow-origin']).toBe(SITE);
-      const no = await embed().options('/api/v1/embed/runs').set('Origin', 'https://copycat.example').expect(204);
+      const no = await embed()
+        .options('/api/v1/embed/runs')
+        .set('Origin', 'https://copycat.example')
+        .expect(204);
       expect(no.headers['access-control-allow-origin']).toBeUndefined();
     });
   });
@@ -94,7 +145,13 @@ describe('public embed API', () => {
       expect(again.body).toEqual({ id: body.id, agreed: true, duplicate: true });
       expect(await Run.count({ where: { id: body.id } })).toBe(1);
       const row = await Run.findByPk(body.id);
-      expect(row).toMatchObject({ origin: SITE, calculatorId: 'tube-rise', agreed: true, hasWarning: false, organizationId: org.id });
+      expect(row).toMatchObject({
+        origin: SITE,
+        calculatorId: 'tube-rise',
+        agreed: true,
+        hasWarning: false,
+        organizationId: org.id,
+      });
     });
 
     it('refuses the same run id with a different body and keeps the first', async () => {
@@ -132,10 +189,16 @@ describe('public embed API', () => {
       locked.inputs = { ...locked.inputs, gravity: 3.71 };
       expect(fieldsOf((await report(locked).expect(400)).body)).toEqual(['body.inputs.gravity']);
       await report(runBody(), 'https://copycat.example').expect(403);
-      const malformed = await embed().post('/api/v1/embed/runs').set('Origin', SITE).set('Content-Type', 'text/plain').send('{"id":');
+      const malformed = await embed()
+        .post('/api/v1/embed/runs')
+        .set('Origin', SITE)
+        .set('Content-Type', 'text/plain')
+        .send('{"id":');
       expect(malformed.status).toBe(400);
       const missing = await report({ publicKey: widget.publicKey }).expect(400);
-      expect(fieldsOf(missing.body)).toEqual(expect.arrayContaining(['body.id', 'body.inputs', 'body.result', 'body.unitSystem']));
+      expect(fieldsOf(missing.body)).toEqual(
+        expect.arrayContaining(['body.id', 'body.inputs', 'body.result', 'body.unitSystem']),
+      );
       const extra = await report({ ...runBody(), cookie: 'x' }).expect(400);
       expect(fieldsOf(extra.body)).toEqual(['body.cookie']);
       const huge = await report({ ...runBody(), pageUrl: `${SITE}/${'x'.repeat(40_000)}` });
@@ -146,7 +209,11 @@ describe('public embed API', () => {
 
   describe('leads', () => {
     const sendLead = (body: unknown, origin = SITE) =>
-      embed().post('/api/v1/embed/leads').set('Origin', origin).set('Content-Type', 'text/plain').send(JSON.stringify(body));
+      embed()
+        .post('/api/v1/embed/leads')
+        .set('Origin', origin)
+        .set('Content-Type', 'text/plain')
+        .send(JSON.stringify(body));
 
     it('stores a lead with its run and e-mails the firm and the visitor', async () => {
       const run = runBody();
@@ -155,12 +222,23 @@ describe('public embed API', () => {
       const res = await sendLead({
         runId: run.id,
         publicKey: widget.publicKey,
-        fields: { name: 'Hester Quayle', email: visitor, siteAddress: '4 Mill Lane, Ashby Parva', message: 'Damp at skirting level.' },
+        fields: {
+          name: 'Hester Quayle',
+          email: visitor,
+          siteAddress: '4 Mill Lane, Ashby Parva',
+          message: 'Damp at skirting level.',
+        },
         consent: true,
         sendCopy: true,
       }).expect(201);
       const lead = await Lead.findByPk(res.body.id as number);
-      expect(lead).toMatchObject({ runId: run.id, organizationId: org.id, email: visitor, status: 'new', origin: SITE });
+      expect(lead).toMatchObject({
+        runId: run.id,
+        organizationId: org.id,
+        email: visitor,
+        status: 'new',
+        origin: SITE,
+      });
       const [firmMail] = await mailbox(t.db.config.mail.fakeApiUrl, notify);
       expect(firmMail?.subject).toContain('Hester Quayle');
       expect(firmMail?.links.some((l) => l.endsWith(`/orgs/${org.id}/leads/${lead?.id}`))).toBe(true);
@@ -169,20 +247,45 @@ describe('public embed API', () => {
       expect(copy?.text).toMatch(/Rise/i);
       expect(copy?.text).toContain('licensed professional');
       // one request per result
-      const twice = await sendLead({ runId: run.id, publicKey: widget.publicKey, fields: { name: 'H', email: visitor }, consent: true }).expect(409);
+      const twice = await sendLead({
+        runId: run.id,
+        publicKey: widget.publicKey,
+        fields: { name: 'H', email: visitor },
+        consent: true,
+      }).expect(409);
       expect(fieldsOf(twice.body)).toEqual(['body.runId']);
     });
 
     it('needs consent and the required fields, and refuses fields the form does not ask for', async () => {
       const run = runBody();
       await report(run).expect(201);
-      const noConsent = await sendLead({ runId: run.id, publicKey: widget.publicKey, fields: { name: 'A', email: uniqueEmail() }, consent: false }).expect(400);
+      const noConsent = await sendLead({
+        runId: run.id,
+        publicKey: widget.publicKey,
+        fields: { name: 'A', email: uniqueEmail() },
+        consent: false,
+      }).expect(400);
       expect(fieldsOf(noConsent.body)).toEqual(['body.consent']);
-      const missing = await sendLead({ runId: run.id, publicKey: widget.publicKey, fields: { name: 'A' }, consent: true }).expect(400);
+      const missing = await sendLead({
+        runId: run.id,
+        publicKey: widget.publicKey,
+        fields: { name: 'A' },
+        consent: true,
+      }).expect(400);
       expect(fieldsOf(missing.body)).toEqual(['body.fields.email']);
-      const off = await sendLead({ runId: run.id, publicKey: widget.publicKey, fields: { name: 'A', email: uniqueEmail(), phone: '01234 567890' }, consent: true }).expect(400);
+      const off = await sendLead({
+        runId: run.id,
+        publicKey: widget.publicKey,
+        fields: { name: 'A', email: uniqueEmail(), phone: '01234 567890' },
+        consent: true,
+      }).expect(400);
       expect(fieldsOf(off.body)).toEqual(['body.fields.phone']);
-      const unknownRun = await sendLead({ runId: randomUUID(), publicKey: widget.publicKey, fields: { name: 'A', email: uniqueEmail() }, consent: true }).expect(400);
+      const unknownRun = await sendLead({
+        runId: randomUUID(),
+        publicKey: widget.publicKey,
+        fields: { name: 'A', email: uniqueEmail() },
+        consent: true,
+      }).expect(400);
       expect(fieldsOf(unknownRun.body)).toEqual(['body.runId']);
       expect(await Lead.count({ where: { runId: run.id } })).toBe(0);
     });
@@ -190,7 +293,12 @@ describe('public embed API', () => {
     it('limits requests per address with the standard headers', async () => {
       let last: request.Response | undefined;
       for (let i = 0; i < 8; i++) {
-        last = await sendLead({ runId: randomUUID(), publicKey: widget.publicKey, fields: { name: 'A', email: uniqueEmail() }, consent: true });
+        last = await sendLead({
+          runId: randomUUID(),
+          publicKey: widget.publicKey,
+          fields: { name: 'A', email: uniqueEmail() },
+          consent: true,
+        });
         if (last.status === 429) break;
       }
       expect(last?.status).toBe(429);

@@ -9,7 +9,12 @@ import {
   type UnitSystemId,
 } from '@wickstone/calc-core';
 
-function shown(value: number, kind: Parameters<typeof displayUnit>[0], system: UnitSystemId, override?: Partial<Record<UnitSystemId, UnitId>>) {
+function shown(
+  value: number,
+  kind: Parameters<typeof displayUnit>[0],
+  system: UnitSystemId,
+  override?: Partial<Record<UnitSystemId, UnitId>>,
+) {
   const unit = override?.[system] ?? displayUnit(kind, system);
   const symbol = units[unit].symbol;
   return `${formatNumber(fromCanonical(value, unit))}${symbol ? ` ${symbol}` : ''}`;
@@ -19,7 +24,11 @@ function shown(value: number, kind: Parameters<typeof displayUnit>[0], system: U
  * The result as plain lines, in the widget's unit system, for the copy e-mailed to a visitor and
  * the firm's notification: inputs, outputs, band, warnings and the working in canonical units.
  */
-export function resultLines(calc: CalculatorDefinition, result: CalculationResult, system: UnitSystemId): string[] {
+export function resultLines(
+  calc: CalculatorDefinition,
+  result: CalculationResult,
+  system: UnitSystemId,
+): string[] {
   const lines: string[] = [`${calc.title}`, '', 'Inputs'];
   for (const input of calc.inputs) {
     const v = result.inputs[input.id];
@@ -35,7 +44,9 @@ export function resultLines(calc: CalculatorDefinition, result: CalculationResul
     const v = result.outputs[out.id];
     if (v === undefined || v === null) continue;
     const band = result.band?.outputs[out.id];
-    const range = band ? ` (band ${shown(band.low, out.kind, system, out.display)} to ${shown(band.high, out.kind, system, out.display)})` : '';
+    const range = band
+      ? ` (band ${shown(band.low, out.kind, system, out.display)} to ${shown(band.high, out.kind, system, out.display)})`
+      : '';
     lines.push(`  ${out.label}: ${shown(v, out.kind, system, out.display)}${range}`);
   }
   if (result.warnings.length) {
@@ -44,7 +55,11 @@ export function resultLines(calc: CalculatorDefinition, result: CalculationResul
   }
   lines.push('', 'Working');
   for (const step of result.working) {
-    lines.push(`  ${step.label}: ${step.formula}`, `    = ${step.substituted}`, `    = ${formatNumber(step.value)} ${units[step.unit].symbol}`);
+    lines.push(
+      `  ${step.label}: ${step.formula}`,
+      `    = ${step.substituted}`,
+      `    = ${formatNumber(step.value)} ${units[step.unit].symbol}`,
+    );
   }
   return lines;
 }

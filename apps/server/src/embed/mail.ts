@@ -4,7 +4,6 @@ import type { OutgoingMail } from '../mail/mailer.js';
 import { escapeHtml, oneLine } from '../mail/templates.js';
 import { resultLines } from './format.js';
 
-
 /** The estimate disclaimer every copy of a result carries, as the widget shows it. */
 export const ESTIMATE_NOTE =
   'These results are estimates from idealised models. They do not replace a site investigation, laboratory testing, ' +
@@ -50,7 +49,11 @@ export function leadNotificationMail(p: {
     to: p.to,
     subject: title,
     text,
-    html: html(title, [pre(contact), `<p><a href="${escapeHtml(p.link)}">Open the request in Wickstone</a></p>`, pre(result)]),
+    html: html(title, [
+      pre(contact),
+      `<p><a href="${escapeHtml(p.link)}">Open the request in Wickstone</a></p>`,
+      pre(result),
+    ]),
   };
 }
 
@@ -64,7 +67,11 @@ export function resultCopyMail(p: {
   firmCautions: string;
 }): OutgoingMail {
   const title = `Your ${oneLine(p.widgetName)} result from ${oneLine(p.orgName)}`;
-  const cautions = [...p.calc.cautions.map((c) => c.text), ...(p.firmCautions ? [p.firmCautions] : []), ESTIMATE_NOTE];
+  const cautions = [
+    ...p.calc.cautions.map((c) => c.text),
+    ...(p.firmCautions ? [p.firmCautions] : []),
+    ESTIMATE_NOTE,
+  ];
   const lines = resultLines(p.calc, p.result, p.system);
   const text = [
     `Thank you for your request. ${oneLine(p.orgName)} will be in touch.`,

@@ -12,7 +12,10 @@ export interface EmbedLimits {
 }
 
 const keyParams = z.strictObject({ publicKey: publicKeySchema });
-const assetParams = z.strictObject({ assetId: z.coerce.number().int().positive(), hash: z.string().regex(/^[0-9a-f]{16}$/) });
+const assetParams = z.strictObject({
+  assetId: z.coerce.number().int().positive(),
+  hash: z.string().regex(/^[0-9a-f]{16}$/),
+});
 
 /**
  * The widget sends JSON as text/plain so its requests are CORS-simple (no preflight); JSON
@@ -20,7 +23,10 @@ const assetParams = z.strictObject({ assetId: z.coerce.number().int().positive()
  */
 function jsonBody(req: Request, _res: Response, next: NextFunction): void {
   if (typeof req.body !== 'string') {
-    if (req.body === undefined || (typeof req.body === 'object' && req.body !== null && Object.keys(req.body).length === 0)) {
+    if (
+      req.body === undefined ||
+      (typeof req.body === 'object' && req.body !== null && Object.keys(req.body).length === 0)
+    ) {
       req.body = undefined;
     }
     return next();
@@ -29,7 +35,11 @@ function jsonBody(req: Request, _res: Response, next: NextFunction): void {
     req.body = JSON.parse(req.body);
     next();
   } catch {
-    next(new AppError('bad_request', 'Request body is not valid JSON', { fields: [{ field: 'body', message: 'Malformed JSON' }] }));
+    next(
+      new AppError('bad_request', 'Request body is not valid JSON', {
+        fields: [{ field: 'body', message: 'Malformed JSON' }],
+      }),
+    );
   }
 }
 
@@ -80,7 +90,8 @@ export function embedRouter(service: EmbedService, limits: EmbedLimits): Router 
       legacyHeaders: false,
       identifier: name,
       keyGenerator: key,
-      handler: (_req, _res, next) => next(new AppError('rate_limited', 'Too many requests from here: wait a while and try again')),
+      handler: (_req, _res, next) =>
+        next(new AppError('rate_limited', 'Too many requests from here: wait a while and try again')),
     });
   const leadsPerIp = limited('leads-per-ip', limits.leadsPerIp, (req) => ipKeyGenerator(req.ip ?? 'unknown'));
   const leadsPerWidget = limited('leads-per-widget', limits.leadsPerWidget, (req) =>
@@ -102,13 +113,19 @@ export function embedRouter(service: EmbedService, limits: EmbedLimits): Router 
     res.status(result.duplicate ? 200 : 201).json(result);
   });
 
-  router.post('/leads', leadsPerIp, (req, res, next) => {
-    // Validate before counting against the widget, so a malformed body cannot use up its quota.
-    res.locals.leadBody = parseRequest(embedLeadBodySchema, req.body, 'body');
-    next();
-  }, leadsPerWidget, async (_req, res) => {
-    res.status(201).json(await service.recordLead(res.locals.leadBody, res.req.get('origin')));
-  });
+  router.post(
+    '/leads',
+    leadsPerIp,
+    (req, res, next) => {
+      // Validate before counting against the widget, so a malformed body cannot use up its quota.
+      res.locals.leadBody = parseRequest(embedLeadBodySchema, req.body, 'body');
+      next();
+    },
+    leadsPerWidget,
+    async (_req, res) => {
+      res.status(201).json(await service.recordLead(res.locals.leadBody, res.req.get('origin')));
+    },
+  );
 
   router.get('/assets/:assetId/:hash', async (req, res) => {
     const { assetId, hash } = parseRequest(assetParams, req.params, 'params');

@@ -21,7 +21,10 @@ import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '
 
 export interface EmbedService {
   widgetFor(publicKey: string, origin: string | undefined): Promise<EmbedWidget>;
-  recordRun(body: EmbedRunBody, origin: string | undefined): Promise<{ id: string; agreed: boolean; duplicate: boolean }>;
+  recordRun(
+    body: EmbedRunBody,
+    origin: string | undefined,
+  ): Promise<{ id: string; agreed: boolean; duplicate: boolean }>;
   recordLead(body: EmbedLeadBody, origin: string | undefined): Promise<{ id: number }>;
   /** Whether any live widget lets this origin embed it (for CORS preflight). */
   originKnown(origin: string): Promise<boolean>;
@@ -41,17 +44,24 @@ function close(a: number, b: number): boolean {
 }
 
 /** Where the client's result and the server's recomputation differ; null when they agree. */
-export function compareResults(client: EmbedRunBody['result'], server: CalculationResult): Record<string, unknown> | null {
+export function compareResults(
+  client: EmbedRunBody['result'],
+  server: CalculationResult,
+): Record<string, unknown> | null {
   const problems: Record<string, unknown> = {};
-  if (client.version !== server.version) problems.version = { client: client.version, server: server.version };
-  if (client.inputHash !== server.inputHash) problems.inputHash = { client: client.inputHash, server: server.inputHash };
+  if (client.version !== server.version)
+    problems.version = { client: client.version, server: server.version };
+  if (client.inputHash !== server.inputHash)
+    problems.inputHash = { client: client.inputHash, server: server.inputHash };
   const serverCodes = server.warnings.map((w) => w.code);
-  if (client.warnings.join(',') !== serverCodes.join(',')) problems.warnings = { client: client.warnings, server: serverCodes };
+  if (client.warnings.join(',') !== serverCodes.join(','))
+    problems.warnings = { client: client.warnings, server: serverCodes };
   const outputs: Record<string, unknown> = {};
   for (const k of new Set([...Object.keys(client.outputs), ...Object.keys(server.outputs)])) {
     const c = client.outputs[k];
     const s = server.outputs[k];
-    const same = c === undefined || s === undefined ? false : c === null || s === null ? c === s : close(c, s);
+    const same =
+      c === undefined || s === undefined ? false : c === null || s === null ? c === s : close(c, s);
     if (!same) outputs[k] = { client: c ?? null, server: s ?? null };
   }
   if (Object.keys(outputs).length) problems.outputs = outputs;
@@ -64,14 +74,21 @@ export function bodyHash(body: EmbedRunBody): string {
     .digest('hex');
 }
 
-export function createEmbedService(deps: { sequelize: Sequelize; mailer: Mailer; logger: Logger; publicUrl: string }): EmbedService {
+export function createEmbedService(deps: {
+  sequelize: Sequelize;
+  mailer: Mailer;
+  logger: Logger;
+  publicUrl: string;
+}): EmbedService {
   const { sequelize, mailer, logger, publicUrl } = deps;
 
   async function liveWidget(publicKey: string, origin: string | undefined): Promise<Widget> {
     const w = await Widget.findOne({ where: { publicKey } });
     if (!w || w.status !== 'live') throw notLive();
     if (!origin || !w.allowedOrigins.includes(origin.toLowerCase())) {
-      throw new AppError('forbidden', 'This site is not allowed to embed this widget', { origin: origin ?? null });
+      throw new AppError('forbidden', 'This site is not allowed to embed this widget', {
+        origin: origin ?? null,
+      });
     }
     return w;
   }
@@ -83,18 +100,26 @@ export function createEmbedService(deps: { sequelize: Sequelize; mailer: Mailer;
     for (const [id, s] of Object.entries(w.settings.inputs)) {
       if (s.mode === 'editable' || s.default === undefined) continue;
       const sent = body.inputs[id];
-      if (sent !== undefined && sent !== s.default) throw field(`body.inputs.${id}`, 'This input is fixed by the widget');
+      if (sent !== undefined && sent !== s.default)
+        throw field(`body.inputs.${id}`, 'This input is fixed by the widget');
     }
     try {
       return calculate(w.calculatorId, body.inputs);
     } catch (e) {
       if (!(e instanceof CalcInputError)) throw e;
       const fields = e.issues.map((i) => ({ field: `body.inputs.${i.field}`, message: i.message }));
-      throw new AppError('validation_failed', `Invalid request: check ${fields.map((f) => f.field).join(', ')}`, { fields });
+      throw new AppError(
+        'validation_failed',
+        `Invalid request: check ${fields.map((f) => f.field).join(', ')}`,
+        { fields },
+      );
     }
   }
 
-  async function sameOrConflict(id: string, hash: string): Promise<{ id: string; agreed: boolean; duplicate: true }> {
+  async function sameOrConflict(
+    id: string,
+    hash: string,
+  ): Promise<{ id: string; agreed: boolean; duplicate: true }> {
     const existing = await Run.findByPk(id, { attributes: ['id', 'bodyHash', 'agreed'] });
     if (!existing) throw new AppError('internal', 'run vanished after a duplicate key');
     if (existing.bodyHash !== hash) {
@@ -120,7 +145,10 @@ export function createEmbedService(deps: { sequelize: Sequelize; mailer: Mailer;
       const w = await liveWidget(publicKey, origin);
       let logoUrl: string | null = null;
       if (w.settings.look.logoAssetId !== null) {
-        const a = await Asset.findOne({ where: { id: w.settings.look.logoAssetId, organizationId: w.organizationId }, attributes: ['id', 'sha256'] });
+        const a = await Asset.findOne({
+          where: { id: w.settings.look.logoAssetId, organizationId: w.organizationId },
+          attributes: ['id', 'sha256'],
+        });
         logoUrl = a ? assetUrl(publicUrl, a) : null;
       }
       const { inputs, units, look, cautions, leadForm } = w.settings;
@@ -170,7 +198,9 @@ export function createEmbedService(deps: { sequelize: Sequelize; mailer: Mailer;
       };
       try {
         // Answered only once the run and its rollup counts have committed: an acknowledged run is stored.
-        await retryOnDeadlock(() => sequelize.transaction((transaction) => storeRuns(sequelize, [row], transaction)));
+        await retryOnDeadlock(() =>
+          sequelize.transaction((transaction) => storeRuns(sequelize, [row], transaction)),
+        );
       } catch (e) {
         if (e instanceof UniqueConstraintError) return sameOrConflict(body.id, hash);
         throw e;
@@ -186,12 +216,19 @@ export function createEmbedService(deps: { sequelize: Sequelize; mailer: Mailer;
       for (const id of leadFieldIds) {
         const mode = form.fields[id];
         const value = body.fields[id];
-        if (mode === 'required' && value === undefined) issues.push({ field: `body.fields.${id}`, message: 'Required' });
-        if (mode === 'off' && value !== undefined) issues.push({ field: `body.fields.${id}`, message: 'This widget does not ask for it' });
+        if (mode === 'required' && value === undefined)
+          issues.push({ field: `body.fields.${id}`, message: 'Required' });
+        if (mode === 'off' && value !== undefined)
+          issues.push({ field: `body.fields.${id}`, message: 'This widget does not ask for it' });
       }
-      if (body.sendCopy && !body.fields.email) issues.push({ field: 'body.fields.email', message: 'Needed to send you a copy' });
+      if (body.sendCopy && !body.fields.email)
+        issues.push({ field: 'body.fields.email', message: 'Needed to send you a copy' });
       if (issues.length) {
-        throw new AppError('validation_failed', `Invalid request: check ${issues.map((i) => i.field).join(', ')}`, { fields: issues });
+        throw new AppError(
+          'validation_failed',
+          `Invalid request: check ${issues.map((i) => i.field).join(', ')}`,
+          { fields: issues },
+        );
       }
       const run = await Run.findOne({ where: { id: body.runId, widgetId: w.id } });
       if (!run) throw field('body.runId', 'No run of this widget has this id');
@@ -199,11 +236,14 @@ export function createEmbedService(deps: { sequelize: Sequelize; mailer: Mailer;
       const lead = await sequelize.transaction(async (transaction) => {
         // One request per run: lock the run's row so two submissions cannot both pass the check, and
         // so a purge cannot delete it before the lead and its rollup count are stored.
-        const locked = await sequelize.query<RollupColumnsRow>(`SELECT ${ROLLUP_COLUMNS} FROM runs r WHERE r.id = ? FOR UPDATE`, {
-          replacements: [run.id],
-          type: QueryTypes.SELECT,
-          transaction,
-        });
+        const locked = await sequelize.query<RollupColumnsRow>(
+          `SELECT ${ROLLUP_COLUMNS} FROM runs r WHERE r.id = ? FOR UPDATE`,
+          {
+            replacements: [run.id],
+            type: QueryTypes.SELECT,
+            transaction,
+          },
+        );
         if (!locked[0]) throw field('body.runId', 'No run of this widget has this id');
         if (await Lead.count({ where: { runId: run.id }, transaction })) {
           throw new AppError('conflict', 'A request was already sent for this result', {
@@ -242,7 +282,16 @@ export function createEmbedService(deps: { sequelize: Sequelize; mailer: Mailer;
         await sendSafely(
           mailer,
           logger,
-          leadNotificationMail({ to, orgName: org?.name ?? '', widgetName: w.name, lead, link, calc, result, system: run.unitSystem }),
+          leadNotificationMail({
+            to,
+            orgName: org?.name ?? '',
+            widgetName: w.name,
+            lead,
+            link,
+            calc,
+            result,
+            system: run.unitSystem,
+          }),
           'lead notification',
         );
       }
@@ -250,7 +299,15 @@ export function createEmbedService(deps: { sequelize: Sequelize; mailer: Mailer;
         await sendSafely(
           mailer,
           logger,
-          resultCopyMail({ to: lead.email, orgName: org?.name ?? '', widgetName: w.name, calc, result, system: run.unitSystem, firmCautions: w.settings.cautions }),
+          resultCopyMail({
+            to: lead.email,
+            orgName: org?.name ?? '',
+            widgetName: w.name,
+            calc,
+            result,
+            system: run.unitSystem,
+            firmCautions: w.settings.cautions,
+          }),
           'result copy',
         );
       }

@@ -32,7 +32,10 @@ describe('GET /api/v1/health', () => {
   });
 
   it('refuses malformed JSON with 400, naming the body, without a stack trace', async () => {
-    const res = await request(app).post('/api/v1/health').set('Content-Type', 'application/json').send('{"a":');
+    const res = await request(app)
+      .post('/api/v1/health')
+      .set('Content-Type', 'application/json')
+      .send('{"a":');
     expect(res.status).toBe(400);
     const body = errorBodySchema.parse(res.body);
     expect(body.error.details).toEqual({ fields: [{ field: 'body', message: 'Malformed JSON' }] });

@@ -34,7 +34,13 @@ describe('two organisations', () => {
   let aRunId: string;
   let aLeadId: number;
   /** The ids of A's member, invitation, widget, run and lead, for the probes' path parameters. */
-  const aObjects = () => ({ userId: a.users.analyst.id, invitationId: aInvitationId, widgetId: aWidgetId, runId: aRunId, leadId: aLeadId });
+  const aObjects = () => ({
+    userId: a.users.analyst.id,
+    invitationId: aInvitationId,
+    widgetId: aWidgetId,
+    runId: aRunId,
+    leadId: aLeadId,
+  });
   let bOwner: TestClient;
   let outsider: TestClient;
 
@@ -48,11 +54,18 @@ describe('two organisations', () => {
         .post(`/orgs/${a.id}/invitations`, { email: uniqueEmail('pending'), role: 'analyst' })
         .expect(201)
     ).body.id;
-    aWidgetId = (await aOwner.post(`/orgs/${a.id}/widgets`, { name: 'Alder tube rise', calculatorId: 'tube-rise' }).expect(201)).body.id;
+    aWidgetId = (
+      await aOwner
+        .post(`/orgs/${a.id}/widgets`, { name: 'Alder tube rise', calculatorId: 'tube-rise' })
+        .expect(201)
+    ).body.id;
     // A run of A's, reported through the embed API, with a request for an assessment.
     const aLive = await liveWidget(aOwner, a.id, 'Alder live tube', 'tube-rise');
     aRunId = await reportRun(t.app, aLive, { diameter: 0.0008 });
-    aLeadId = await requestAssessment(t.app, aLive, aRunId, { name: 'Hester Quayle', email: 'hester.quayle@mail.example' });
+    aLeadId = await requestAssessment(t.app, aLive, aRunId, {
+      name: 'Hester Quayle',
+      email: 'hester.quayle@mail.example',
+    });
     bOwner = new TestClient(t.app);
     await bOwner.login(b.users.owner.email, b.users.owner.password);
     // Someone with an account and no organisation at all.
@@ -124,11 +137,19 @@ describe('two organisations', () => {
       items: Array<{ subject: string | null }>;
     };
     expect(audit.items.map((e) => e.subject).filter((s) => s !== null && aEmails.includes(s))).toEqual([]);
-    const runs = (await bOwner.get(`/orgs/${b.id}/runs?pageSize=200`).expect(200)).body as { items: Array<{ id: string }>; total: number };
+    const runs = (await bOwner.get(`/orgs/${b.id}/runs?pageSize=200`).expect(200)).body as {
+      items: Array<{ id: string }>;
+      total: number;
+    };
     expect(runs).toEqual({ items: [], total: 0 });
-    const leads = (await bOwner.get(`/orgs/${b.id}/leads?pageSize=200`).expect(200)).body as { items: Array<{ id: number }>; total: number };
+    const leads = (await bOwner.get(`/orgs/${b.id}/leads?pageSize=200`).expect(200)).body as {
+      items: Array<{ id: number }>;
+      total: number;
+    };
     expect(leads).toEqual({ items: [], total: 0 });
-    const usage = (await bOwner.get(`/orgs/${b.id}/usage/summary`).expect(200)).body as { totals: { runs: number } };
+    const usage = (await bOwner.get(`/orgs/${b.id}/usage/summary`).expect(200)).body as {
+      totals: { runs: number };
+    };
     expect(usage.totals.runs).toBe(0);
     const csv = await bOwner.get(`/orgs/${b.id}/runs/export`).expect(200);
     expect(csv.text).not.toContain(aRunId);

@@ -1,7 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { leadDetailSchema, leadListResponseSchema, leadSchema, runDetailSchema } from '@wickstone/contracts';
-import { createTestApp, seedOrgWithTeam, TestClient, type FixtureOrg, type TestApp } from '../testing/index.js';
+import {
+  createTestApp,
+  seedOrgWithTeam,
+  TestClient,
+  type FixtureOrg,
+  type TestApp,
+} from '../testing/index.js';
 import { parseCsv, UTF8_BOM } from '../export/csv.js';
 import { fieldsOf, liveWidget, reportRun, requestAssessment, type FixtureWidget } from '../usage/fixtures.js';
 import { rollupsFromRaw, storedRollups } from '../usage/rollups.js';
@@ -15,17 +21,32 @@ describe('leads', () => {
   let otherAnalyst: TestClient;
   let tube: FixtureWidget;
   let soil: FixtureWidget;
-  const lead: Record<'hester' | 'formula' | 'priya' | 'fenwick', number> = { hester: 0, formula: 0, priya: 0, fenwick: 0 };
+  const lead: Record<'hester' | 'formula' | 'priya' | 'fenwick', number> = {
+    hester: 0,
+    formula: 0,
+    priya: 0,
+    fenwick: 0,
+  };
   const runOf: Record<string, string> = {};
 
-  const list = async (query: string, client = analyst) => leadListResponseSchema.parse((await client.get(`/orgs/${org.id}/leads?${query}`).expect(200)).body);
+  const list = async (query: string, client = analyst) =>
+    leadListResponseSchema.parse((await client.get(`/orgs/${org.id}/leads?${query}`).expect(200)).body);
   const ids = async (query: string) => (await list(query)).items.map((l) => l.id);
   /** Every row of the other organisation's runs and leads, to show an action here changed none of them. */
   const otherRows = async () =>
     JSON.stringify([
-      await t.db.sequelize.query('SELECT * FROM leads WHERE organization_id = ? ORDER BY id', { replacements: [other.id], type: QueryTypes.SELECT }),
-      await t.db.sequelize.query('SELECT * FROM runs WHERE organization_id = ? ORDER BY id', { replacements: [other.id], type: QueryTypes.SELECT }),
-      await t.db.sequelize.query('SELECT * FROM run_daily WHERE organization_id = ? ORDER BY day', { replacements: [other.id], type: QueryTypes.SELECT }),
+      await t.db.sequelize.query('SELECT * FROM leads WHERE organization_id = ? ORDER BY id', {
+        replacements: [other.id],
+        type: QueryTypes.SELECT,
+      }),
+      await t.db.sequelize.query('SELECT * FROM runs WHERE organization_id = ? ORDER BY id', {
+        replacements: [other.id],
+        type: QueryTypes.SELECT,
+      }),
+      await t.db.sequelize.query('SELECT * FROM run_daily WHERE organization_id = ? ORDER BY day', {
+        replacements: [other.id],
+        type: QueryTypes.SELECT,
+      }),
     ]);
 
   beforeAll(async () => {
@@ -50,31 +71,59 @@ describe('leads', () => {
     soil = await liveWidget(owner, org.id, 'Slab check', 'soil-capillary-rise', undefined, quiet);
     const fenwick = await liveWidget(otherOwner, other.id, 'Fenwick tube', 'tube-rise', undefined, quiet);
 
-    const ask = async (key: keyof typeof lead, w: FixtureWidget, inputs: Record<string, number>, fields: Record<string, string>) => {
+    const ask = async (
+      key: keyof typeof lead,
+      w: FixtureWidget,
+      inputs: Record<string, number>,
+      fields: Record<string, string>,
+    ) => {
       runOf[key] = await reportRun(t.app, w, inputs);
       lead[key] = await requestAssessment(t.app, w, runOf[key]!, fields);
     };
-    await ask('hester', tube, { diameter: 0.0008 }, {
-      name: 'Hester Quayle',
-      email: 'hester.quayle@mail.example',
-      company: 'Quayle Holdings',
-      message: 'Damp along the north wall, up to 1.2 m.\r\nSecond line, with a "quote".',
-      siteAddress: '4 Mill Lane, Ashby Parva',
-    });
-    await ask('formula', tube, { diameter: 0.004 }, {
-      name: '=HYPERLINK("http://evil.example","click")',
-      email: 'owain.b@post.example',
-      company: '+44 Builders',
-    });
-    await ask('priya', soil, { d10: 0.0001, waterTableDepth: 1 }, { name: 'Priya Venn', email: 'priya.venn@homes.example', company: 'Venn & Co 50%' });
-    await ask('fenwick', fenwick, { diameter: 0.0008 }, { name: 'Caspar Doyle', email: 'c.doyle@builders.example' });
+    await ask(
+      'hester',
+      tube,
+      { diameter: 0.0008 },
+      {
+        name: 'Hester Quayle',
+        email: 'hester.quayle@mail.example',
+        company: 'Quayle Holdings',
+        message: 'Damp along the north wall, up to 1.2 m.\r\nSecond line, with a "quote".',
+        siteAddress: '4 Mill Lane, Ashby Parva',
+      },
+    );
+    await ask(
+      'formula',
+      tube,
+      { diameter: 0.004 },
+      {
+        name: '=HYPERLINK("http://evil.example","click")',
+        email: 'owain.b@post.example',
+        company: '+44 Builders',
+      },
+    );
+    await ask(
+      'priya',
+      soil,
+      { d10: 0.0001, waterTableDepth: 1 },
+      { name: 'Priya Venn', email: 'priya.venn@homes.example', company: 'Venn & Co 50%' },
+    );
+    await ask(
+      'fenwick',
+      fenwick,
+      { diameter: 0.0008 },
+      { name: 'Caspar Doyle', email: 'c.doyle@builders.example' },
+    );
     // Spread the received times over three days, so the date filters have something to tell apart.
     for (const [key, at] of [
       ['hester', '2026-11-01 09:00:00'],
       ['formula', '2026-11-02 09:00:00'],
       ['priya', '2026-11-03 23:59:59.999'],
     ] as const) {
-      await t.db.sequelize.query('UPDATE leads SET created_at = ? WHERE id = ?', { replacements: [at, lead[key]], type: QueryTypes.UPDATE });
+      await t.db.sequelize.query('UPDATE leads SET created_at = ? WHERE id = ?', {
+        replacements: [at, lead[key]],
+        type: QueryTypes.UPDATE,
+      });
     }
   });
   afterAll(() => t.close());
@@ -119,7 +168,10 @@ describe('leads', () => {
         ['q=', 'query.q'],
         ['from=2026-11-03&to=2026-11-01', 'query.to'],
       ]) {
-        expect(fieldsOf((await analyst.get(`/orgs/${org.id}/leads?${query}`).expect(400)).body), query).toEqual([field]);
+        expect(
+          fieldsOf((await analyst.get(`/orgs/${org.id}/leads?${query}`).expect(400)).body),
+          query,
+        ).toEqual([field]);
       }
     });
 
@@ -132,9 +184,17 @@ describe('leads', () => {
 
   describe('working a lead', () => {
     it('moves it on, assigns it to a member and keeps notes', async () => {
-      const before = leadSchema.parse((await analyst.get(`/orgs/${org.id}/leads/${lead.formula}`).expect(200)).body);
+      const before = leadSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/leads/${lead.formula}`).expect(200)).body,
+      );
       await new Promise((r) => setTimeout(r, 5));
-      const res = await analyst.patch(`/orgs/${org.id}/leads/${lead.formula}`, { status: 'contacted', assigneeId: org.users.analyst.id, notes: 'Called back; survey booked.' }).expect(200);
+      const res = await analyst
+        .patch(`/orgs/${org.id}/leads/${lead.formula}`, {
+          status: 'contacted',
+          assigneeId: org.users.analyst.id,
+          notes: 'Called back; survey booked.',
+        })
+        .expect(200);
       const after = leadSchema.parse(res.body);
       expect(after).toMatchObject({
         status: 'contacted',
@@ -145,12 +205,20 @@ describe('leads', () => {
       expect(await ids('status=contacted')).toEqual([lead.formula]);
       expect(await ids(`assigneeId=${org.users.analyst.id}`)).toEqual([lead.formula]);
       expect(await ids('assigneeId=none')).toEqual([lead.priya, lead.hester]);
-      const unassigned = leadSchema.parse((await analyst.patch(`/orgs/${org.id}/leads/${lead.formula}`, { assigneeId: null, notes: '' }).expect(200)).body);
+      const unassigned = leadSchema.parse(
+        (
+          await analyst
+            .patch(`/orgs/${org.id}/leads/${lead.formula}`, { assigneeId: null, notes: '' })
+            .expect(200)
+        ).body,
+      );
       expect(unassigned).toMatchObject({ status: 'contacted', assignee: null, notes: null });
     });
 
     it('refuses an assignee who is not a member, bad statuses and long notes, naming the field and changing nothing', async () => {
-      const before = await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', { type: QueryTypes.SELECT });
+      const before = await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', {
+        type: QueryTypes.SELECT,
+      });
       for (const [body, field] of [
         [{ assigneeId: other.users.analyst.id }, 'body.assigneeId'],
         [{ assigneeId: 4_000_000_000 }, 'body.assigneeId'],
@@ -162,7 +230,9 @@ describe('leads', () => {
         const res = await analyst.patch(`/orgs/${org.id}/leads/${lead.hester}`, body).expect(400);
         expect(fieldsOf(res.body), JSON.stringify(body).slice(0, 60)).toEqual([field]);
       }
-      expect(await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', { type: QueryTypes.SELECT })).toEqual(before);
+      expect(
+        await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', { type: QueryTypes.SELECT }),
+      ).toEqual(before);
       await analyst.patch(`/orgs/${org.id}/leads/${lead.hester}`, { notes: 'x'.repeat(5000) }).expect(200);
     });
 
@@ -173,7 +243,9 @@ describe('leads', () => {
     });
 
     it('opens with the run it came from and its working', async () => {
-      const d = leadDetailSchema.parse((await analyst.get(`/orgs/${org.id}/leads/${lead.priya}`).expect(200)).body);
+      const d = leadDetailSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/leads/${lead.priya}`).expect(200)).body,
+      );
       expect(d.run?.id).toBe(runOf.priya);
       expect(d.run?.widget.id).toBe(soil.id);
       expect((d.run?.serverResult as { working: unknown[] }).working.length).toBeGreaterThan(0);
@@ -183,10 +255,19 @@ describe('leads', () => {
 
   describe('erasing personal data', () => {
     it("erases the visitor's details and the notes, keeps status and times, unlinks the run and nothing of another organisation changes", async () => {
-      await analyst.patch(`/orgs/${org.id}/leads/${lead.hester}`, { status: 'qualified', notes: 'Hester prefers mornings.' }).expect(200);
-      const before = leadSchema.parse((await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body);
+      await analyst
+        .patch(`/orgs/${org.id}/leads/${lead.hester}`, {
+          status: 'qualified',
+          notes: 'Hester prefers mornings.',
+        })
+        .expect(200);
+      const before = leadSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body,
+      );
       const theirs = await otherRows();
-      const erased = leadSchema.parse((await analyst.delete(`/orgs/${org.id}/leads/${lead.hester}/personal-data`).expect(200)).body);
+      const erased = leadSchema.parse(
+        (await analyst.delete(`/orgs/${org.id}/leads/${lead.hester}/personal-data`).expect(200)).body,
+      );
       expect(erased).toMatchObject({
         id: lead.hester,
         status: 'qualified',
@@ -202,30 +283,51 @@ describe('leads', () => {
         updatedAt: before.updatedAt,
       });
       expect(erased.erasedAt).toEqual(expect.any(String));
-      const row = await t.db.sequelize.query<Record<string, unknown>>('SELECT * FROM leads WHERE id = ?', { replacements: [lead.hester], type: QueryTypes.SELECT });
+      const row = await t.db.sequelize.query<Record<string, unknown>>('SELECT * FROM leads WHERE id = ?', {
+        replacements: [lead.hester],
+        type: QueryTypes.SELECT,
+      });
       expect(JSON.stringify(row)).not.toMatch(/Hester|Quayle|Mill Lane|mornings/);
       // The run stays, no longer linked; the rollups stop counting it as having led to a lead.
-      const run = runDetailSchema.parse((await analyst.get(`/orgs/${org.id}/runs/${runOf.hester}`).expect(200)).body);
+      const run = runDetailSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/runs/${runOf.hester}`).expect(200)).body,
+      );
       expect(run).toMatchObject({ leadId: null, lead: null });
-      const [stored, raw] = await Promise.all([storedRollups(t.db.sequelize), rollupsFromRaw(t.db.sequelize)]);
+      const [stored, raw] = await Promise.all([
+        storedRollups(t.db.sequelize),
+        rollupsFromRaw(t.db.sequelize),
+      ]);
       expect(stored).toEqual(raw);
       expect(await otherRows()).toBe(theirs);
       // Still listed, as erased, and no longer found by what was erased.
-      expect((await list('')).items.find((l) => l.id === lead.hester)).toMatchObject({ erasedAt: erased.erasedAt, status: 'qualified' });
+      expect((await list('')).items.find((l) => l.id === lead.hester)).toMatchObject({
+        erasedAt: erased.erasedAt,
+        status: 'qualified',
+      });
       expect(await ids('q=Quayle')).toEqual([]);
-      const detail = leadDetailSchema.parse((await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body);
+      const detail = leadDetailSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body,
+      );
       expect(detail.run).toBeNull();
     });
 
     it('erasing again changes nothing; another organisation cannot erase it; a developer may not', async () => {
-      const first = leadSchema.parse((await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body);
-      const again = leadSchema.parse((await analyst.delete(`/orgs/${org.id}/leads/${lead.hester}/personal-data`).expect(200)).body);
+      const first = leadSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body,
+      );
+      const again = leadSchema.parse(
+        (await analyst.delete(`/orgs/${org.id}/leads/${lead.hester}/personal-data`).expect(200)).body,
+      );
       expect(again).toEqual(first);
-      const before = await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', { type: QueryTypes.SELECT });
+      const before = await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', {
+        type: QueryTypes.SELECT,
+      });
       await otherAnalyst.delete(`/orgs/${other.id}/leads/${lead.priya}/personal-data`).expect(404);
       await otherAnalyst.delete(`/orgs/${org.id}/leads/${lead.priya}/personal-data`).expect(404);
       await developer.delete(`/orgs/${org.id}/leads/${lead.priya}/personal-data`).expect(403);
-      expect(await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', { type: QueryTypes.SELECT })).toEqual(before);
+      expect(
+        await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', { type: QueryTypes.SELECT }),
+      ).toEqual(before);
     });
   });
 
@@ -233,10 +335,29 @@ describe('leads', () => {
     it('downloads the filtered leads with a header row, quoted where needed and guarded against formulas', async () => {
       const res = await analyst.get(`/orgs/${org.id}/leads/export`).expect(200);
       expect(res.headers['content-type']).toMatch(/^text\/csv; charset=utf-8/);
-      expect(res.headers['content-disposition']).toMatch(/^attachment; filename="t-[0-9a-f]+-leads-\d{4}-\d{2}-\d{2}\.csv"$/);
+      expect(res.headers['content-disposition']).toMatch(
+        /^attachment; filename="t-[0-9a-f]+-leads-\d{4}-\d{2}-\d{2}\.csv"$/,
+      );
       expect(res.text.startsWith(UTF8_BOM)).toBe(true);
       const [header, ...rows] = parseCsv(res.text);
-      expect(header).toEqual(['Lead', 'Received (UTC)', 'Updated (UTC)', 'Status', 'Widget', 'Name', 'E-mail', 'Company', 'Phone', 'Site address', 'Message', 'Assignee', 'Notes', 'Site', 'Run', 'Erased (UTC)']);
+      expect(header).toEqual([
+        'Lead',
+        'Received (UTC)',
+        'Updated (UTC)',
+        'Status',
+        'Widget',
+        'Name',
+        'E-mail',
+        'Company',
+        'Phone',
+        'Site address',
+        'Message',
+        'Assignee',
+        'Notes',
+        'Site',
+        'Run',
+        'Erased (UTC)',
+      ]);
       expect(rows.map((r) => Number(r[0]))).toEqual([lead.priya, lead.formula, lead.hester]);
       const formula = rows[1]!;
       expect(formula[5]).toBe(`'=HYPERLINK("http://evil.example","click")`);
@@ -248,12 +369,18 @@ describe('leads', () => {
       expect(erased.slice(5, 11)).toEqual(['', '', '', '', '', '']);
       expect(erased[3]).toBe('qualified');
       expect(erased[15]).toMatch(/^\d{4}-\d{2}-\d{2}T/);
-      expect((await analyst.get(`/orgs/${org.id}/leads/export?status=new`).expect(200)).text.split('\r\n').length).toBe(3);
+      expect(
+        (await analyst.get(`/orgs/${org.id}/leads/export?status=new`).expect(200)).text.split('\r\n').length,
+      ).toBe(3);
     });
 
     it('keeps a message with line breaks, commas and quotes in one cell', async () => {
-      await analyst.patch(`/orgs/${org.id}/leads/${lead.priya}`, { notes: 'Rang twice,\r\nno answer; "try email"' }).expect(200);
-      const rows = parseCsv((await analyst.get(`/orgs/${org.id}/leads/export?widgetId=${soil.id}`).expect(200)).text);
+      await analyst
+        .patch(`/orgs/${org.id}/leads/${lead.priya}`, { notes: 'Rang twice,\r\nno answer; "try email"' })
+        .expect(200);
+      const rows = parseCsv(
+        (await analyst.get(`/orgs/${org.id}/leads/export?widgetId=${soil.id}`).expect(200)).text,
+      );
       expect(rows).toHaveLength(2);
       expect(rows[1]![12]).toBe('Rang twice,\r\nno answer; "try email"');
       expect(rows[1]![7]).toBe('Venn & Co 50%');

@@ -1,5 +1,12 @@
 import { Op, QueryTypes, type Order, type Sequelize, type WhereOptions } from 'sequelize';
-import type { Lead as LeadDto, LeadDetail, LeadFilters, LeadListQuery, LeadListResponse, UpdateLeadBody } from '@wickstone/contracts';
+import type {
+  Lead as LeadDto,
+  LeadDetail,
+  LeadFilters,
+  LeadListQuery,
+  LeadListResponse,
+  UpdateLeadBody,
+} from '@wickstone/contracts';
 import { Lead, Membership, User, Widget } from '../db/models/index.js';
 import { AppError, fieldError, notFound } from '../errors.js';
 import { keysetCsv } from '../export/csv.js';
@@ -36,7 +43,13 @@ function leadsWhere(orgId: number, f: LeadFilters): WhereOptions<Lead> {
   if (f.to) and.push({ createdAt: { [Op.lt]: new Date(`${nextDay(f.to)}T00:00:00Z`) } });
   if (f.q) {
     const pattern = likeContains(f.q);
-    and.push({ [Op.or]: [{ name: { [Op.like]: pattern } }, { email: { [Op.like]: pattern } }, { company: { [Op.like]: pattern } }] });
+    and.push({
+      [Op.or]: [
+        { name: { [Op.like]: pattern } },
+        { email: { [Op.like]: pattern } },
+        { company: { [Op.like]: pattern } },
+      ],
+    });
   }
   return { [Op.and]: and };
 }
@@ -44,19 +57,33 @@ function leadsWhere(orgId: number, f: LeadFilters): WhereOptions<Lead> {
 const sortOf = (sort: LeadFilters['sort']) => {
   const column = sort.endsWith('updatedAt') ? ('updatedAt' as const) : ('createdAt' as const);
   const dir = sort.startsWith('-') ? ('DESC' as const) : ('ASC' as const);
-  return { column, dir, order: [[column, dir], ['id', dir]] as Order };
+  return {
+    column,
+    dir,
+    order: [
+      [column, dir],
+      ['id', dir],
+    ] as Order,
+  };
 };
 
 export function createLeadService(deps: { sequelize: Sequelize; runs: RunService }): LeadService {
   const { sequelize, runs } = deps;
 
   async function lookups(orgId: number, leads: Lead[]) {
-    const assigneeIds = [...new Set(leads.map((l) => l.assigneeId).filter((id): id is number => id !== null))];
+    const assigneeIds = [
+      ...new Set(leads.map((l) => l.assigneeId).filter((id): id is number => id !== null)),
+    ];
     const [widgets, users] = await Promise.all([
       Widget.findAll({ where: { organizationId: orgId }, attributes: ['id', 'name'] }),
-      assigneeIds.length ? User.findAll({ where: { id: assigneeIds }, attributes: ['id', 'name', 'email'] }) : Promise.resolve([]),
+      assigneeIds.length
+        ? User.findAll({ where: { id: assigneeIds }, attributes: ['id', 'name', 'email'] })
+        : Promise.resolve([]),
     ]);
-    return { widgets: new Map(widgets.map((w) => [w.id, w.name])), users: new Map(users.map((u) => [u.id, u])) };
+    return {
+      widgets: new Map(widgets.map((w) => [w.id, w.name])),
+      users: new Map(users.map((u) => [u.id, u])),
+    };
   }
 
   function toDto(l: Lead, look: Awaited<ReturnType<typeof lookups>>): LeadDto {
@@ -125,7 +152,8 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
       const changes: Partial<Pick<Lead, 'status' | 'assigneeId' | 'notes'>> = {};
       if (body.status !== undefined) changes.status = body.status;
       if (body.assigneeId !== undefined) changes.assigneeId = body.assigneeId;
-      if (body.notes !== undefined) changes.notes = body.notes === null || body.notes.trim() === '' ? null : body.notes;
+      if (body.notes !== undefined)
+        changes.notes = body.notes === null || body.notes.trim() === '' ? null : body.notes;
       if (Object.keys(changes).length) await lead.update(changes);
       return dtoOf(orgId, lead);
     },
@@ -143,10 +171,15 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
                 )
               )[0]
             : undefined;
-          const lead = await Lead.findOne({ where: { id: leadId, organizationId: orgId }, lock: transaction.LOCK.UPDATE, transaction });
+          const lead = await Lead.findOne({
+            where: { id: leadId, organizationId: orgId },
+            lock: transaction.LOCK.UPDATE,
+            transaction,
+          });
           if (!lead) throw notFound('Lead');
           // A link only ever goes from a run to none, so a lead still linked is linked to the run locked above.
-          if (lead.runId && run && lead.runId === run.id) await countLeads(sequelize, [rollupRunOf(run)], -1, transaction);
+          if (lead.runId && run && lead.runId === run.id)
+            await countLeads(sequelize, [rollupRunOf(run)], -1, transaction);
           await lead.update(
             {
               name: null,
@@ -173,12 +206,39 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
       const { column, dir, order } = sortOf(f.sort);
       const after = dir === 'DESC' ? Op.lt : Op.gt;
       yield* keysetCsv<Lead, { at: Date; id: number }>({
-        header: ['Lead', 'Received (UTC)', 'Updated (UTC)', 'Status', 'Widget', 'Name', 'E-mail', 'Company', 'Phone', 'Site address', 'Message', 'Assignee', 'Notes', 'Site', 'Run', 'Erased (UTC)'],
+        header: [
+          'Lead',
+          'Received (UTC)',
+          'Updated (UTC)',
+          'Status',
+          'Widget',
+          'Name',
+          'E-mail',
+          'Company',
+          'Phone',
+          'Site address',
+          'Message',
+          'Assignee',
+          'Notes',
+          'Site',
+          'Run',
+          'Erased (UTC)',
+        ],
         chunk: EXPORT_CHUNK,
         page: (cursor) =>
           Lead.findAll({
             where: cursor
-              ? { [Op.and]: [where, { [Op.or]: [{ [column]: { [after]: cursor.at } }, { [column]: cursor.at, id: { [after]: cursor.id } }] }] }
+              ? {
+                  [Op.and]: [
+                    where,
+                    {
+                      [Op.or]: [
+                        { [column]: { [after]: cursor.at } },
+                        { [column]: cursor.at, id: { [after]: cursor.id } },
+                      ],
+                    },
+                  ],
+                }
               : where,
             order,
             limit: EXPORT_CHUNK,
@@ -188,7 +248,24 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
           const look = await lookups(orgId, rows);
           return rows.map((row) => {
             const l = toDto(row, look);
-            return [l.id, l.createdAt, l.updatedAt, l.status, l.widget.name, l.name, l.email, l.company, l.phone, l.siteAddress, l.message, l.assignee?.name ?? null, l.notes, l.origin, l.runId, l.erasedAt];
+            return [
+              l.id,
+              l.createdAt,
+              l.updatedAt,
+              l.status,
+              l.widget.name,
+              l.name,
+              l.email,
+              l.company,
+              l.phone,
+              l.siteAddress,
+              l.message,
+              l.assignee?.name ?? null,
+              l.notes,
+              l.origin,
+              l.runId,
+              l.erasedAt,
+            ];
           });
         },
       });

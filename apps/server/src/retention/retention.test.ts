@@ -2,7 +2,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { retentionSchema } from '@wickstone/contracts';
 import { createLogger } from '../logger.js';
-import { createTestApp, seedOrgWithTeam, TestClient, type FixtureOrg, type TestApp } from '../testing/index.js';
+import {
+  createTestApp,
+  seedOrgWithTeam,
+  TestClient,
+  type FixtureOrg,
+  type TestApp,
+} from '../testing/index.js';
 import { storeLeadsForRuns, type RunRow } from '../runs/store.js';
 import { fieldsOf, liveWidget, runAt, store, type FixtureWidget } from '../usage/fixtures.js';
 import { rollupsFromRaw, storedRollups } from '../usage/rollups.js';
@@ -51,20 +57,36 @@ describe('retention', () => {
 
   describe('the setting', () => {
     it('keeps everything until an owner or admin chooses a period, which every member can read', async () => {
-      expect((await analyst.get(`/orgs/${a.id}/settings/retention`).expect(200)).body).toEqual({ months: null, cutoff: null });
-      const set = retentionSchema.parse((await admin.patch(`/orgs/${a.id}/settings/retention`, { months: 6 }).expect(200)).body);
+      expect((await analyst.get(`/orgs/${a.id}/settings/retention`).expect(200)).body).toEqual({
+        months: null,
+        cutoff: null,
+      });
+      const set = retentionSchema.parse(
+        (await admin.patch(`/orgs/${a.id}/settings/retention`, { months: 6 }).expect(200)).body,
+      );
       expect(set.months).toBe(6);
       expect(set.cutoff).toBe(retentionCutoff(6, new Date()).toISOString());
-      expect((await analyst.get(`/orgs/${a.id}/settings/retention`).expect(200)).body).toMatchObject({ months: 6 });
+      expect((await analyst.get(`/orgs/${a.id}/settings/retention`).expect(200)).body).toMatchObject({
+        months: 6,
+      });
       await analyst.patch(`/orgs/${a.id}/settings/retention`, { months: 1 }).expect(403);
-      expect((await admin.patch(`/orgs/${a.id}/settings/retention`, { months: null }).expect(200)).body).toEqual({ months: null, cutoff: null });
+      expect(
+        (await admin.patch(`/orgs/${a.id}/settings/retention`, { months: null }).expect(200)).body,
+      ).toEqual({ months: null, cutoff: null });
     });
 
     it('names a period outside 1 to 120 whole months', async () => {
       for (const body of [{ months: 0 }, { months: 121 }, { months: 1.5 }, { months: '6' }, {}]) {
-        expect(fieldsOf((await admin.patch(`/orgs/${a.id}/settings/retention`, body).expect(400)).body), JSON.stringify(body)).toEqual(['body.months']);
+        expect(
+          fieldsOf((await admin.patch(`/orgs/${a.id}/settings/retention`, body).expect(400)).body),
+          JSON.stringify(body),
+        ).toEqual(['body.months']);
       }
-      expect(fieldsOf((await admin.patch(`/orgs/${a.id}/settings/retention`, { months: 3, days: 2 }).expect(400)).body)).toEqual(['body.days']);
+      expect(
+        fieldsOf(
+          (await admin.patch(`/orgs/${a.id}/settings/retention`, { months: 3, days: 2 }).expect(400)).body,
+        ),
+      ).toEqual(['body.days']);
     });
   });
 
@@ -72,7 +94,11 @@ describe('retention', () => {
     it('deletes runs and leads older than the period, per organisation, keeping the rollups equal to what is left', async () => {
       const now = new Date();
       const ago = (days: number) => new Date(now.getTime() - days * DAY).toISOString();
-      const old = [runAt(wa, ago(200), { diameter: 0.004 }), runAt(wa, ago(120), { diameter: 0.0008 }), ...Array.from({ length: 7 }, (_, i) => runAt(wa, ago(150 + i), { diameter: 0.03 }))];
+      const old = [
+        runAt(wa, ago(200), { diameter: 0.004 }),
+        runAt(wa, ago(120), { diameter: 0.0008 }),
+        ...Array.from({ length: 7 }, (_, i) => runAt(wa, ago(150 + i), { diameter: 0.03 })),
+      ];
       const recent = [runAt(wa, ago(30), { diameter: 0.004 }), runAt(wa, ago(1), { diameter: 0.0008 })];
       const theirs = [runAt(wb, ago(300), { diameter: 0.004 }), runAt(wb, ago(2), { diameter: 0.0008 })];
       await store(t.db.sequelize, [...old, ...recent, ...theirs]);
@@ -110,9 +136,14 @@ describe('retention', () => {
       const result = await retention.purgeAll(now);
       expect(result).toEqual({ organizations: 1, runs: old.length, leads: 1 });
 
-      const runsLeft = await t.db.sequelize.query<{ id: string }>('SELECT id FROM runs ORDER BY id', { type: QueryTypes.SELECT });
+      const runsLeft = await t.db.sequelize.query<{ id: string }>('SELECT id FROM runs ORDER BY id', {
+        type: QueryTypes.SELECT,
+      });
       expect(runsLeft.map((r) => r.id)).toEqual([...recent, ...theirs].map((r) => r.id).sort());
-      const leadsLeft = await t.db.sequelize.query<{ name: string; run_id: string | null }>('SELECT name, run_id FROM leads ORDER BY name', { type: QueryTypes.SELECT });
+      const leadsLeft = await t.db.sequelize.query<{ name: string; run_id: string | null }>(
+        'SELECT name, run_id FROM leads ORDER BY name',
+        { type: QueryTypes.SELECT },
+      );
       expect(leadsLeft).toEqual([
         { name: 'Late request', run_id: null },
         { name: 'Recent request', run_id: recent[0]!.id },
@@ -120,7 +151,9 @@ describe('retention', () => {
       ]);
       expect(await storedRollups(t.db.sequelize)).toEqual(await rollupsFromRaw(t.db.sequelize));
       // The other organisation kept no period, so its year-old run and request are still there.
-      const theirRollups = (await storedRollups(t.db.sequelize)).daily.filter((d) => d.organization_id === b.id);
+      const theirRollups = (await storedRollups(t.db.sequelize)).daily.filter(
+        (d) => d.organization_id === b.id,
+      );
       expect(theirRollups.map((d) => d.runs)).toEqual([1, 1]);
 
       // Nothing more to do the second time.
@@ -136,7 +169,10 @@ describe('retention', () => {
           return { organizations: 0, runs: 0, leads: 0 };
         },
       };
-      const schedule = startRetentionSchedule(counting, createLogger(t.db.config), { firstDelayMs: 0, intervalMs: 10 });
+      const schedule = startRetentionSchedule(counting, createLogger(t.db.config), {
+        firstDelayMs: 0,
+        intervalMs: 10,
+      });
       await new Promise((r) => setTimeout(r, 100));
       schedule.stop();
       const seen = calls;

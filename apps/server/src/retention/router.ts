@@ -4,9 +4,13 @@ import type { RetentionService } from './service.js';
 
 export function retentionRoutes(routes: ApiRoutes, retention: RetentionService): void {
   // Every member may see how long usage and leads are kept; owners and admins choose it.
-  routes.get('/orgs/:orgId/settings/retention', { access: 'org:read', params: orgParamsSchema }, async ({ org }) => ({
-    body: await retention.get(org.id),
-  }));
+  routes.get(
+    '/orgs/:orgId/settings/retention',
+    { access: 'org:read', params: orgParamsSchema },
+    async ({ org }) => ({
+      body: await retention.get(org.id),
+    }),
+  );
 
   routes.patch(
     '/orgs/:orgId/settings/retention',

@@ -2,7 +2,13 @@ import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { Retention } from '@wickstone/contracts';
 import { OrganizationSetting } from '../db/models/index.js';
 import { retryOnDeadlock } from '../runs/store.js';
-import { countLeads, removeRuns, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
+import {
+  countLeads,
+  removeRuns,
+  ROLLUP_COLUMNS,
+  rollupRunOf,
+  type RollupColumnsRow,
+} from '../usage/rollups.js';
 
 export interface PurgeResult {
   runs: number;
@@ -69,7 +75,11 @@ export function createRetentionService(deps: { sequelize: Sequelize; chunkSize: 
           type: QueryTypes.UPDATE,
           transaction,
         });
-        await sequelize.query('DELETE FROM runs WHERE organization_id = ? AND id IN (?)', { replacements: [orgId, ids], type: QueryTypes.DELETE, transaction });
+        await sequelize.query('DELETE FROM runs WHERE organization_id = ? AND id IN (?)', {
+          replacements: [orgId, ids],
+          type: QueryTypes.DELETE,
+          transaction,
+        });
         return rows.length;
       }),
     );
@@ -89,13 +99,25 @@ export function createRetentionService(deps: { sequelize: Sequelize; chunkSize: 
         // lock such runs before the leads, the order every other writer uses, and uncount them.
         const runIds = batch.map((l) => l.run_id).filter((id): id is string => id !== null);
         const runs = runIds.length
-          ? await sel<LockedRun>(`SELECT r.id, ${ROLLUP_COLUMNS} FROM runs r WHERE r.id IN (?) FOR UPDATE`, [runIds], transaction)
+          ? await sel<LockedRun>(
+              `SELECT r.id, ${ROLLUP_COLUMNS} FROM runs r WHERE r.id IN (?) FOR UPDATE`,
+              [runIds],
+              transaction,
+            )
           : [];
-        const locked = await sel<{ id: number; run_id: string | null }>('SELECT id, run_id FROM leads WHERE id IN (?) FOR UPDATE', [ids], transaction);
+        const locked = await sel<{ id: number; run_id: string | null }>(
+          'SELECT id, run_id FROM leads WHERE id IN (?) FOR UPDATE',
+          [ids],
+          transaction,
+        );
         const stillLinked = new Set(locked.map((l) => l.run_id));
         const linkedRuns = runs.filter((r) => stillLinked.has(r.id));
         if (linkedRuns.length) await countLeads(sequelize, linkedRuns.map(rollupRunOf), -1, transaction);
-        await sequelize.query('DELETE FROM leads WHERE organization_id = ? AND id IN (?)', { replacements: [orgId, ids], type: QueryTypes.DELETE, transaction });
+        await sequelize.query('DELETE FROM leads WHERE organization_id = ? AND id IN (?)', {
+          replacements: [orgId, ids],
+          type: QueryTypes.DELETE,
+          transaction,
+        });
         return batch.length;
       }),
     );

@@ -48,7 +48,10 @@ export function runRowFrom(w: RunWidget, result: CalculationResult, run: Invente
   const warnings = result.warnings.map((x) => x.code);
   const agreed = run.agreed ?? true;
   const first = Object.keys(result.outputs)[0];
-  const outputs = agreed || first === undefined ? result.outputs : { ...result.outputs, [first]: (result.outputs[first] ?? 0) * 1.01 + 1e-6 };
+  const outputs =
+    agreed || first === undefined
+      ? result.outputs
+      : { ...result.outputs, [first]: (result.outputs[first] ?? 0) * 1.01 + 1e-6 };
   return {
     id: run.id,
     organizationId: w.organizationId,
@@ -65,7 +68,10 @@ export function runRowFrom(w: RunWidget, result: CalculationResult, run: Invente
     warningCodes: warnings,
     hasWarning: warnings.length > 0,
     agreed,
-    mismatch: agreed || first === undefined ? null : { outputs: { [first]: { client: outputs[first] ?? null, server: result.outputs[first] ?? null } } },
+    mismatch:
+      agreed || first === undefined
+        ? null
+        : { outputs: { [first]: { client: outputs[first] ?? null, server: result.outputs[first] ?? null } } },
     inputHash: result.inputHash,
     bodyHash: createHash('sha256').update(`${run.id}:${result.inputHash}`).digest('hex'),
     createdAt: run.createdAt,

@@ -12,7 +12,11 @@ import type { ShownValue, WidgetSettings } from '@wickstone/contracts';
 import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 
 /** A value in the unit the widget shows it in: the definition's own choice for the system, else the system's unit for its kind. */
-function shown(def: InputDefinition | OutputDefinition, raw: number | string, system: UnitSystemId): ShownValue {
+function shown(
+  def: InputDefinition | OutputDefinition,
+  raw: number | string,
+  system: UnitSystemId,
+): ShownValue {
   const base = { id: def.id, label: def.label };
   if (def.kind === 'choice') {
     const option = def.options.find((o) => o.value === raw);
@@ -22,7 +26,12 @@ function shown(def: InputDefinition | OutputDefinition, raw: number | string, sy
   const unit = def.display?.[system] ?? displayUnit(def.kind, system);
   const value = fromCanonical(raw, unit);
   const symbol = units[unit].symbol || null;
-  return { ...base, value, unit: symbol, text: symbol ? `${formatNumber(value)} ${symbol}` : formatNumber(value) };
+  return {
+    ...base,
+    value,
+    unit: symbol,
+    text: symbol ? `${formatNumber(value)} ${symbol}` : formatNumber(value),
+  };
 }
 
 /** What the runs table shows of one run's inputs and outputs. */
@@ -46,7 +55,13 @@ export function showRun(
 ): ShownRun {
   const calc: CalculatorDefinition | undefined = getCalculator(calculatorId);
   if (!calc) {
-    const plain = (id: string, v: number | string): ShownValue => ({ id, label: id, value: v, unit: null, text: typeof v === 'number' ? formatNumber(v) : v });
+    const plain = (id: string, v: number | string): ShownValue => ({
+      id,
+      label: id,
+      value: v,
+      unit: null,
+      text: typeof v === 'number' ? formatNumber(v) : v,
+    });
     return {
       title: calculatorId,
       inputs: Object.entries(sent).map(([id, v]) => plain(id, v)),

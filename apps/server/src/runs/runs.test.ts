@@ -1,9 +1,25 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { runDetailSchema, runListResponseSchema, type RunListItem } from '@wickstone/contracts';
-import { createTestApp, seedOrgWithTeam, TestClient, type FixtureOrg, type TestApp } from '../testing/index.js';
+import {
+  createTestApp,
+  seedOrgWithTeam,
+  TestClient,
+  type FixtureOrg,
+  type TestApp,
+} from '../testing/index.js';
 import { parseCsv, UTF8_BOM } from '../export/csv.js';
-import { fieldsOf, liveWidget, PORTAL, reportRun, requestAssessment, runAt, SITE, store, type FixtureWidget } from '../usage/fixtures.js';
+import {
+  fieldsOf,
+  liveWidget,
+  PORTAL,
+  reportRun,
+  requestAssessment,
+  runAt,
+  SITE,
+  store,
+  type FixtureWidget,
+} from '../usage/fixtures.js';
 import { EXPORT_CHUNK } from './service.js';
 
 /*
@@ -24,7 +40,8 @@ describe('runs', () => {
   const ids: Record<string, string> = {};
   let leadRunId: string;
 
-  const list = async (client: TestClient, query: string) => runListResponseSchema.parse((await client.get(`/orgs/${org.id}/runs?${query}`).expect(200)).body);
+  const list = async (client: TestClient, query: string) =>
+    runListResponseSchema.parse((await client.get(`/orgs/${org.id}/runs?${query}`).expect(200)).body);
 
   /** What the same filters select from the raw table, newest first: the answer the API must match. */
   async function rawIds(where: string, params: unknown[] = []): Promise<string[]> {
@@ -49,7 +66,10 @@ describe('runs', () => {
       ...s,
       inputs: { gravity: { mode: 'hidden' }, liquid: { mode: 'locked', default: 'water' } },
     }));
-    soil = await liveWidget(owner, org.id, 'Slab check', 'soil-capillary-rise', [SITE], (s) => ({ ...s, units: { system: 'us', visitorMaySwitch: true } }));
+    soil = await liveWidget(owner, org.id, 'Slab check', 'soil-capillary-rise', [SITE], (s) => ({
+      ...s,
+      units: { system: 'us', visitorMaySwitch: true },
+    }));
     odd = await liveWidget(owner, org.id, '@risk, "quoted" widget', 'slot-rise');
     const otherOwner = new TestClient(t.app);
     await otherOwner.login(other.users.owner.email, other.users.owner.password);
@@ -66,15 +86,24 @@ describe('runs', () => {
     ['jan10a', 'jan10b', 'jan11', 'jan12', 'jan15', 'jan16'].forEach((k, i) => (ids[k] = named[i]!.id));
     // 125 runs across February for paging; the last 40 share one instant, so only the id orders them.
     const feb = Array.from({ length: 125 }, (_, i) =>
-      runAt(tube, i < 85 ? `2026-02-${String(1 + (i % 28)).padStart(2, '0')}T10:${String(i % 60).padStart(2, '0')}:00.000Z` : '2026-02-20T10:00:00.000Z', {
-        diameter: i % 5 === 0 ? 0.004 : 0.0008,
-      }),
+      runAt(
+        tube,
+        i < 85
+          ? `2026-02-${String(1 + (i % 28)).padStart(2, '0')}T10:${String(i % 60).padStart(2, '0')}:00.000Z`
+          : '2026-02-20T10:00:00.000Z',
+        {
+          diameter: i % 5 === 0 ? 0.004 : 0.0008,
+        },
+      ),
     );
     await store(t.db.sequelize, [...named, ...feb]);
     await store(t.db.sequelize, [runAt(otherWidget, '2026-01-10T08:30:00.000Z', { diameter: 0.0008 })]);
     // And one through the embed API, today, with a request for an assessment.
     leadRunId = await reportRun(t.app, tube, { diameter: 0.0005 });
-    await requestAssessment(t.app, tube, leadRunId, { name: 'Hester Quayle', email: 'hester.quayle@mail.example' });
+    await requestAssessment(t.app, tube, leadRunId, {
+      name: 'Hester Quayle',
+      email: 'hester.quayle@mail.example',
+    });
   });
   afterAll(() => t.close());
 
@@ -91,14 +120,21 @@ describe('runs', () => {
       const r = await list(analyst, 'from=2026-01-10&to=2026-01-11');
       expect(r.items.map((x) => x.id).sort()).toEqual([ids.jan10a, ids.jan10b, ids.jan11].sort());
       expect(r.total).toBe(3);
-      expect((await list(analyst, 'from=2026-01-12&to=2026-01-12')).items.map((x) => x.id)).toEqual([ids.jan12]);
+      expect((await list(analyst, 'from=2026-01-12&to=2026-01-12')).items.map((x) => x.id)).toEqual([
+        ids.jan12,
+      ]);
       expect((await list(analyst, 'to=2026-01-09')).total).toBe(0);
     });
 
     it('filters by widget, calculator, site, warnings and agreement', async () => {
-      expect((await list(analyst, `widgetId=${soil.id}`)).items.map((x) => x.id)).toEqual([ids.jan15, ids.jan12]);
+      expect((await list(analyst, `widgetId=${soil.id}`)).items.map((x) => x.id)).toEqual([
+        ids.jan15,
+        ids.jan12,
+      ]);
       expect((await list(analyst, 'calculatorId=slot-rise')).items.map((x) => x.id)).toEqual([ids.jan16]);
-      expect((await list(analyst, `origin=${encodeURIComponent(PORTAL)}`)).items.map((x) => x.id)).toEqual([ids.jan10b]);
+      expect((await list(analyst, `origin=${encodeURIComponent(PORTAL)}`)).items.map((x) => x.id)).toEqual([
+        ids.jan10b,
+      ]);
       expect((await list(analyst, 'agreed=false')).items.map((x) => x.id)).toEqual([ids.jan11]);
       const warned = await list(analyst, 'hasWarning=true&to=2026-01-31');
       expect(warned.items.map((x) => x.id)).toEqual([ids.jan16, ids.jan15, ids.jan10b]);
@@ -108,19 +144,34 @@ describe('runs', () => {
 
     it('answers every combination of filters with the rows and total a plain query over the raw runs gives', async () => {
       const combos: [string, string, unknown[]][] = [
-        [`widgetId=${tube.id}&hasWarning=true&from=2026-02-01&to=2026-02-28`, 'widget_id = ? AND has_warning = 1 AND created_at >= ? AND created_at < ?', [tube.id, '2026-02-01', '2026-03-01']],
-        [`widgetId=${tube.id}&hasWarning=false&agreed=true`, 'widget_id = ? AND has_warning = 0 AND agreed = 1', [tube.id]],
+        [
+          `widgetId=${tube.id}&hasWarning=true&from=2026-02-01&to=2026-02-28`,
+          'widget_id = ? AND has_warning = 1 AND created_at >= ? AND created_at < ?',
+          [tube.id, '2026-02-01', '2026-03-01'],
+        ],
+        [
+          `widgetId=${tube.id}&hasWarning=false&agreed=true`,
+          'widget_id = ? AND has_warning = 0 AND agreed = 1',
+          [tube.id],
+        ],
         ['hasWarning=false&agreed=false', 'has_warning = 0 AND agreed = 0', []],
         ['hasWarning=true&agreed=true', 'has_warning = 1 AND agreed = 1', []],
         ['agreed=true&calculatorId=tube-rise', "agreed = 1 AND calculator_id = 'tube-rise'", []],
-        [`origin=${encodeURIComponent(SITE)}&from=2026-01-11`, 'origin = ? AND created_at >= ?', [SITE, '2026-01-11']],
+        [
+          `origin=${encodeURIComponent(SITE)}&from=2026-01-11`,
+          'origin = ? AND created_at >= ?',
+          [SITE, '2026-01-11'],
+        ],
         ['hasWarning=true&agreed=false', 'has_warning = 1 AND agreed = 0', []],
       ];
       for (const [query, where, params] of combos) {
         const want = await rawIds(where, params);
         const got = await list(analyst, `${query}&pageSize=200`);
         expect(got.total, query).toBe(want.length);
-        expect(got.items.map((x) => x.id), query).toEqual(want);
+        expect(
+          got.items.map((x) => x.id),
+          query,
+        ).toEqual(want);
       }
     });
 
@@ -159,7 +210,10 @@ describe('runs', () => {
         ['page=0', 'query.page'],
         ['page=100001', 'query.page'],
       ]) {
-        expect(fieldsOf((await analyst.get(`/orgs/${org.id}/runs?${query}`).expect(400)).body), query).toEqual([field]);
+        expect(
+          fieldsOf((await analyst.get(`/orgs/${org.id}/runs?${query}`).expect(400)).body),
+          query,
+        ).toEqual([field]);
       }
       expect((await list(analyst, 'pageSize=200')).items.length).toBe(132);
       expect((await list(analyst, 'pageSize=1&page=132')).items.length).toBe(1);
@@ -215,11 +269,16 @@ describe('runs', () => {
 
   describe('one run', () => {
     it('gives the inputs, the working as stored, whether the server agreed, and the lead', async () => {
-      const d = runDetailSchema.parse((await analyst.get(`/orgs/${org.id}/runs/${leadRunId}`).expect(200)).body);
-      const stored = await t.db.sequelize.query<{ server_result: unknown; client_result: unknown }>('SELECT server_result, client_result FROM runs WHERE id = ?', {
-        replacements: [leadRunId],
-        type: QueryTypes.SELECT,
-      });
+      const d = runDetailSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/runs/${leadRunId}`).expect(200)).body,
+      );
+      const stored = await t.db.sequelize.query<{ server_result: unknown; client_result: unknown }>(
+        'SELECT server_result, client_result FROM runs WHERE id = ?',
+        {
+          replacements: [leadRunId],
+          type: QueryTypes.SELECT,
+        },
+      );
       expect(d.serverResult).toEqual(stored[0]!.server_result);
       expect(d.clientResult).toEqual(stored[0]!.client_result);
       expect((d.serverResult as { working: unknown[] }).working.length).toBeGreaterThan(0);
@@ -228,13 +287,19 @@ describe('runs', () => {
     });
 
     it('shows where the recomputation disagreed', async () => {
-      const d = runDetailSchema.parse((await analyst.get(`/orgs/${org.id}/runs/${ids.jan11}`).expect(200)).body);
+      const d = runDetailSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/runs/${ids.jan11}`).expect(200)).body,
+      );
       expect(d.agreed).toBe(false);
-      expect(d.mismatch).toMatchObject({ outputs: { rise: { server: expect.any(Number), client: expect.any(Number) } } });
+      expect(d.mismatch).toMatchObject({
+        outputs: { rise: { server: expect.any(Number), client: expect.any(Number) } },
+      });
     });
 
-    it("does not show a developer who sent the lead, only that there was one", async () => {
-      const d = runDetailSchema.parse((await developer.get(`/orgs/${org.id}/runs/${leadRunId}`).expect(200)).body);
+    it('does not show a developer who sent the lead, only that there was one', async () => {
+      const d = runDetailSchema.parse(
+        (await developer.get(`/orgs/${org.id}/runs/${leadRunId}`).expect(200)).body,
+      );
       expect(d.leadId).toEqual(expect.any(Number));
       expect(d.lead).toBeNull();
       expect(JSON.stringify(d)).not.toContain('Hester');
@@ -242,9 +307,16 @@ describe('runs', () => {
 
     it("answers 404 for an unknown run and for another organisation's", async () => {
       await analyst.get(`/orgs/${org.id}/runs/00000000-0000-4000-8000-000000000000`).expect(404);
-      const theirs = (await t.db.sequelize.query<{ id: string }>('SELECT id FROM runs WHERE organization_id = ?', { replacements: [other.id], type: QueryTypes.SELECT }))[0]!.id;
+      const theirs = (
+        await t.db.sequelize.query<{ id: string }>('SELECT id FROM runs WHERE organization_id = ?', {
+          replacements: [other.id],
+          type: QueryTypes.SELECT,
+        })
+      )[0]!.id;
       await analyst.get(`/orgs/${org.id}/runs/${theirs}`).expect(404);
-      expect(fieldsOf((await analyst.get(`/orgs/${org.id}/runs/not-a-uuid`).expect(400)).body)).toEqual(['params.runId']);
+      expect(fieldsOf((await analyst.get(`/orgs/${org.id}/runs/not-a-uuid`).expect(400)).body)).toEqual([
+        'params.runId',
+      ]);
     });
   });
 
@@ -252,11 +324,35 @@ describe('runs', () => {
     it('downloads the filtered runs as an attachment with a header row, one record per run', async () => {
       const res = await analyst.get(`/orgs/${org.id}/runs/export?from=2026-01-01&to=2026-01-31`).expect(200);
       expect(res.headers['content-type']).toMatch(/^text\/csv; charset=utf-8/);
-      expect(res.headers['content-disposition']).toMatch(/^attachment; filename="t-[0-9a-f]+-runs-2026-01-01-to-2026-01-31\.csv"$/);
+      expect(res.headers['content-disposition']).toMatch(
+        /^attachment; filename="t-[0-9a-f]+-runs-2026-01-01-to-2026-01-31\.csv"$/,
+      );
       expect(res.text.startsWith(UTF8_BOM)).toBe(true);
       const [header, ...rows] = parseCsv(res.text);
-      expect(header).toEqual(['Time (UTC)', 'Run', 'Widget ID', 'Widget', 'Calculator', 'Inputs', 'Outputs', 'Units', 'Warnings', 'Site', 'Page', 'Release', 'Agreed', 'Lead']);
-      expect(rows.map((r) => r[1])).toEqual([ids.jan16, ids.jan15, ids.jan12, ids.jan11, ids.jan10b, ids.jan10a]);
+      expect(header).toEqual([
+        'Time (UTC)',
+        'Run',
+        'Widget ID',
+        'Widget',
+        'Calculator',
+        'Inputs',
+        'Outputs',
+        'Units',
+        'Warnings',
+        'Site',
+        'Page',
+        'Release',
+        'Agreed',
+        'Lead',
+      ]);
+      expect(rows.map((r) => r[1])).toEqual([
+        ids.jan16,
+        ids.jan15,
+        ids.jan12,
+        ids.jan11,
+        ids.jan10b,
+        ids.jan10a,
+      ]);
       const jan10a = rows.find((r) => r[1] === ids.jan10a)!;
       expect(jan10a[0]).toBe('2026-01-10T08:00:00.000Z');
       expect(jan10a[3]).toBe('Rising damp in a pore');
@@ -276,7 +372,13 @@ describe('runs', () => {
     it('streams more than one chunk, each run once, ties on the same instant included', async () => {
       // Enough runs for three chunks, a hundred of them at the very same millisecond.
       const many = Array.from({ length: EXPORT_CHUNK * 2 + 100 }, (_, i) =>
-        runAt(tube, i < 100 ? '2025-06-01T12:00:00.000Z' : new Date(Date.parse('2025-06-02T00:00:00Z') + i * 1000).toISOString(), { diameter: 0.0008 }),
+        runAt(
+          tube,
+          i < 100
+            ? '2025-06-01T12:00:00.000Z'
+            : new Date(Date.parse('2025-06-02T00:00:00Z') + i * 1000).toISOString(),
+          { diameter: 0.0008 },
+        ),
       );
       await store(t.db.sequelize, many);
       for (const sort of ['-createdAt', 'createdAt']) {

@@ -108,7 +108,10 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
   const { sequelize } = deps;
 
   async function widgetsOf(orgId: number): Promise<Map<number, WidgetInfo>> {
-    const widgets = await Widget.findAll({ where: { organizationId: orgId }, attributes: ['id', 'name', 'calculatorId', 'settings'] });
+    const widgets = await Widget.findAll({
+      where: { organizationId: orgId },
+      attributes: ['id', 'name', 'calculatorId', 'settings'],
+    });
     return new Map(widgets.map((w) => [w.id, w]));
   }
 
@@ -153,16 +156,17 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
       // rollups at the same time.
       const [counted, ids, widgets] = await Promise.all([
         select<{ n: number | string }>(count.sql, count.params),
-        select<{ id: string }>(`SELECT r.id FROM runs r WHERE ${where.sql} ORDER BY r.created_at ${dir}, r.id ${dir} LIMIT ? OFFSET ?`, [
-          ...where.params,
-          q.pageSize,
-          (q.page - 1) * q.pageSize,
-        ]),
+        select<{ id: string }>(
+          `SELECT r.id FROM runs r WHERE ${where.sql} ORDER BY r.created_at ${dir}, r.id ${dir} LIMIT ? OFFSET ?`,
+          [...where.params, q.pageSize, (q.page - 1) * q.pageSize],
+        ),
         widgetsOf(orgId),
       ]);
       const total = Number(counted[0]?.n ?? 0);
       if (!ids.length) return { items: [], total };
-      const rows = await select<RunColumns>(`SELECT ${LIST_COLUMNS} FROM runs r WHERE r.id IN (?)`, [ids.map((r) => r.id)]);
+      const rows = await select<RunColumns>(`SELECT ${LIST_COLUMNS} FROM runs r WHERE r.id IN (?)`, [
+        ids.map((r) => r.id),
+      ]);
       const byId = new Map(rows.map((r) => [r.id, r]));
       return {
         items: ids.flatMap(({ id }) => {
@@ -224,7 +228,22 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
       const dir = f.sort === 'createdAt' ? 'ASC' : 'DESC';
       const after = dir === 'DESC' ? '<' : '>';
       yield* keysetCsv<RunColumns, [string, string]>({
-        header: ['Time (UTC)', 'Run', 'Widget ID', 'Widget', 'Calculator', 'Inputs', 'Outputs', 'Units', 'Warnings', 'Site', 'Page', 'Release', 'Agreed', 'Lead'],
+        header: [
+          'Time (UTC)',
+          'Run',
+          'Widget ID',
+          'Widget',
+          'Calculator',
+          'Inputs',
+          'Outputs',
+          'Units',
+          'Warnings',
+          'Site',
+          'Page',
+          'Release',
+          'Agreed',
+          'Lead',
+        ],
         chunk: EXPORT_CHUNK,
         page: (cursor) =>
           select<RunColumns>(

@@ -9,7 +9,11 @@ export type RunRow = CreationAttributes<Run> & { createdAt: Date };
  * Insert runs and count them in the daily rollups, in the caller's transaction: the one way runs
  * are stored (the embed API, the demo seed and the benchmark's seed all come through here).
  */
-export async function storeRuns(sequelize: Sequelize, rows: readonly RunRow[], transaction: Transaction): Promise<void> {
+export async function storeRuns(
+  sequelize: Sequelize,
+  rows: readonly RunRow[],
+  transaction: Transaction,
+): Promise<void> {
   if (!rows.length) return;
   await Run.bulkCreate([...rows], { transaction });
   await addRuns(

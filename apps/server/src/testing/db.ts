@@ -33,8 +33,16 @@ async function admin<T>(config: Config, fn: (conn: mariadb.Connection) => Promis
  */
 export async function createTestDatabase(overrides: NodeJS.ProcessEnv = {}): Promise<TestDatabase> {
   const name = `wst_${Date.now().toString(36)}_${randomBytes(3).toString('hex')}`;
-  const config = loadConfig({ ...process.env, NODE_ENV: 'test', LOG_LEVEL: 'silent', ...overrides, DB_NAME: name });
-  await admin(config, (c) => c.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`));
+  const config = loadConfig({
+    ...process.env,
+    NODE_ENV: 'test',
+    LOG_LEVEL: 'silent',
+    ...overrides,
+    DB_NAME: name,
+  });
+  await admin(config, (c) =>
+    c.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`),
+  );
   const sequelize = createSequelize(config.db);
   initModels(sequelize);
   await migrateUp(sequelize);

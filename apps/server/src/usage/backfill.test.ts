@@ -35,7 +35,16 @@ describe('the rollup migration', () => {
     });
     const rows = [0.0008, 0.004, 0.004, 0.03, 0.001].flatMap((diameter, i) =>
       [SITE, PORTAL].map((origin, j) =>
-        inventRun(w, { diameter }, { id: randomUUID(), origin, agreed: (i + j) % 3 !== 0, createdAt: new Date(Date.UTC(2026, 9, 1 + (i % 2), 10 + j)) }),
+        inventRun(
+          w,
+          { diameter },
+          {
+            id: randomUUID(),
+            origin,
+            agreed: (i + j) % 3 !== 0,
+            createdAt: new Date(Date.UTC(2026, 9, 1 + (i % 2), 10 + j)),
+          },
+        ),
       ),
     );
     // Straight into the table, as the code before the rollups stored them.

@@ -32,15 +32,30 @@ export async function liveWidget(
   origins: string[] = [SITE, PORTAL],
   edit: (s: WidgetSettings) => WidgetSettings = (s) => s,
 ): Promise<FixtureWidget> {
-  const created = widgetSchema.parse((await owner.post(`/orgs/${orgId}/widgets`, { name, calculatorId, allowedOrigins: origins }).expect(201)).body);
+  const created = widgetSchema.parse(
+    (await owner.post(`/orgs/${orgId}/widgets`, { name, calculatorId, allowedOrigins: origins }).expect(201))
+      .body,
+  );
   const w = widgetSchema.parse(
-    (await owner.patch(`/orgs/${orgId}/widgets/${created.id}`, { status: 'live', settings: edit(structuredClone(created.settings)) }).expect(200)).body,
+    (
+      await owner
+        .patch(`/orgs/${orgId}/widgets/${created.id}`, {
+          status: 'live',
+          settings: edit(structuredClone(created.settings)),
+        })
+        .expect(200)
+    ).body,
   );
   return { ...w, organizationId: orgId };
 }
 
 /** An invented run of `w` at `at` (ISO time), with a fresh id. */
-export function runAt(w: RunWidget, at: string, inputs: Record<string, number | string>, opts: Partial<InventedRun> = {}): RunRow {
+export function runAt(
+  w: RunWidget,
+  at: string,
+  inputs: Record<string, number | string>,
+  opts: Partial<InventedRun> = {},
+): RunRow {
   return inventRun(w, inputs, { id: randomUUID(), origin: SITE, ...opts, createdAt: new Date(at) });
 }
 
@@ -50,14 +65,24 @@ export async function store(sequelize: Sequelize, rows: RunRow[]): Promise<void>
 }
 
 /** Report a run through the public embed API from `origin`; answers its id. */
-export async function reportRun(app: Express, w: FixtureWidget, inputs: Record<string, number | string>, origin = SITE): Promise<string> {
+export async function reportRun(
+  app: Express,
+  w: FixtureWidget,
+  inputs: Record<string, number | string>,
+  origin = SITE,
+): Promise<string> {
   const r = calculate(w.calculatorId, inputs);
   const body = {
     id: randomUUID(),
     publicKey: w.publicKey,
     inputs: r.inputs,
     unitSystem: w.settings.units.system,
-    result: { outputs: r.outputs, warnings: r.warnings.map((x) => x.code), inputHash: r.inputHash, version: r.version },
+    result: {
+      outputs: r.outputs,
+      warnings: r.warnings.map((x) => x.code),
+      inputHash: r.inputHash,
+      version: r.version,
+    },
     pageUrl: `${origin}/services/damp-survey`,
   };
   await request(app).post('/api/v1/embed/runs').set('Origin', origin).send(body).expect(201);

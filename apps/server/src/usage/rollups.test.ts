@@ -1,14 +1,38 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
-import { createTestApp, seedOrgWithTeam, TestClient, type FixtureOrg, type TestApp } from '../testing/index.js';
+import {
+  createTestApp,
+  seedOrgWithTeam,
+  TestClient,
+  type FixtureOrg,
+  type TestApp,
+} from '../testing/index.js';
 import { createRetentionService } from '../retention/service.js';
 import { seededRandom } from '../runs/invent.js';
-import { liveWidget, PORTAL, reportRun, requestAssessment, runAt, SITE, store, type FixtureWidget } from './fixtures.js';
+import {
+  liveWidget,
+  PORTAL,
+  reportRun,
+  requestAssessment,
+  runAt,
+  SITE,
+  store,
+  type FixtureWidget,
+} from './fixtures.js';
 import { rollupsFromRaw, storedRollups } from './rollups.js';
 
 const INPUTS: Record<string, Record<string, number | string>[]> = {
-  'tube-rise': [{ diameter: 0.0008 }, { diameter: 0.004 }, { diameter: 0.03 }, { diameter: 0.001, temperatureC: 5 }],
-  'soil-capillary-rise': [{ d10: 0.0001, waterTableDepth: 1 }, { d10: 0.00002, waterTableDepth: 0.5 }, { d10: 0.0006, waterTableDepth: 3 }],
+  'tube-rise': [
+    { diameter: 0.0008 },
+    { diameter: 0.004 },
+    { diameter: 0.03 },
+    { diameter: 0.001, temperatureC: 5 },
+  ],
+  'soil-capillary-rise': [
+    { d10: 0.0001, waterTableDepth: 1 },
+    { d10: 0.00002, waterTableDepth: 0.5 },
+    { d10: 0.0006, waterTableDepth: 3 },
+  ],
   'slot-rise': [{ gap: 0.001 }, { gap: 0.01 }],
 };
 const ORIGINS = [SITE, PORTAL, 'https://partners.brackenridge-ground.example'];
@@ -31,7 +55,14 @@ describe('rollups against the raw runs', () => {
   const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rnd() * xs.length)] as T;
 
   const count = async (sql: string, replacements: unknown[] = []) =>
-    Number((await t.db.sequelize.query<{ n: number | string | null }>(sql, { replacements, type: QueryTypes.SELECT }))[0]?.n ?? 0);
+    Number(
+      (
+        await t.db.sequelize.query<{ n: number | string | null }>(sql, {
+          replacements,
+          type: QueryTypes.SELECT,
+        })
+      )[0]?.n ?? 0,
+    );
 
   async function expectEqualToRaw(step: string) {
     const [stored, raw] = await Promise.all([storedRollups(t.db.sequelize), rollupsFromRaw(t.db.sequelize)]);
@@ -74,7 +105,9 @@ describe('rollups against the raw runs', () => {
 
       // Reports through the embed API, several at once for the same widget and day (same rollup row).
       const w = pick(widgets);
-      const reported = await Promise.all(Array.from({ length: 6 }, () => reportRun(t.app, w, pick(INPUTS[w.calculatorId]!), pick(ORIGINS))));
+      const reported = await Promise.all(
+        Array.from({ length: 6 }, () => reportRun(t.app, w, pick(INPUTS[w.calculatorId]!), pick(ORIGINS))),
+      );
       await expectEqualToRaw(`round ${round}: concurrent reports`);
 
       // Requests for assessments on some runs that have none yet: always the oldest (so purges meet
@@ -83,19 +116,35 @@ describe('rollups against the raw runs', () => {
         'SELECT r.id, r.widget_id, r.origin FROM runs r WHERE NOT EXISTS (SELECT 1 FROM leads l WHERE l.run_id = r.id) ORDER BY r.created_at, r.id',
         { type: QueryTypes.SELECT },
       );
-      const asked = new Set([...free.slice(0, 1), ...free.filter((r) => reported.includes(r.id)).slice(0, 1), ...free.filter(() => rnd() < 0.02)]);
+      const asked = new Set([
+        ...free.slice(0, 1),
+        ...free.filter((r) => reported.includes(r.id)).slice(0, 1),
+        ...free.filter(() => rnd() < 0.02),
+      ]);
       for (const run of asked) {
         const widget = widgets.find((x) => x.id === run.widget_id)!;
-        await requestAssessment(t.app, widget, run.id, { name: 'Priya Venn', email: 'priya.venn@homes.example' }, run.origin);
+        await requestAssessment(
+          t.app,
+          widget,
+          run.id,
+          { name: 'Priya Venn', email: 'priya.venn@homes.example' },
+          run.origin,
+        );
       }
       await expectEqualToRaw(`round ${round}: leads`);
 
       // Erase some leads' personal data: their runs stay, unlinked.
-      const leads = await t.db.sequelize.query<{ id: number; organization_id: number }>('SELECT id, organization_id FROM leads WHERE run_id IS NOT NULL ORDER BY id', {
-        type: QueryTypes.SELECT,
-      });
+      const leads = await t.db.sequelize.query<{ id: number; organization_id: number }>(
+        'SELECT id, organization_id FROM leads WHERE run_id IS NOT NULL ORDER BY id',
+        {
+          type: QueryTypes.SELECT,
+        },
+      );
       for (const l of leads.filter(() => rnd() < 0.25)) {
-        await analysts.get(l.organization_id)!.delete(`/orgs/${l.organization_id}/leads/${l.id}/personal-data`).expect(200);
+        await analysts
+          .get(l.organization_id)!
+          .delete(`/orgs/${l.organization_id}/leads/${l.id}/personal-data`)
+          .expect(200);
       }
       await expectEqualToRaw(`round ${round}: erasures`);
 
@@ -113,7 +162,9 @@ describe('rollups against the raw runs', () => {
     // The history did what it says: there were leads, erasures, purges and warnings to count.
     expect(await count('SELECT SUM(led) AS n FROM run_daily')).toBeGreaterThan(0);
     expect(await count('SELECT COUNT(*) AS n FROM leads WHERE erased_at IS NOT NULL')).toBeGreaterThan(0);
-    expect(await count('SELECT COUNT(*) AS n FROM leads WHERE run_id IS NULL AND erased_at IS NULL')).toBeGreaterThan(0);
+    expect(
+      await count('SELECT COUNT(*) AS n FROM leads WHERE run_id IS NULL AND erased_at IS NULL'),
+    ).toBeGreaterThan(0);
     expect(await count('SELECT COUNT(*) AS n FROM run_warning_daily')).toBeGreaterThan(0);
   }, 120_000);
 
@@ -121,7 +172,12 @@ describe('rollups against the raw runs', () => {
     const retention = createRetentionService({ sequelize: t.db.sequelize, chunkSize: 5 });
     await retention.purgeOrganization(a.id, 1, new Date(Date.now() + 400 * 86_400_000));
     expect(await count('SELECT COUNT(*) AS n FROM run_daily WHERE organization_id = ?', [a.id])).toBe(0);
-    expect(await t.db.sequelize.query('SELECT * FROM run_warning_daily WHERE organization_id = ?', { replacements: [a.id], type: QueryTypes.SELECT })).toEqual([]);
+    expect(
+      await t.db.sequelize.query('SELECT * FROM run_warning_daily WHERE organization_id = ?', {
+        replacements: [a.id],
+        type: QueryTypes.SELECT,
+      }),
+    ).toEqual([]);
     await expectEqualToRaw('after purging everything of one organisation');
   });
 });

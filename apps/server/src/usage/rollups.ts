@@ -40,7 +40,11 @@ interface WarningDelta {
 /** Rows per upsert statement: well under max_allowed_packet, few round trips. */
 const UPSERT_ROWS = 500;
 
-function group(runs: readonly RollupRun[], sign: 1 | -1, only: 'all' | 'led'): { daily: DailyDelta[]; warnings: WarningDelta[] } {
+function group(
+  runs: readonly RollupRun[],
+  sign: 1 | -1,
+  only: 'all' | 'led',
+): { daily: DailyDelta[]; warnings: WarningDelta[] } {
   const daily = new Map<string, DailyDelta>();
   const warnings = new Map<string, WarningDelta>();
   for (const r of runs) {
@@ -66,7 +70,10 @@ function group(runs: readonly RollupRun[], sign: 1 | -1, only: 'all' | 'led'): {
   // Always in key order, so two transactions touching the same rows lock them in the same order.
   const byKey = <T extends { key: unknown[] }>(m: Map<string, T>) =>
     [...m.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, v]) => v);
-  return { daily: byKey(daily).filter((d) => d.runs || d.led), warnings: byKey(warnings).filter((w) => w.runs) };
+  return {
+    daily: byKey(daily).filter((d) => d.runs || d.led),
+    warnings: byKey(warnings).filter((w) => w.runs),
+  };
 }
 
 async function upsert(
@@ -109,12 +116,20 @@ async function apply(
 }
 
 /** Count newly stored runs (in the transaction that inserted them). */
-export async function addRuns(sequelize: Sequelize, runs: readonly RollupRun[], transaction: Transaction | null): Promise<void> {
+export async function addRuns(
+  sequelize: Sequelize,
+  runs: readonly RollupRun[],
+  transaction: Transaction | null,
+): Promise<void> {
   await apply(sequelize, group(runs, 1, 'all'), transaction);
 }
 
 /** Uncount runs being deleted (in the transaction that deletes them), and drop rows left at zero. */
-export async function removeRuns(sequelize: Sequelize, runs: readonly RollupRun[], transaction: Transaction | null): Promise<void> {
+export async function removeRuns(
+  sequelize: Sequelize,
+  runs: readonly RollupRun[],
+  transaction: Transaction | null,
+): Promise<void> {
   if (!runs.length) return;
   await apply(sequelize, group(runs, -1, 'all'), transaction);
   const orgs = [...new Set(runs.map((r) => r.organizationId))];
@@ -140,7 +155,15 @@ export async function countLeads(
   sign: 1 | -1,
   transaction: Transaction | null,
 ): Promise<void> {
-  await apply(sequelize, group(runs.map((r) => ({ ...r, led: true })), sign, 'led'), transaction);
+  await apply(
+    sequelize,
+    group(
+      runs.map((r) => ({ ...r, led: true })),
+      sign,
+      'led',
+    ),
+    transaction,
+  );
 }
 
 /** Columns of `runs r` a `RollupRun` is read from, with whether a lead is linked; see `rollupRunOf`. */
@@ -200,20 +223,36 @@ export interface WarningRollupRow {
 
 /** Counts as numbers (SUM answers DECIMAL), rows in one order whatever the collation of each query. */
 function normalise<T extends object>(rows: T[]): T[] {
-  const counters = new Set(['organization_id', 'widget_id', 'runs', 'warned', 'disagreed', 'warned_disagreed', 'led']);
-  const out = rows.map((r) => Object.fromEntries(Object.entries(r).map(([k, v]) => [k, counters.has(k) ? Number(v) : v])) as T);
-  const key = (r: T) => JSON.stringify(Object.entries(r).filter(([k]) => !counters.has(k) || k.endsWith('_id')));
+  const counters = new Set([
+    'organization_id',
+    'widget_id',
+    'runs',
+    'warned',
+    'disagreed',
+    'warned_disagreed',
+    'led',
+  ]);
+  const out = rows.map(
+    (r) => Object.fromEntries(Object.entries(r).map(([k, v]) => [k, counters.has(k) ? Number(v) : v])) as T,
+  );
+  const key = (r: T) =>
+    JSON.stringify(Object.entries(r).filter(([k]) => !counters.has(k) || k.endsWith('_id')));
   return out.sort((a, b) => (key(a) < key(b) ? -1 : key(a) > key(b) ? 1 : 0));
 }
 
 /** The rollup tables as stored, in key order. */
-export async function storedRollups(sequelize: Sequelize): Promise<{ daily: DailyRollupRow[]; warnings: WarningRollupRow[] }> {
-  const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT }).then(normalise);
+export async function storedRollups(
+  sequelize: Sequelize,
+): Promise<{ daily: DailyRollupRow[]; warnings: WarningRollupRow[] }> {
+  const q = <T extends object>(sql: string) =>
+    sequelize.query<T>(sql, { type: QueryTypes.SELECT }).then(normalise);
   return {
     daily: await q<DailyRollupRow>(
       `SELECT organization_id, DATE_FORMAT(day, '%Y-%m-%d') AS day, widget_id, calculator_id, origin, runs, warned, disagreed, warned_disagreed, led FROM run_daily`,
     ),
-    warnings: await q<WarningRollupRow>(`SELECT organization_id, DATE_FORMAT(day, '%Y-%m-%d') AS day, widget_id, code, runs FROM run_warning_daily`),
+    warnings: await q<WarningRollupRow>(
+      `SELECT organization_id, DATE_FORMAT(day, '%Y-%m-%d') AS day, widget_id, code, runs FROM run_warning_daily`,
+    ),
   };
 }
 
@@ -221,8 +260,11 @@ export async function storedRollups(sequelize: Sequelize): Promise<{ daily: Dail
  * What the rollup tables should hold, counted from the raw runs with plain GROUP BY: the check
  * that the incremental counts are right (tests, and the benchmark's seed after a million runs).
  */
-export async function rollupsFromRaw(sequelize: Sequelize): Promise<{ daily: DailyRollupRow[]; warnings: WarningRollupRow[] }> {
-  const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT }).then(normalise);
+export async function rollupsFromRaw(
+  sequelize: Sequelize,
+): Promise<{ daily: DailyRollupRow[]; warnings: WarningRollupRow[] }> {
+  const q = <T extends object>(sql: string) =>
+    sequelize.query<T>(sql, { type: QueryTypes.SELECT }).then(normalise);
   return {
     daily: await q<DailyRollupRow>(
       `SELECT r.organization_id, DATE_FORMAT(DATE(r.created_at), '%Y-%m-%d') AS day, r.widget_id, r.calculator_id, r.origin,

@@ -49,7 +49,8 @@ export function createUsageService(deps: { sequelize: Sequelize }): UsageService
       const from = q.from ?? addDays(to, -(DEFAULT_DAYS - 1));
       const length = daysBetween(from, to);
       // Both dates given are checked by the query schema; one alone is checked here.
-      if (length > MAX_SUMMARY_DAYS) throw fieldError(q.from ? 'query.from' : 'query.to', `At most ${MAX_SUMMARY_DAYS} days`);
+      if (length > MAX_SUMMARY_DAYS)
+        throw fieldError(q.from ? 'query.from' : 'query.to', `At most ${MAX_SUMMARY_DAYS} days`);
       if (length < 1) throw fieldError('query.to', 'Must not be before from');
       const previous = { from: addDays(from, -length), to: addDays(from, -1) };
 
@@ -58,9 +59,13 @@ export function createUsageService(deps: { sequelize: Sequelize }): UsageService
         params: [orgId, range.from, range.to, ...(q.widgetId !== undefined ? [q.widgetId] : [])],
       });
       const current = scope({ from, to });
-      const sel = <T extends object>(sql: string, params: unknown[]) => sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
+      const sel = <T extends object>(sql: string, params: unknown[]) =>
+        sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
       const grouped = <K extends string>(column: string, alias: K) =>
-        sel<SumRow & Record<K, string | number>>(`SELECT ${column} AS ${alias}, ${SUMS} FROM run_daily WHERE ${current.sql} GROUP BY ${column}`, current.params);
+        sel<SumRow & Record<K, string | number>>(
+          `SELECT ${column} AS ${alias}, ${SUMS} FROM run_daily WHERE ${current.sql} GROUP BY ${column}`,
+          current.params,
+        );
 
       const [perDay, byWidget, byCalculator, bySite, before, warnings, widgets] = await Promise.all([
         grouped("DATE_FORMAT(day, '%Y-%m-%d')", 'day'),
@@ -77,22 +82,28 @@ export function createUsageService(deps: { sequelize: Sequelize }): UsageService
 
       const widgetById = new Map(widgets.map((w) => [w.id, w]));
       const days = new Map(perDay.map((r) => [String(r.day), counts(r)]));
-      const totals = perDay.reduce<UsageCounts>(
-        (t, r) => {
-          const c = counts(r);
-          return { runs: t.runs + c.runs, withWarning: t.withWarning + c.withWarning, withLead: t.withLead + c.withLead, disagreed: t.disagreed + c.disagreed };
-        },
-        counts(undefined),
-      );
+      const totals = perDay.reduce<UsageCounts>((t, r) => {
+        const c = counts(r);
+        return {
+          runs: t.runs + c.runs,
+          withWarning: t.withWarning + c.withWarning,
+          withLead: t.withLead + c.withLead,
+          disagreed: t.disagreed + c.disagreed,
+        };
+      }, counts(undefined));
 
-      const topWarnings = new Map<string, { code: string; calculatorId: string; summary: string; runs: number }>();
+      const topWarnings = new Map<
+        string,
+        { code: string; calculatorId: string; summary: string; runs: number }
+      >();
       for (const w of warnings) {
         const calculatorId = widgetById.get(Number(w.widgetId))?.calculatorId ?? 'unknown';
         const key = `${calculatorId} ${w.code}`;
         const hit = topWarnings.get(key);
         if (hit) hit.runs += Number(w.runs);
         else {
-          const summary = getCalculator(calculatorId)?.warnings.find((d) => d.code === w.code)?.summary ?? w.code;
+          const summary =
+            getCalculator(calculatorId)?.warnings.find((d) => d.code === w.code)?.summary ?? w.code;
           topWarnings.set(key, { code: w.code, calculatorId, summary, runs: Number(w.runs) });
         }
       }
@@ -107,7 +118,12 @@ export function createUsageService(deps: { sequelize: Sequelize }): UsageService
         byWidget: mostFirst(
           byWidget.map((r) => {
             const w = widgetById.get(Number(r.widgetId));
-            return { widgetId: Number(r.widgetId), name: w?.name ?? `Widget ${r.widgetId}`, calculatorId: w?.calculatorId ?? 'unknown', ...counts(r) };
+            return {
+              widgetId: Number(r.widgetId),
+              name: w?.name ?? `Widget ${r.widgetId}`,
+              calculatorId: w?.calculatorId ?? 'unknown',
+              ...counts(r),
+            };
           }),
           (r) => r.name,
         ),
@@ -122,7 +138,10 @@ export function createUsageService(deps: { sequelize: Sequelize }): UsageService
           bySite.map((r) => ({ origin: String(r.origin), ...counts(r) })),
           (r) => r.origin,
         ),
-        topWarnings: mostFirst([...topWarnings.values()], (r) => `${r.code} ${r.calculatorId}`).slice(0, TOP_WARNINGS),
+        topWarnings: mostFirst([...topWarnings.values()], (r) => `${r.code} ${r.calculatorId}`).slice(
+          0,
+          TOP_WARNINGS,
+        ),
       };
     },
   };

@@ -1,9 +1,24 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { usageSummarySchema } from '@wickstone/contracts';
-import { createTestApp, seedOrgWithTeam, TestClient, type FixtureOrg, type TestApp } from '../testing/index.js';
+import {
+  createTestApp,
+  seedOrgWithTeam,
+  TestClient,
+  type FixtureOrg,
+  type TestApp,
+} from '../testing/index.js';
 import { storeLeadsForRuns, type RunRow } from '../runs/store.js';
-import { fieldsOf, liveWidget, PORTAL, reportRun, runAt, SITE, store, type FixtureWidget } from './fixtures.js';
+import {
+  fieldsOf,
+  liveWidget,
+  PORTAL,
+  reportRun,
+  runAt,
+  SITE,
+  store,
+  type FixtureWidget,
+} from './fixtures.js';
 
 /*
  * The usage summary against a fixture small enough to count by hand. The expected numbers below
@@ -16,7 +31,8 @@ describe('usage summary', () => {
   let tube: FixtureWidget;
   let soil: FixtureWidget;
 
-  const summary = async (query: string) => usageSummarySchema.parse((await analyst.get(`/orgs/${org.id}/usage/summary?${query}`).expect(200)).body);
+  const summary = async (query: string) =>
+    usageSummarySchema.parse((await analyst.get(`/orgs/${org.id}/usage/summary?${query}`).expect(200)).body);
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -51,7 +67,18 @@ describe('usage summary', () => {
       runAt(soil, '2026-02-22T00:00:00.000Z', { d10: 0.0001, waterTableDepth: 1 }),
       runAt(tube, '2026-02-21T23:59:59.999Z', { diameter: 0.0008 }),
     ];
-    expect(runs.map((r) => r.warningCodes.join(''))).toEqual(['', 'BORE_NOT_SMALL', 'BORE_NOT_SMALL', 'BORE_TOO_WIDE', 'FINE_GRAINED_SOIL', '', '', 'BORE_NOT_SMALL', '', '']);
+    expect(runs.map((r) => r.warningCodes.join(''))).toEqual([
+      '',
+      'BORE_NOT_SMALL',
+      'BORE_NOT_SMALL',
+      'BORE_TOO_WIDE',
+      'FINE_GRAINED_SOIL',
+      '',
+      '',
+      'BORE_NOT_SMALL',
+      '',
+      '',
+    ]);
     await store(t.db.sequelize, runs);
     const lead = (run: RunRow) => ({
       lead: {
@@ -68,7 +95,9 @@ describe('usage summary', () => {
       },
       run,
     });
-    await t.db.sequelize.transaction((tx) => storeLeadsForRuns(t.db.sequelize, [lead(runs[1]!), lead(runs[4]!), lead(runs[7]!)], tx));
+    await t.db.sequelize.transaction((tx) =>
+      storeLeadsForRuns(t.db.sequelize, [lead(runs[1]!), lead(runs[4]!), lead(runs[7]!)], tx),
+    );
   });
   afterAll(() => t.close());
 
@@ -77,7 +106,11 @@ describe('usage summary', () => {
     expect(s.from).toBe('2026-03-01');
     expect(s.to).toBe('2026-03-07');
     expect(s.totals).toEqual({ runs: 6, withWarning: 4, withLead: 2, disagreed: 1 });
-    expect(s.previous).toEqual({ from: '2026-02-22', to: '2026-02-28', totals: { runs: 2, withWarning: 1, withLead: 1, disagreed: 0 } });
+    expect(s.previous).toEqual({
+      from: '2026-02-22',
+      to: '2026-02-28',
+      totals: { runs: 2, withWarning: 1, withLead: 1, disagreed: 0 },
+    });
   });
 
   it('gives every day of the period, the empty ones as zeros', async () => {
@@ -97,12 +130,42 @@ describe('usage summary', () => {
   it('breaks the period down by widget, calculator and site, busiest first', async () => {
     const s = await summary('from=2026-03-01&to=2026-03-07');
     expect(s.byWidget).toEqual([
-      { widgetId: tube.id, name: 'Rising damp in a pore', calculatorId: 'tube-rise', runs: 4, withWarning: 3, withLead: 1, disagreed: 1 },
-      { widgetId: soil.id, name: 'Slab check', calculatorId: 'soil-capillary-rise', runs: 2, withWarning: 1, withLead: 1, disagreed: 0 },
+      {
+        widgetId: tube.id,
+        name: 'Rising damp in a pore',
+        calculatorId: 'tube-rise',
+        runs: 4,
+        withWarning: 3,
+        withLead: 1,
+        disagreed: 1,
+      },
+      {
+        widgetId: soil.id,
+        name: 'Slab check',
+        calculatorId: 'soil-capillary-rise',
+        runs: 2,
+        withWarning: 1,
+        withLead: 1,
+        disagreed: 0,
+      },
     ]);
     expect(s.byCalculator).toEqual([
-      { calculatorId: 'tube-rise', title: 'Capillary rise or depression in a tube', runs: 4, withWarning: 3, withLead: 1, disagreed: 1 },
-      { calculatorId: 'soil-capillary-rise', title: expect.any(String), runs: 2, withWarning: 1, withLead: 1, disagreed: 0 },
+      {
+        calculatorId: 'tube-rise',
+        title: 'Capillary rise or depression in a tube',
+        runs: 4,
+        withWarning: 3,
+        withLead: 1,
+        disagreed: 1,
+      },
+      {
+        calculatorId: 'soil-capillary-rise',
+        title: expect.any(String),
+        runs: 2,
+        withWarning: 1,
+        withLead: 1,
+        disagreed: 0,
+      },
     ]);
     expect(s.bySite).toEqual([
       { origin: SITE, runs: 4, withWarning: 2, withLead: 2, disagreed: 0 },
@@ -132,7 +195,11 @@ describe('usage summary', () => {
   it('takes a single day, whose comparison is the day before', async () => {
     const s = await summary('from=2026-03-01&to=2026-03-01');
     expect(s.totals.runs).toBe(3);
-    expect(s.previous).toEqual({ from: '2026-02-28', to: '2026-02-28', totals: { runs: 1, withWarning: 1, withLead: 1, disagreed: 0 } });
+    expect(s.previous).toEqual({
+      from: '2026-02-28',
+      to: '2026-02-28',
+      totals: { runs: 1, withWarning: 1, withLead: 1, disagreed: 0 },
+    });
   });
 
   it('defaults to the 30 days up to today, with what the embed API stored today', async () => {
@@ -160,8 +227,14 @@ describe('usage summary', () => {
 
   it('reads the rollups only: raw runs deleted behind their back do not change it', async () => {
     const before = await summary('from=2026-03-01&to=2026-03-07');
-    await t.db.sequelize.query('DELETE FROM leads WHERE organization_id = ?', { replacements: [org.id], type: QueryTypes.DELETE });
-    await t.db.sequelize.query('DELETE FROM runs WHERE organization_id = ?', { replacements: [org.id], type: QueryTypes.DELETE });
+    await t.db.sequelize.query('DELETE FROM leads WHERE organization_id = ?', {
+      replacements: [org.id],
+      type: QueryTypes.DELETE,
+    });
+    await t.db.sequelize.query('DELETE FROM runs WHERE organization_id = ?', {
+      replacements: [org.id],
+      type: QueryTypes.DELETE,
+    });
     expect(await summary('from=2026-03-01&to=2026-03-07')).toEqual(before);
   });
 });

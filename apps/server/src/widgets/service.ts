@@ -1,6 +1,11 @@
 import { randomBytes } from 'node:crypto';
 import type { Sequelize } from 'sequelize';
-import { CalcInputError, getCalculator, resolveInputs, type CalculatorDefinition } from '@wickstone/calc-core';
+import {
+  CalcInputError,
+  getCalculator,
+  resolveInputs,
+  type CalculatorDefinition,
+} from '@wickstone/calc-core';
 import {
   defaultWidgetSettings,
   type Widget as WidgetDto,
@@ -23,7 +28,12 @@ export interface WidgetService {
   get(orgId: number, widgetId: number): Promise<WidgetDto>;
   create(orgId: number, actorId: number, body: CreateBody): Promise<WidgetDto>;
   update(orgId: number, widgetId: number, actorId: number, body: UpdateBody): Promise<WidgetDto>;
-  revisions(orgId: number, widgetId: number, page: number, pageSize: number): Promise<{ items: RevisionDto[]; total: number }>;
+  revisions(
+    orgId: number,
+    widgetId: number,
+    page: number,
+    pageSize: number,
+  ): Promise<{ items: RevisionDto[]; total: number }>;
   toDto(widget: Widget): WidgetDto;
 }
 
@@ -58,7 +68,8 @@ function checkInputSettings(calc: CalculatorDefinition, settings: WidgetSettings
   const fields: { field: string; message: string }[] = [];
   const defaults: Record<string, number | string> = {};
   for (const [id, s] of Object.entries(settings.inputs)) {
-    if (!known.has(id)) fields.push({ field: `${where}.inputs.${id}`, message: `${calc.title} has no input "${id}"` });
+    if (!known.has(id))
+      fields.push({ field: `${where}.inputs.${id}`, message: `${calc.title} has no input "${id}"` });
     else if (s.default !== undefined) defaults[id] = s.default;
   }
   if (fields.length === 0) {
@@ -66,20 +77,33 @@ function checkInputSettings(calc: CalculatorDefinition, settings: WidgetSettings
       resolveInputs(calc, defaults);
     } catch (e) {
       if (!(e instanceof CalcInputError)) throw e;
-      for (const issue of e.issues) fields.push({ field: `${where}.inputs.${issue.field}.default`, message: issue.message });
+      for (const issue of e.issues)
+        fields.push({ field: `${where}.inputs.${issue.field}.default`, message: issue.message });
     }
   }
   if (fields.length) {
-    throw new AppError('validation_failed', `Invalid request: check ${fields.map((f) => f.field).join(', ')}`, { fields });
+    throw new AppError(
+      'validation_failed',
+      `Invalid request: check ${fields.map((f) => f.field).join(', ')}`,
+      { fields },
+    );
   }
 }
 
-export function createWidgetService(deps: { sequelize: Sequelize; releases: ReleaseService; publicUrl: string; widgetVersion: string }): WidgetService {
+export function createWidgetService(deps: {
+  sequelize: Sequelize;
+  releases: ReleaseService;
+  publicUrl: string;
+  widgetVersion: string;
+}): WidgetService {
   const { sequelize, releases, publicUrl } = deps;
 
   async function logoUrl(orgId: number, assetId: number | null): Promise<string | null> {
     if (assetId === null) return null;
-    const asset = await Asset.findOne({ where: { id: assetId, organizationId: orgId }, attributes: ['id', 'sha256'] });
+    const asset = await Asset.findOne({
+      where: { id: assetId, organizationId: orgId },
+      attributes: ['id', 'sha256'],
+    });
     return asset ? assetUrl(publicUrl, asset) : null;
   }
 
@@ -132,7 +156,13 @@ export function createWidgetService(deps: { sequelize: Sequelize; releases: Rele
     return w;
   }
 
-  const snapshot = (w: { name: string; status: WidgetStatus; allowedOrigins: string[]; settings: WidgetSettings; release: string }) => ({
+  const snapshot = (w: {
+    name: string;
+    status: WidgetStatus;
+    allowedOrigins: string[];
+    settings: WidgetSettings;
+    release: string;
+  }) => ({
     name: w.name,
     status: w.status,
     allowedOrigins: w.allowedOrigins,
@@ -146,7 +176,10 @@ export function createWidgetService(deps: { sequelize: Sequelize; releases: Rele
     async list(orgId, page, pageSize) {
       const { rows, count } = await Widget.findAndCountAll({
         where: { organizationId: orgId },
-        order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+        order: [
+          ['updatedAt', 'DESC'],
+          ['id', 'DESC'],
+        ],
         limit: pageSize,
         offset: (page - 1) * pageSize,
       });
@@ -179,7 +212,13 @@ export function createWidgetService(deps: { sequelize: Sequelize; releases: Rele
         );
         const snap = snapshot({ ...created.get(), status: 'draft' });
         await WidgetRevision.create(
-          { widgetId: created.id, organizationId: orgId, authorId: actorId, changes: diff({}, snap), snapshot: snap },
+          {
+            widgetId: created.id,
+            organizationId: orgId,
+            authorId: actorId,
+            changes: diff({}, snap),
+            snapshot: snap,
+          },
           { transaction },
         );
         return created;
@@ -189,7 +228,11 @@ export function createWidgetService(deps: { sequelize: Sequelize; releases: Rele
 
     async update(orgId, widgetId, actorId, body) {
       return sequelize.transaction(async (transaction) => {
-        const w = await Widget.findOne({ where: { id: widgetId, organizationId: orgId }, lock: transaction.LOCK.UPDATE, transaction });
+        const w = await Widget.findOne({
+          where: { id: widgetId, organizationId: orgId },
+          lock: transaction.LOCK.UPDATE,
+          transaction,
+        });
         if (!w) throw new AppError('not_found', 'Widget not found');
         const calc = calculatorOf(w.calculatorId, 'calculatorId');
         if (body.settings) {
@@ -205,12 +248,18 @@ export function createWidgetService(deps: { sequelize: Sequelize; releases: Rele
           ...(body.settings !== undefined ? { settings: body.settings } : {}),
         };
         if (after.status === 'live' && after.allowedOrigins.length === 0) {
-          throw fieldError('body.allowedOrigins', 'A live widget needs at least one site allowed to embed it');
+          throw fieldError(
+            'body.allowedOrigins',
+            'A live widget needs at least one site allowed to embed it',
+          );
         }
         const changes = diff(before, after);
         if (changes.length === 0) return dto(w);
         await w.update(after, { transaction });
-        await WidgetRevision.create({ widgetId: w.id, organizationId: orgId, authorId: actorId, changes, snapshot: after }, { transaction });
+        await WidgetRevision.create(
+          { widgetId: w.id, organizationId: orgId, authorId: actorId, changes, snapshot: after },
+          { transaction },
+        );
         return dto(w);
       });
     },
@@ -224,12 +273,18 @@ export function createWidgetService(deps: { sequelize: Sequelize; releases: Rele
         offset: (page - 1) * pageSize,
       });
       const authorIds = [...new Set(rows.map((r) => r.authorId).filter((x): x is number => x !== null))];
-      const authors = new Map((await User.findAll({ where: { id: authorIds }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+      const authors = new Map(
+        (await User.findAll({ where: { id: authorIds }, attributes: ['id', 'name'] })).map((u) => [
+          u.id,
+          u.name,
+        ]),
+      );
       return {
         items: rows.map((r) => ({
           id: r.id,
           widgetId: r.widgetId,
-          author: r.authorId !== null ? { id: r.authorId, name: authors.get(r.authorId) ?? 'former member' } : null,
+          author:
+            r.authorId !== null ? { id: r.authorId, name: authors.get(r.authorId) ?? 'former member' } : null,
           changes: r.changes,
           createdAt: r.createdAt.toISOString(),
         })),

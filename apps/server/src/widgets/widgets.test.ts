@@ -1,6 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultWidgetSettings, errorBodySchema, widgetSchema, type Widget } from '@wickstone/contracts';
-import { createTestApp, seedOrgWithTeam, TestClient, type FixtureOrg, type TestApp } from '../testing/index.js';
+import {
+  createTestApp,
+  seedOrgWithTeam,
+  TestClient,
+  type FixtureOrg,
+  type TestApp,
+} from '../testing/index.js';
 import { makePng } from '../testing/images.js';
 import { WidgetRevision } from '../db/models/index.js';
 
@@ -29,29 +35,47 @@ describe('widgets API', () => {
   afterAll(() => t.close());
 
   const create = async (name = 'Damp-proofing check') =>
-    widgetSchema.parse((await owner.post(`/orgs/${org.id}/widgets`, { name, calculatorId: 'tube-rise' }).expect(201)).body);
+    widgetSchema.parse(
+      (await owner.post(`/orgs/${org.id}/widgets`, { name, calculatorId: 'tube-rise' }).expect(201)).body,
+    );
 
   it('creates a draft widget with a public key and the embed snippet of the current release', async () => {
     const w = await create();
-    expect(w).toMatchObject({ name: 'Damp-proofing check', calculatorId: 'tube-rise', status: 'draft', allowedOrigins: [] });
+    expect(w).toMatchObject({
+      name: 'Damp-proofing check',
+      calculatorId: 'tube-rise',
+      status: 'draft',
+      allowedOrigins: [],
+    });
     expect(w.publicKey).toMatch(/^wk_[a-z0-9]{20}$/);
     expect(w.settings).toEqual(defaultWidgetSettings());
     expect(w.embed.snippet).toContain(`data-wickstone-key="${w.publicKey}"`);
     expect(w.embed.integrity).toMatch(/^sha384-[A-Za-z0-9+/]+=*$/);
-    expect(w.embed.scriptUrl).toMatch(new RegExp(`/releases/${w.release.replace(/\./g, '\\.')}/wickstone-tube-rise\\.js$`));
-    const list = (await analyst.get(`/orgs/${org.id}/widgets`).expect(200)).body as { items: Widget[]; total: number };
+    expect(w.embed.scriptUrl).toMatch(
+      new RegExp(`/releases/${w.release.replace(/\./g, '\\.')}/wickstone-tube-rise\\.js$`),
+    );
+    const list = (await analyst.get(`/orgs/${org.id}/widgets`).expect(200)).body as {
+      items: Widget[];
+      total: number;
+    };
     expect(list.items.map((x) => x.id)).toContain(w.id);
   });
 
   it('refuses an unknown calculator and unknown or out-of-range input settings, naming the field', async () => {
-    const r1 = await owner.post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'no-such' }).expect(400);
+    const r1 = await owner
+      .post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'no-such' })
+      .expect(400);
     expect(fieldsOf(r1.body)).toEqual([{ field: 'body.calculatorId', message: 'No calculator "no-such"' }]);
     const settings = defaultWidgetSettings();
     settings.inputs = { boreSize: { mode: 'locked', default: 1 } };
-    const r2 = await owner.post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'tube-rise', settings }).expect(400);
+    const r2 = await owner
+      .post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'tube-rise', settings })
+      .expect(400);
     expect(fieldsOf(r2.body).map((f) => f.field)).toEqual(['body.settings.inputs.boreSize']);
     settings.inputs = { diameter: { mode: 'locked', default: -1 } };
-    const r3 = await owner.post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'tube-rise', settings }).expect(400);
+    const r3 = await owner
+      .post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'tube-rise', settings })
+      .expect(400);
     expect(fieldsOf(r3.body).map((f) => f.field)).toEqual(['body.settings.inputs.diameter.default']);
   });
 
@@ -62,21 +86,31 @@ describe('widgets API', () => {
     const res = await owner.patch(`/orgs/${org.id}/widgets/${w.id}`, { settings }).expect(400);
     const [issue] = fieldsOf(res.body);
     expect(issue?.field).toBe('body.settings.look.colors.text');
-    expect(issue?.message).toMatch(/Contrast between text and background is 1\.9\d:1; WCAG AA needs at least 4\.5:1/);
+    expect(issue?.message).toMatch(
+      /Contrast between text and background is 1\.9\d:1; WCAG AA needs at least 4\.5:1/,
+    );
     const again = widgetSchema.parse((await owner.get(`/orgs/${org.id}/widgets/${w.id}`).expect(200)).body);
     expect(again.settings.look.colors.text).toBe(w.settings.look.colors.text);
   });
 
   it('validates origins and needs one before going live', async () => {
     const w = await create('Origins');
-    const bad = await owner.patch(`/orgs/${org.id}/widgets/${w.id}`, { allowedOrigins: ['https://site.example/path'] }).expect(400);
+    const bad = await owner
+      .patch(`/orgs/${org.id}/widgets/${w.id}`, { allowedOrigins: ['https://site.example/path'] })
+      .expect(400);
     expect(fieldsOf(bad.body)[0]?.field).toBe('body.allowedOrigins.0');
     const live = await owner.patch(`/orgs/${org.id}/widgets/${w.id}`, { status: 'live' }).expect(400);
     expect(fieldsOf(live.body)[0]?.field).toBe('body.allowedOrigins');
     const ok = await owner
-      .patch(`/orgs/${org.id}/widgets/${w.id}`, { status: 'live', allowedOrigins: ['HTTPS://www.Brackenridge-Ground.example'] })
+      .patch(`/orgs/${org.id}/widgets/${w.id}`, {
+        status: 'live',
+        allowedOrigins: ['HTTPS://www.Brackenridge-Ground.example'],
+      })
       .expect(200);
-    expect(widgetSchema.parse(ok.body)).toMatchObject({ status: 'live', allowedOrigins: ['https://www.brackenridge-ground.example'] });
+    expect(widgetSchema.parse(ok.body)).toMatchObject({
+      status: 'live',
+      allowedOrigins: ['https://www.brackenridge-ground.example'],
+    });
   });
 
   it('keeps every save as a revision: who, when and what changed', async () => {
@@ -87,7 +121,10 @@ describe('widgets API', () => {
     await owner.patch(`/orgs/${org.id}/widgets/${w.id}`, { name: 'Revisions 2', settings }).expect(200);
     await owner.patch(`/orgs/${org.id}/widgets/${w.id}`, { name: 'Revisions 2', settings }).expect(200); // no change: no revision
     const res = await analyst.get(`/orgs/${org.id}/widgets/${w.id}/revisions`).expect(200);
-    const { items, total } = res.body as { items: { author: { name: string }; changes: { path: string; before: unknown; after: unknown }[] }[]; total: number };
+    const { items, total } = res.body as {
+      items: { author: { name: string }; changes: { path: string; before: unknown; after: unknown }[] }[];
+      total: number;
+    };
     expect(total).toBe(2);
     expect(items[0]?.author.name).toBe(org.users.owner.name);
     expect(items[0]?.changes).toEqual([
@@ -110,9 +147,14 @@ describe('widgets API', () => {
 
   describe('logo upload', () => {
     const upload = (client: TestClient, orgId: number, data: Buffer, filename: string, contentType: string) =>
-      client.csrf().then((token) =>
-        client.agent.post(`/api/v1/orgs/${orgId}/assets`).set('x-csrf-token', token).attach('file', data, { filename, contentType }),
-      );
+      client
+        .csrf()
+        .then((token) =>
+          client.agent
+            .post(`/api/v1/orgs/${orgId}/assets`)
+            .set('x-csrf-token', token)
+            .attach('file', data, { filename, contentType }),
+        );
 
     it('stores a PNG checked by content and lets a widget use it', async () => {
       const res = await upload(owner, org.id, makePng(64, 32), 'logo.png', 'image/png');
@@ -121,7 +163,9 @@ describe('widgets API', () => {
       const w = await create('With logo');
       const settings = structuredClone(w.settings);
       settings.look.logoAssetId = res.body.id as number;
-      const saved = widgetSchema.parse((await owner.patch(`/orgs/${org.id}/widgets/${w.id}`, { settings }).expect(200)).body);
+      const saved = widgetSchema.parse(
+        (await owner.patch(`/orgs/${org.id}/widgets/${w.id}`, { settings }).expect(200)).body,
+      );
       expect(saved.logoUrl).toMatch(/\/api\/v1\/embed\/assets\/\d+\/[0-9a-f]{16}$/);
       const img = await fetchFromApp(saved.logoUrl as string);
       expect(img.status).toBe(200);
@@ -130,12 +174,30 @@ describe('widgets API', () => {
     });
 
     it('refuses a script renamed .png, an SVG and an oversized image', async () => {
-      const script = await upload(owner, org.id, Buffer.from('alert(document.cookie)'), 'logo.png', 'image/png');
+      const script = await upload(
+        owner,
+        org.id,
+        Buffer.from('alert(document.cookie)'),
+        'logo.png',
+        'image/png',
+      );
       expect(script.status).toBe(400);
       expect(fieldsOf(script.body)[0]?.field).toBe('file');
-      const svg = await upload(owner, org.id, Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>'), 'logo.svg', 'image/svg+xml');
+      const svg = await upload(
+        owner,
+        org.id,
+        Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>'),
+        'logo.svg',
+        'image/svg+xml',
+      );
       expect(svg.status).toBe(400);
-      const big = await upload(owner, org.id, Buffer.concat([makePng(8, 8), Buffer.alloc(600 * 1024)]), 'big.png', 'image/png');
+      const big = await upload(
+        owner,
+        org.id,
+        Buffer.concat([makePng(8, 8), Buffer.alloc(600 * 1024)]),
+        'big.png',
+        'image/png',
+      );
       expect(big.status).toBe(413);
       expect(fieldsOf(big.body)[0]?.field).toBe('file');
     });

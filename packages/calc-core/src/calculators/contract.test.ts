@@ -206,7 +206,9 @@ describe('registry and engine', () => {
   });
 
   it('ignores a bad value for a choice that does not apply, as it does for numbers', () => {
-    expect(calculate('wetting-force', { method: 'ring', liquid: 'lava' }).inputs).not.toHaveProperty('liquid');
+    expect(calculate('wetting-force', { method: 'ring', liquid: 'lava' }).inputs).not.toHaveProperty(
+      'liquid',
+    );
     expect(() => calculate('wetting-force', { method: 'plate-force', liquid: 'lava' })).toThrow(
       expect.objectContaining({ field: 'liquid', code: 'NOT_AN_OPTION' }),
     );

@@ -4,7 +4,10 @@ import { describe, expect, it } from 'vitest';
 import { applicable, collectInputs, initialForm, issueMessage, reformat, typed } from './form.js';
 import { resolveInputSettings } from './settings.js';
 
-const inputs = resolveInputSettings(tube, { gravity: { mode: 'hidden' }, contactAnglePreset: { mode: 'locked', default: 'water-clean-glass' } });
+const inputs = resolveInputSettings(tube, {
+  gravity: { mode: 'hidden' },
+  contactAnglePreset: { mode: 'locked', default: 'water-clean-glass' },
+});
 const input = (id: string) => inputs.find((i) => i.def.id === id)!;
 
 describe('form state', () => {
@@ -24,7 +27,11 @@ describe('form state', () => {
 
   it('re-shows numbers after a unit switch and leaves unreadable text alone', () => {
     let state = initialForm(inputs, 'si');
-    state = { ...state, diameter: typed(input('diameter'), '2', 'si'), temperatureC: typed(input('temperatureC'), 'warm', 'si') };
+    state = {
+      ...state,
+      diameter: typed(input('diameter'), '2', 'si'),
+      temperatureC: typed(input('temperatureC'), 'warm', 'si'),
+    };
     const us = reformat(state, inputs, 'us');
     expect(us.diameter).toEqual({ text: '0.0787402', value: 0.002 });
     expect(us.temperatureC?.text).toBe('warm');
@@ -34,11 +41,21 @@ describe('form state', () => {
   it('sends only inputs that apply, and the firm’s values for locked and hidden ones', () => {
     let state = initialForm(inputs, 'si');
     // A locked or hidden value cannot be changed by whatever the form holds for it.
-    state = { ...state, gravity: { text: '1', value: 1 }, contactAnglePreset: { text: 'custom', value: 'custom' } };
+    state = {
+      ...state,
+      gravity: { text: '1', value: 1 },
+      contactAnglePreset: { text: 'custom', value: 'custom' },
+    };
     const sent = collectInputs(inputs, state);
     expect(sent.gravity).toBe(9.80665);
     expect(sent.contactAnglePreset).toBe('water-clean-glass');
-    expect(Object.keys(sent)).toEqual(['liquid', 'temperatureC', 'contactAnglePreset', 'diameter', 'gravity']);
+    expect(Object.keys(sent)).toEqual([
+      'liquid',
+      'temperatureC',
+      'contactAnglePreset',
+      'diameter',
+      'gravity',
+    ]);
     const ethanol = { ...state, liquid: { text: 'ethanol', value: 'ethanol' } };
     expect(applicable(inputs, ethanol).map((i) => i.def.id)).not.toContain('temperatureC');
     expect(collectInputs(inputs, ethanol)).not.toHaveProperty('temperatureC');
@@ -58,9 +75,15 @@ describe('form state', () => {
     expect(caught).toBeInstanceOf(CalcInputError);
     const issue = (caught as CalcInputError).issues.find((i) => i.field === 'diameter')!;
     expect(issue.code).toBe('ABOVE_MAX');
-    expect(issueMessage(issue, input('diameter'), 'us')).toBe('Use a value from 0.0000393701 in to 1.9685 in');
+    expect(issueMessage(issue, input('diameter'), 'us')).toBe(
+      'Use a value from 0.0000393701 in to 1.9685 in',
+    );
     expect(issueMessage(issue, input('diameter'), 'si')).toBe('Use a value from 0.001 mm to 50 mm');
-    expect(issueMessage({ field: 'diameter', code: 'REQUIRED', message: 'x' }, input('diameter'), 'si')).toBe('Enter a value');
-    expect(issueMessage({ field: 'inputs', code: 'OUT_OF_RANGE', message: 'no solution' }, undefined, 'si')).toBe('no solution');
+    expect(issueMessage({ field: 'diameter', code: 'REQUIRED', message: 'x' }, input('diameter'), 'si')).toBe(
+      'Enter a value',
+    );
+    expect(
+      issueMessage({ field: 'inputs', code: 'OUT_OF_RANGE', message: 'no solution' }, undefined, 'si'),
+    ).toBe('no solution');
   });
 });

@@ -22,7 +22,8 @@ function shown(value: number | string, input: ResolvedInput, system: UnitSystemI
 /** Every input at its starting value, texts in the unit system's units. */
 export function initialForm(inputs: readonly ResolvedInput[], system: UnitSystemId): FormState {
   const state: Record<string, FieldState> = {};
-  for (const input of inputs) state[input.def.id] = { text: shown(input.initial, input, system), value: input.initial };
+  for (const input of inputs)
+    state[input.def.id] = { text: shown(input.initial, input, system), value: input.initial };
   return state;
 }
 
@@ -34,7 +35,11 @@ export function typed(input: ResolvedInput, text: string, system: UnitSystemId):
 }
 
 /** The form after a unit switch: every readable number re-shown in the new units; unreadable text kept as typed. */
-export function reformat(state: FormState, inputs: readonly ResolvedInput[], system: UnitSystemId): FormState {
+export function reformat(
+  state: FormState,
+  inputs: readonly ResolvedInput[],
+  system: UnitSystemId,
+): FormState {
   const next: Record<string, FieldState> = { ...state };
   for (const input of inputs) {
     const f = state[input.def.id];
@@ -45,9 +50,13 @@ export function reformat(state: FormState, inputs: readonly ResolvedInput[], sys
 }
 
 /** The value each input takes now: what the form holds, except that locked and hidden inputs keep the firm's. */
-export function effectiveValues(inputs: readonly ResolvedInput[], state: FormState): Record<string, string | number | null> {
+export function effectiveValues(
+  inputs: readonly ResolvedInput[],
+  state: FormState,
+): Record<string, string | number | null> {
   const out: Record<string, string | number | null> = {};
-  for (const input of inputs) out[input.def.id] = input.mode === 'editable' ? (state[input.def.id]?.value ?? null) : input.initial;
+  for (const input of inputs)
+    out[input.def.id] = input.mode === 'editable' ? (state[input.def.id]?.value ?? null) : input.initial;
   return out;
 }
 
@@ -62,7 +71,10 @@ export function applicable(inputs: readonly ResolvedInput[], state: FormState): 
  * The raw inputs handed to calc-core's `run`: every input that takes part. Locked and hidden
  * inputs always send their starting value, whatever the form holds.
  */
-export function collectInputs(inputs: readonly ResolvedInput[], state: FormState): Record<string, number | string | null> {
+export function collectInputs(
+  inputs: readonly ResolvedInput[],
+  state: FormState,
+): Record<string, number | string | null> {
   const values = effectiveValues(inputs, state);
   const out: Record<string, number | string | null> = {};
   for (const input of applicable(inputs, state)) out[input.def.id] = values[input.def.id] ?? null;
@@ -73,7 +85,11 @@ export function collectInputs(inputs: readonly ResolvedInput[], state: FormState
  * A field problem from calc-core, worded for the form. Range messages are re-stated in the unit the
  * visitor sees (calc-core states them in SI, which reads wrongly beside a box in inches).
  */
-export function issueMessage(issue: FieldIssue, input: ResolvedInput | undefined, system: UnitSystemId): string {
+export function issueMessage(
+  issue: FieldIssue,
+  input: ResolvedInput | undefined,
+  system: UnitSystemId,
+): string {
   if (input === undefined || input.def.kind === 'choice') return issue.message;
   if (issue.code === 'REQUIRED') return 'Enter a value';
   if (issue.code === 'NOT_A_NUMBER' || issue.code === 'NOT_FINITE') return 'Enter a number, such as 0.5';

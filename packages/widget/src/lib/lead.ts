@@ -29,7 +29,9 @@ export interface LeadDraft {
 }
 
 /** The fields a widget asks for, in display order. */
-export function askedFields(modes: LeadFieldModes): { spec: LeadFieldSpec; mode: Exclude<LeadFieldMode, 'off'> }[] {
+export function askedFields(
+  modes: LeadFieldModes,
+): { spec: LeadFieldSpec; mode: Exclude<LeadFieldMode, 'off'> }[] {
   return LEAD_FIELDS.flatMap((spec) => {
     const mode = modes[spec.id];
     return mode === 'optional' || mode === 'required' ? [{ spec, mode }] : [];
@@ -51,7 +53,8 @@ export function validateLead(draft: LeadDraft, modes: LeadFieldModes): Record<st
     const value = (draft.values[spec.id] ?? '').trim();
     if (value === '') {
       if (mode === 'required' || (spec.id === 'email' && draft.sendCopy)) {
-        errors[spec.id] = spec.id === 'email' && mode !== 'required' ? 'Needed to send you a copy' : 'Required';
+        errors[spec.id] =
+          spec.id === 'email' && mode !== 'required' ? 'Needed to send you a copy' : 'Required';
       }
       continue;
     }
@@ -64,7 +67,12 @@ export function validateLead(draft: LeadDraft, modes: LeadFieldModes): Record<st
 }
 
 /** The lead request (`embedLeadBodySchema`): only the fields the widget asks for and the visitor filled in, trimmed. */
-export function buildLeadBody(args: { runId: string; publicKey: string; draft: LeadDraft; modes: LeadFieldModes }): EmbedLeadBody {
+export function buildLeadBody(args: {
+  runId: string;
+  publicKey: string;
+  draft: LeadDraft;
+  modes: LeadFieldModes;
+}): EmbedLeadBody {
   const { runId, publicKey, draft, modes } = args;
   const fields: Partial<Record<LeadFieldId, string>> = {};
   for (const { spec } of askedFields(modes)) {

@@ -14,11 +14,19 @@ describe('lookVariables', () => {
       '--wk-rc': '12px',
       '--wk-font': `'${MANROPE_FAMILY}', ui-sans-serif, system-ui, sans-serif`,
     });
-    expect(lookVariables({ colors, font: 'system-serif', corner: 'square', logoUrl: null })).toMatchObject({ '--wk-r': '0px', '--wk-font': expect.stringMatching(/serif$/) });
+    expect(lookVariables({ colors, font: 'system-serif', corner: 'square', logoUrl: null })).toMatchObject({
+      '--wk-r': '0px',
+      '--wk-font': expect.stringMatching(/serif$/),
+    });
   });
 
   it('never passes anything but #rrggbb into the style sheet', () => {
-    const v = lookVariables({ colors: { ...colors, background: 'red; background-image: url(x)', primary: '#12345' }, font: 'manrope', corner: 'soft', logoUrl: null });
+    const v = lookVariables({
+      colors: { ...colors, background: 'red; background-image: url(x)', primary: '#12345' },
+      font: 'manrope',
+      corner: 'soft',
+      logoUrl: null,
+    });
     expect(v['--wk-bg']).toBe('#ffffff');
     expect(v['--wk-accent']).toBe('#1d4e5f');
     expect(v['--wk-fg']).toBe('#2b2118');

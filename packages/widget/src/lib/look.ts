@@ -14,7 +14,8 @@ export const MANROPE_FILES: Readonly<Record<'400' | '600' | '700', string>> = {
 
 const FONT_STACKS: Readonly<Record<Look['font'], string>> = {
   manrope: `'${MANROPE_FAMILY}', ui-sans-serif, system-ui, sans-serif`,
-  'system-sans': "ui-sans-serif, system-ui, -apple-system, 'Segoe UI', Roboto, 'Helvetica Neue', Arial, sans-serif",
+  'system-sans':
+    "ui-sans-serif, system-ui, -apple-system, 'Segoe UI', Roboto, 'Helvetica Neue', Arial, sans-serif",
   'system-serif': "ui-serif, Georgia, Cambria, 'Times New Roman', Times, serif",
 };
 
@@ -25,7 +26,12 @@ const CORNERS: Readonly<Record<Look['corner'], readonly [panel: string, control:
   round: ['18px', '12px'],
 };
 
-const FALLBACK = { background: '#ffffff', text: '#1b2a30', primary: '#1d4e5f', primaryText: '#ffffff' } as const;
+const FALLBACK = {
+  background: '#ffffff',
+  text: '#1b2a30',
+  primary: '#1d4e5f',
+  primaryText: '#ffffff',
+} as const;
 const HEX = /^#[0-9a-fA-F]{6}$/;
 
 /**

@@ -22,7 +22,13 @@ const makeId = () => `00000000-0000-4000-8000-${String(++n).padStart(12, '0')}`;
 describe('createReporter', () => {
   it('keeps one id across every retry of a report, and resolves stored once acknowledged', async () => {
     const server = fakeServer(['network', 503, 201]);
-    const reporter = createReporter({ apiBase: 'https://wickstone.example', publicKey: 'wk_abcdefghij0123456789', href: () => 'https://www.brackenridge-ground.example/', send: { fetch: server.fetch, sleep: noWait }, makeId });
+    const reporter = createReporter({
+      apiBase: 'https://wickstone.example',
+      publicKey: 'wk_abcdefghij0123456789',
+      href: () => 'https://www.brackenridge-ground.example/',
+      send: { fetch: server.fetch, sleep: noWait },
+      makeId,
+    });
     const report = reporter.report(run({ diameter: 0.002 }), 'si');
     await expect(report.stored).resolves.toBe(true);
     expect(server.bodies).toHaveLength(3);
@@ -32,7 +38,13 @@ describe('createReporter', () => {
 
   it('counts the same calculation pressed twice once, and a changed one again', async () => {
     const server = fakeServer([]);
-    const reporter = createReporter({ apiBase: 'https://wickstone.example', publicKey: 'wk_abcdefghij0123456789', href: () => 'https://x.example/', send: { fetch: server.fetch, sleep: noWait }, makeId });
+    const reporter = createReporter({
+      apiBase: 'https://wickstone.example',
+      publicKey: 'wk_abcdefghij0123456789',
+      href: () => 'https://x.example/',
+      send: { fetch: server.fetch, sleep: noWait },
+      makeId,
+    });
     const a = reporter.report(run({ diameter: 0.002 }), 'si');
     const b = reporter.report(run({ diameter: 0.002 }), 'si');
     const c = reporter.report(run({ diameter: 0.003 }), 'si');
@@ -45,7 +57,13 @@ describe('createReporter', () => {
 
   it('treats a refused report as not stored, never retries it, and sends a fresh one next time', async () => {
     const server = fakeServer([400, 201]);
-    const reporter = createReporter({ apiBase: 'https://wickstone.example', publicKey: 'wk_abcdefghij0123456789', href: () => 'https://x.example/', send: { fetch: server.fetch, sleep: noWait }, makeId });
+    const reporter = createReporter({
+      apiBase: 'https://wickstone.example',
+      publicKey: 'wk_abcdefghij0123456789',
+      href: () => 'https://x.example/',
+      send: { fetch: server.fetch, sleep: noWait },
+      makeId,
+    });
     const first = reporter.report(run({}), 'si');
     await expect(first.stored).resolves.toBe(false);
     expect(server.bodies).toHaveLength(1);

@@ -27,8 +27,15 @@ describe('resolveInputSettings', () => {
   });
 
   it('refuses a default of the wrong kind and falls back to the calculator’s', () => {
-    const r = resolveInputSettings(tube, { liquid: { mode: 'locked', default: 'lava' }, diameter: { mode: 'editable', default: 'wide' } });
-    expect(r.find((i) => i.def.id === 'liquid')).toMatchObject({ mode: 'locked', initial: 'water', defaultRejected: true });
+    const r = resolveInputSettings(tube, {
+      liquid: { mode: 'locked', default: 'lava' },
+      diameter: { mode: 'editable', default: 'wide' },
+    });
+    expect(r.find((i) => i.def.id === 'liquid')).toMatchObject({
+      mode: 'locked',
+      initial: 'water',
+      defaultRejected: true,
+    });
     expect(r.find((i) => i.def.id === 'diameter')).toMatchObject({ initial: 0.001, defaultRejected: true });
   });
 
@@ -38,7 +45,10 @@ describe('resolveInputSettings', () => {
   });
 
   it('ignores settings for inputs the calculator lacks and unknown modes', () => {
-    const settings = { noSuchInput: { mode: 'hidden' as const }, gravity: { mode: 'sideways' as unknown as 'hidden' } };
+    const settings = {
+      noSuchInput: { mode: 'hidden' as const },
+      gravity: { mode: 'sideways' as unknown as 'hidden' },
+    };
     const r = resolveInputSettings(tube, settings);
     expect(r).toHaveLength(tube.inputs.length);
     expect(r.find((i) => i.def.id === 'gravity')?.mode).toBe('editable');

@@ -56,6 +56,11 @@ export function applies(
   return (input.appliesWhen ?? []).every((cond) => {
     const parent = byId.get(cond.input);
     const value = choices[cond.input];
-    return parent !== undefined && typeof value === 'string' && cond.values.includes(value) && applies(parent, byId, choices, depth + 1);
+    return (
+      parent !== undefined &&
+      typeof value === 'string' &&
+      cond.values.includes(value) &&
+      applies(parent, byId, choices, depth + 1)
+    );
   });
 }

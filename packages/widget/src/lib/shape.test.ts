@@ -29,10 +29,28 @@ describe('isEmbedWidget', () => {
   it.each([
     ['not an object', () => 'x'],
     ['no settings', () => ({ ...sample(), settings: undefined })],
-    ['an unknown unit system', () => ({ ...sample(), settings: { ...sample().settings, units: { system: 'imperial', visitorMaySwitch: true } } })],
-    ['colours missing', () => ({ ...sample(), settings: { ...sample().settings, look: { ...sample().settings.look, colors: {} } } })],
-    ['a lead form without consent text', () => ({ ...sample(), settings: { ...sample().settings, leadForm: { enabled: true, fields: {} } } })],
-    ['an input setting without a mode', () => ({ ...sample(), settings: { ...sample().settings, inputs: { gravity: {} } } })],
+    [
+      'an unknown unit system',
+      () => ({
+        ...sample(),
+        settings: { ...sample().settings, units: { system: 'imperial', visitorMaySwitch: true } },
+      }),
+    ],
+    [
+      'colours missing',
+      () => ({
+        ...sample(),
+        settings: { ...sample().settings, look: { ...sample().settings.look, colors: {} } },
+      }),
+    ],
+    [
+      'a lead form without consent text',
+      () => ({ ...sample(), settings: { ...sample().settings, leadForm: { enabled: true, fields: {} } } }),
+    ],
+    [
+      'an input setting without a mode',
+      () => ({ ...sample(), settings: { ...sample().settings, inputs: { gravity: {} } } }),
+    ],
   ])('refuses %s', (_name, make) => {
     expect(isEmbedWidget(make())).toBe(false);
   });

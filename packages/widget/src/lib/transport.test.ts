@@ -28,7 +28,12 @@ describe('request', () => {
     expect(RETRY_DELAYS_MS).toEqual([1000, 2000, 4000, 8000, 16000]);
     expect(new Set(t.calls.map((c) => c.init.body))).toEqual(new Set(['{"id":"r-1","n":1}']));
     for (const c of t.calls) {
-      expect(c.init).toMatchObject({ method: 'POST', headers: { 'Content-Type': 'text/plain;charset=UTF-8' }, credentials: 'omit', mode: 'cors' });
+      expect(c.init).toMatchObject({
+        method: 'POST',
+        headers: { 'Content-Type': 'text/plain;charset=UTF-8' },
+        credentials: 'omit',
+        mode: 'cors',
+      });
     }
   });
 
@@ -82,7 +87,10 @@ describe('fieldErrors and errorMessage', () => {
     },
   };
   it('keys the API’s field errors by field, prefix removed, first message kept', () => {
-    expect(fieldErrors(body, 'body.fields.')).toEqual({ email: 'Enter a valid e-mail address', 'body.consent': 'Consent is required' });
+    expect(fieldErrors(body, 'body.fields.')).toEqual({
+      email: 'Enter a valid e-mail address',
+      'body.consent': 'Consent is required',
+    });
     expect(fieldErrors(null, 'body.')).toEqual({});
     expect(fieldErrors({ error: { details: {} } }, 'body.')).toEqual({});
   });

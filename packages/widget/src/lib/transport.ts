@@ -1,7 +1,13 @@
 /** The part of `fetch` the widget uses, so tests can inject one. */
 export type FetchLike = (
   url: string,
-  init: { method: string; headers?: Record<string, string>; body?: string; credentials: 'omit'; mode: 'cors' },
+  init: {
+    method: string;
+    headers?: Record<string, string>;
+    body?: string;
+    credentials: 'omit';
+    mode: 'cors';
+  },
 ) => Promise<{ readonly status: number; text(): Promise<string> }>;
 
 export type Sleep = (ms: number) => Promise<void>;

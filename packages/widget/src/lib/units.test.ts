@@ -1,5 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { formatInput, formatValue, fromDisplay, outputUnitFor, parseNumber, toDisplay, unitFor, withUnit } from './units.js';
+import {
+  formatInput,
+  formatValue,
+  fromDisplay,
+  outputUnitFor,
+  parseNumber,
+  toDisplay,
+  unitFor,
+  withUnit,
+} from './units.js';
 
 describe('unitFor', () => {
   it('takes the definition’s own unit for the system, else the system’s default', () => {

@@ -1,4 +1,12 @@
-import { displayUnit, fromCanonical, toCanonical, units, type QuantityKind, type UnitId, type UnitSystemId } from '@wickstone/calc-core';
+import {
+  displayUnit,
+  fromCanonical,
+  toCanonical,
+  units,
+  type QuantityKind,
+  type UnitId,
+  type UnitSystemId,
+} from '@wickstone/calc-core';
 
 /** Anything with a kind and an optional per-system display unit: a quantity input or an output. */
 export interface Displayable {

@@ -1,7 +1,21 @@
-import { CalcInputError, type CalculationResult, type CalculatorDefinition, type FieldIssue, type UnitSystemId } from '@wickstone/calc-core';
+import {
+  CalcInputError,
+  type CalculationResult,
+  type CalculatorDefinition,
+  type FieldIssue,
+  type UnitSystemId,
+} from '@wickstone/calc-core';
 import type { EmbedWidget } from '@wickstone/contracts';
 import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
-import { applicable, collectInputs, initialForm, issueMessage, reformat, typed, type FormState } from '../lib/form.js';
+import {
+  applicable,
+  collectInputs,
+  initialForm,
+  issueMessage,
+  reformat,
+  typed,
+  type FormState,
+} from '../lib/form.js';
 import { lookVariables } from '../lib/look.js';
 import type { Reporter } from '../lib/reporter.js';
 import { resolveInputSettings, type ResolvedInput } from '../lib/settings.js';
@@ -46,7 +60,15 @@ function UnitSwitch({ system, onChange }: { system: UnitSystemId; onChange: (s: 
     <div class="units" role="radiogroup" aria-label="Units" data-wickstone="unit-switch">
       {options.map(([value, text, title]) => (
         <label key={value} title={title}>
-          <input type="radio" name="wk-units" value={value} data-unit={value} checked={system === value} aria-label={title} onChange={() => onChange(value)} />
+          <input
+            type="radio"
+            name="wk-units"
+            value={value}
+            data-unit={value}
+            checked={system === value}
+            aria-label={title}
+            onChange={() => onChange(value)}
+          />
           <span>{text}</span>
         </label>
       ))}
@@ -57,7 +79,10 @@ function UnitSwitch({ system, onChange }: { system: UnitSystemId; onChange: (s: 
 /** The whole widget: header, inputs, result and lead form for one calculator. */
 export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
   const { settings } = widget;
-  const inputs = useMemo(() => resolveInputSettings(calculator, settings.inputs), [calculator, settings.inputs]);
+  const inputs = useMemo(
+    () => resolveInputSettings(calculator, settings.inputs),
+    [calculator, settings.inputs],
+  );
   const [system, setSystem] = useState<UnitSystemId>(settings.units.system);
   const [form, setForm] = useState<FormState>(() => initialForm(inputs, settings.units.system));
   const [issues, setIssues] = useState<readonly FieldIssue[]>([]);
@@ -89,11 +114,16 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
     const input = byId.get(issue.field);
     if (input && input.mode !== 'hidden' && visible.includes(input)) {
       const note = input.mode === 'locked' ? ' (a value set by the firm)' : '';
-      if (!fieldErrors.has(issue.field)) fieldErrors.set(issue.field, issueMessage(issue, input, shownSystem) + note);
+      if (!fieldErrors.has(issue.field))
+        fieldErrors.set(issue.field, issueMessage(issue, input, shownSystem) + note);
     } else {
       // Hidden inputs and whole-calculation problems have no field to sit beside.
       const label = input ? `${input.def.label}: ` : '';
-      otherErrors.push(label + issueMessage(issue, input, shownSystem) + (input?.mode === 'hidden' ? ' (a value set by the firm)' : ''));
+      otherErrors.push(
+        label +
+          issueMessage(issue, input, shownSystem) +
+          (input?.mode === 'hidden' ? ' (a value set by the firm)' : ''),
+      );
     }
   }
 
@@ -108,8 +138,10 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
     setForm(next);
     if (outcome) setStale(true);
   };
-  const onText = (input: ResolvedInput, text: string): void => edit({ ...form, [input.def.id]: typed(input, text, shownSystem) });
-  const onChoice = (input: ResolvedInput, value: string): void => edit({ ...form, [input.def.id]: { text: value, value } });
+  const onText = (input: ResolvedInput, text: string): void =>
+    edit({ ...form, [input.def.id]: typed(input, text, shownSystem) });
+  const onChoice = (input: ResolvedInput, value: string): void =>
+    edit({ ...form, [input.def.id]: { text: value, value } });
   const onSystem = (next: UnitSystemId): void => {
     setSystem(next);
     setForm(reformat(form, inputs, next));
@@ -124,10 +156,20 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
       // A calc-core bug must not take the host page's script down with it: say so in the form.
       if (!(err instanceof CalcInputError)) console.error('Wickstone: calculation failed', err);
       const found: readonly FieldIssue[] =
-        err instanceof CalcInputError ? err.issues : [{ field: 'inputs', code: 'FAILED', message: 'The calculation could not be completed with these inputs.' }];
+        err instanceof CalcInputError
+          ? err.issues
+          : [
+              {
+                field: 'inputs',
+                code: 'FAILED',
+                message: 'The calculation could not be completed with these inputs.',
+              },
+            ];
       setIssues(found);
       const n = found.length;
-      setAnnouncement(`${n === 1 ? 'One input needs' : `${n} inputs need`} attention: ${found.map((i) => issueMessage(i, byId.get(i.field), shownSystem)).join('; ')}`);
+      setAnnouncement(
+        `${n === 1 ? 'One input needs' : `${n} inputs need`} attention: ${found.map((i) => issueMessage(i, byId.get(i.field), shownSystem)).join('; ')}`,
+      );
       const first = found.find((i) => byId.get(i.field)?.mode === 'editable');
       if (first) rootRef.current?.querySelector<HTMLElement>(`#${controlId(first.field)}`)?.focus();
       return;
@@ -142,7 +184,9 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
         return `${o.label} ${withUnit(formatValue(toDisplay(v, unit)), unit)}`;
       });
     const w = result.warnings.length;
-    setAnnouncement(`Result: ${figures.join('; ')}.${w > 0 ? ` ${w === 1 ? 'One validity warning' : `${w} validity warnings`}.` : ''}`);
+    setAnnouncement(
+      `Result: ${figures.join('; ')}.${w > 0 ? ` ${w === 1 ? 'One validity warning' : `${w} validity warnings`}.` : ''}`,
+    );
     if (reporter === null) {
       setOutcome({ result, target: null });
       return;
@@ -150,14 +194,23 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
     const sent = reporter.report(result, shownSystem);
     setOutcome({ result, target: { runId: sent.id, stored: sent.stored } });
     setReport('pending');
-    void sent.stored.then((ok) => setReport((current) => (current === 'pending' ? (ok ? 'stored' : 'failed') : current)));
+    void sent.stored.then((ok) =>
+      setReport((current) => (current === 'pending' ? (ok ? 'stored' : 'failed') : current)),
+    );
   };
 
   const preview = reporter === null;
   const logo = safeLogoUrl(settings.look.logoUrl, apiBase ?? location.href);
   const leadTarget: LeadTarget | null = outcome?.target ?? null;
   return (
-    <div class="root" ref={rootRef} style={lookVariables(settings.look)} data-wickstone="root" data-calculator={calculator.id} data-system={shownSystem}>
+    <div
+      class="root"
+      ref={rootRef}
+      style={lookVariables(settings.look)}
+      data-wickstone="root"
+      data-calculator={calculator.id}
+      data-system={shownSystem}
+    >
       <header class="head">
         <div class="brand">
           {logo && <img class="logo" src={logo} alt="" data-wickstone="logo" />}
@@ -169,7 +222,13 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
         {settings.units.visitorMaySwitch && <UnitSwitch system={shownSystem} onChange={onSystem} />}
       </header>
       <p class="summary">{calculator.summary}</p>
-      <form class="body" data-wickstone="form" noValidate onSubmit={calculate} aria-label={`${calculator.title}: inputs`}>
+      <form
+        class="body"
+        data-wickstone="form"
+        noValidate
+        onSubmit={calculate}
+        aria-label={`${calculator.title}: inputs`}
+      >
         <div class="grid">
           {visible.map((input) => (
             <Field
@@ -216,7 +275,12 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
       )}
       {/* In preview the form shows from the start, so an admin sees the fields as they set them. */}
       {(outcome !== null || preview) && settings.leadForm.enabled && (
-        <LeadForm form={settings.leadForm} publicKey={widget.publicKey} apiBase={preview ? null : apiBase} target={leadTarget} />
+        <LeadForm
+          form={settings.leadForm}
+          publicKey={widget.publicKey}
+          apiBase={preview ? null : apiBase}
+          target={leadTarget}
+        />
       )}
     </div>
   );

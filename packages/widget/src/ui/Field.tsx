@@ -28,8 +28,17 @@ export function Field({ input, state, system, error, warningIds, onText, onChoic
   const option = choice?.options.find((o) => o.value === state.value);
   const help = choice ? option?.help : def.help;
   const symbol = choice ? '' : unitSymbol(unitFor(def as QuantityInput, system));
-  const describedBy = [help ? helpId : '', locked ? `${id}-lock` : '', error ? errorId : '', ...warningIds].filter(Boolean).join(' ');
-  const classes = ['field', locked ? 'locked' : '', error ? 'invalid' : '', warningIds.length > 0 ? 'warned' : ''].filter(Boolean).join(' ');
+  const describedBy = [help ? helpId : '', locked ? `${id}-lock` : '', error ? errorId : '', ...warningIds]
+    .filter(Boolean)
+    .join(' ');
+  const classes = [
+    'field',
+    locked ? 'locked' : '',
+    error ? 'invalid' : '',
+    warningIds.length > 0 ? 'warned' : '',
+  ]
+    .filter(Boolean)
+    .join(' ');
 
   let control;
   if (choice && !locked) {
@@ -69,7 +78,13 @@ export function Field({ input, state, system, error, warningIds, onText, onChoic
   }
 
   return (
-    <div class={classes} data-field={def.id} data-mode={input.mode} data-invalid={error ? '' : undefined} data-warned={warningIds.length > 0 ? '' : undefined}>
+    <div
+      class={classes}
+      data-field={def.id}
+      data-mode={input.mode}
+      data-invalid={error ? '' : undefined}
+      data-warned={warningIds.length > 0 ? '' : undefined}
+    >
       <label class="label" for={id}>
         {def.label}
       </label>

@@ -26,10 +26,14 @@ const LEAD_RETRY_DELAYS_MS = [1000, 2000, 4000];
 
 /** What to tell the visitor when the API refused or never answered, by status. */
 function problemFor(reply: Reply): string {
-  if (reply.status === 0) return 'The request could not be sent: the connection failed. Check it and try again.';
-  if (reply.status === 429) return 'Too many requests have come from here. Please wait a while and try again.';
-  if (reply.status === 403 || reply.status === 404) return 'The firm is not taking requests through this page at the moment.';
-  if (reply.status >= 500) return 'The firm’s server could not take the request just now. Please try again shortly.';
+  if (reply.status === 0)
+    return 'The request could not be sent: the connection failed. Check it and try again.';
+  if (reply.status === 429)
+    return 'Too many requests have come from here. Please wait a while and try again.';
+  if (reply.status === 403 || reply.status === 404)
+    return 'The firm is not taking requests through this page at the moment.';
+  if (reply.status >= 500)
+    return 'The firm’s server could not take the request just now. Please try again shortly.';
   return 'The request could not be sent. Check the fields marked and try again.';
 }
 
@@ -75,7 +79,9 @@ export function LeadForm({ form, publicKey, apiBase, target }: LeadFormProps) {
     // The lead names its run: the server must have stored that run first.
     if (!(await target.stored)) {
       setStatus('failed');
-      setProblem('This result could not be recorded, so the request cannot refer to it. Calculate again, then send the request.');
+      setProblem(
+        'This result could not be recorded, so the request cannot refer to it. Calculate again, then send the request.',
+      );
       return;
     }
     const body = buildLeadBody({ runId: target.runId, publicKey, draft, modes: form.fields });
@@ -88,12 +94,15 @@ export function LeadForm({ form, publicKey, apiBase, target }: LeadFormProps) {
     }
     const server = fieldErrors(reply.body, 'body.fields.');
     const mapped: Record<string, string> = {};
-    for (const [key, message] of Object.entries(server)) mapped[key === 'body.consent' ? 'consent' : key] = message;
+    for (const [key, message] of Object.entries(server))
+      mapped[key === 'body.consent' ? 'consent' : key] = message;
     setErrors(mapped);
     setStatus('failed');
     const marked = Object.keys(mapped).some((k) => k === 'consent' || fields.some((f) => f.spec.id === k));
     // A refusal that names no field on the form (say, the run id) is explained in the server's words.
-    setProblem(reply.status === 400 && !marked ? (errorMessage(reply.body) ?? problemFor(reply)) : problemFor(reply));
+    setProblem(
+      reply.status === 400 && !marked ? (errorMessage(reply.body) ?? problemFor(reply)) : problemFor(reply),
+    );
     focusFirst(mapped);
   };
 
@@ -116,7 +125,11 @@ export function LeadForm({ form, publicKey, apiBase, target }: LeadFormProps) {
 
   const err = (id: string) =>
     errors[id] ? (
-      <p class={id === 'consent' ? 'error check-error' : 'error'} id={`wk-lead-${id}-error`} data-lead-error={id}>
+      <p
+        class={id === 'consent' ? 'error check-error' : 'error'}
+        id={`wk-lead-${id}-error`}
+        data-lead-error={id}
+      >
         {errors[id]}
       </p>
     ) : null;
@@ -150,10 +163,14 @@ export function LeadForm({ form, publicKey, apiBase, target }: LeadFormProps) {
                 'aria-invalid': errors[spec.id] ? ('true' as const) : undefined,
                 'aria-describedby': described(spec.id),
                 value: draft.values[spec.id] ?? '',
-                onInput: (ev: { currentTarget: { value: string } }) => set({ values: { ...draft.values, [spec.id]: ev.currentTarget.value } }),
+                onInput: (ev: { currentTarget: { value: string } }) =>
+                  set({ values: { ...draft.values, [spec.id]: ev.currentTarget.value } }),
               };
               return (
-                <div class={`field${spec.type === 'textarea' ? ' wide' : ''}${errors[spec.id] ? ' invalid' : ''}`} key={spec.id}>
+                <div
+                  class={`field${spec.type === 'textarea' ? ' wide' : ''}${errors[spec.id] ? ' invalid' : ''}`}
+                  key={spec.id}
+                >
                   <label class="label" for={id}>
                     {spec.label}
                     {mode === 'optional' && <span class="optional"> (optional)</span>}
@@ -190,7 +207,12 @@ export function LeadForm({ form, publicKey, apiBase, target }: LeadFormProps) {
             {err('consent')}
             {emailAsked && (
               <label class="check">
-                <input type="checkbox" data-lead-field="sendCopy" checked={draft.sendCopy} onChange={(ev) => set({ sendCopy: ev.currentTarget.checked })} />
+                <input
+                  type="checkbox"
+                  data-lead-field="sendCopy"
+                  checked={draft.sendCopy}
+                  onChange={(ev) => set({ sendCopy: ev.currentTarget.checked })}
+                />
                 <span>Send me a copy of this result by e-mail</span>
               </label>
             )}

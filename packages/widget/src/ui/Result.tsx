@@ -1,5 +1,13 @@
 import type { CalculationResult, CalculatorDefinition, UnitId, UnitSystemId } from '@wickstone/calc-core';
-import { formatValue, outputUnitFor, toDisplay, unitFor, unitKind, unitSymbol, withUnit } from '../lib/units.js';
+import {
+  formatValue,
+  outputUnitFor,
+  toDisplay,
+  unitFor,
+  unitKind,
+  unitSymbol,
+  withUnit,
+} from '../lib/units.js';
 
 export const DISCLAIMER =
   'Results are estimates. They do not replace a site investigation or the judgement of a licensed professional working to local codes.';
@@ -72,7 +80,11 @@ export function Result({ calculator, result, system, stale, firmCautions, runId,
                 <Figure value={value} unit={unit} />
                 {range && range.low !== range.high && (
                   <span class="band" data-band={o.id}>
-                    Likely range {withUnit(`${formatValue(toDisplay(range.low, unit))} – ${formatValue(toDisplay(range.high, unit))}`, unit)}
+                    Likely range{' '}
+                    {withUnit(
+                      `${formatValue(toDisplay(range.low, unit))} – ${formatValue(toDisplay(range.high, unit))}`,
+                      unit,
+                    )}
                   </span>
                 )}
                 {o.help && <span class="band">{o.help}</span>}
@@ -88,7 +100,12 @@ export function Result({ calculator, result, system, stale, firmCautions, runId,
             .map((b) => {
               const input = calculator.inputs.find((x) => x.id === b.input);
               const unit = input && input.kind !== 'choice' ? unitFor(input, system) : null;
-              const edges = unit ? withUnit(`${formatValue(toDisplay(b.low, unit))} to ${formatValue(toDisplay(b.high, unit))}`, unit) : `${b.low} to ${b.high}`;
+              const edges = unit
+                ? withUnit(
+                    `${formatValue(toDisplay(b.low, unit))} to ${formatValue(toDisplay(b.high, unit))}`,
+                    unit,
+                  )
+                : `${b.low} to ${b.high}`;
               return `${inputLabel(b.input)}, ${edges} (${b.source})`;
             })
             .join('; ')}
@@ -103,7 +120,9 @@ export function Result({ calculator, result, system, stale, firmCautions, runId,
               <span class="code">{w.code}</span>
               <span>
                 {w.message}
-                {w.fields.length > 0 && <span class="note"> Check: {w.fields.map(inputLabel).join(', ')}.</span>}
+                {w.fields.length > 0 && (
+                  <span class="note"> Check: {w.fields.map(inputLabel).join(', ')}.</span>
+                )}
               </span>
             </div>
           ))}
@@ -124,7 +143,9 @@ export function Result({ calculator, result, system, stale, firmCautions, runId,
                 <code class="math">{step.substituted}</code>
                 <p class="step-value">
                   = {withUnit(formatValue(step.value), step.unit)}
-                  {converted && <span class="note"> ({withUnit(formatValue(toDisplay(step.value, shown)), shown)})</span>}
+                  {converted && (
+                    <span class="note"> ({withUnit(formatValue(toDisplay(step.value, shown)), shown)})</span>
+                  )}
                 </p>
                 {step.source && <p class="step-source">{step.source}</p>}
               </li>

@@ -62,7 +62,11 @@ export const up: Migration = async ({ context: qi }) => {
       },
       // Unlinked (null) when the run is purged; the run stays when the lead's personal data is erased.
       run_id: { type: DataTypes.CHAR(36), allowNull: true },
-      status: { type: DataTypes.ENUM('new', 'contacted', 'qualified', 'closed'), allowNull: false, defaultValue: 'new' },
+      status: {
+        type: DataTypes.ENUM('new', 'contacted', 'qualified', 'closed'),
+        allowNull: false,
+        defaultValue: 'new',
+      },
       name: { type: DataTypes.STRING(120), allowNull: true },
       email: { type: DataTypes.STRING(254), allowNull: true },
       company: { type: DataTypes.STRING(160), allowNull: true },

@@ -37,7 +37,9 @@ export const up: Migration = async ({ context: qi }) => {
     },
     table,
   );
-  await qi.addIndex('run_daily', ['organization_id', 'widget_id', 'day'], { name: 'run_daily_org_widget_day' });
+  await qi.addIndex('run_daily', ['organization_id', 'widget_id', 'day'], {
+    name: 'run_daily_org_widget_day',
+  });
 
   await qi.createTable(
     'run_warning_daily',
@@ -51,7 +53,9 @@ export const up: Migration = async ({ context: qi }) => {
     },
     table,
   );
-  await qi.addIndex('run_warning_daily', ['organization_id', 'widget_id', 'day'], { name: 'run_warning_daily_org_widget_day' });
+  await qi.addIndex('run_warning_daily', ['organization_id', 'widget_id', 'day'], {
+    name: 'run_warning_daily_org_widget_day',
+  });
 
   await qi.createTable(
     'organization_settings',
@@ -67,14 +71,26 @@ export const up: Migration = async ({ context: qi }) => {
 
   // The runs page filters by these within one organisation and pages newest first: each index ends
   // in created_at (and, implicitly, the primary key), so a filtered page is a range read in order.
-  await qi.addIndex('runs', ['organization_id', 'widget_id', 'has_warning', 'created_at'], { name: 'runs_org_widget_warning_created' });
-  await qi.addIndex('runs', ['organization_id', 'has_warning', 'created_at'], { name: 'runs_org_warning_created' });
-  await qi.addIndex('runs', ['organization_id', 'calculator_id', 'created_at'], { name: 'runs_org_calculator_created' });
+  await qi.addIndex('runs', ['organization_id', 'widget_id', 'has_warning', 'created_at'], {
+    name: 'runs_org_widget_warning_created',
+  });
+  await qi.addIndex('runs', ['organization_id', 'has_warning', 'created_at'], {
+    name: 'runs_org_warning_created',
+  });
+  await qi.addIndex('runs', ['organization_id', 'calculator_id', 'created_at'], {
+    name: 'runs_org_calculator_created',
+  });
   await qi.addIndex('runs', ['organization_id', 'origin', 'created_at'], { name: 'runs_org_origin_created' });
   await qi.addIndex('runs', ['organization_id', 'agreed', 'created_at'], { name: 'runs_org_agreed_created' });
-  await qi.addIndex('leads', ['organization_id', 'status', 'created_at'], { name: 'leads_org_status_created' });
-  await qi.addIndex('leads', ['organization_id', 'widget_id', 'created_at'], { name: 'leads_org_widget_created' });
-  await qi.addIndex('leads', ['organization_id', 'assignee_id', 'created_at'], { name: 'leads_org_assignee_created' });
+  await qi.addIndex('leads', ['organization_id', 'status', 'created_at'], {
+    name: 'leads_org_status_created',
+  });
+  await qi.addIndex('leads', ['organization_id', 'widget_id', 'created_at'], {
+    name: 'leads_org_widget_created',
+  });
+  await qi.addIndex('leads', ['organization_id', 'assignee_id', 'created_at'], {
+    name: 'leads_org_assignee_created',
+  });
   await qi.addIndex('leads', ['organization_id', 'updated_at'], { name: 'leads_org_updated' });
 
   // Runs stored before this migration are counted once, here.
@@ -95,7 +111,12 @@ export const up: Migration = async ({ context: qi }) => {
 };
 
 export const down: Migration = async ({ context: qi }) => {
-  for (const name of ['leads_org_status_created', 'leads_org_widget_created', 'leads_org_assignee_created', 'leads_org_updated'])
+  for (const name of [
+    'leads_org_status_created',
+    'leads_org_widget_created',
+    'leads_org_assignee_created',
+    'leads_org_updated',
+  ])
     await qi.removeIndex('leads', name);
   for (const name of [
     'runs_org_widget_warning_created',

@@ -14,7 +14,21 @@ import { Widget } from './widget.js';
 import { WidgetRevision } from './widget-revision.js';
 
 export type { AuditEventType } from './audit-event.js';
-export { Asset, AuditEvent, Invitation, Lead, Membership, Organization, OrganizationSetting, PasswordReset, Run, SessionRevocation, User, Widget, WidgetRevision };
+export {
+  Asset,
+  AuditEvent,
+  Invitation,
+  Lead,
+  Membership,
+  Organization,
+  OrganizationSetting,
+  PasswordReset,
+  Run,
+  SessionRevocation,
+  User,
+  Widget,
+  WidgetRevision,
+};
 
 /** Bind every model to this connection and declare the associations between them. */
 export function initModels(sequelize: Sequelize): void {

@@ -38,7 +38,11 @@ export class Lead extends Model<InferAttributes<Lead>, InferCreationAttributes<L
         organizationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         widgetId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         runId: { type: DataTypes.CHAR(36), allowNull: true },
-        status: { type: DataTypes.ENUM('new', 'contacted', 'qualified', 'closed'), allowNull: false, defaultValue: 'new' },
+        status: {
+          type: DataTypes.ENUM('new', 'contacted', 'qualified', 'closed'),
+          allowNull: false,
+          defaultValue: 'new',
+        },
         name: { type: DataTypes.STRING(120), allowNull: true },
         email: { type: DataTypes.STRING(254), allowNull: true },
         company: { type: DataTypes.STRING(160), allowNull: true },

@@ -8,7 +8,10 @@ import {
 } from 'sequelize';
 
 /** Settings an organisation's owners and admins choose; one row per organisation, made on first change. */
-export class OrganizationSetting extends Model<InferAttributes<OrganizationSetting>, InferCreationAttributes<OrganizationSetting>> {
+export class OrganizationSetting extends Model<
+  InferAttributes<OrganizationSetting>,
+  InferCreationAttributes<OrganizationSetting>
+> {
   declare organizationId: number;
   /** Runs and leads older than this many months are purged daily; null keeps them. */
   declare retentionMonths: number | null;

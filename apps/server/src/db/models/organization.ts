@@ -1,6 +1,16 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
-export class Organization extends Model<InferAttributes<Organization>, InferCreationAttributes<Organization>> {
+export class Organization extends Model<
+  InferAttributes<Organization>,
+  InferCreationAttributes<Organization>
+> {
   declare id: CreationOptional<number>;
   declare name: string;
   declare slug: string;

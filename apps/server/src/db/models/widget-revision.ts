@@ -13,7 +13,10 @@ export interface WidgetChange {
   after: unknown;
 }
 
-export class WidgetRevision extends Model<InferAttributes<WidgetRevision>, InferCreationAttributes<WidgetRevision>> {
+export class WidgetRevision extends Model<
+  InferAttributes<WidgetRevision>,
+  InferCreationAttributes<WidgetRevision>
+> {
   declare id: CreationOptional<number>;
   declare widgetId: number;
   declare organizationId: number;

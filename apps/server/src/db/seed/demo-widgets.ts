@@ -21,8 +21,13 @@ const demoWidgets: DemoWidget[] = [
       ...s,
       inputs: { gravity: { mode: 'hidden' }, liquid: { mode: 'locked', default: 'water' } },
       units: { system: 'si', visitorMaySwitch: true },
-      look: { ...s.look, colors: { background: '#fffdf8', text: '#2b2118', primary: '#5a3d1e', primaryText: '#ffffff' }, corner: 'soft' },
-      cautions: 'Brick and mortar pores are neither round nor clean: measured damp heights on site are usually far below the tube figure. Book a survey before any remedial injection.',
+      look: {
+        ...s.look,
+        colors: { background: '#fffdf8', text: '#2b2118', primary: '#5a3d1e', primaryText: '#ffffff' },
+        corner: 'soft',
+      },
+      cautions:
+        'Brick and mortar pores are neither round nor clean: measured damp heights on site are usually far below the tube figure. Book a survey before any remedial injection.',
       leadForm: { ...s.leadForm, notify: ['surveys@brackenridge-ground.example'] },
     }),
   },
@@ -32,8 +37,13 @@ const demoWidgets: DemoWidget[] = [
     settings: (s) => ({
       ...s,
       units: { system: 'us', visitorMaySwitch: true },
-      look: { ...s.look, colors: { background: '#f4f8f7', text: '#14232b', primary: '#1d4e5f', primaryText: '#ffffff' }, corner: 'round' },
-      cautions: 'Frost-susceptible silts under unheated slabs need a geotechnical assessment regardless of this estimate.',
+      look: {
+        ...s.look,
+        colors: { background: '#f4f8f7', text: '#14232b', primary: '#1d4e5f', primaryText: '#ffffff' },
+        corner: 'round',
+      },
+      cautions:
+        'Frost-susceptible silts under unheated slabs need a geotechnical assessment regardless of this estimate.',
       leadForm: { ...s.leadForm, notify: ['surveys@brackenridge-ground.example'] },
     }),
   },
@@ -60,8 +70,14 @@ async function seedRuns(w: Widget, origin: string, seed: number): Promise<number
   for (let i = 0; i < 180; i++) {
     const inputs: Record<string, number | string> =
       w.calculatorId === 'tube-rise'
-        ? { diameter: [0.0002, 0.0005, 0.001, 0.002, 0.004][Math.floor(rnd() * 5)] as number, temperatureC: 5 + Math.round(rnd() * 20) }
-        : { d10: [0.00002, 0.00008, 0.0002, 0.0006][Math.floor(rnd() * 4)] as number, waterTableDepth: 0.5 + Math.round(rnd() * 30) / 10 };
+        ? {
+            diameter: [0.0002, 0.0005, 0.001, 0.002, 0.004][Math.floor(rnd() * 5)] as number,
+            temperatureC: 5 + Math.round(rnd() * 20),
+          }
+        : {
+            d10: [0.00002, 0.00008, 0.0002, 0.0006][Math.floor(rnd() * 4)] as number,
+            waterTableDepth: 0.5 + Math.round(rnd() * 30) / 10,
+          };
     rows.push(
       inventRun(w, inputs, {
         id: seededUuid(`demo-run-${seed}-${i}`),
@@ -117,15 +133,24 @@ export async function seedDemoWidgets(
   for (const [i, d] of demoWidgets.entries()) {
     let w = await Widget.findOne({ where: { organizationId: orgId, name: d.name } });
     if (!w) {
-      const created = await widgets.create(orgId, ownerId, { name: d.name, calculatorId: d.calculatorId, allowedOrigins: origins });
-      await widgets.update(orgId, created.id, ownerId, { status: 'live', settings: d.settings(defaultWidgetSettings()) });
+      const created = await widgets.create(orgId, ownerId, {
+        name: d.name,
+        calculatorId: d.calculatorId,
+        allowedOrigins: origins,
+      });
+      await widgets.update(orgId, created.id, ownerId, {
+        status: 'live',
+        settings: d.settings(defaultWidgetSettings()),
+      });
       w = await Widget.findByPk(created.id);
     }
     if (!w) continue;
     const runs = await seedRuns(w, origins[0] as string, 101 + i);
     const dto = await widgets.get(orgId, w.id);
     out.push(dto);
-    lines.push(`  widget "${dto.name}" (${dto.status}, key ${dto.publicKey})${runs ? `, ${runs} invented runs` : ''}`);
+    lines.push(
+      `  widget "${dto.name}" (${dto.status}, key ${dto.publicKey})${runs ? `, ${runs} invented runs` : ''}`,
+    );
   }
   return { widgets: out, lines };
 }
