@@ -141,13 +141,11 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     return;
   }
   if (h.type === 'entity.parse.failed') {
-    res
-      .status(400)
-      .json(
-        body('bad_request', 'Request body is not valid JSON', {
-          fields: [{ field: 'body', message: 'Malformed JSON' }],
-        }),
-      );
+    res.status(400).json(
+      body('bad_request', 'Request body is not valid JSON', {
+        fields: [{ field: 'body', message: 'Malformed JSON' }],
+      }),
+    );
     return;
   }
   if (h.type === 'encoding.unsupported' || h.type === 'charset.unsupported' || status === 415) {
@@ -161,13 +159,11 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   if (isDatabaseUnavailable(err)) {
     req.log?.warn({ err }, 'database unavailable');
     res.setHeader('Retry-After', String(OUTAGE_RETRY_AFTER_S));
-    res
-      .status(503)
-      .json(
-        body('service_unavailable', 'Temporarily unavailable: try again in a few seconds', {
-          retryAfterS: OUTAGE_RETRY_AFTER_S,
-        }),
-      );
+    res.status(503).json(
+      body('service_unavailable', 'Temporarily unavailable: try again in a few seconds', {
+        retryAfterS: OUTAGE_RETRY_AFTER_S,
+      }),
+    );
     return;
   }
   req.log?.error({ err }, 'unhandled error');
