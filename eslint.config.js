@@ -4,6 +4,7 @@ import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import prettier from 'eslint-config-prettier';
 import globals from 'globals';
+import reactHooks from 'eslint-plugin-react-hooks';
 
 export default tseslint.config(
   {
@@ -22,6 +23,21 @@ export default tseslint.config(
   {
     files: ['apps/dashboard/src/**', 'packages/widget/src/**'],
     languageOptions: { globals: { ...globals.browser } },
+  },
+  // Dev pages of the widget run in the browser; its dev checks in Node.
+  {
+    files: ['packages/widget/dev/**'],
+    languageOptions: { globals: { ...globals.browser, ...globals.node } },
+  },
+  // Hooks rules for the dashboard (React) and the widget (Preact hooks follow the same rules).
+  {
+    files: ['apps/dashboard/src/**/*.{ts,tsx}', 'packages/widget/src/**/*.{ts,tsx}'],
+    ...reactHooks.configs.flat.recommended,
+    rules: {
+      ...reactHooks.configs.flat.recommended.rules,
+      // A missing dependency is a stale value waiting to happen: an error, not a warning.
+      'react-hooks/exhaustive-deps': 'error',
+    },
   },
   prettier,
 );

@@ -154,15 +154,10 @@ export function SchemaFormView({
   errorClassName?: string;
   children: ReactNode;
 }) {
+  const { formRef, onSubmit, formError } = form;
   return (
-    <form
-      ref={form.formRef}
-      onSubmit={form.onSubmit}
-      noValidate
-      aria-labelledby={labelledBy}
-      className={className}
-    >
-      <FormError message={form.formError} className={errorClassName} />
+    <form ref={formRef} onSubmit={onSubmit} noValidate aria-labelledby={labelledBy} className={className}>
+      <FormError message={formError} className={errorClassName} />
       {children}
     </form>
   );

@@ -9,25 +9,26 @@ import { orgNav, orgPath } from '../nav';
  * Links rather than a select, because a select moves on every arrow key press.
  */
 export function OrgSwitcher({ me, orgId, section }: { me: MeResponse; orgId: number; section: string }) {
-  const [open, setOpen] = useState(false);
+  // Open on the page it was opened on: navigating anywhere closes it.
+  const [openOn, setOpenOn] = useState<string | null>(null);
   const listId = useId();
   const rootRef = useRef<HTMLDivElement>(null);
   const buttonRef = useRef<HTMLButtonElement>(null);
   const location = useLocation();
+  const open = openOn === location.pathname;
   const current = me.memberships.find((m) => m.organizationId === orgId);
 
-  // Close on navigation, on Escape (focus back to the button) and on a click elsewhere.
-  useEffect(() => setOpen(false), [location.pathname]);
+  // Close on Escape (focus back to the button) and on a click elsewhere.
   useEffect(() => {
     if (!open) return;
     const onKey = (e: KeyboardEvent) => {
       if (e.key === 'Escape') {
-        setOpen(false);
+        setOpenOn(null);
         buttonRef.current?.focus();
       }
     };
     const onClick = (e: MouseEvent) => {
-      if (!rootRef.current?.contains(e.target as Node)) setOpen(false);
+      if (!rootRef.current?.contains(e.target as Node)) setOpenOn(null);
     };
     document.addEventListener('keydown', onKey);
     document.addEventListener('mousedown', onClick);
@@ -49,7 +50,7 @@ export function OrgSwitcher({ me, orgId, section }: { me: MeResponse; orgId: num
         type="button"
         aria-expanded={open}
         aria-controls={listId}
-        onClick={() => setOpen((o) => !o)}
+        onClick={() => setOpenOn(open ? null : location.pathname)}
         className="flex w-full min-w-0 items-center gap-2 rounded-md border border-brand-tint/30 px-2 py-1 text-left text-lg font-bold text-card hover:bg-brand sm:w-auto sm:max-w-md"
       >
         <span className="sr-only">Organisation: </span>

@@ -77,31 +77,31 @@ export function WidgetPreview({
   const hostRef = useRef<HTMLDivElement>(null);
   const handleRef = useRef<MountHandle | null>(null);
   const latest = useRef(widget);
-  latest.current = widget;
-  const [state, setState] = useState<'loading' | 'ready' | 'failed'>('loading');
-  const [problem, setProblem] = useState<string | null>(null);
   const [attempt, setAttempt] = useState(0);
   const { release, calculatorId } = widget;
+  // The outcome of loading this bundle (loading until one is known for this very load), and the
+  // bundle's refusal of particular settings: both derived in render, not reset from effects.
+  const loadKey = `${release}|${calculatorId}|${integrity}|${attempt}`;
+  const [loaded, setLoaded] = useState<{ key: string; failure: string | null } | null>(null);
+  const [refused, setRefused] = useState<{ widget: EmbedWidget; message: string } | null>(null);
+  const state = loaded?.key !== loadKey ? 'loading' : loaded.failure === null ? 'ready' : 'failed';
+  const problem = state === 'failed' ? loaded?.failure : refused?.widget === widget ? refused.message : null;
 
   useEffect(() => {
     let gone = false;
-    setState('loading');
     loadBundle(release, calculatorId, integrity).then(
       (g) => {
         if (gone || !hostRef.current) return;
         try {
           handleRef.current = g.mount(hostRef.current, { widget: latest.current, preview: true });
-          setState('ready');
-          setProblem(null);
+          setLoaded({ key: loadKey, failure: null });
         } catch (err) {
-          setState('failed');
-          setProblem(err instanceof Error ? err.message : String(err));
+          setLoaded({ key: loadKey, failure: err instanceof Error ? err.message : String(err) });
         }
       },
       (err: unknown) => {
         if (gone) return;
-        setState('failed');
-        setProblem(err instanceof Error ? err.message : String(err));
+        setLoaded({ key: loadKey, failure: err instanceof Error ? err.message : String(err) });
       },
     );
     return () => {
@@ -109,17 +109,19 @@ export function WidgetPreview({
       handleRef.current?.unmount();
       handleRef.current = null;
     };
-  }, [release, calculatorId, integrity, attempt]);
+  }, [release, calculatorId, integrity, loadKey]);
 
   useEffect(() => {
+    latest.current = widget;
     const handle = handleRef.current;
     if (!handle) return;
     try {
       handle.update({ widget, preview: true });
-      setProblem(null);
     } catch (err) {
       // The bundle refused these settings; the last good rendering stays and the reason is said.
-      setProblem(err instanceof Error ? err.message : String(err));
+      // The bundle is the external system this effect synchronises with, and it answers at once.
+      // eslint-disable-next-line react-hooks/set-state-in-effect
+      setRefused({ widget, message: err instanceof Error ? err.message : String(err) });
     }
   }, [widget]);
 

@@ -44,40 +44,13 @@ function focusField(form: HTMLFormElement | null, name: string | undefined) {
  */
 export function useSchemaForm<T>(
   schema: Parser<T>,
-  onValid: (body: T) => void,
+  /** Gets the parsed body and the form's own `showServerError` and `formRef`, for the request's outcome. */
+  onValid: (body: T, form: Pick<SchemaForm, 'showServerError' | 'formRef'>) => void,
   toBody: (values: Record<string, string>) => unknown = (v) => v,
 ): SchemaForm {
   const formRef = useRef<HTMLFormElement | null>(null);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [formError, setFormError] = useState<string | null>(null);
-
-  const onSubmit = useCallback(
-    (event: FormEvent<HTMLFormElement>) => {
-      event.preventDefault();
-      const form = event.currentTarget;
-      const body = toBody(formValues(form));
-      const parsed = schema.safeParse(body);
-      if (!parsed.success) {
-        const given = typeof body === 'object' && body !== null ? (body as Record<string, unknown>) : {};
-        const next: FieldErrors = {};
-        for (const issue of parsed.error.issues) {
-          const key = issue.path.map(String).join('.') || '_form';
-          // An empty input was left out of the body: "Required" says more than the schema's type error.
-          const top = issue.path[0];
-          next[key] ??= top !== undefined && given[String(top)] === undefined ? 'Required' : issue.message;
-        }
-        const { _form, ...fields } = next;
-        setErrors(fields);
-        setFormError(_form ?? null);
-        focusField(form, Object.keys(fields)[0]);
-        return;
-      }
-      setErrors({});
-      setFormError(null);
-      onValid(parsed.data);
-    },
-    [schema, onValid, toBody],
-  );
 
   const showServerError = useCallback((error: unknown, messages: Partial<Record<string, string>> = {}) => {
     const form = formRef.current;
@@ -106,6 +79,34 @@ export function useSchemaForm<T>(
     }
     focusField(form, Object.keys(fields)[0]);
   }, []);
+
+  const onSubmit = useCallback(
+    (event: FormEvent<HTMLFormElement>) => {
+      event.preventDefault();
+      const form = event.currentTarget;
+      const body = toBody(formValues(form));
+      const parsed = schema.safeParse(body);
+      if (!parsed.success) {
+        const given = typeof body === 'object' && body !== null ? (body as Record<string, unknown>) : {};
+        const next: FieldErrors = {};
+        for (const issue of parsed.error.issues) {
+          const key = issue.path.map(String).join('.') || '_form';
+          // An empty input was left out of the body: "Required" says more than the schema's type error.
+          const top = issue.path[0];
+          next[key] ??= top !== undefined && given[String(top)] === undefined ? 'Required' : issue.message;
+        }
+        const { _form, ...fields } = next;
+        setErrors(fields);
+        setFormError(_form ?? null);
+        focusField(form, Object.keys(fields)[0]);
+        return;
+      }
+      setErrors({});
+      setFormError(null);
+      onValid(parsed.data, { showServerError, formRef });
+    },
+    [schema, onValid, toBody, showServerError],
+  );
 
   const reset = useCallback(() => {
     setErrors({});

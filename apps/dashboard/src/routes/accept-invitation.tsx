@@ -50,11 +50,11 @@ export function AcceptInvitationPage() {
     : preview.data?.existingUser
       ? existingPersonSchema
       : newPersonSchema;
-  const form = useSchemaForm(schema, (body) =>
+  const form = useSchemaForm(schema, (body, { showServerError }) =>
     accept.mutate(body, {
       onSuccess: (after) =>
         navigate(joinedOrg(me.data, after, preview.data?.organizationName ?? ''), { replace: true }),
-      onError: (error) => form.showServerError(error),
+      onError: (error) => showServerError(error),
     }),
   );
 

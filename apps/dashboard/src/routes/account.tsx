@@ -15,10 +15,10 @@ const passwordSchema = requireFields(updateAccountBodySchema, ['currentPassword'
 
 function NameForm({ me, announce }: { me: MeResponse; announce: (m: string) => void }) {
   const update = useUpdateAccount();
-  const form = useSchemaForm(nameSchema, (body) =>
+  const form = useSchemaForm(nameSchema, (body, { showServerError }) =>
     update.mutate(body, {
       onSuccess: (after) => announce(`Your name is now ${after.user.name}.`),
-      onError: (error) => form.showServerError(error),
+      onError: (error) => showServerError(error),
     }),
   );
   return (
@@ -43,13 +43,13 @@ function NameForm({ me, announce }: { me: MeResponse; announce: (m: string) => v
 
 function PasswordForm({ announce }: { announce: (m: string) => void }) {
   const update = useUpdateAccount();
-  const form = useSchemaForm(passwordSchema, (body) =>
+  const form = useSchemaForm(passwordSchema, (body, { showServerError, formRef }) =>
     update.mutate(body, {
       onSuccess: () => {
-        form.formRef.current?.reset();
+        formRef.current?.reset();
         announce('Your password is changed. Other browsers signed in as you have been signed out.');
       },
-      onError: (error) => form.showServerError(error),
+      onError: (error) => showServerError(error),
     }),
   );
   return (

@@ -13,8 +13,8 @@ export function ForgotPasswordPage() {
   usePageTitle('Reset your password');
   const forgot = useForgotPassword();
   const devMail = useQuery(devMailQuery());
-  const form = useSchemaForm(forgotPasswordBodySchema, (body: { email: string }) =>
-    forgot.mutate(body, { onError: (error) => form.showServerError(error) }),
+  const form = useSchemaForm(forgotPasswordBodySchema, (body: { email: string }, { showServerError }) =>
+    forgot.mutate(body, { onError: (error) => showServerError(error) }),
   );
   const doneRef = useRef<HTMLDivElement>(null);
   useEffect(() => {

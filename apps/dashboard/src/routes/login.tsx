@@ -19,10 +19,10 @@ export function LoginPage() {
   const notice = (useLocation().state as NoticeState | null)?.notice;
   const next = safeNext(params.get('next'));
   const login = useLogin();
-  const form = useSchemaForm(loginBodySchema, (body: LoginBody) =>
+  const form = useSchemaForm(loginBodySchema, (body: LoginBody, { showServerError }) =>
     login.mutate(body, {
       onSuccess: (me) => navigate(next ?? homeFor(me), { replace: true }),
-      onError: (error) => form.showServerError(error),
+      onError: (error) => showServerError(error),
     }),
   );
 

@@ -18,14 +18,14 @@ export function ResetPasswordPage() {
   const reset = useResetPassword();
   const form = useSchemaForm(
     resetPasswordBodySchema,
-    (body: { token: string; password: string }) =>
+    (body: { token: string; password: string }, { showServerError }) =>
       reset.mutate(body, {
         onSuccess: () =>
           navigate('/login', {
             replace: true,
             state: { notice: 'Your password is changed. Sign in with the new one.' } satisfies NoticeState,
           }),
-        onError: (error) => form.showServerError(error, { token: spentLink }),
+        onError: (error) => showServerError(error, { token: spentLink }),
       }),
     (values) => ({ ...values, token }),
   );

@@ -1,4 +1,4 @@
-import { useRef, useState } from 'react';
+import { useState } from 'react';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { Link, Navigate, NavLink, Outlet, useLocation, useMatch, useNavigate } from 'react-router';
 import { can, type Role } from '@wickstone/contracts';
@@ -25,16 +25,14 @@ export function AppShell() {
   const navigate = useNavigate();
   const client = useQueryClient();
   const logout = useLogout();
-  const signingOut = useRef(false);
+  const [signingOut, setSigningOut] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
   const orgMatch = useMatch({ path: '/orgs/:orgId/*' });
   const sectionMatch = useMatch({ path: '/orgs/:orgId/:section/*' });
 
   if (me.data === null) {
     // Signed out elsewhere or the session lapsed: sign in again and come back here.
-    return signingOut.current ? null : (
-      <Navigate to={loginPath(location.pathname + location.search)} replace />
-    );
+    return signingOut ? null : <Navigate to={loginPath(location.pathname + location.search)} replace />;
   }
   const account = me.data;
   if (!account) return <LoadingState label="Loading your account…" />;
@@ -47,7 +45,7 @@ export function AppShell() {
   const section = sectionMatch?.params.section ?? '';
 
   const finishSignOut = async () => {
-    signingOut.current = true;
+    setSigningOut(true);
     await sessionChanged(client, null);
     await navigate('/login', {
       replace: true,

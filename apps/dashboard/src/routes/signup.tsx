@@ -12,10 +12,10 @@ export function SignupPage() {
   usePageTitle('Set up your firm');
   const navigate = useNavigate();
   const signup = useSignup();
-  const form = useSchemaForm(signupBodySchema, (body: SignupBody) =>
+  const form = useSchemaForm(signupBodySchema, (body: SignupBody, { showServerError }) =>
     signup.mutate(body, {
       onSuccess: (me) => navigate(homeFor(me), { replace: true }),
-      onError: (error) => form.showServerError(error),
+      onError: (error) => showServerError(error),
     }),
   );
 

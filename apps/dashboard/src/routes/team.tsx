@@ -47,15 +47,17 @@ function InviteForm({ announce }: { announce: Announce }) {
   const invite = useInvite(orgId);
   const choices = roles.filter((r) => canAssignRole(role, r));
   const [chosen, setChosen] = useState<Role>('analyst');
-  const form = useSchemaForm(inviteBodySchema, (body: { email: string; role: Role }) =>
-    invite.mutate(body, {
-      onSuccess: (invitation) => {
-        form.formRef.current?.reset();
-        setChosen('analyst');
-        announce(`Invitation sent to ${invitation.email} as ${roleLabel[invitation.role]}.`);
-      },
-      onError: (error) => form.showServerError(error),
-    }),
+  const form = useSchemaForm(
+    inviteBodySchema,
+    (body: { email: string; role: Role }, { showServerError, formRef }) =>
+      invite.mutate(body, {
+        onSuccess: (invitation) => {
+          formRef.current?.reset();
+          setChosen('analyst');
+          announce(`Invitation sent to ${invitation.email} as ${roleLabel[invitation.role]}.`);
+        },
+        onError: (error) => showServerError(error),
+      }),
   );
   return (
     <FormCard

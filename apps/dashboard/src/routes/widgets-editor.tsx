@@ -211,7 +211,6 @@ function Editor({
   const [outcome, setOutcome] = useState<{ tone: 'ok' | 'bad'; text: string } | null>(null);
   const summaryRef = useRef<HTMLDivElement>(null);
   const formRef = useRef<HTMLDivElement>(null);
-  const lastColors = useRef<WidgetColors>(widget.settings.look.colors);
 
   const dirty = editable && isDirty(draft, saved);
   const checked = useMemo(() => validateDraft(draft, calc), [draft, calc]);
@@ -224,9 +223,13 @@ function Editor({
     return shown;
   }, [attempted, checked, serverErrors, body]);
 
+  // The last colours that were all valid stand in for a half-typed one in the preview (state kept
+  // from an earlier render, updated during render: no ref is read or written while rendering).
   const colors = draft.settings.look.colors;
-  if (Object.values(colors).every((c) => hexColorPattern.test(c))) lastColors.current = colors;
-  const fallbackColors = lastColors.current;
+  const [fallbackColors, setFallbackColors] = useState<WidgetColors>(widget.settings.look.colors);
+  if (colors !== fallbackColors && Object.values(colors).every((c) => hexColorPattern.test(c))) {
+    setFallbackColors(colors);
+  }
   const preview = useMemo(
     () => previewWidget(widget, draft, usableColors(colors, fallbackColors)),
     [widget, draft, colors, fallbackColors],

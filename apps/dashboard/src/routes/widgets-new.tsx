@@ -17,11 +17,13 @@ export function NewWidgetPage() {
   const navigate = useNavigate();
   const create = useCreateWidget(orgId);
   const [calculatorId, setCalculatorId] = useState('');
-  const form = useSchemaForm(createWidgetBodySchema, (body: { name: string; calculatorId: string }) =>
-    create.mutate(body, {
-      onSuccess: (widget) => void navigate(orgPath(orgId, `widgets/${widget.id}`)),
-      onError: (error) => form.showServerError(error),
-    }),
+  const form = useSchemaForm(
+    createWidgetBodySchema,
+    (body: { name: string; calculatorId: string }, { showServerError }) =>
+      create.mutate(body, {
+        onSuccess: (widget) => void navigate(orgPath(orgId, `widgets/${widget.id}`)),
+        onError: (error) => showServerError(error),
+      }),
   );
 
   return (

@@ -94,16 +94,16 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
 
   // New settings (the dashboard's preview as an admin edits): start the form again from them.
   const settingsKey = JSON.stringify([settings.inputs, settings.units]);
-  const firstKey = useRef(settingsKey);
+  const appliedKeyRef = useRef(settingsKey);
   useEffect(() => {
-    if (firstKey.current === settingsKey) return;
-    firstKey.current = settingsKey;
+    if (appliedKeyRef.current === settingsKey) return;
+    appliedKeyRef.current = settingsKey;
     setSystem(settings.units.system);
     setForm(initialForm(inputs, settings.units.system));
     setIssues([]);
     setOutcome(null);
     setReport(null);
-  }, [settingsKey]);
+  }, [settingsKey, inputs, settings.units.system]);
 
   const shownSystem: UnitSystemId = settings.units.visitorMaySwitch ? system : settings.units.system;
   const visible = applicable(inputs, form).filter((i) => i.mode !== 'hidden');
