@@ -1,23 +1,17 @@
-// `npm test`: the same set-up as `npm start` (plus Debian's Chromium), then lint, typecheck and
-// every test against a private test MariaDB and the fake SMTP server; stops all it started and
-// exits with the test runner's code.
-import path from 'node:path';
-import { rmSync } from 'node:fs';
-import {
-  ensureDatabase,
-  ensureMariaDBInstalled,
-  instance,
-  sql,
-  startMariaDB,
-  stopMariaDB,
-} from './lib/mariadb.mjs';
-import { log, root, run, runStatus, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
+// `npm test`: the same set-up as `npm start` (plus Debian's Chromium), then formatting, changesets,
+// lint, typecheck and every test against a private test MariaDB and the fake SMTP server; stops all
+// it started and exits with the test runner's code.
+// `npm test -- <vitest args>` (a file, `-t <name>`) passes the arguments to Vitest with the same
+// set-up and skips the static checks, which only a full run makes.
+import { ensureMariaDBInstalled, stopMariaDB } from './lib/mariadb.mjs';
+import { log, runStatus, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
 import { build, ensureChromium, ensureNodeModules } from './lib/setup.mjs';
+import { staticChecks } from './lib/checks.mjs';
+import { startTestDatabase, stopTestEnv, testDbInstance, testEnv, testPorts } from './lib/test-env.mjs';
 
-const dbPort = Number(process.env.TEST_DB_PORT ?? 3308);
-const smtpPort = Number(process.env.TEST_SMTP_PORT ?? 2526);
-const mailHttpPort = Number(process.env.TEST_FAKE_MAIL_HTTP_PORT ?? 8026);
-const db = instance(path.join(root, 'var', 'mariadb-test'), dbPort);
+const vitestArgs = process.argv.slice(2);
+const ports = testPorts();
+const db = testDbInstance(ports);
 const children = [];
 
 async function cleanup() {
@@ -32,49 +26,22 @@ try {
   ensureNodeModules();
   ensureChromium();
   ensureMariaDBInstalled();
-  log('lint and typecheck (turbo run lint typecheck)');
-  run('npx', ['turbo', 'run', 'lint', 'typecheck', '--output-logs=errors-only']);
+  if (vitestArgs.length === 0) staticChecks();
   build();
 
-  // A fresh test database server every run: nothing left from an earlier run can change a result.
-  await stopMariaDB(db, { quiet: true });
-  rmSync(db.dir, { recursive: true, force: true });
-  await startMariaDB(db);
-  const dbEnv = {
-    DB_HOST: '127.0.0.1',
-    DB_PORT: String(dbPort),
-    DB_NAME: 'wickstone_test',
-    DB_USER: 'wickstone_test',
-    DB_PASSWORD: 'wickstone-test',
-  };
-  // Tests make a database per file, so the test user may create databases.
-  ensureDatabase(db, {
-    database: dbEnv.DB_NAME,
-    user: dbEnv.DB_USER,
-    password: dbEnv.DB_PASSWORD,
-    allDatabases: true,
-  });
-  sql(db, 'SELECT 1');
-
-  const env = {
-    ...process.env,
-    ...dbEnv,
-    NODE_ENV: 'test',
-    LOG_LEVEL: 'silent',
-    SMTP_HOST: '127.0.0.1',
-    SMTP_PORT: String(smtpPort),
-    FAKE_MAIL_API_URL: `http://127.0.0.1:${mailHttpPort}`,
-    CHROMIUM_PATH: '/usr/bin/chromium',
-  };
+  // A running `npm run test:env` shares the data folder and ports: stop it, then start afresh.
+  await stopTestEnv();
+  await startTestDatabase(db, { fresh: true });
+  const env = { ...process.env, ...testEnv(ports) };
   children.push(
     startChild('mail', 'node', ['scripts/fake-smtp.mjs'], {
-      env: { ...env, FAKE_MAIL_HTTP_PORT: String(mailHttpPort) },
+      env: { ...env, FAKE_MAIL_HTTP_PORT: String(ports.mailHttp) },
     }),
   );
-  await waitForHttp(`http://127.0.0.1:${mailHttpPort}/messages`);
+  await waitForHttp(`${env.FAKE_MAIL_API_URL}/messages`);
 
-  log('running every test (vitest run)');
-  code = runStatus('npx', ['vitest', 'run'], { env });
+  log(`running ${vitestArgs.length ? `vitest run ${vitestArgs.join(' ')}` : 'every test (vitest run)'}`);
+  code = runStatus('npx', ['vitest', 'run', ...vitestArgs], { env });
 } catch (err) {
   console.error(`[wickstone] test set-up failed: ${err instanceof Error ? err.message : err}`);
   code = typeof err?.exitCode === 'number' && err.exitCode !== 0 ? err.exitCode : 1;

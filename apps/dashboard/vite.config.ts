@@ -2,12 +2,15 @@ import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 
-// In development the dashboard runs on Vite's server and proxies the API to the app server.
+// In development the dashboard runs on Vite's server and proxies the API to the app server
+// (`npm run dev` passes its address).
+const api = process.env.WICKSTONE_API_URL ?? 'http://127.0.0.1:5180';
+
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   server: {
     port: 5173,
-    proxy: { '/api': 'http://127.0.0.1:5180', '/releases': 'http://127.0.0.1:5180' },
+    proxy: { '/api': api, '/releases': api },
   },
   build: {
     outDir: 'dist',

@@ -13,5 +13,5 @@ export function startMariaDB(inst: MariaDBInstance, opts?: { quiet?: boolean }):
 export function stopMariaDB(inst: MariaDBInstance, opts?: { quiet?: boolean }): Promise<void>;
 export function ensureDatabase(
   inst: MariaDBInstance,
-  opts: { database: string; user: string; password: string; allDatabases?: boolean },
+  opts: { database: string; user: string; password: string; allDatabases?: boolean; alsoPattern?: string },
 ): void;

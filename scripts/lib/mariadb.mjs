@@ -128,8 +128,11 @@ export async function stopMariaDB(inst, { quiet = false } = {}) {
   rmSync(inst.pidFile, { force: true });
 }
 
-/** Create the database and an application user that may use it (and, for tests, create others). */
-export function ensureDatabase(inst, { database, user, password, allDatabases = false }) {
+/**
+ * Create the database and an application user that may use it (and, for tests, create others:
+ * `allDatabases`, or only those whose names match `alsoPattern`, a LIKE pattern such as `wst\_%`).
+ */
+export function ensureDatabase(inst, { database, user, password, allDatabases = false, alsoPattern }) {
   const q = (s) => s.replace(/'/g, "''");
   const grantOn = allDatabases ? '*.*' : `\`${database}\`.*`;
   sql(
@@ -139,6 +142,7 @@ export function ensureDatabase(inst, { database, user, password, allDatabases = 
       `CREATE USER IF NOT EXISTS '${q(user)}'@'127.0.0.1' IDENTIFIED BY '${q(password)}'`,
       `ALTER USER '${q(user)}'@'127.0.0.1' IDENTIFIED BY '${q(password)}'`,
       `GRANT ALL PRIVILEGES ON ${grantOn} TO '${q(user)}'@'127.0.0.1'`,
+      ...(alsoPattern ? [`GRANT ALL PRIVILEGES ON \`${alsoPattern}\`.* TO '${q(user)}'@'127.0.0.1'`] : []),
       'FLUSH PRIVILEGES',
     ].join(';\n'),
   );

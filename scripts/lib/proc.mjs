@@ -128,3 +128,29 @@ export async function waitForHttp(url, ms = 30_000) {
   }
   throw new Error(`${url} did not answer within ${ms} ms`);
 }
+
+/**
+ * What a long-running script started, stopped in reverse order on Ctrl-C, SIGTERM or `stop(code)`:
+ * child processes (`add`) and anything else (`onStop`, e.g. a database it started).
+ */
+export function supervisor() {
+  const children = [];
+  const hooks = [];
+  const stop = async (code = 0) => {
+    for (const child of children.reverse()) await stopPid(child.pid, 10_000);
+    for (const hook of hooks.reverse()) await hook();
+    process.exit(code);
+  };
+  process.on('SIGINT', () => void stop(0));
+  process.on('SIGTERM', () => void stop(0));
+  return {
+    add(child) {
+      children.push(child);
+      return child;
+    },
+    onStop(hook) {
+      hooks.push(hook);
+    },
+    stop,
+  };
+}

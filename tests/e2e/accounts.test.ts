@@ -41,7 +41,7 @@ describe('accounts in Chromium: sign up, invite, accept, and what an analyst is 
   }
 
   beforeAll(async () => {
-    // The invitation travels through the fake SMTP server that npm test (or /tmp/wst-test-env.sh) provides.
+    // The invitation travels through the fake SMTP server that npm test (or npm run test:env) provides.
     expect(
       process.env.FAKE_MAIL_API_URL,
       'FAKE_MAIL_API_URL must point at the fake SMTP server',

@@ -2,7 +2,8 @@
 // a widget made through the API, its real embed snippet on a page of another origin in Debian's
 // Chromium, a run and a lead, then the rows in MariaDB. The product's end-to-end test lives in
 // tests/; this is for checking the bundle against the server while both are being built.
-// Usage: source /tmp/wst-test-env.sh && node dev/real-check.mjs   (after building server and widget)
+// Usage: npm run test:env, then set -a; . ../../var/test-env.env; set +a; node dev/real-check.mjs
+// (after building server and widget)
 import assert from 'node:assert/strict';
 import { createServer } from 'node:http';
 import { fileURLToPath } from 'node:url';
