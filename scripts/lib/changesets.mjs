@@ -43,7 +43,7 @@ export function isChangeset(file) {
 function git(args) {
   const r = spawnSync('git', args, { cwd: root, encoding: 'utf8' });
   if (r.status !== 0) throw new Error(`git ${args.join(' ')}: ${r.stderr.trim()}`);
-  return r.stdout.trim();
+  return r.stdout.trimEnd();
 }
 const lines = (s) => (s ? s.split('\n') : []);
 
