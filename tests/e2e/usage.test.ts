@@ -5,7 +5,7 @@ import { QueryTypes } from 'sequelize';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { calculate } from '@wickstone/calc-core';
 import { seedOrgWithTeam, type FixtureOrg } from '@wickstone/server/testing';
-import { launchBrowser } from '../support/browser.js';
+import { launchBrowser, screenshot } from '../support/browser.js';
 import { startApp, type RunningApp } from '../support/server.js';
 
 /*
@@ -202,7 +202,7 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
         page.getByRole('img', { name: new RegExp(`^${reported.length} runs over 30 days`) }).count(),
       )
       .toBe(1);
-    await page.screenshot({ path: '/tmp/shots/usage-summary.png', fullPage: true });
+    await screenshot(page, 'usage-summary');
 
     await page.getByLabel('Warnings').selectOption('true');
     const warned = reported.filter((r) => r.warned);
@@ -217,7 +217,7 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     await expect.poll(runsTotal).toBe(`${soilRuns.length} runs match`);
     expect((await rowIds()).sort()).toEqual([...soilRuns].sort());
     expect(new URL(page.url()).searchParams.get('widgetId')).toBe(String(soil.id));
-    await page.screenshot({ path: '/tmp/shots/usage-runs-filtered.png', fullPage: true });
+    await screenshot(page, 'usage-runs-filtered');
   });
 
   it('downloads the filtered runs as CSV', async () => {
@@ -254,7 +254,7 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     expect(serverResult.working.length).toBeGreaterThan(0);
     expect(await page.locator('[data-working-step]').first().textContent()).toContain(reported[0]!.firstStep);
     await page.getByText('reached the same result').waitFor();
-    await page.screenshot({ path: '/tmp/shots/usage-run.png', fullPage: true });
+    await screenshot(page, 'usage-run');
   });
 
   it('moves the lead to contacted and the database holds it', async () => {
@@ -270,7 +270,7 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
       [leadId, org.id],
     );
     expect(row).toEqual({ status: 'contacted', notes: 'Rang back; survey pencilled in for Thursday.' });
-    await page.screenshot({ path: '/tmp/shots/usage-lead.png', fullPage: true });
+    await screenshot(page, 'usage-lead');
   });
 
   it('lists the lead under its new status', async () => {
@@ -284,7 +284,7 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     await page.getByLabel('Status').selectOption('contacted');
     await page.locator(`[data-lead-row="${leadId}"]`).waitFor();
     expect(new URL(page.url()).searchParams.get('status')).toBe('contacted');
-    await page.screenshot({ path: '/tmp/shots/usage-leads.png', fullPage: true });
+    await screenshot(page, 'usage-leads');
     expect(pageErrors).toEqual([]);
   });
 
@@ -304,7 +304,7 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     );
     expect(after).toEqual({ name: null, email: null, runId: null });
     expect(await q('SELECT id FROM runs WHERE id = ?', [leadRunId])).toHaveLength(1);
-    await page.screenshot({ path: '/tmp/shots/usage-lead-erased.png', fullPage: true });
+    await screenshot(page, 'usage-lead-erased');
     expect(pageErrors).toEqual([]);
   });
 });

@@ -64,16 +64,17 @@ describe('health when the database goes away and comes back', () => {
     expect(healthResponseSchema.parse(await res.json()).database.status).toBe('up');
   });
 
-  it('answers 503 with the error shape while it is down, within seconds', async () => {
+  it('answers 503 with the error shape while it is down, instead of hanging', async () => {
     await stopMariaDB(inst, { quiet: true });
-    const t0 = Date.now();
-    const res = await fetch(url);
+    // A functional bound, not a speed measurement: a load balancer's health probe gives up after
+    // some seconds, so a check that hangs on a dead database counts as no answer (the fetch aborts
+    // and the test fails); the service's own database timeout is 2.5 s.
+    const res = await fetch(url, { signal: AbortSignal.timeout(10_000) });
     expect(res.status).toBe(503);
     const body = errorBodySchema.parse(await res.json());
     expect(body.error.code).toBe('service_unavailable');
     expect(body.error.details).toMatchObject({ database: { status: 'down' } });
     expect(res.headers.get('retry-after')).toMatch(/^\d+$/);
-    expect(Date.now() - t0).toBeLessThan(10_000);
   });
 
   it('answers an API route 503 with Retry-After, not 500, while the database is down', async () => {

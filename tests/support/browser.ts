@@ -1,4 +1,6 @@
-import { chromium, type Browser } from 'playwright-core';
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
 
 /** Debian's Chromium, headless, never a downloaded browser. */
 export function launchBrowser(): Promise<Browser> {
@@ -15,4 +17,17 @@ export function launchBrowser(): Promise<Browser> {
       '--disable-sync',
     ],
   });
+}
+
+/**
+ * Screenshots for a person to look at, only when asked: `E2E_SCREENSHOTS=1` writes them to
+ * var/screenshots/, `E2E_SCREENSHOTS=<folder>` there. A normal run writes nothing.
+ */
+export async function screenshot(page: Page, name: string): Promise<void> {
+  const asked = process.env.E2E_SCREENSHOTS;
+  if (!asked || asked === '0') return;
+  const dir =
+    asked === '1' ? path.resolve(import.meta.dirname, '..', '..', 'var', 'screenshots') : path.resolve(asked);
+  mkdirSync(dir, { recursive: true });
+  await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: true });
 }
