@@ -3,13 +3,16 @@ import { ConnectionError } from 'sequelize';
 import { ZodError } from 'zod';
 import { errorStatus, type ErrorBody, type ErrorCode, type FieldIssue } from '@wickstone/contracts';
 
-/** The one error type services throw; the error handler turns it into the one error shape. */
+/**
+ * The one error type services throw; the error handler turns it into the one error shape. When it
+ * stands for another error (a driver's, a library's), pass that as `cause`: logs keep the chain.
+ */
 export class AppError extends Error {
   readonly code: ErrorCode;
   readonly details: unknown;
 
-  constructor(code: ErrorCode, message: string, details: unknown = null) {
-    super(message);
+  constructor(code: ErrorCode, message: string, details: unknown = null, options: { cause?: unknown } = {}) {
+    super(message, options);
     this.name = 'AppError';
     this.code = code;
     this.details = details;
@@ -37,17 +40,33 @@ export function fieldIssues(error: ZodError, where: string): FieldIssue[] {
   });
 }
 
-/** A 400 naming each field, in the same shape a schema failure has: `{ fields: [{ field, message }] }`. */
-export function fieldsError(fields: FieldIssue[]): AppError {
-  const named = [...new Set(fields.map((f) => f.field))].join(', ');
-  return new AppError('validation_failed', `Invalid request: check ${named}`, { fields });
+/** What a field error may say besides its fields: another code (a 409 naming the field), its own message, a cause. */
+export interface FieldErrorOptions {
+  code?: ErrorCode;
+  message?: string;
+  cause?: unknown;
 }
 
-/** A 400 for one field that passed its schema but not a rule only the server can check. */
-export const fieldError = (field: string, message: string): AppError => fieldsError([{ field, message }]);
+/**
+ * A 400 (or `code`) naming each field, in the same shape a schema failure has:
+ * `{ fields: [{ field, message }] }`.
+ */
+export function fieldsError(fields: FieldIssue[], options: FieldErrorOptions = {}): AppError {
+  const named = [...new Set(fields.map((f) => f.field))].join(', ');
+  return new AppError(
+    options.code ?? 'validation_failed',
+    options.message ?? `Invalid request: check ${named}`,
+    { fields },
+    { cause: options.cause },
+  );
+}
+
+/** A 400 (or `code`) for one field that passed its schema but not a rule only the server can check. */
+export const fieldError = (field: string, message: string, options?: FieldErrorOptions): AppError =>
+  fieldsError([{ field, message }], options);
 
 export function validationError(error: ZodError, where: string): AppError {
-  return fieldsError(fieldIssues(error, where));
+  return fieldsError(fieldIssues(error, where), { cause: error });
 }
 
 /**
@@ -141,11 +160,12 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     return;
   }
   if (h.type === 'entity.parse.failed') {
-    res.status(400).json(
-      body('bad_request', 'Request body is not valid JSON', {
-        fields: [{ field: 'body', message: 'Malformed JSON' }],
-      }),
-    );
+    const e = fieldError('body', 'Malformed JSON', {
+      code: 'bad_request',
+      message: 'Request body is not valid JSON',
+      cause: err,
+    });
+    res.status(e.status).json(body(e.code, e.message, e.details));
     return;
   }
   if (h.type === 'encoding.unsupported' || h.type === 'charset.unsupported' || status === 415) {

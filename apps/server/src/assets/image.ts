@@ -1,5 +1,5 @@
 import { imageSize } from 'image-size';
-import { AppError } from '../errors.js';
+import { fieldError } from '../errors.js';
 
 export const MAX_LOGO_BYTES = 512 * 1024;
 const MAX_SIDE_PX = 4096;
@@ -27,8 +27,7 @@ function sniff(buf: Buffer): ImageType | null {
 
 const typeNames: Record<string, ImageType> = { png: 'image/png', jpg: 'image/jpeg', webp: 'image/webp' };
 
-const refuse = (message: string) =>
-  new AppError('validation_failed', message, { fields: [{ field: 'file', message }] });
+const refuse = (message: string) => fieldError('file', message, { message });
 
 /**
  * Decide what an uploaded file is from its bytes alone (its name and declared type are ignored),

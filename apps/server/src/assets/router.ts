@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 import multer from 'multer';
 import { orgParamsSchema } from '@wickstone/contracts';
-import { AppError } from '../errors.js';
+import { fieldError } from '../errors.js';
 import type { ApiRoutes } from '../http/routes.js';
 import { MAX_LOGO_BYTES } from './image.js';
 import type { AssetService } from './service.js';
@@ -15,8 +15,9 @@ const upload = multer({
 const singleFile: RequestHandler = (req, res, next) => {
   if (!req.is('multipart/form-data')) {
     next(
-      new AppError('unsupported_media_type', 'Send the image as multipart/form-data in the field "file"', {
-        fields: [{ field: 'file', message: 'Expected a multipart upload' }],
+      fieldError('file', 'Expected a multipart upload', {
+        code: 'unsupported_media_type',
+        message: 'Send the image as multipart/form-data in the field "file"',
       }),
     );
     return;
@@ -26,20 +27,25 @@ const singleFile: RequestHandler = (req, res, next) => {
     if (err instanceof multer.MulterError) {
       if (err.code === 'LIMIT_FILE_SIZE') {
         return next(
-          new AppError('payload_too_large', `The image is larger than ${MAX_LOGO_BYTES / 1024} KB`, {
-            fields: [{ field: 'file', message: `At most ${MAX_LOGO_BYTES / 1024} KB` }],
+          fieldError('file', `At most ${MAX_LOGO_BYTES / 1024} KB`, {
+            code: 'payload_too_large',
+            message: `The image is larger than ${MAX_LOGO_BYTES / 1024} KB`,
+            cause: err,
           }),
         );
       }
       return next(
-        new AppError('validation_failed', `Invalid upload: ${err.message}`, {
-          fields: [{ field: err.field ?? 'file', message: err.message }],
+        fieldError(err.field ?? 'file', err.message, {
+          message: `Invalid upload: ${err.message}`,
+          cause: err,
         }),
       );
     }
     next(
-      new AppError('bad_request', 'The upload could not be read', {
-        fields: [{ field: 'file', message: 'Malformed multipart body' }],
+      fieldError('file', 'Malformed multipart body', {
+        code: 'bad_request',
+        message: 'The upload could not be read',
+        cause: err,
       }),
     );
   });
@@ -51,9 +57,7 @@ export function assetRoutes(routes: ApiRoutes, assets: AssetService): void {
     { access: 'assets:write', params: orgParamsSchema, use: [singleFile] },
     async ({ req, org, session }) => {
       if (!req.file) {
-        throw new AppError('validation_failed', 'Invalid request: check file', {
-          fields: [{ field: 'file', message: 'Required' }],
-        });
+        throw fieldError('file', 'Required');
       }
       return { status: 201, body: await assets.upload(org.id, session.user.id, req.file.buffer) };
     },

@@ -62,13 +62,10 @@ export function createAuthService(deps: ServiceDeps): AuthService {
     async signup(body, meta) {
       assertAcceptablePassword(body.password, 'body.password');
       if (await User.findOne({ where: { email: body.email }, attributes: ['id'] })) {
-        throw new AppError(
-          'conflict',
-          'An account with this e-mail address already exists: sign in instead',
-          {
-            fields: [{ field: 'body.email', message: 'Already has an account' }],
-          },
-        );
+        throw fieldError('body.email', 'Already has an account', {
+          code: 'conflict',
+          message: 'An account with this e-mail address already exists: sign in instead',
+        });
       }
       const passwordHash = await hashPassword(body.password, cost);
       const slug = await uniqueSlug(body.organizationName);
@@ -99,7 +96,12 @@ export function createAuthService(deps: ServiceDeps): AuthService {
       } catch (err) {
         // Two sign-ups racing for one address or one slug: the unique index decides.
         if (err instanceof UniqueConstraintError) {
-          throw new AppError('conflict', 'That account or organisation was created a moment ago: try again');
+          throw new AppError(
+            'conflict',
+            'That account or organisation was created a moment ago: try again',
+            null,
+            { cause: err },
+          );
         }
         throw err;
       }
@@ -211,13 +213,9 @@ export function createAuthService(deps: ServiceDeps): AuthService {
       assertAcceptablePassword(password, 'body.password');
       const reset = await PasswordReset.findOne({ where: { tokenHash: hashLinkToken(token) } });
       const invalid = () =>
-        new AppError(
-          'validation_failed',
-          'This reset link is not valid: it may have been used or have expired. Ask for a new one.',
-          {
-            fields: [{ field: 'body.token', message: 'Used, expired or unknown: ask for a new link' }],
-          },
-        );
+        fieldError('body.token', 'Used, expired or unknown: ask for a new link', {
+          message: 'This reset link is not valid: it may have been used or have expired. Ask for a new one.',
+        });
       if (!reset || reset.usedAt || reset.expiresAt.getTime() < Date.now()) throw invalid();
       const passwordHash = await hashPassword(password, cost);
       await sequelize.transaction(async (transaction) => {

@@ -23,9 +23,12 @@ export function createDevMailService(fakeApiUrl: string): DevMailService {
         if (!res.ok) throw new Error(`HTTP ${res.status}`);
         data = await res.json();
       } catch (err) {
-        throw new AppError('service_unavailable', 'The fake mailbox is not answering', {
-          reason: err instanceof Error ? err.message.slice(0, 200) : 'unknown',
-        });
+        throw new AppError(
+          'service_unavailable',
+          'The fake mailbox is not answering',
+          { reason: err instanceof Error ? err.message.slice(0, 200) : 'unknown' },
+          { cause: err },
+        );
       }
       const parsed = fakeListingSchema.safeParse(data);
       if (!parsed.success)

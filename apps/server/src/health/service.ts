@@ -24,9 +24,17 @@ export function createHealthService(sequelize: Sequelize, version: string): Heal
           clearTimeout(timer);
         }
       } catch (err) {
-        throw new AppError('service_unavailable', 'The database is not answering', {
-          database: { status: 'down', reason: err instanceof Error ? err.message.slice(0, 200) : 'unknown' },
-        });
+        throw new AppError(
+          'service_unavailable',
+          'The database is not answering',
+          {
+            database: {
+              status: 'down',
+              reason: err instanceof Error ? err.message.slice(0, 200) : 'unknown',
+            },
+          },
+          { cause: err },
+        );
       }
       const roundTripMs = Math.round((performance.now() - t0) * 100) / 100;
       return {

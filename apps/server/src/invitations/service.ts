@@ -110,8 +110,9 @@ export function createInvitationService(deps: ServiceDeps): InvitationService {
           attributes: ['id'],
         }))
       ) {
-        throw new AppError('conflict', 'This person is already a member', {
-          fields: [{ field: 'body.email', message: 'Already a member' }],
+        throw fieldError('body.email', 'Already a member', {
+          code: 'conflict',
+          message: 'This person is already a member',
         });
       }
       const { token, hash } = newLinkToken();
@@ -217,8 +218,9 @@ export function createInvitationService(deps: ServiceDeps): InvitationService {
           if (body.password === undefined)
             throw fieldError('body.password', `Required: the password of your account (${inv.email})`);
           if (!(await verifyPassword(body.password, existing.passwordHash, cost))) {
-            throw new AppError('unauthenticated', `Wrong password for ${inv.email}`, {
-              fields: [{ field: 'body.password', message: 'Wrong password' }],
+            throw fieldError('body.password', 'Wrong password', {
+              code: 'unauthenticated',
+              message: `Wrong password for ${inv.email}`,
             });
           }
         }
@@ -282,6 +284,8 @@ export function createInvitationService(deps: ServiceDeps): InvitationService {
           throw new AppError(
             'conflict',
             'An account for this address was created a moment ago: sign in and open the link again',
+            null,
+            { cause: err },
           );
         throw err;
       }

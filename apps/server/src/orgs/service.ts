@@ -1,7 +1,7 @@
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { can, canAssignRole, type Member, type MembersResponse, type Role } from '@wickstone/contracts';
 import { Invitation, Membership, User } from '../db/models/index.js';
-import { AppError } from '../errors.js';
+import { AppError, fieldError } from '../errors.js';
 import type { AuditService } from '../audit/service.js';
 import type { OrgScope, RequestMeta } from '../http/request-state.js';
 import { invitationDto } from '../invitations/service.js';
@@ -124,8 +124,9 @@ export function createOrgService(deps: { sequelize: Sequelize; audit: AuditServi
         if (!canAssignRole(actorRole, from)) throw forbid(`Only an owner can change an owner's role`);
         if (from === role) return memberDto(target);
         if (from === 'owner' && owners <= 1) {
-          throw new AppError('conflict', 'This is the last owner: make someone else an owner first', {
-            fields: [{ field: 'body.role', message: 'The organisation needs at least one owner' }],
+          throw fieldError('body.role', 'The organisation needs at least one owner', {
+            code: 'conflict',
+            message: 'This is the last owner: make someone else an owner first',
           });
         }
         target.role = role;

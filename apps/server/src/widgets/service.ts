@@ -16,7 +16,7 @@ import {
 } from '@wickstone/contracts';
 import type { z } from 'zod';
 import { Asset, User, Widget, WidgetRevision } from '../db/models/index.js';
-import { AppError } from '../errors.js';
+import { AppError, fieldError } from '../errors.js';
 import type { ReleaseService } from '../releases/service.js';
 import { diff } from './diff.js';
 
@@ -44,9 +44,6 @@ export interface RevisionDto {
   changes: { path: string; before: unknown; after: unknown }[];
   createdAt: string;
 }
-
-const fieldError = (field: string, message: string) =>
-  new AppError('validation_failed', `Invalid request: check ${field}`, { fields: [{ field, message }] });
 
 function newPublicKey(): string {
   // 20 characters of [a-z0-9]: about 103 bits, unguessable, safe in a URL and an HTML attribute.
