@@ -1,21 +1,7 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-
-export interface ReleaseFile {
-  file: string;
-  /** Subresource Integrity hash, `sha384-<base64>`. */
-  integrity: string;
-  bytes: number;
-  gzipBytes: number;
-}
-
-/** What the widget build writes beside each release (packages/widget/dist/releases/<version>/manifest.json). */
-export interface ReleaseManifest {
-  version: string;
-  calcCoreVersion: string;
-  files: Record<string, ReleaseFile>;
-  fonts: Record<string, string>;
-}
+import semver from 'semver';
+import { releaseManifestSchema, releaseVersionSchema, type ReleaseManifest } from '@wickstone/contracts';
 
 export interface ReleaseService {
   /** Every release found, newest first. */
@@ -27,16 +13,22 @@ export interface ReleaseService {
   readonly dir: string;
 }
 
-const VERSION = /^\d+\.\d+\.\d+(?:-[0-9A-Za-z.-]+)?$/;
-
-function compareVersions(a: string, b: string): number {
-  const pa = a.split(/[.-]/).map((x) => Number.parseInt(x, 10));
-  const pb = b.split(/[.-]/).map((x) => Number.parseInt(x, 10));
-  for (let i = 0; i < 3; i++) {
-    const d = (pa[i] ?? 0) - (pb[i] ?? 0);
-    if (d !== 0) return d;
+/** Read and check one release's manifest; a malformed one is a broken deployment, said with its path. */
+function readManifest(file: string): ReleaseManifest {
+  let json: unknown;
+  try {
+    json = JSON.parse(readFileSync(file, 'utf8'));
+  } catch (err) {
+    throw new Error(`Release manifest ${file} is not JSON`, { cause: err });
   }
-  return a.localeCompare(b);
+  const parsed = releaseManifestSchema.safeParse(json);
+  if (!parsed.success) {
+    const where = parsed.error.issues.map((i) => i.path.join('.') || '(root)').join(', ');
+    throw new Error(`Release manifest ${file} does not match its schema at ${where}`, {
+      cause: parsed.error,
+    });
+  }
+  return parsed.data;
 }
 
 /**
@@ -51,12 +43,13 @@ export function createReleaseService(dir: string, publicUrl: string): ReleaseSer
     if (existsSync(dir)) {
       for (const name of readdirSync(dir)) {
         const file = path.join(dir, name, 'manifest.json');
-        if (!VERSION.test(name) || !existsSync(file)) continue;
-        const manifest = JSON.parse(readFileSync(file, 'utf8')) as ReleaseManifest;
+        if (!releaseVersionSchema.safeParse(name).success || !existsSync(file)) continue;
+        const manifest = readManifest(file);
         if (manifest.version === name) found.push(manifest);
       }
     }
-    found.sort((a, b) => compareVersions(b.version, a.version));
+    // Semantic-version order: a pre-release ranks below its release (1.0.0-rc.2 < 1.0.0).
+    found.sort((a, b) => semver.rcompare(a.version, b.version));
     cache = found;
     return found;
   };
