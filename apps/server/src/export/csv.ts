@@ -59,37 +59,3 @@ export async function* keysetCsv<R, C>(opts: {
     after = opts.cursor(last);
   }
 }
-
-/** Read RFC 4180 text back into records (a leading BOM is dropped): how the exports are checked. */
-export function parseCsv(text: string): string[][] {
-  const records: string[][] = [];
-  let record: string[] = [];
-  let field = '';
-  let quoted = false;
-  let i = text.startsWith(UTF8_BOM) ? 1 : 0;
-  for (; i < text.length; i++) {
-    const c = text[i];
-    if (quoted) {
-      if (c === '"' && text[i + 1] === '"') {
-        field += '"';
-        i++;
-      } else if (c === '"') quoted = false;
-      else field += c;
-    } else if (c === '"' && field === '') quoted = true;
-    else if (c === ',') {
-      record.push(field);
-      field = '';
-    } else if (c === '\r' && text[i + 1] === '\n') {
-      record.push(field);
-      records.push(record);
-      record = [];
-      field = '';
-      i++;
-    } else field += c;
-  }
-  if (field !== '' || record.length) {
-    record.push(field);
-    records.push(record);
-  }
-  return records;
-}

@@ -8,7 +8,8 @@ import {
   type FixtureOrg,
   type TestApp,
 } from '../testing/index.js';
-import { parseCsv, UTF8_BOM } from '../export/csv.js';
+import { UTF8_BOM } from '../export/csv.js';
+import { readCsv } from '../testing/csv.js';
 import { fieldsOf, liveWidget, reportRun, requestAssessment, type FixtureWidget } from '../usage/fixtures.js';
 import { rollupsFromRaw, storedRollups } from '../usage/rollups.js';
 
@@ -339,7 +340,7 @@ describe('leads', () => {
         /^attachment; filename="t-[0-9a-f]+-leads-\d{4}-\d{2}-\d{2}\.csv"$/,
       );
       expect(res.text.startsWith(UTF8_BOM)).toBe(true);
-      const [header, ...rows] = parseCsv(res.text);
+      const [header, ...rows] = readCsv(res.text);
       expect(header).toEqual([
         'Lead',
         'Received (UTC)',
@@ -378,7 +379,7 @@ describe('leads', () => {
       await analyst
         .patch(`/orgs/${org.id}/leads/${lead.priya}`, { notes: 'Rang twice,\r\nno answer; "try email"' })
         .expect(200);
-      const rows = parseCsv(
+      const rows = readCsv(
         (await analyst.get(`/orgs/${org.id}/leads/export?widgetId=${soil.id}`).expect(200)).text,
       );
       expect(rows).toHaveLength(2);

@@ -8,7 +8,8 @@ import {
   type FixtureOrg,
   type TestApp,
 } from '../testing/index.js';
-import { parseCsv, UTF8_BOM } from '../export/csv.js';
+import { UTF8_BOM } from '../export/csv.js';
+import { readCsv } from '../testing/csv.js';
 import {
   fieldsOf,
   liveWidget,
@@ -328,7 +329,7 @@ describe('runs', () => {
         /^attachment; filename="t-[0-9a-f]+-runs-2026-01-01-to-2026-01-31\.csv"$/,
       );
       expect(res.text.startsWith(UTF8_BOM)).toBe(true);
-      const [header, ...rows] = parseCsv(res.text);
+      const [header, ...rows] = readCsv(res.text);
       expect(header).toEqual([
         'Time (UTC)',
         'Run',
@@ -365,8 +366,8 @@ describe('runs', () => {
     it('quotes a cell with commas and quotes, and guards one a spreadsheet would take for a formula', async () => {
       const res = await analyst.get(`/orgs/${org.id}/runs/export?calculatorId=slot-rise`).expect(200);
       expect(res.text).toContain(`,"'@risk, ""quoted"" widget",`);
-      expect(parseCsv(res.text)[1]![3]).toBe(`'@risk, "quoted" widget`);
-      expect(parseCsv(res.text)[1]![8]).toBe('GAP_TOO_WIDE');
+      expect(readCsv(res.text)[1]![3]).toBe(`'@risk, "quoted" widget`);
+      expect(readCsv(res.text)[1]![8]).toBe('GAP_TOO_WIDE');
     });
 
     it('streams more than one chunk, each run once, ties on the same instant included', async () => {
@@ -383,7 +384,7 @@ describe('runs', () => {
       await store(t.db.sequelize, many);
       for (const sort of ['-createdAt', 'createdAt']) {
         const res = await analyst.get(`/orgs/${org.id}/runs/export?to=2025-12-31&sort=${sort}`).expect(200);
-        const rows = parseCsv(res.text).slice(1);
+        const rows = readCsv(res.text).slice(1);
         expect(rows.length).toBe(many.length);
         expect(new Set(rows.map((r) => r[1])).size).toBe(many.length);
         const want = await rawIds('created_at < ?', ['2026-01-01']);
@@ -393,7 +394,7 @@ describe('runs', () => {
 
     it('answers an empty selection with the header row alone, and a bad filter with 400 in JSON', async () => {
       const res = await analyst.get(`/orgs/${org.id}/runs/export?to=2020-01-01`).expect(200);
-      expect(parseCsv(res.text)).toHaveLength(1);
+      expect(readCsv(res.text)).toHaveLength(1);
       const bad = await analyst.get(`/orgs/${org.id}/runs/export?pageSize=10`).expect(400);
       expect(bad.headers['content-type']).toMatch(/application\/json/);
       expect(bad.headers['content-disposition']).toBeUndefined();
