@@ -1,9 +1,15 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { fromCanonical, type CalculatorDefinition, type UnitSystemId } from '@wickstone/calc-core';
+import {
+  displayUnitOf,
+  fromCanonical,
+  withUnit,
+  type CalculatorDefinition,
+  type UnitSystemId,
+} from '@wickstone/calc-core';
 import { hexColorPattern, type WidgetStatus } from '@wickstone/contracts';
 import { formatDateTime } from '../lib/labels';
-import { formatNumber, unitFor, withUnit } from '../lib/widget-draft';
+import { formatNumber } from '../lib/widget-draft';
 import { widgetRevisionsQuery } from '../queries/widgets';
 import { EmptyState, ErrorState, LoadingState } from './states';
 import { EditorSection, PageNav } from './widget-fields';
@@ -94,7 +100,7 @@ function Value({
   const input = /^settings\.inputs\.(\w+)\.default$/.exec(path);
   const def = input ? calc.inputs.find((i) => i.id === input[1]) : undefined;
   if (typeof value === 'number' && def && def.kind !== 'choice') {
-    const unit = unitFor(def, system);
+    const unit = displayUnitOf(def, system);
     return <span className="tabular-nums">{withUnit(formatNumber(fromCanonical(value, unit)), unit)}</span>;
   }
   if (Array.isArray(value)) {

@@ -1,8 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { getCalculator, type CalculatorDefinition, type QuantityInput } from '@wickstone/calc-core';
+import {
+  getCalculator,
+  inputApplies,
+  type CalculatorDefinition,
+  type QuantityInput,
+} from '@wickstone/calc-core';
 import { defaultWidgetSettings, type Widget } from '@wickstone/contracts';
 import {
-  appliesWith,
   checkSite,
   conditionText,
   draftFromWidget,
@@ -89,10 +93,10 @@ describe('input defaults', () => {
     const tension = calc.inputs.find((i) => i.id === 'surfaceTension')!;
     const liquid = calc.inputs.find((i) => i.id === 'liquid')!;
     const d = fresh();
-    expect(appliesWith(temperature, calc, startingChoices(calc, d.settings))).toBe(true);
-    expect(appliesWith(tension, calc, startingChoices(calc, d.settings))).toBe(false);
+    expect(inputApplies(temperature, calc.inputs, startingChoices(calc, d.settings))).toBe(true);
+    expect(inputApplies(tension, calc.inputs, startingChoices(calc, d.settings))).toBe(false);
     const custom = setChoiceDefault(d, liquid, 'custom');
-    expect(appliesWith(tension, calc, startingChoices(calc, custom.settings))).toBe(true);
+    expect(inputApplies(tension, calc.inputs, startingChoices(calc, custom.settings))).toBe(true);
     expect(conditionText(tension, calc)).toMatch(/^Liquid is “.+”$/);
   });
 });
