@@ -12,7 +12,8 @@ import { formatDateTime } from '../lib/labels';
 import { formatNumber } from '../lib/widget-draft';
 import { widgetRevisionsQuery } from '../queries/widgets';
 import { EmptyState, ErrorState, LoadingState } from './states';
-import { EditorSection, PageNav } from './widget-fields';
+import { PageNav } from './paged-table';
+import { EditorSection } from './widget-fields';
 import { statusLabel } from './widget-status';
 
 const pageSize = 10;
@@ -172,7 +173,6 @@ export function HistorySection({
     );
   else if (history.data.items.length === 0) body = <EmptyState title="No saves yet" />;
   else {
-    const pages = Math.max(1, Math.ceil(history.data.total / pageSize));
     body = (
       <div className="space-y-3">
         <ol
@@ -222,8 +222,9 @@ export function HistorySection({
         <PageNav
           label="History pages"
           page={page}
-          pages={pages}
-          summary={`${history.data.total} saves`}
+          pageSize={pageSize}
+          total={history.data.total}
+          noun="saves"
           loading={history.isPlaceholderData}
           back="← Newer"
           forward="Older →"

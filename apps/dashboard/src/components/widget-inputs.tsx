@@ -9,7 +9,8 @@ import {
   setInputMode,
   startingChoices,
 } from '../lib/widget-draft';
-import { EditorSection, FieldProblem, smallControlClass, type SectionProps } from './widget-fields';
+import { FieldProblem } from './form';
+import { EditorSection, smallControlClass, type SectionProps } from './widget-fields';
 
 export const inputModeLabel: Record<InputMode, string> = {
   editable: 'Shown, visitor may change it',

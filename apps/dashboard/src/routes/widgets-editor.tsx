@@ -23,16 +23,10 @@ import {
 import { orgPath } from '../nav';
 import { useUpdateWidget, widgetQuery } from '../queries/widgets';
 import { ConfirmAction } from '../components/confirm';
-import { TextField } from '../components/form';
+import { TextAreaField, TextField } from '../components/form';
 import { ErrorState, LoadingState, describeError } from '../components/states';
 import { Button, Card, Notice, TextLink } from '../components/ui';
-import {
-  CheckField,
-  ChoiceCards,
-  EditorSection,
-  TextAreaField,
-  type SectionProps,
-} from '../components/widget-fields';
+import { CheckField, ChoiceCards, EditorSection, type SectionProps } from '../components/widget-fields';
 import { EmbedCodeSection } from '../components/widget-embed';
 import { changeLabel, HistorySection } from '../components/widget-history';
 import { InputsSection } from '../components/widget-inputs';
