@@ -5,7 +5,8 @@ import {
   type CalculatorDefinition,
   type QuantityInput,
 } from '@wickstone/calc-core';
-import { defaultWidgetSettings, type Widget } from '@wickstone/contracts';
+import { defaultWidgetSettings } from '@wickstone/contracts';
+import { sampleWidget } from '../testing/fixtures';
 import {
   checkSite,
   conditionText,
@@ -27,23 +28,7 @@ import {
 const calc = getCalculator('tube-rise') as CalculatorDefinition;
 const bore = calc.inputs.find((i) => i.id === 'diameter') as QuantityInput;
 
-function widget(over: Partial<Widget> = {}): Widget {
-  return {
-    id: 7,
-    publicKey: 'wk_abcdefghij0123456789',
-    name: 'Rising damp check',
-    calculatorId: 'tube-rise',
-    status: 'draft',
-    allowedOrigins: [],
-    settings: defaultWidgetSettings(),
-    release: '0.1.0',
-    logoUrl: null,
-    embed: { scriptUrl: '', integrity: '', snippet: '' },
-    createdAt: '2026-12-01T10:00:00.000Z',
-    updatedAt: '2026-12-01T10:00:00.000Z',
-    ...over,
-  };
-}
+const widget = sampleWidget;
 
 const fresh = () => draftFromWidget(widget(), calc);
 const errorsOf = (d: WidgetDraft) => validateDraft(d, calc).errors ?? {};
