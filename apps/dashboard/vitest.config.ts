@@ -1,3 +1,6 @@
 import { defineConfig } from 'vitest/config';
 
-export default defineConfig({ test: { name: 'dashboard', include: ['src/**/*.test.ts'] } });
+// Pure modules run in Node; component tests (`*.test.tsx`) ask for happy-dom in their first line.
+export default defineConfig({
+  test: { name: 'dashboard', include: ['src/**/*.test.ts', 'src/**/*.test.tsx'] },
+});

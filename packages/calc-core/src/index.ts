@@ -4,6 +4,7 @@
 export { VERSION } from './version.js';
 export { formatValue, formatInput, parseNumber } from './format.js';
 export { CalcInputError, type FieldIssue } from './errors.js';
+export { displayUnitOf, inputApplies, unitGap, unitSymbol, withUnit, type Displayable } from './display.js';
 
 export {
   convert,

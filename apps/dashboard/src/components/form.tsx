@@ -1,8 +1,16 @@
-import { useId, useState, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import {
+  useId,
+  useState,
+  type InputHTMLAttributes,
+  type ReactNode,
+  type SelectHTMLAttributes,
+  type TextareaHTMLAttributes,
+} from 'react';
 import type { SchemaForm } from '../lib/form';
 import { Button, Card } from './ui';
 
-const inputClass =
+/** Every full-width text control: sign-in and account forms, the widget editor. */
+export const controlClass =
   'block w-full rounded-md border border-line-strong bg-card px-3 py-2 text-ink placeholder:text-ink-faint ' +
   'aria-invalid:border-bad aria-invalid:bg-bad-tint/40 disabled:bg-paper disabled:text-ink-soft';
 
@@ -25,18 +33,24 @@ function FieldFrame({ label, error, hint, children }: FieldFrameProps) {
         {label}
       </label>
       {children({ id, describedBy, invalid: Boolean(error) })}
-      {error ? (
-        <p id={errorId} className="flex items-start gap-1.5 text-sm font-semibold text-bad">
-          <span aria-hidden="true">!</span>
-          <span>{error}</span>
-        </p>
-      ) : null}
+      {errorId ? <FieldProblem id={errorId} message={error} /> : null}
       {hint ? (
-        <p id={hintId} className="text-sm text-ink-soft">
+        <div id={hintId} className="text-sm text-ink-soft">
           {hint}
-        </p>
+        </div>
       ) : null}
     </div>
+  );
+}
+
+/** A field's own problem, beside it, referenced by the control's aria-describedby. */
+export function FieldProblem({ id, message }: { id: string; message: string | undefined }) {
+  if (!message) return null;
+  return (
+    <p id={id} className="flex items-start gap-1.5 text-sm font-semibold text-bad">
+      <span aria-hidden="true">!</span>
+      <span>{message}</span>
+    </p>
   );
 }
 
@@ -55,8 +69,33 @@ export function TextField({ label, error, hint, ...input }: TextFieldProps) {
           id={id}
           aria-describedby={describedBy}
           aria-invalid={invalid || undefined}
-          className={inputClass}
+          className={controlClass}
           {...input}
+        />
+      )}
+    </FieldFrame>
+  );
+}
+
+export function TextAreaField({
+  label,
+  error,
+  hint,
+  ...area
+}: Omit<TextareaHTMLAttributes<HTMLTextAreaElement>, 'id'> & {
+  label: string;
+  error?: string | undefined;
+  hint?: ReactNode;
+}) {
+  return (
+    <FieldFrame label={label} error={error} hint={hint}>
+      {({ id, describedBy, invalid }) => (
+        <textarea
+          id={id}
+          aria-invalid={invalid || undefined}
+          aria-describedby={describedBy}
+          className={controlClass}
+          {...area}
         />
       )}
     </FieldFrame>
@@ -75,7 +114,7 @@ export function PasswordField({ label, error, hint, ...input }: Omit<TextFieldPr
             type={shown ? 'text' : 'password'}
             aria-describedby={describedBy}
             aria-invalid={invalid || undefined}
-            className={inputClass}
+            className={controlClass}
             spellCheck={false}
             autoCapitalize="off"
             {...input}
@@ -112,7 +151,7 @@ export function SelectField({ label, error, hint, options, ...select }: SelectFi
           id={id}
           aria-describedby={describedBy}
           aria-invalid={invalid || undefined}
-          className={inputClass}
+          className={controlClass}
           {...select}
         >
           {options.map((o) => (

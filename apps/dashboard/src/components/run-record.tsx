@@ -1,3 +1,4 @@
+import { unitGap, units, unitSymbol, type UnitId } from '@wickstone/calc-core';
 import { formatValue } from '@wickstone/calc-core/format';
 import type { RunDetail, ShownValue } from '@wickstone/contracts';
 import { formatDateTime } from '../lib/labels';
@@ -11,7 +12,15 @@ interface StoredStep {
   /** Four significant figures, as the widget shows it; `exact` is the stored number in full. */
   value: string;
   exact: string;
+  /** The unit's symbol (`kg/m³`), or the stored id as it is when this calc-core does not know it. */
   unit: string;
+  /** What stands between number and symbol: calc-core's one rule (`35°`, `20 °C`). */
+  gap: string;
+}
+
+function unitOf(id: string): { unit: string; gap: string } {
+  if (!Object.hasOwn(units, id)) return { unit: id, gap: id === '' ? '' : ' ' };
+  return { unit: unitSymbol(id as UnitId), gap: unitGap(id as UnitId) };
 }
 
 const text = (v: unknown): string =>
@@ -32,7 +41,7 @@ function storedSteps(result: RunDetail['serverResult']): StoredStep[] {
       substituted: text(s.substituted),
       value: typeof s.value === 'number' ? formatValue(s.value) : text(s.value),
       exact: text(s.value),
-      unit: text(s.unit),
+      ...unitOf(text(s.unit)),
     };
   });
 }
@@ -121,9 +130,10 @@ export function RunRecord({ run }: { run: RunDetail }) {
                 <p className="font-mono text-sm text-ink-soft">{s.substituted}</p>
                 <p className="mt-1 text-sm">
                   ={' '}
-                  <strong className="tabular-nums" title={`${s.exact} ${s.unit} as stored`}>
+                  <strong className="tabular-nums" title={`${s.exact}${s.gap}${s.unit} as stored`}>
                     {s.value}
-                  </strong>{' '}
+                  </strong>
+                  {s.gap}
                   {s.unit}
                 </p>
               </li>

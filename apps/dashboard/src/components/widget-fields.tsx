@@ -1,8 +1,9 @@
-import { useId, type ReactNode, type TextareaHTMLAttributes } from 'react';
+import { useId, type ReactNode } from 'react';
 import type { CalculatorDefinition } from '@wickstone/calc-core';
 import type { FieldErrors } from '../lib/form';
 import type { WidgetDraft } from '../lib/widget-draft';
-import { Button, Card, Spinner } from './ui';
+import { FieldProblem } from './form';
+import { Card } from './ui';
 
 /** What every editor section gets: the draft, a way to change it, the errors, and whether it may. */
 export interface SectionProps {
@@ -12,10 +13,6 @@ export interface SectionProps {
   readOnly: boolean;
   calc: CalculatorDefinition;
 }
-
-export const controlClass =
-  'block w-full rounded-md border border-line-strong bg-card px-3 py-2 text-ink placeholder:text-ink-faint ' +
-  'aria-invalid:border-bad aria-invalid:bg-bad-tint/40 disabled:bg-paper disabled:text-ink-soft';
 
 export const smallControlClass =
   'rounded-md border border-line-strong bg-card px-2 py-1.5 text-sm text-ink ' +
@@ -45,51 +42,6 @@ export function EditorSection({
         {children}
       </section>
     </Card>
-  );
-}
-
-/** A field's own problem, beside it, referenced by the control's aria-describedby. */
-export function FieldProblem({ id, message }: { id: string; message: string | undefined }) {
-  if (!message) return null;
-  return (
-    <p id={id} className="flex items-start gap-1.5 text-sm font-semibold text-bad">
-      <span aria-hidden="true">!</span>
-      <span>{message}</span>
-    </p>
-  );
-}
-
-export function TextAreaField({
-  label,
-  error,
-  hint,
-  ...area
-}: Omit<TextareaHTMLAttributes<HTMLTextAreaElement>, 'id'> & {
-  label: string;
-  error?: string | undefined;
-  hint?: ReactNode;
-}) {
-  const id = useId();
-  const describedBy = [error ? `${id}-error` : '', hint ? `${id}-hint` : ''].filter(Boolean).join(' ');
-  return (
-    <div className="space-y-1.5">
-      <label htmlFor={id} className="block text-sm font-semibold">
-        {label}
-      </label>
-      <textarea
-        id={id}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy || undefined}
-        className={controlClass}
-        {...area}
-      />
-      <FieldProblem id={`${id}-error`} message={error} />
-      {hint ? (
-        <div id={`${id}-hint`} className="text-sm text-ink-soft">
-          {hint}
-        </div>
-      ) : null}
-    </div>
   );
 }
 
@@ -185,45 +137,5 @@ export function CheckField({
         {detail ? <span className="block text-sm text-ink-soft">{detail}</span> : null}
       </span>
     </label>
-  );
-}
-
-/** Previous / next between pages of a list, with where the reader is; nothing when there is one page. */
-export function PageNav({
-  label,
-  page,
-  pages,
-  summary,
-  loading,
-  back,
-  forward,
-  onPage,
-}: {
-  label: string;
-  page: number;
-  pages: number;
-  /** e.g. "12 widgets" */
-  summary: string;
-  loading: boolean;
-  back: string;
-  forward: string;
-  onPage: (page: number) => void;
-}) {
-  if (pages <= 1) return null;
-  return (
-    <nav aria-label={label} className="flex flex-wrap items-center justify-between gap-3">
-      <p className="flex items-center gap-2 text-sm text-ink-soft" aria-live="polite">
-        {loading ? <Spinner /> : null}
-        Page {page} of {pages} · {summary}
-      </p>
-      <div className="flex gap-2">
-        <Button size="sm" disabled={page <= 1} onClick={() => onPage(page - 1)}>
-          {back}
-        </Button>
-        <Button size="sm" disabled={page >= pages} onClick={() => onPage(page + 1)}>
-          {forward}
-        </Button>
-      </div>
-    </nav>
   );
 }

@@ -1,12 +1,19 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { fromCanonical, type CalculatorDefinition, type UnitSystemId } from '@wickstone/calc-core';
+import {
+  displayUnitOf,
+  fromCanonical,
+  withUnit,
+  type CalculatorDefinition,
+  type UnitSystemId,
+} from '@wickstone/calc-core';
 import { hexColorPattern, type WidgetStatus } from '@wickstone/contracts';
 import { formatDateTime } from '../lib/labels';
-import { formatNumber, unitFor, withUnit } from '../lib/widget-draft';
+import { formatNumber } from '../lib/widget-draft';
 import { widgetRevisionsQuery } from '../queries/widgets';
 import { EmptyState, ErrorState, LoadingState } from './states';
-import { EditorSection, PageNav } from './widget-fields';
+import { PageNav } from './paged-table';
+import { EditorSection } from './widget-fields';
 import { statusLabel } from './widget-status';
 
 const pageSize = 10;
@@ -94,7 +101,7 @@ function Value({
   const input = /^settings\.inputs\.(\w+)\.default$/.exec(path);
   const def = input ? calc.inputs.find((i) => i.id === input[1]) : undefined;
   if (typeof value === 'number' && def && def.kind !== 'choice') {
-    const unit = unitFor(def, system);
+    const unit = displayUnitOf(def, system);
     return <span className="tabular-nums">{withUnit(formatNumber(fromCanonical(value, unit)), unit)}</span>;
   }
   if (Array.isArray(value)) {
@@ -166,7 +173,6 @@ export function HistorySection({
     );
   else if (history.data.items.length === 0) body = <EmptyState title="No saves yet" />;
   else {
-    const pages = Math.max(1, Math.ceil(history.data.total / pageSize));
     body = (
       <div className="space-y-3">
         <ol
@@ -216,8 +222,9 @@ export function HistorySection({
         <PageNav
           label="History pages"
           page={page}
-          pages={pages}
-          summary={`${history.data.total} saves`}
+          pageSize={pageSize}
+          total={history.data.total}
+          noun="saves"
           loading={history.isPlaceholderData}
           back="← Newer"
           forward="Older →"

@@ -1,7 +1,6 @@
-import { units, type InputDefinition } from '@wickstone/calc-core';
+import { displayUnitOf, inputApplies, units, unitSymbol, type InputDefinition } from '@wickstone/calc-core';
 import { inputModes, type InputMode } from '@wickstone/contracts';
 import {
-  appliesWith,
   calculatorDefaultNumber,
   calculatorDefaultText,
   conditionText,
@@ -9,10 +8,9 @@ import {
   setDefaultText,
   setInputMode,
   startingChoices,
-  unitFor,
-  unitSymbol,
 } from '../lib/widget-draft';
-import { EditorSection, FieldProblem, smallControlClass, type SectionProps } from './widget-fields';
+import { FieldProblem } from './form';
+import { EditorSection, smallControlClass, type SectionProps } from './widget-fields';
 
 export const inputModeLabel: Record<InputMode, string> = {
   editable: 'Shown, visitor may change it',
@@ -46,7 +44,7 @@ function InputRow({ input, applies, ...props }: SectionProps & { input: InputDef
     errors[defaultKey] ?? errors[`settings.inputs.${input.id}`] ?? errors[`settings.inputs.${input.id}.mode`];
   const condition = conditionText(input, calc);
   const system = draft.settings.units.system;
-  const unit = input.kind === 'choice' ? null : unitFor(input, system);
+  const unit = input.kind === 'choice' ? null : displayUnitOf(input, system);
 
   return (
     <li
@@ -180,7 +178,12 @@ export function InputsSection(props: SectionProps) {
         </div>
         <ul className="-mt-2">
           {calc.inputs.map((input) => (
-            <InputRow key={input.id} input={input} applies={appliesWith(input, calc, choices)} {...props} />
+            <InputRow
+              key={input.id}
+              input={input}
+              applies={inputApplies(input, calc.inputs, choices)}
+              {...props}
+            />
           ))}
         </ul>
       </div>

@@ -1,13 +1,7 @@
 import { leadFieldIds, leadFieldModes, type LeadFieldId, type LeadFieldMode } from '@wickstone/contracts';
 import { checkEmail, errorsUnder, lines, type WidgetDraft } from '../lib/widget-draft';
-import {
-  CheckField,
-  EditorSection,
-  FieldProblem,
-  TextAreaField,
-  smallControlClass,
-  type SectionProps,
-} from './widget-fields';
+import { FieldProblem, TextAreaField } from './form';
+import { CheckField, EditorSection, smallControlClass, type SectionProps } from './widget-fields';
 
 const fieldLabel: Record<LeadFieldId, string> = {
   name: 'Name',

@@ -12,15 +12,10 @@ import {
   type WidgetDraft,
 } from '../lib/widget-draft';
 import { useUploadLogo } from '../queries/widgets';
+import { FieldProblem } from './form';
 import { describeError } from './states';
 import { Button, Spinner } from './ui';
-import {
-  ChoiceCards,
-  EditorSection,
-  FieldProblem,
-  smallControlClass,
-  type SectionProps,
-} from './widget-fields';
+import { ChoiceCards, EditorSection, smallControlClass, type SectionProps } from './widget-fields';
 
 const colorLabel: Record<ColorKey, string> = {
   background: 'Background colour',

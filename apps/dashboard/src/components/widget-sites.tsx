@@ -1,6 +1,7 @@
 import { checkSite, errorsUnder, lines } from '../lib/widget-draft';
 import { Button } from './ui';
-import { EditorSection, TextAreaField, type SectionProps } from './widget-fields';
+import { controlClass, TextAreaField } from './form';
+import { EditorSection, type SectionProps } from './widget-fields';
 
 /** The exact origins allowed to embed the widget, one a line, each checked with `originSchema` as typed. */
 export function SitesSection({ draft, onChange, errors, readOnly }: SectionProps) {
@@ -38,7 +39,7 @@ export function SitesSection({ draft, onChange, errors, readOnly }: SectionProps
             ? undefined
             : 'https://www.brackenridge-ground.example\nhttps://portal.brackenridge-ground.example'
         }
-        className="block w-full rounded-md border border-line-strong bg-card px-3 py-2 font-mono text-sm text-ink placeholder:text-ink-faint aria-invalid:border-bad aria-invalid:bg-bad-tint/40 disabled:bg-paper disabled:text-ink-soft"
+        className={`${controlClass} font-mono text-sm`}
         error={
           whole.length || bad
             ? [...whole, bad ? `${bad === 1 ? 'One line is' : `${bad} lines are`} not an origin` : '']

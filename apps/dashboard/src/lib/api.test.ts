@@ -5,6 +5,7 @@ interface Seen {
   method: string;
   url: string;
   token: string | null;
+  contentType: string | null;
   body: unknown;
 }
 
@@ -27,7 +28,8 @@ function fakeServer(opts: { refuseFirst?: boolean } = {}) {
       method,
       url,
       token: headers.get('x-csrf-token'),
-      body: init.body ? JSON.parse(String(init.body)) : undefined,
+      contentType: headers.get('content-type'),
+      body: init.body instanceof FormData ? init.body : init.body ? JSON.parse(String(init.body)) : undefined,
     });
     if (url.endsWith('/auth/csrf')) return json(200, { csrfToken: `token-${++issued}` });
     if (method !== 'GET') {
@@ -94,6 +96,19 @@ describe('apiFetch', () => {
       'GET /auth/csrf -',
       'POST /things token-2',
     ]);
+  });
+
+  it('sends a FormData upload with the token, no JSON type, and the same form on the retry', async () => {
+    server = fakeServer({ refuseFirst: true });
+    vi.stubGlobal('fetch', server.fetchMock);
+    await refreshCsrf();
+    const form = new FormData();
+    form.append('file', new Blob(['png bytes'], { type: 'image/png' }), 'logo.png');
+    await expect(apiFetch('/orgs/1/assets', { method: 'POST', form })).resolves.toEqual({ ok: true });
+    const posts = server.seen.filter((c) => c.method === 'POST');
+    expect(posts.map((c) => c.token)).toEqual(['token-1', 'token-2']);
+    expect(posts.every((c) => c.body === form && c.contentType === null)).toBe(true);
+    expect((form.get('file') as File).name).toBe('logo.png');
   });
 
   it('gives up after one retry, with the server error', async () => {

@@ -134,10 +134,15 @@ function toApiError(res: Response, data: unknown): ApiError {
 export interface ApiInit extends Omit<RequestInit, 'body'> {
   /** A JSON body: serialised here, so callers pass the zod-parsed object. */
   json?: unknown;
+  /**
+   * A multipart body (a file upload). The browser writes its Content-Type with the boundary, so
+   * none is set here; the same FormData is sent again on the one CSRF retry.
+   */
+  form?: FormData;
 }
 
 async function send(path: string, init: ApiInit, token: string | null): Promise<Response> {
-  const { json, headers, ...rest } = init;
+  const { json, form, headers, ...rest } = init;
   try {
     return await fetch(`/api/v1${path}`, {
       credentials: 'same-origin',
@@ -148,7 +153,7 @@ async function send(path: string, init: ApiInit, token: string | null): Promise<
         ...(token ? { 'x-csrf-token': token } : {}),
         ...headers,
       },
-      body: json !== undefined ? JSON.stringify(json) : undefined,
+      body: json !== undefined ? JSON.stringify(json) : form,
     });
   } catch {
     throw new ApiError(0, {

@@ -69,3 +69,9 @@ export function useFilterParams(): [URLSearchParams, (name: string, value: strin
   );
   return [params, set];
 }
+
+/** The page number in the URL and a way to move to another page (page 1 drops the parameter). */
+export function usePageParam(): [number, (page: number) => void] {
+  const [params, set] = useFilterParams();
+  return [pageParam(params), (page) => set('page', page === 1 ? '' : String(page))];
+}

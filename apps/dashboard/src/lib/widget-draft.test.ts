@@ -1,8 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { getCalculator, type CalculatorDefinition, type QuantityInput } from '@wickstone/calc-core';
-import { defaultWidgetSettings, type Widget } from '@wickstone/contracts';
 import {
-  appliesWith,
+  getCalculator,
+  inputApplies,
+  type CalculatorDefinition,
+  type QuantityInput,
+} from '@wickstone/calc-core';
+import { defaultWidgetSettings } from '@wickstone/contracts';
+import { sampleWidget } from '../testing/fixtures';
+import {
   checkSite,
   conditionText,
   draftFromWidget,
@@ -23,23 +28,7 @@ import {
 const calc = getCalculator('tube-rise') as CalculatorDefinition;
 const bore = calc.inputs.find((i) => i.id === 'diameter') as QuantityInput;
 
-function widget(over: Partial<Widget> = {}): Widget {
-  return {
-    id: 7,
-    publicKey: 'wk_abcdefghij0123456789',
-    name: 'Rising damp check',
-    calculatorId: 'tube-rise',
-    status: 'draft',
-    allowedOrigins: [],
-    settings: defaultWidgetSettings(),
-    release: '0.1.0',
-    logoUrl: null,
-    embed: { scriptUrl: '', integrity: '', snippet: '' },
-    createdAt: '2026-12-01T10:00:00.000Z',
-    updatedAt: '2026-12-01T10:00:00.000Z',
-    ...over,
-  };
-}
+const widget = sampleWidget;
 
 const fresh = () => draftFromWidget(widget(), calc);
 const errorsOf = (d: WidgetDraft) => validateDraft(d, calc).errors ?? {};
@@ -89,10 +78,10 @@ describe('input defaults', () => {
     const tension = calc.inputs.find((i) => i.id === 'surfaceTension')!;
     const liquid = calc.inputs.find((i) => i.id === 'liquid')!;
     const d = fresh();
-    expect(appliesWith(temperature, calc, startingChoices(calc, d.settings))).toBe(true);
-    expect(appliesWith(tension, calc, startingChoices(calc, d.settings))).toBe(false);
+    expect(inputApplies(temperature, calc.inputs, startingChoices(calc, d.settings))).toBe(true);
+    expect(inputApplies(tension, calc.inputs, startingChoices(calc, d.settings))).toBe(false);
     const custom = setChoiceDefault(d, liquid, 'custom');
-    expect(appliesWith(tension, calc, startingChoices(calc, custom.settings))).toBe(true);
+    expect(inputApplies(tension, calc.inputs, startingChoices(calc, custom.settings))).toBe(true);
     expect(conditionText(tension, calc)).toMatch(/^Liquid is “.+”$/);
   });
 });

@@ -1,13 +1,13 @@
 import { formatInput as formatNumber, parseNumber } from '@wickstone/calc-core/format';
 import {
-  displayUnit,
+  displayUnitOf,
   fromCanonical,
   toCanonical,
-  units,
+  unitSymbol,
+  withUnit,
   type CalculatorDefinition,
   type InputDefinition,
   type QuantityInput,
-  type UnitId,
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import {
@@ -53,33 +53,17 @@ export interface WidgetDraft {
   logoUrl: string | null;
 }
 
-/** The unit an input's default is typed in: the input's own choice for the system, else the system's. */
-export function unitFor(input: QuantityInput, system: UnitSystemId): UnitId {
-  return input.display?.[system] ?? displayUnit(input.kind, system);
-}
-
-export function unitSymbol(unit: UnitId): string {
-  return units[unit].symbol;
-}
-
-/** A value with its unit for reading: `1 mm`, `68 °F`, `0°`, `0.6`. */
-export function withUnit(text: string, unit: UnitId): string {
-  const symbol = unitSymbol(unit);
-  if (symbol === '') return text;
-  return symbol === '°' ? `${text}°` : `${text} ${symbol}`;
-}
-
 /** Numbers typed into the editor read and print as in the widget (calc-core's input format). */
 export { formatNumber, parseNumber };
 
 /** The calculator's default of a quantity input as a number in the unit it is typed in. */
 export function calculatorDefaultNumber(input: QuantityInput, system: UnitSystemId): string {
-  return formatNumber(fromCanonical(input.default, unitFor(input, system)));
+  return formatNumber(fromCanonical(input.default, displayUnitOf(input, system)));
 }
 
 /** The same with its unit: `1 mm`, `68 °F`. */
 export function calculatorDefaultText(input: QuantityInput, system: UnitSystemId): string {
-  return withUnit(calculatorDefaultNumber(input, system), unitFor(input, system));
+  return withUnit(calculatorDefaultNumber(input, system), displayUnitOf(input, system));
 }
 
 /** Non-empty trimmed lines. */
@@ -97,7 +81,7 @@ function defaultTextsFor(calc: CalculatorDefinition, settings: WidgetSettings): 
     const value = settings.inputs[input.id]?.default;
     texts[input.id] =
       typeof value === 'number'
-        ? formatNumber(fromCanonical(value, unitFor(input, settings.units.system)))
+        ? formatNumber(fromCanonical(value, displayUnitOf(input, settings.units.system)))
         : '';
   }
   return texts;
@@ -162,7 +146,7 @@ export function setDefaultText(draft: WidgetDraft, input: QuantityInput, text: s
   if (parsed === null) return withInput(base, input.id, { default: undefined });
   if (Number.isNaN(parsed)) return base;
   return withInput(base, input.id, {
-    default: toCanonical(parsed, unitFor(input, draft.settings.units.system)),
+    default: toCanonical(parsed, displayUnitOf(input, draft.settings.units.system)),
   });
 }
 
@@ -184,26 +168,6 @@ export function startingChoices(
       typeof set === 'string' && input.options.some((o) => o.value === set) ? set : input.default;
   }
   return values;
-}
-
-/** Whether an input takes part with these choices: calc-core's rule (each condition, and its parent too). */
-export function appliesWith(
-  input: InputDefinition,
-  calc: CalculatorDefinition,
-  choices: Readonly<Record<string, string>>,
-  depth = 0,
-): boolean {
-  if (depth >= 8) return false;
-  return (input.appliesWhen ?? []).every((cond) => {
-    const parent = calc.inputs.find((i) => i.id === cond.input);
-    const value = choices[cond.input];
-    return (
-      parent !== undefined &&
-      value !== undefined &&
-      cond.values.includes(value) &&
-      appliesWith(parent, calc, choices, depth + 1)
-    );
-  });
 }
 
 /** "Liquid is Custom liquid and Liquid and surface is Custom", for an input that applies only sometimes. */
@@ -342,7 +306,7 @@ export function validateDraft(
     const key = `settings.inputs.${input.id}.default`;
     const text = draft.defaultTexts[input.id] ?? '';
     const parsed = parseNumber(text);
-    const unit = unitFor(input, system);
+    const unit = displayUnitOf(input, system);
     if (Number.isNaN(parsed)) {
       add(key, `Enter a number in ${unitSymbol(unit) || 'plain figures'}`);
       continue;

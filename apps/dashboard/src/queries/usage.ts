@@ -16,6 +16,7 @@ import { apiFetch } from '../lib/api';
  */
 export const runsKey = (orgId: number) => ['orgs', orgId, 'runs'] as const;
 export const leadsKey = (orgId: number) => ['orgs', orgId, 'leads'] as const;
+export const usageKey = (orgId: number) => ['orgs', orgId, 'usage'] as const;
 
 export const runListQuery = (orgId: number, search: string) =>
   queryOptions({
@@ -33,7 +34,7 @@ export const runQuery = (orgId: number, runId: string) =>
 
 export const usageSummaryQuery = (orgId: number, search: string) =>
   queryOptions({
-    queryKey: ['orgs', orgId, 'usage', 'summary', search],
+    queryKey: [...usageKey(orgId), 'summary', search],
     queryFn: async () => usageSummarySchema.parse(await apiFetch(`/orgs/${orgId}/usage/summary?${search}`)),
     placeholderData: keepPreviousData,
   });
@@ -51,7 +52,10 @@ export const leadQuery = (orgId: number, leadId: number) =>
     queryFn: async () => leadDetailSchema.parse(await apiFetch(`/orgs/${orgId}/leads/${leadId}`)),
   });
 
-/** A lead's change shows in its list and on its run's page (which names the lead's status). */
+/**
+ * A lead's change shows in its list, on its run's page (which names the lead's status) and in the
+ * usage summary (which counts leads).
+ */
 function useLeadMutation<V, R>(orgId: number, mutationFn: (vars: V) => Promise<R>) {
   const client = useQueryClient();
   return useMutation({
@@ -60,6 +64,7 @@ function useLeadMutation<V, R>(orgId: number, mutationFn: (vars: V) => Promise<R
       await Promise.all([
         client.invalidateQueries({ queryKey: leadsKey(orgId) }),
         client.invalidateQueries({ queryKey: runsKey(orgId) }),
+        client.invalidateQueries({ queryKey: usageKey(orgId) }),
       ]);
     },
   });

@@ -1,15 +1,13 @@
 import { keepPreviousData, queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import {
   assetSchema,
-  csrfResponseSchema,
-  errorBodySchema,
   widgetListSchema,
   widgetRevisionListSchema,
   widgetSchema,
   type Asset,
   type Widget,
 } from '@wickstone/contracts';
-import { ApiError, apiFetch } from '../lib/api';
+import { apiFetch } from '../lib/api';
 import type { UpdateWidgetBody } from '../lib/widget-draft';
 
 export const widgetsKey = (orgId: number) => ['orgs', orgId, 'widgets'] as const;
@@ -69,49 +67,11 @@ export function useUpdateWidget(orgId: number, widgetId: number) {
   });
 }
 
-async function send(orgId: number, file: File, token: string): Promise<Response> {
+/** A logo upload: multipart, field `file`, through the same client (CSRF token, error shape) as every call. */
+async function uploadAsset(orgId: number, file: File): Promise<Asset> {
   const form = new FormData();
   form.append('file', file);
-  try {
-    return await fetch(`/api/v1/orgs/${orgId}/assets`, {
-      method: 'POST',
-      credentials: 'same-origin',
-      headers: { Accept: 'application/json', 'x-csrf-token': token },
-      body: form,
-    });
-  } catch {
-    throw new ApiError(0, {
-      code: 'service_unavailable',
-      message: 'The server cannot be reached',
-      details: null,
-    });
-  }
-}
-
-const csrfToken = async () => csrfResponseSchema.parse(await apiFetch('/auth/csrf')).csrfToken;
-
-/**
- * A logo upload (multipart, field `file`). `apiFetch` sends JSON bodies only, so this asks for the
- * session's CSRF token the documented way and sends the form itself; the answer and any refusal
- * come back in the same shapes as every other call.
- */
-async function uploadAsset(orgId: number, file: File): Promise<Asset> {
-  let res = await send(orgId, file, await csrfToken());
-  let data: unknown = await res.json().catch(() => null);
-  if (res.status === 403 && errorBodySchema.safeParse(data).data?.error.code === 'csrf_failed') {
-    res = await send(orgId, file, await csrfToken());
-    data = await res.json().catch(() => null);
-  }
-  if (!res.ok) {
-    const parsed = errorBodySchema.safeParse(data);
-    throw new ApiError(
-      res.status,
-      parsed.success
-        ? parsed.data.error
-        : { code: 'bad_request', message: `The server answered HTTP ${res.status}`, details: null },
-    );
-  }
-  return assetSchema.parse(data);
+  return assetSchema.parse(await apiFetch(`/orgs/${orgId}/assets`, { method: 'POST', form }));
 }
 
 export function useUploadLogo(orgId: number) {

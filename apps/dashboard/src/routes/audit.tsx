@@ -1,14 +1,15 @@
 import { useQuery } from '@tanstack/react-query';
-import { useSearchParams } from 'react-router';
 import type { AuditEntry } from '@wickstone/contracts';
 import { auditLabel, formatDateTime, roleLabel } from '../lib/labels';
 import { useOrg } from '../lib/org-context';
 import { usePageTitle } from '../lib/use-page-title';
+import { usePageParam } from '../lib/usage-filters';
 import { auditQuery } from '../queries/audit';
 import { Email } from '../components/email';
-import { DataTable, table } from '../components/table';
+import { table } from '../components/table';
+import { NoSuchPage, PagedTable } from '../components/paged-table';
 import { EmptyState, ErrorState, LoadingState } from '../components/states';
-import { Button, PageHeader, Spinner } from '../components/ui';
+import { PageHeader } from '../components/ui';
 
 const pageSize = 25;
 
@@ -47,12 +48,8 @@ function detailText(entry: AuditEntry): string {
 export function AuditPage() {
   usePageTitle('Audit log');
   const { orgId } = useOrg();
-  const [params, setParams] = useSearchParams();
-  const requested = Number(params.get('page') ?? '1');
-  const page = Number.isInteger(requested) && requested >= 1 ? requested : 1;
+  const [page, goTo] = usePageParam();
   const audit = useQuery(auditQuery(orgId, page, pageSize));
-  const pages = audit.data ? Math.max(1, Math.ceil(audit.data.total / pageSize)) : 1;
-  const goTo = (p: number) => setParams(p === 1 ? {} : { page: String(p) });
 
   let body;
   if (audit.isPending) body = <LoadingState label="Loading the audit log…" />;
@@ -67,83 +64,68 @@ export function AuditPage() {
   else if (audit.data.items.length === 0)
     body =
       page > 1 ? (
-        <EmptyState title={`There is no page ${page}`}>
-          <Button size="sm" onClick={() => goTo(1)}>
-            Go to the newest entries
-          </Button>
-        </EmptyState>
+        <NoSuchPage page={page} onFirst={() => goTo(1)} first="Go to the newest entries" />
       ) : (
         <EmptyState title="Nothing recorded yet">
           Sign-ins, invitations and role changes appear here as they happen.
         </EmptyState>
       );
   else {
-    const first = (page - 1) * pageSize + 1;
-    const last = first + audit.data.items.length - 1;
     body = (
-      <div className="space-y-3">
-        <DataTable
-          caption="Audit log, newest first"
-          busy={audit.isPlaceholderData}
-          columns={[
-            { label: 'When' },
-            { label: 'Event' },
-            { label: 'By' },
-            { label: 'Concerning' },
-            { label: 'From', className: 'hidden lg:table-cell' },
-          ]}
-        >
-          {audit.data.items.map((e) => (
-            <tr key={e.id} className={table.row}>
-              <td className={`${tdClass} ${table.wide} whitespace-nowrap text-ink-soft max-sm:text-xs`}>
-                <time dateTime={e.createdAt}>{formatDateTime(e.createdAt)}</time>
-              </td>
-              <td className={`${tdClass} ${table.wide}`}>
-                <span className={`font-semibold ${e.type === 'auth.login_failed' ? 'text-bad' : ''}`}>
-                  {auditLabel[e.type]}
-                </span>
-                {detailText(e) ? <div className="text-ink-soft">{detailText(e)}</div> : null}
-              </td>
-              <td
-                data-label="By"
-                className={`${tdClass} ${table.wide} ${table.labelled} ${e.actor ? '' : 'max-sm:hidden'}`}
-              >
-                {e.actor ? (
-                  <>
-                    <span className="sm:block">{e.actor.name}</span>
-                    <div className="text-ink-soft max-sm:hidden">
-                      <Email address={e.actor.email} />
-                    </div>
-                  </>
-                ) : (
-                  <span className="text-ink-soft">—</span>
-                )}
-              </td>
-              <td
-                data-label="Concerning"
-                className={`${tdClass} ${table.wide} ${table.labelled} ${e.subject ? '' : 'max-sm:hidden'}`}
-              >
-                {e.subject ? <Email address={e.subject} /> : <span className="text-ink-soft">—</span>}
-              </td>
-              <td className={`${tdClass} hidden text-ink-soft tabular-nums lg:table-cell`}>{e.ip ?? '—'}</td>
-            </tr>
-          ))}
-        </DataTable>
-        <nav aria-label="Audit log pages" className="flex flex-wrap items-center justify-between gap-3">
-          <p className="flex items-center gap-2 text-sm text-ink-soft" aria-live="polite">
-            {audit.isPlaceholderData ? <Spinner /> : null}
-            Entries {first}–{last} of {audit.data.total} · page {page} of {pages}
-          </p>
-          <div className="flex gap-2">
-            <Button size="sm" disabled={page <= 1} onClick={() => goTo(page - 1)}>
-              ← Newer
-            </Button>
-            <Button size="sm" disabled={page >= pages} onClick={() => goTo(page + 1)}>
-              Older →
-            </Button>
-          </div>
-        </nav>
-      </div>
+      <PagedTable
+        noun="entries"
+        page={page}
+        pageSize={pageSize}
+        total={audit.data.total}
+        loading={audit.isPlaceholderData}
+        back="← Newer"
+        forward="Older →"
+        onPage={goTo}
+        caption="Audit log, newest first"
+        columns={[
+          { label: 'When' },
+          { label: 'Event' },
+          { label: 'By' },
+          { label: 'Concerning' },
+          { label: 'From', className: 'hidden lg:table-cell' },
+        ]}
+      >
+        {audit.data.items.map((e) => (
+          <tr key={e.id} className={table.row}>
+            <td className={`${tdClass} ${table.wide} whitespace-nowrap text-ink-soft max-sm:text-xs`}>
+              <time dateTime={e.createdAt}>{formatDateTime(e.createdAt)}</time>
+            </td>
+            <td className={`${tdClass} ${table.wide}`}>
+              <span className={`font-semibold ${e.type === 'auth.login_failed' ? 'text-bad' : ''}`}>
+                {auditLabel[e.type]}
+              </span>
+              {detailText(e) ? <div className="text-ink-soft">{detailText(e)}</div> : null}
+            </td>
+            <td
+              data-label="By"
+              className={`${tdClass} ${table.wide} ${table.labelled} ${e.actor ? '' : 'max-sm:hidden'}`}
+            >
+              {e.actor ? (
+                <>
+                  <span className="sm:block">{e.actor.name}</span>
+                  <div className="text-ink-soft max-sm:hidden">
+                    <Email address={e.actor.email} />
+                  </div>
+                </>
+              ) : (
+                <span className="text-ink-soft">—</span>
+              )}
+            </td>
+            <td
+              data-label="Concerning"
+              className={`${tdClass} ${table.wide} ${table.labelled} ${e.subject ? '' : 'max-sm:hidden'}`}
+            >
+              {e.subject ? <Email address={e.subject} /> : <span className="text-ink-soft">—</span>}
+            </td>
+            <td className={`${tdClass} hidden text-ink-soft tabular-nums lg:table-cell`}>{e.ip ?? '—'}</td>
+          </tr>
+        ))}
+      </PagedTable>
     );
   }
 

@@ -1,16 +1,17 @@
 import { useQuery } from '@tanstack/react-query';
-import { Link, useSearchParams } from 'react-router';
+import { Link } from 'react-router';
 import { getCalculator } from '@wickstone/calc-core';
 import { can, type Widget } from '@wickstone/contracts';
 import { formatDate } from '../lib/labels';
 import { useOrg } from '../lib/org-context';
 import { usePageTitle } from '../lib/use-page-title';
+import { usePageParam } from '../lib/usage-filters';
 import { orgPath } from '../nav';
 import { widgetListQuery } from '../queries/widgets';
-import { DataTable, table } from '../components/table';
+import { table } from '../components/table';
+import { NoSuchPage, PagedTable } from '../components/paged-table';
 import { EmptyState, ErrorState, LoadingState } from '../components/states';
-import { Button, ButtonLink, PageHeader } from '../components/ui';
-import { PageNav } from '../components/widget-fields';
+import { ButtonLink, PageHeader } from '../components/ui';
 import { StatusBadge } from '../components/widget-status';
 
 const pageSize = 25;
@@ -60,11 +61,8 @@ export function WidgetsPage() {
   usePageTitle('Widgets');
   const { orgId, role } = useOrg();
   const writer = can(role, 'widgets:write');
-  const [params, setParams] = useSearchParams();
-  const requested = Number(params.get('page') ?? '1');
-  const page = Number.isInteger(requested) && requested >= 1 ? requested : 1;
+  const [page, goTo] = usePageParam();
   const list = useQuery(widgetListQuery(orgId, page, pageSize));
-  const goTo = (p: number) => setParams(p === 1 ? {} : { page: String(p) });
   const create = (
     <ButtonLink to={orgPath(orgId, 'widgets/new')} tone="primary">
       New widget
@@ -84,11 +82,7 @@ export function WidgetsPage() {
   else if (list.data.items.length === 0)
     body =
       page > 1 ? (
-        <EmptyState title={`There is no page ${page}`}>
-          <Button size="sm" onClick={() => goTo(1)}>
-            Go to the first page
-          </Button>
-        </EmptyState>
+        <NoSuchPage page={page} onFirst={() => goTo(1)} />
       ) : (
         <EmptyState title="No widgets yet">
           {writer ? (
@@ -106,35 +100,27 @@ export function WidgetsPage() {
         </EmptyState>
       );
   else {
-    const pages = Math.max(1, Math.ceil(list.data.total / pageSize));
     body = (
-      <div className="space-y-3">
-        <DataTable
-          caption="Widgets, most recently changed first"
-          busy={list.isPlaceholderData}
-          columns={[
-            { label: 'Widget' },
-            { label: 'Calculator' },
-            { label: 'Status' },
-            { label: 'Updated' },
-            { label: 'Sites' },
-          ]}
-        >
-          {list.data.items.map((w) => (
-            <WidgetRow key={w.id} widget={w} />
-          ))}
-        </DataTable>
-        <PageNav
-          label="Widget pages"
-          page={page}
-          pages={pages}
-          summary={`${list.data.total} widgets`}
-          loading={list.isPlaceholderData}
-          back="← Previous"
-          forward="Next →"
-          onPage={goTo}
-        />
-      </div>
+      <PagedTable
+        noun="widgets"
+        page={page}
+        pageSize={pageSize}
+        total={list.data.total}
+        loading={list.isPlaceholderData}
+        onPage={goTo}
+        caption="Widgets, most recently changed first"
+        columns={[
+          { label: 'Widget' },
+          { label: 'Calculator' },
+          { label: 'Status' },
+          { label: 'Updated' },
+          { label: 'Sites' },
+        ]}
+      >
+        {list.data.items.map((w) => (
+          <WidgetRow key={w.id} widget={w} />
+        ))}
+      </PagedTable>
     );
   }
 

@@ -1,23 +1,18 @@
 import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 import {
-  displayUnit,
+  displayUnitOf,
   fromCanonical,
-  units,
+  withUnit,
   type CalculationResult,
   type CalculatorDefinition,
-  type UnitId,
+  type Displayable,
   type UnitSystemId,
 } from '@wickstone/calc-core';
 
-function shown(
-  value: number,
-  kind: Parameters<typeof displayUnit>[0],
-  system: UnitSystemId,
-  override?: Partial<Record<UnitSystemId, UnitId>>,
-) {
-  const unit = override?.[system] ?? displayUnit(kind, system);
-  const symbol = units[unit].symbol;
-  return `${formatNumber(fromCanonical(value, unit))}${symbol ? ` ${symbol}` : ''}`;
+/** A canonical value in the unit the widget shows it in, with its symbol spaced as everywhere else. */
+function shown(value: number, item: Displayable, system: UnitSystemId): string {
+  const unit = displayUnitOf(item, system);
+  return withUnit(formatNumber(fromCanonical(value, unit)), unit);
 }
 
 /**
@@ -36,7 +31,7 @@ export function resultLines(
     if (input.kind === 'choice') {
       lines.push(`  ${input.label}: ${input.options.find((o) => o.value === v)?.label ?? String(v)}`);
     } else if (typeof v === 'number') {
-      lines.push(`  ${input.label}: ${shown(v, input.kind, system, input.display)}`);
+      lines.push(`  ${input.label}: ${shown(v, input, system)}`);
     }
   }
   lines.push('', 'Result');
@@ -44,10 +39,8 @@ export function resultLines(
     const v = result.outputs[out.id];
     if (v === undefined || v === null) continue;
     const band = result.band?.outputs[out.id];
-    const range = band
-      ? ` (band ${shown(band.low, out.kind, system, out.display)} to ${shown(band.high, out.kind, system, out.display)})`
-      : '';
-    lines.push(`  ${out.label}: ${shown(v, out.kind, system, out.display)}${range}`);
+    const range = band ? ` (band ${shown(band.low, out, system)} to ${shown(band.high, out, system)})` : '';
+    lines.push(`  ${out.label}: ${shown(v, out, system)}${range}`);
   }
   if (result.warnings.length) {
     lines.push('', 'Validity warnings');
@@ -58,7 +51,7 @@ export function resultLines(
     lines.push(
       `  ${step.label}: ${step.formula}`,
       `    = ${step.substituted}`,
-      `    = ${formatNumber(step.value)} ${units[step.unit].symbol}`,
+      `    = ${withUnit(formatNumber(step.value), step.unit)}`,
     );
   }
   return lines;

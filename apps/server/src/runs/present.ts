@@ -1,8 +1,9 @@
 import {
-  displayUnit,
+  displayUnitOf,
   fromCanonical,
   getCalculator,
   units,
+  withUnit,
   type CalculatorDefinition,
   type InputDefinition,
   type OutputDefinition,
@@ -23,15 +24,9 @@ function shown(
     return { ...base, value: raw, unit: null, text: option?.label ?? String(raw) };
   }
   if (typeof raw !== 'number') return { ...base, value: raw, unit: null, text: String(raw) };
-  const unit = def.display?.[system] ?? displayUnit(def.kind, system);
+  const unit = displayUnitOf(def, system);
   const value = fromCanonical(raw, unit);
-  const symbol = units[unit].symbol || null;
-  return {
-    ...base,
-    value,
-    unit: symbol,
-    text: symbol ? `${formatNumber(value)} ${symbol}` : formatNumber(value),
-  };
+  return { ...base, value, unit: units[unit].symbol || null, text: withUnit(formatNumber(value), unit) };
 }
 
 /** What the runs table shows of one run's inputs and outputs. */

@@ -1,6 +1,8 @@
 import { CalcInputError, type FieldIssue } from '../errors.js';
+import { inputApplies, withUnit } from '../display.js';
+import { formatValue } from '../format.js';
 import { canonicalJson, sha256Hex } from '../hash.js';
-import { canonicalUnits, units } from '../units.js';
+import { canonicalUnits } from '../units.js';
 import { VERSION } from '../version.js';
 import type {
   Band,
@@ -20,9 +22,8 @@ function isPlainObject(value: unknown): value is Readonly<Record<string, unknown
 }
 
 function rangeText(input: QuantityInput): string {
-  const symbol = units[canonicalUnits[input.kind]].symbol;
-  const unit = symbol === '' ? '' : symbol === '°' || symbol === '°C' ? symbol : ` ${symbol}`;
-  return `from ${input.min}${unit} to ${input.max}${unit}`;
+  const unit = canonicalUnits[input.kind];
+  return `from ${withUnit(formatValue(input.min, 6), unit)} to ${withUnit(formatValue(input.max, 6), unit)}`;
 }
 
 /**
@@ -56,19 +57,8 @@ export function resolveInputs(def: CalculatorDefinition, raw: unknown): InputVal
     else badChoices.add(input.id);
   }
 
-  const byId = new Map(def.inputs.map((i) => [i.id, i] as const));
-  const applies = (input: InputDefinition, depth = 0): boolean =>
-    depth < 8 &&
-    (input.appliesWhen ?? []).every((cond) => {
-      const parent = byId.get(cond.input);
-      const value = choices.get(cond.input);
-      return (
-        parent !== undefined &&
-        value !== undefined &&
-        cond.values.includes(value) &&
-        applies(parent, depth + 1)
-      );
-    });
+  const chosen = Object.fromEntries(choices);
+  const applies = (input: InputDefinition): boolean => inputApplies(input, def.inputs, chosen);
 
   const resolved: Record<string, number | string> = {};
   for (const input of def.inputs) {

@@ -8,7 +8,9 @@ import {
   waterSurfaceTension,
   waterViscosity,
 } from '../properties/water.js';
-import { STANDARD_GRAVITY, units, type UnitId } from '../units.js';
+import { withUnit } from '../display.js';
+import { formatValue } from '../format.js';
+import { STANDARD_GRAVITY, type UnitId } from '../units.js';
 import type {
   BandBasis,
   Caution,
@@ -34,36 +36,12 @@ import type {
 
 // ---------------------------------------------------------------- number formatting for working
 
-const SUPERSCRIPT: Readonly<Record<string, string>> = {
-  '-': '⁻',
-  '+': '',
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-};
+/** Working and warnings print numbers with the one formatter people see everywhere (`format.ts`). */
+export { formatValue as fmt } from '../format.js';
 
-/** Four significant figures; powers of ten outside 0.001–999 999. toPrecision is exactly specified, so every engine prints the same. */
-export function fmt(value: number, digits = 4): string {
-  if (value === 0) return '0';
-  const abs = Math.abs(value);
-  if (abs >= 1e-3 && abs < 1e6) return String(Number(value.toPrecision(digits)));
-  const [mantissa = '', exponent = ''] = value.toExponential(digits - 1).split('e');
-  return `${String(Number(mantissa))}×10${[...exponent].map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
-}
-
-/** A number with its unit symbol: `0.07274 N/m`, `20 °C`, `0°`. */
+/** A number with its unit symbol, spaced by the one rule (`display.ts`): `0.07274 N/m`, `20 °C`, `0°`. */
 export function q(value: number, unit: UnitId, digits = 4): string {
-  const symbol = units[unit].symbol;
-  const text = fmt(value, digits);
-  if (symbol === '') return text;
-  return symbol === '°' ? `${text}°` : `${text} ${symbol}`;
+  return withUnit(formatValue(value, digits), unit);
 }
 
 /** A warning instance; `fields` are the input ids a form should highlight. */
@@ -209,7 +187,7 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
     working.push({
       label: `Surface tension of water at ${q(t, 'degC')}`,
       formula: 'σ = 235.8 mN/m · τ^1.256 · (1 − 0.625·τ), τ = 1 − T / 647.096 K',
-      substituted: `T = ${q(T, 'K', 6)}, τ = ${fmt(1 - T / 647.096)}`,
+      substituted: `T = ${q(T, 'K', 6)}, τ = ${formatValue(1 - T / 647.096)}`,
       value: sigma,
       unit: 'N/m',
       source: IAPWS_ST,
@@ -446,7 +424,7 @@ export function nearNinety(angleDeg: number, fields: readonly string[] = ANGLE_F
   if (Math.abs(angleDeg - 90) >= NEAR_90_DEG) return null;
   return warning(
     CONTACT_ANGLE_NEAR_90.code,
-    `A contact angle of ${fmt(angleDeg)}° is close to 90°, where the result is proportional to a small cos θ (${fmt(Math.cos((angleDeg * Math.PI) / 180))}); treat it as very uncertain.`,
+    `A contact angle of ${q(angleDeg, 'deg')} is close to 90°, where the result is proportional to a small cos θ (${formatValue(Math.cos((angleDeg * Math.PI) / 180))}); treat it as very uncertain.`,
     fields,
   );
 }

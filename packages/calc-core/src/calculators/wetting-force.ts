@@ -176,7 +176,7 @@ function solve(inputs: InputValues): Solution {
         warnings.push(
           warning(
             'CONTACT_ANGLE_NOT_ZERO',
-            `A contact angle of ${fmt(theta)}° is assumed. The plate method is normally run fully wetted (θ = 0, e.g. roughened platinum); any other angle must be known independently.`,
+            `A contact angle of ${q(theta, 'deg')} is assumed. The plate method is normally run fully wetted (θ = 0, e.g. roughened platinum); any other angle must be known independently.`,
             ['contactAngleDeg'],
           ),
         );

@@ -1,6 +1,7 @@
 import type { FieldIssue, QuantityInput, UnitSystemId } from '@wickstone/calc-core';
-import { applies, type ResolvedInput } from './settings.js';
-import { formatInput, fromDisplay, parseNumber, toDisplay, unitFor, unitSymbol } from './units.js';
+import { inputApplies } from '@wickstone/calc-core/display';
+import type { ResolvedInput } from './settings.js';
+import { displayUnitOf, formatInput, fromDisplay, parseNumber, toDisplay, withUnit } from './units.js';
 
 /**
  * One input as the form holds it. `value` is canonical and exact: a default shown as 0.0393701 in
@@ -16,7 +17,7 @@ export type FormState = Readonly<Record<string, FieldState>>;
 
 function shown(value: number | string, input: ResolvedInput, system: UnitSystemId): string {
   if (typeof value === 'string') return value;
-  return formatInput(toDisplay(value, unitFor(input.def as QuantityInput, system)));
+  return formatInput(toDisplay(value, displayUnitOf(input.def as QuantityInput, system)));
 }
 
 /** Every input at its starting value, texts in the unit system's units. */
@@ -31,7 +32,7 @@ export function initialForm(inputs: readonly ResolvedInput[], system: UnitSystem
 export function typed(input: ResolvedInput, text: string, system: UnitSystemId): FieldState {
   const n = parseNumber(text);
   if (n === null || Number.isNaN(n)) return { text, value: n };
-  return { text, value: fromDisplay(n, unitFor(input.def as QuantityInput, system)) };
+  return { text, value: fromDisplay(n, displayUnitOf(input.def as QuantityInput, system)) };
 }
 
 /** The form after a unit switch: every readable number re-shown in the new units; unreadable text kept as typed. */
@@ -60,11 +61,11 @@ export function effectiveValues(
   return out;
 }
 
-/** The inputs that take part now, in the calculator's order. */
+/** The inputs that take part now, in the calculator's order (calc-core's rule, so the form shows exactly the inputs `calculate` uses). */
 export function applicable(inputs: readonly ResolvedInput[], state: FormState): ResolvedInput[] {
-  const byId = new Map(inputs.map((i) => [i.def.id, i.def] as const));
+  const defs = inputs.map((i) => i.def);
   const values = effectiveValues(inputs, state);
-  return inputs.filter((i) => applies(i.def, byId, values));
+  return inputs.filter((i) => inputApplies(i.def, defs, values));
 }
 
 /**
@@ -95,9 +96,7 @@ export function issueMessage(
   if (issue.code === 'NOT_A_NUMBER' || issue.code === 'NOT_FINITE') return 'Enter a number, such as 0.5';
   if (issue.code !== 'BELOW_MIN' && issue.code !== 'ABOVE_MAX') return issue.message;
   const def = input.def;
-  const unit = unitFor(def, system);
-  const symbol = unitSymbol(unit);
-  const suffix = symbol === '' ? '' : symbol === '°' ? '°' : ` ${symbol}`;
-  const edge = (v: number): string => formatInput(toDisplay(v, unit)) + suffix;
+  const unit = displayUnitOf(def, system);
+  const edge = (v: number): string => withUnit(formatInput(toDisplay(v, unit)), unit);
   return `Use a value from ${edge(def.min)} to ${edge(def.max)}`;
 }

@@ -1,10 +1,6 @@
-import { calculator as soil } from '@wickstone/calc-core/calculators/soil-capillary-rise';
 import { calculator as tube } from '@wickstone/calc-core/calculators/tube-rise';
-import { calculator as wetting } from '@wickstone/calc-core/calculators/wetting-force';
 import { describe, expect, it } from 'vitest';
-import { applies, resolveInputSettings } from './settings.js';
-
-const byId = (def: typeof tube) => new Map(def.inputs.map((i) => [i.id, i] as const));
+import { resolveInputSettings } from './settings.js';
 
 describe('resolveInputSettings', () => {
   it('keeps the calculator’s order and defaults when the widget sets nothing', () => {
@@ -52,26 +48,5 @@ describe('resolveInputSettings', () => {
     const r = resolveInputSettings(tube, settings);
     expect(r).toHaveLength(tube.inputs.length);
     expect(r.find((i) => i.def.id === 'gravity')?.mode).toBe('editable');
-  });
-});
-
-describe('applies', () => {
-  it('follows appliesWhen on the current choices', () => {
-    const ids = byId(tube);
-    const temperature = ids.get('temperatureC')!;
-    const sigma = ids.get('surfaceTension')!;
-    expect(applies(temperature, ids, { liquid: 'water' })).toBe(true);
-    expect(applies(temperature, ids, { liquid: 'ethanol' })).toBe(false);
-    expect(applies(sigma, ids, { liquid: 'custom' })).toBe(true);
-    expect(applies(ids.get('diameter')!, ids, {})).toBe(true);
-  });
-
-  it('needs every condition, including those on inputs that themselves depend on another', () => {
-    const ids = byId(wetting);
-    const temperature = ids.get('temperatureC')!;
-    expect(applies(temperature, ids, { method: 'plate-force', liquid: 'water' })).toBe(true);
-    expect(applies(temperature, ids, { method: 'ring', liquid: 'water' })).toBe(false);
-    const ids2 = byId(soil);
-    expect(applies(ids2.get('layerThickness')!, ids2, { breakLayer: 'none' })).toBe(false);
   });
 });

@@ -40,27 +40,3 @@ export function resolveInputSettings(def: CalculatorDefinition, settings: InputS
     return { def: input, mode, initial, defaultRejected };
   });
 }
-
-/**
- * Whether an input takes part given the current choice values: every `appliesWhen` condition holds
- * and the input it depends on takes part itself (calc-core's own rule, so the form shows exactly the
- * inputs `calculate` will use).
- */
-export function applies(
-  input: InputDefinition,
-  byId: ReadonlyMap<string, InputDefinition>,
-  choices: Readonly<Record<string, string | number | null>>,
-  depth = 0,
-): boolean {
-  if (depth >= 8) return false;
-  return (input.appliesWhen ?? []).every((cond) => {
-    const parent = byId.get(cond.input);
-    const value = choices[cond.input];
-    return (
-      parent !== undefined &&
-      typeof value === 'string' &&
-      cond.values.includes(value) &&
-      applies(parent, byId, choices, depth + 1)
-    );
-  });
-}

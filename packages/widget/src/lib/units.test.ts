@@ -1,25 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  formatInput,
-  formatValue,
-  fromDisplay,
-  outputUnitFor,
-  parseNumber,
-  toDisplay,
-  unitFor,
-  withUnit,
-} from './units.js';
-
-describe('unitFor', () => {
-  it('takes the definition’s own unit for the system, else the system’s default', () => {
-    const bore = { kind: 'length' as const, display: { si: 'mm' as const, us: 'in' as const } };
-    expect(unitFor(bore, 'si')).toBe('mm');
-    expect(unitFor(bore, 'us')).toBe('in');
-    expect(unitFor({ kind: 'length' }, 'si')).toBe('m');
-    expect(unitFor({ kind: 'temperature' }, 'us')).toBe('degF');
-    expect(unitFor({ kind: 'surfaceTension', display: { si: 'N/m' } }, 'us')).toBe('dyn/cm');
-  });
-});
+import { formatInput, formatValue, fromDisplay, outputUnitFor, parseNumber, toDisplay } from './units.js';
 
 describe('outputUnitFor', () => {
   const time = { kind: 'time' as const };
@@ -88,14 +68,5 @@ describe('formatInput and parseNumber', () => {
       const back = fromDisplay(parseNumber(formatInput(toDisplay(v, 'in'))) as number, 'in');
       expect(Math.abs(back - v) / v).toBeLessThan(5e-6);
     }
-  });
-});
-
-describe('withUnit', () => {
-  it('writes degrees without a space and pure numbers without a unit', () => {
-    expect(withUnit('12', 'mm')).toBe('12 mm');
-    expect(withUnit('35', 'deg')).toBe('35°');
-    expect(withUnit('20', 'degC')).toBe('20 °C');
-    expect(withUnit('0.4', '1')).toBe('0.4');
   });
 });

@@ -1,5 +1,4 @@
 import {
-  displayUnit,
   fromCanonical,
   toCanonical,
   units,
@@ -7,17 +6,7 @@ import {
   type UnitId,
   type UnitSystemId,
 } from '@wickstone/calc-core';
-
-/** Anything with a kind and an optional per-system display unit: a quantity input or an output. */
-export interface Displayable {
-  readonly kind: QuantityKind;
-  readonly display?: Partial<Readonly<Record<UnitSystemId, UnitId>>>;
-}
-
-/** The unit a quantity is shown in: the definition's own choice for the system, else the system's default. */
-export function unitFor(item: Displayable, system: UnitSystemId): UnitId {
-  return item.display?.[system] ?? displayUnit(item.kind, system);
-}
+import { displayUnitOf, type Displayable } from '@wickstone/calc-core/display';
 
 // Durations span seconds to weeks (wicking through a wall): shown in the largest unit that keeps
 // the number at or above about two, so "3.2 h" rather than "11 520 s".
@@ -29,7 +18,7 @@ const TIME_STEPS: readonly (readonly [UnitId, number])[] = [
 
 /**
  * The unit an output value is shown in. Times with no unit of their own pick a readable one by
- * magnitude; everything else is `unitFor`.
+ * magnitude; everything else is calc-core's `displayUnitOf`.
  * @param canonicalValue the output in its canonical unit (seconds for a time)
  */
 export function outputUnitFor(item: Displayable, system: UnitSystemId, canonicalValue: number): UnitId {
@@ -38,17 +27,12 @@ export function outputUnitFor(item: Displayable, system: UnitSystemId, canonical
     for (const [unit, from] of TIME_STEPS) if (abs >= from) return unit;
     return 's';
   }
-  return unitFor(item, system);
+  return displayUnitOf(item, system);
 }
 
 /** The quantity a unit measures. */
 export function unitKind(unit: UnitId): QuantityKind {
   return units[unit].kind;
-}
-
-/** The printed symbol of a unit (empty for a pure number). */
-export function unitSymbol(unit: UnitId): string {
-  return units[unit].symbol;
 }
 
 /** A canonical value (SI, degrees, °C) expressed in `unit`. */
@@ -62,10 +46,4 @@ export function fromDisplay(displayValue: number, unit: UnitId): number {
 }
 
 export { formatValue, formatInput, parseNumber } from '@wickstone/calc-core/format';
-
-/** A value with its unit for reading: `12.5 mm`, `20 °C`, `35°`, `0.42`. */
-export function withUnit(text: string, unit: UnitId): string {
-  const symbol = unitSymbol(unit);
-  if (symbol === '') return text;
-  return symbol === '°' ? `${text}°` : `${text} ${symbol}`;
-}
+export { displayUnitOf, unitGap, unitSymbol, withUnit } from '@wickstone/calc-core/display';

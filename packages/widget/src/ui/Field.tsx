@@ -1,7 +1,7 @@
 import type { ChoiceInput, QuantityInput, UnitSystemId } from '@wickstone/calc-core';
 import type { FieldState } from '../lib/form.js';
 import type { ResolvedInput } from '../lib/settings.js';
-import { unitFor, unitSymbol } from '../lib/units.js';
+import { displayUnitOf, unitSymbol } from '../lib/units.js';
 
 export interface FieldProps {
   readonly input: ResolvedInput;
@@ -27,7 +27,7 @@ export function Field({ input, state, system, error, warningIds, onText, onChoic
   const choice = def.kind === 'choice' ? (def as ChoiceInput) : null;
   const option = choice?.options.find((o) => o.value === state.value);
   const help = choice ? option?.help : def.help;
-  const symbol = choice ? '' : unitSymbol(unitFor(def as QuantityInput, system));
+  const symbol = choice ? '' : unitSymbol(displayUnitOf(def as QuantityInput, system));
   const describedBy = [help ? helpId : '', locked ? `${id}-lock` : '', error ? errorId : '', ...warningIds]
     .filter(Boolean)
     .join(' ');

@@ -3,7 +3,8 @@ import {
   formatValue,
   outputUnitFor,
   toDisplay,
-  unitFor,
+  displayUnitOf,
+  unitGap,
   unitKind,
   unitSymbol,
   withUnit,
@@ -26,12 +27,20 @@ interface ResultProps {
 }
 
 function Figure({ value, unit }: { value: number; unit: UnitId }) {
-  const symbol = unitSymbol(unit);
   const text = formatValue(toDisplay(value, unit));
+  const gap = unitGap(unit);
+  // A symbol set against the number (the degree of an angle) stays in the figure's own type.
   return (
     <span class="figure">
-      {symbol === '°' ? `${text}°` : text}
-      {symbol !== '' && symbol !== '°' && <span class="u">{symbol}</span>}
+      {gap === '' ? (
+        withUnit(text, unit)
+      ) : (
+        <>
+          {text}
+          {gap}
+          <span class="u">{unitSymbol(unit)}</span>
+        </>
+      )}
     </span>
   );
 }
@@ -99,7 +108,7 @@ export function Result({ calculator, result, system, stale, firmCautions, runId,
           {band.basis
             .map((b) => {
               const input = calculator.inputs.find((x) => x.id === b.input);
-              const unit = input && input.kind !== 'choice' ? unitFor(input, system) : null;
+              const unit = input && input.kind !== 'choice' ? displayUnitOf(input, system) : null;
               const edges = unit
                 ? withUnit(
                     `${formatValue(toDisplay(b.low, unit))} to ${formatValue(toDisplay(b.high, unit))}`,
@@ -134,7 +143,7 @@ export function Result({ calculator, result, system, stale, firmCautions, runId,
         <ol class="steps">
           {result.working.map((step, i) => {
             // Working is stated in SI, as the formulas are; the value is repeated in the visitor's units.
-            const shown = unitFor({ kind: unitKind(step.unit) }, system);
+            const shown = displayUnitOf({ kind: unitKind(step.unit) }, system);
             const converted = shown !== step.unit;
             return (
               <li class="step" key={i} data-step={i}>

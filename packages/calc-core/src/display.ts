@@ -1,0 +1,67 @@
+// How a quantity is put in front of a person, written once for the engine, the widget, the
+// dashboard and the server: which inputs take part, which unit a value is shown in, and how a
+// number and its unit symbol are joined. Pure and small: the widget bundles it.
+
+import type { InputDefinition } from './calculators/types.js';
+import { displayUnit, units, type QuantityKind, type UnitId, type UnitSystemId } from './units.js';
+
+/** Anything with a kind and an optional per-system display unit: a quantity input or an output. */
+export interface Displayable {
+  readonly kind: QuantityKind;
+  readonly display?: Partial<Readonly<Record<UnitSystemId, UnitId>>>;
+}
+
+/** The unit a quantity is shown in: the definition's own choice for the system, else the system's unit for its kind. */
+export function displayUnitOf(item: Displayable, system: UnitSystemId): UnitId {
+  return item.display?.[system] ?? displayUnit(item.kind, system);
+}
+
+/**
+ * What stands between a number and a unit's symbol. SI Brochure (BIPM, 9th ed., 2019) §5.4.3 and
+ * NIST SP 811 (2008) §7.2: a space always separates the number from the unit, `20 °C` included;
+ * the one exception is the degree, minute and second of a plane angle, written against the number
+ * (`35°`). A pure number has no symbol and so nothing after it.
+ */
+export function unitGap(unit: UnitId): '' | ' ' {
+  const def = units[unit];
+  return def.symbol === '' || (def.kind === 'angle' && def.symbol === '°') ? '' : ' ';
+}
+
+/** The printed symbol of a unit (`mN/m`, `°C`, `kg/m³`; empty for a pure number). */
+export function unitSymbol(unit: UnitId): string {
+  return units[unit].symbol;
+}
+
+/**
+ * A formatted number with its unit for reading: `12.5 mm`, `20 °C`, `35°`, `998.2 kg/m³`, `0.42`.
+ * @param text the number as already formatted (`formatValue`, `formatInput` or a range bound)
+ */
+export function withUnit(text: string, unit: UnitId): string {
+  return text + unitGap(unit) + unitSymbol(unit);
+}
+
+/**
+ * Whether an input takes part given the current choice values: every `appliesWhen` condition holds
+ * and the input it depends on takes part itself. A chain deeper than eight (only a definition
+ * that refers to itself) never applies.
+ * @param inputs the calculator's inputs, where the conditions' parents are looked up
+ * @param choices current values keyed by input id; only strings match a condition
+ */
+export function inputApplies(
+  input: InputDefinition,
+  inputs: readonly InputDefinition[],
+  choices: Readonly<Record<string, unknown>>,
+  depth = 0,
+): boolean {
+  if (depth >= 8) return false;
+  return (input.appliesWhen ?? []).every((cond) => {
+    const parent = inputs.find((i) => i.id === cond.input);
+    const value = Object.hasOwn(choices, cond.input) ? choices[cond.input] : undefined;
+    return (
+      parent !== undefined &&
+      typeof value === 'string' &&
+      cond.values.includes(value) &&
+      inputApplies(parent, inputs, choices, depth + 1)
+    );
+  });
+}
