@@ -288,9 +288,10 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     expect(pageErrors).toEqual([]);
   });
 
-  it("erases the lead's personal data after a confirmation, and the run stays unlinked", async () => {
+  it("erases the lead's personal data after a confirmation; the run stays linked and the usage counts do not change", async () => {
     await page.locator(`[data-lead-row="${leadId}"] a`).click();
     await page.waitForURL(new RegExp(`/leads/${leadId}$`));
+    const ledBefore = await q<{ n: string }>('SELECT SUM(led) AS n FROM run_daily');
     await page.getByRole('button', { name: 'Erase personal data' }).click();
     // Nothing is erased by the first press.
     const [before] = await q<{ name: string | null }>('SELECT name FROM leads WHERE id = ?', [leadId]);
@@ -302,8 +303,9 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
       'SELECT name, email, run_id AS runId FROM leads WHERE id = ?',
       [leadId],
     );
-    expect(after).toEqual({ name: null, email: null, runId: null });
+    expect(after).toEqual({ name: null, email: null, runId: leadRunId });
     expect(await q('SELECT id FROM runs WHERE id = ?', [leadRunId])).toHaveLength(1);
+    expect(await q<{ n: string }>('SELECT SUM(led) AS n FROM run_daily')).toEqual(ledBefore);
     await page.screenshot({ path: '/tmp/shots/usage-lead-erased.png', fullPage: true });
     expect(pageErrors).toEqual([]);
   });

@@ -138,6 +138,11 @@ export const auditEventTypes = [
   'member.joined',
   'member.role_changed',
   'member.removed',
+  'widget.created',
+  'widget.updated',
+  'lead.updated',
+  'lead.erased',
+  'retention.changed',
 ] as const;
 export const auditEntrySchema = z.object({
   id: z.number().int(),

@@ -32,7 +32,7 @@ function Contact({ lead }: { lead: LeadDetail }) {
       {lead.erasedAt ? (
         <Notice tone="info" className="mt-2">
           The personal data of this lead was erased on {formatDateTime(lead.erasedAt)}. The run it came from
-          is kept without it.
+          stays, so the usage figures do not change.
         </Notice>
       ) : (
         <dl className="mt-2 grid grid-cols-[8rem_minmax(0,1fr)] gap-x-4 gap-y-1.5 text-sm">
@@ -225,11 +225,7 @@ export function LeadPage() {
               <TextLink to={orgPath(orgId, `usage/runs/${l.run.id}`)}>Open the run on its own page</TextLink>
             </>
           ) : (
-            <p className="text-sm text-ink-soft">
-              {l.erasedAt
-                ? 'The run was unlinked when the personal data was erased.'
-                : 'The run is no longer kept.'}
-            </p>
+            <p className="text-sm text-ink-soft">The run is no longer kept.</p>
           )}
         </section>
         {can(role, 'leads:erase') && !l.erasedAt ? <Erase lead={l} /> : null}

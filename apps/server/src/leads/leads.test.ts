@@ -254,7 +254,7 @@ describe('leads', () => {
   });
 
   describe('erasing personal data', () => {
-    it("erases the visitor's details and the notes, keeps status and times, unlinks the run and nothing of another organisation changes", async () => {
+    it("erases the visitor's details and the notes, keeps status, times and the run's link (usage unchanged), and nothing of another organisation changes", async () => {
       await analyst
         .patch(`/orgs/${org.id}/leads/${lead.hester}`, {
           status: 'qualified',
@@ -265,6 +265,7 @@ describe('leads', () => {
         (await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body,
       );
       const theirs = await otherRows();
+      const rollupsBefore = await storedRollups(t.db.sequelize);
       const erased = leadSchema.parse(
         (await analyst.delete(`/orgs/${org.id}/leads/${lead.hester}/personal-data`).expect(200)).body,
       );
@@ -278,7 +279,7 @@ describe('leads', () => {
         message: null,
         siteAddress: null,
         notes: null,
-        runId: null,
+        runId: runOf.hester,
         createdAt: before.createdAt,
         updatedAt: before.updatedAt,
       });
@@ -288,16 +289,17 @@ describe('leads', () => {
         type: QueryTypes.SELECT,
       });
       expect(JSON.stringify(row)).not.toMatch(/Hester|Quayle|Mill Lane|mornings/);
-      // The run stays, no longer linked; the rollups stop counting it as having led to a lead.
+      // The run stays linked: usage statistics (runs that led to an enquiry) do not change.
       const run = runDetailSchema.parse(
         (await analyst.get(`/orgs/${org.id}/runs/${runOf.hester}`).expect(200)).body,
       );
-      expect(run).toMatchObject({ leadId: null, lead: null });
+      expect(run.leadId).toBe(lead.hester);
       const [stored, raw] = await Promise.all([
         storedRollups(t.db.sequelize),
         rollupsFromRaw(t.db.sequelize),
       ]);
       expect(stored).toEqual(raw);
+      expect(stored).toEqual(rollupsBefore);
       expect(await otherRows()).toBe(theirs);
       // Still listed, as erased, and no longer found by what was erased.
       expect((await list('')).items.find((l) => l.id === lead.hester)).toMatchObject({
@@ -308,7 +310,7 @@ describe('leads', () => {
       const detail = leadDetailSchema.parse(
         (await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body,
       );
-      expect(detail.run).toBeNull();
+      expect(detail.run?.id).toBe(runOf.hester);
     });
 
     it('erasing again changes nothing; another organisation cannot erase it; a developer may not', async () => {

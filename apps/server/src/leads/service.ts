@@ -10,22 +10,23 @@ import type {
 import { Lead, Membership, User, Widget } from '../db/models/index.js';
 import { AppError, fieldError, notFound } from '../errors.js';
 import { keysetCsv } from '../export/csv.js';
+import type { AuditTrail } from '../audit/service.js';
 import type { RunService } from '../runs/service.js';
 import { retryOnDeadlock } from '../runs/store.js';
 import { nextDay } from '../usage/days.js';
-import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
 
 export interface LeadService {
   list(orgId: number, query: LeadListQuery): Promise<LeadListResponse>;
   /** One lead with the run it came from and that run's working (null once the run is gone). */
   get(orgId: number, leadId: number): Promise<LeadDetail>;
-  update(orgId: number, leadId: number, body: UpdateLeadBody): Promise<LeadDto>;
+  /** `trail` records the change in the audit log (what changed, never the notes' text). */
+  update(orgId: number, leadId: number, body: UpdateLeadBody, trail?: AuditTrail): Promise<LeadDto>;
   /**
    * Erase the visitor's personal data (name, contact details, message, site address) and the
-   * firm's notes about them; status and timestamps stay, `erasedAt` is set, and the run stays but
-   * is no longer linked. Erasing again changes nothing.
+   * firm's notes about them; status and timestamps stay, `erasedAt` is set, and the run stays
+   * linked so usage statistics do not change. Erasing again changes nothing.
    */
-  erase(orgId: number, leadId: number): Promise<LeadDto>;
+  erase(orgId: number, leadId: number, trail?: AuditTrail): Promise<LeadDto>;
   exportCsv(orgId: number, filters: LeadFilters): AsyncGenerator<string>;
 }
 
@@ -143,7 +144,7 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
       return { ...(await dtoOf(orgId, lead)), run };
     },
 
-    async update(orgId, leadId, body) {
+    async update(orgId, leadId, body, trail) {
       const lead = await one(orgId, leadId);
       if (body.assigneeId != null) {
         const member = await Membership.count({ where: { organizationId: orgId, userId: body.assigneeId } });
@@ -154,32 +155,36 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
       if (body.assigneeId !== undefined) changes.assigneeId = body.assigneeId;
       if (body.notes !== undefined)
         changes.notes = body.notes === null || body.notes.trim() === '' ? null : body.notes;
-      if (Object.keys(changes).length) await lead.update(changes);
+      const before = { status: lead.status, assigneeId: lead.assigneeId, notes: lead.notes };
+      if (Object.keys(changes).length) {
+        await sequelize.transaction(async (transaction) => {
+          await lead.update(changes, { transaction });
+          const details: Record<string, unknown> = { leadId: lead.id };
+          if (changes.status !== undefined && changes.status !== before.status)
+            details.status = { from: before.status, to: changes.status };
+          if (changes.assigneeId !== undefined && changes.assigneeId !== before.assigneeId)
+            details.assigneeId = { from: before.assigneeId, to: changes.assigneeId };
+          if (changes.notes !== undefined && changes.notes !== before.notes) details.notesChanged = true;
+          if (Object.keys(details).length > 1)
+            await trail?.({ type: 'lead.updated', subject: `enquiry ${lead.id}`, details }, transaction);
+        });
+      }
       return dtoOf(orgId, lead);
     },
 
-    async erase(orgId, leadId) {
-      const seen = await one(orgId, leadId);
+    async erase(orgId, leadId, trail) {
+      await one(orgId, leadId);
       const erased = await retryOnDeadlock(() =>
         sequelize.transaction(async (transaction) => {
-          // Run first, then lead: the order the purge locks them in, so the two cannot deadlock.
-          const run = seen.runId
-            ? (
-                await sequelize.query<RollupColumnsRow & { id: string }>(
-                  `SELECT r.id, ${ROLLUP_COLUMNS} FROM runs r WHERE r.id = ? AND r.organization_id = ? FOR UPDATE`,
-                  { replacements: [seen.runId, orgId], type: QueryTypes.SELECT, transaction },
-                )
-              )[0]
-            : undefined;
           const lead = await Lead.findOne({
             where: { id: leadId, organizationId: orgId },
             lock: transaction.LOCK.UPDATE,
             transaction,
           });
           if (!lead) throw notFound('Lead');
-          // A link only ever goes from a run to none, so a lead still linked is linked to the run locked above.
-          if (lead.runId && run && lead.runId === run.id)
-            await countLeads(sequelize, [rollupRunOf(run)], -1, transaction);
+          const first = lead.erasedAt === null;
+          // The link to the run stays: it is no one's personal data, and usage statistics ("runs that
+          // led to an enquiry") must not change when a person's details are erased.
           await lead.update(
             {
               name: null,
@@ -189,12 +194,16 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
               message: null,
               siteAddress: null,
               notes: null,
-              runId: null,
               erasedAt: lead.erasedAt ?? new Date(),
             },
             // The lead's own timestamps are kept; erasedAt says when this happened.
             { transaction, silent: true },
           );
+          if (first)
+            await trail?.(
+              { type: 'lead.erased', subject: `enquiry ${lead.id}`, details: { leadId: lead.id } },
+              transaction,
+            );
           return lead;
         }),
       );
