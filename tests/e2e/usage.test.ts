@@ -257,19 +257,27 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     await page.screenshot({ path: '/tmp/shots/usage-run.png', fullPage: true });
   });
 
-  it('moves the lead to contacted and the database holds it', async () => {
+  it('moves the lead to contacted, adds a dated note, and the database holds both', async () => {
     await page.getByRole('link', { name: 'Open the lead' }).click();
     await page.waitForURL(new RegExp(`/leads/${leadId}$`));
     await page.getByText(visitor.email).first().waitFor();
     await page.getByLabel('Status').selectOption('contacted');
-    await page.getByLabel('Notes').fill('Rang back; survey pencilled in for Thursday.');
     await page.getByRole('button', { name: 'Save', exact: true }).click();
     await page.getByText('Saved: the lead is contacted.').waitFor();
-    const [row] = await q<{ status: string; notes: string | null }>(
-      'SELECT status, notes FROM leads WHERE id = ? AND organization_id = ?',
+    await page.getByLabel('Add a note').fill('Rang back; survey pencilled in for Thursday.');
+    await page.getByRole('button', { name: 'Add the note' }).click();
+    await page
+      .getByRole('list', { name: 'Notes, oldest first' })
+      .getByText('Rang back; survey pencilled in for Thursday.')
+      .waitFor();
+    expect(await page.getByLabel('Add a note').inputValue()).toBe('');
+    const [row] = await q<{ status: string }>(
+      'SELECT status FROM leads WHERE id = ? AND organization_id = ?',
       [leadId, org.id],
     );
-    expect(row).toEqual({ status: 'contacted', notes: 'Rang back; survey pencilled in for Thursday.' });
+    expect(row).toEqual({ status: 'contacted' });
+    const notes = await q<{ body: string }>('SELECT body FROM lead_notes WHERE lead_id = ?', [leadId]);
+    expect(notes).toEqual([{ body: 'Rang back; survey pencilled in for Thursday.' }]);
     await page.screenshot({ path: '/tmp/shots/usage-lead.png', fullPage: true });
   });
 

@@ -141,6 +141,7 @@ export const auditEventTypes = [
   'widget.created',
   'widget.updated',
   'lead.updated',
+  'lead.note_added',
   'lead.erased',
   'retention.changed',
 ] as const;

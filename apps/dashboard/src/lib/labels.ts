@@ -30,6 +30,7 @@ export const auditLabel: Record<AuditEntry['type'], string> = {
   'widget.created': 'Widget created',
   'widget.updated': 'Widget changed',
   'lead.updated': 'Enquiry updated',
+  'lead.note_added': 'Note added to an enquiry',
   'lead.erased': 'Enquirer’s personal data erased',
   'retention.changed': 'Retention period changed',
 };

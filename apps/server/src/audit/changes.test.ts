@@ -61,14 +61,16 @@ describe('the audit log records changes to widgets, enquiries and retention', ()
     expect(await entries('widget.updated')).toHaveLength(before);
   });
 
-  it("records an enquiry's status, assignee and notes changes, never the notes' text", async () => {
+  it("records an enquiry's status and assignee changes and each note added, never the note's text", async () => {
     await analyst
       .patch(`/orgs/${org.id}/leads/${leadId}`, {
         status: 'contacted',
         assigneeId: org.users.analyst!.id,
-        notes: 'Ottilie asked for a visit on a Tuesday.',
       })
       .expect(200);
+    await analyst
+      .post(`/orgs/${org.id}/leads/${leadId}/notes`, { body: 'Ottilie asked for a visit on a Tuesday.' })
+      .expect(201);
     const [entry] = await entries('lead.updated');
     expect(entry).toMatchObject({
       actor: expect.objectContaining({ id: org.users.analyst!.id }),
@@ -76,10 +78,11 @@ describe('the audit log records changes to widgets, enquiries and retention', ()
         leadId,
         status: { from: 'new', to: 'contacted' },
         assigneeId: { from: null, to: org.users.analyst!.id },
-        notesChanged: true,
       },
     });
-    expect(JSON.stringify(entry)).not.toMatch(/Tuesday|Ottilie/);
+    const [note] = await entries('lead.note_added');
+    expect(note).toMatchObject({ details: { leadId } });
+    expect(JSON.stringify([entry, note])).not.toMatch(/Tuesday|Ottilie/);
   });
 
   it('records an erasure once, and retention changes with the old and new period', async () => {

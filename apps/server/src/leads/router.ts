@@ -1,4 +1,5 @@
 import {
+  addLeadNoteBodySchema,
   leadExportQuerySchema,
   leadListQuerySchema,
   leadParamsSchema,
@@ -52,6 +53,21 @@ export function leadRoutes(routes: ApiRoutes, leads: LeadService, audit: AuditSe
     { access: 'leads:erase', params: leadParamsSchema },
     async ({ org, params, session, meta }) => ({
       body: await leads.erase(org.id, params.leadId, auditTrail(audit, org.id, session.user.id, meta)),
+    }),
+  );
+
+  routes.post(
+    '/orgs/:orgId/leads/:leadId/notes',
+    { access: 'leads:write', params: leadParamsSchema, body: addLeadNoteBodySchema },
+    async ({ org, params, body, session, meta }) => ({
+      status: 201,
+      body: await leads.addNote(
+        org.id,
+        params.leadId,
+        session.user.id,
+        body,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
     }),
   );
 }
