@@ -260,19 +260,27 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     await screenshot(page, 'usage-run');
   });
 
-  it('moves the lead to contacted and the database holds it', async () => {
+  it('moves the lead to contacted, adds a dated note, and the database holds both', async () => {
     await page.getByRole('link', { name: 'Open the lead' }).click();
     await page.waitForURL(new RegExp(`/leads/${leadId}$`));
     await page.getByText(visitor.email).first().waitFor();
     await page.getByLabel('Status').selectOption('contacted');
-    await page.getByLabel('Notes').fill('Rang back; survey pencilled in for Thursday.');
     await page.getByRole('button', { name: 'Save', exact: true }).click();
     await page.getByText('Saved: the lead is contacted.').waitFor();
-    const [row] = await q<{ status: string; notes: string | null }>(
-      'SELECT status, notes FROM leads WHERE id = ? AND organization_id = ?',
+    await page.getByLabel('Add a note').fill('Rang back; survey pencilled in for Thursday.');
+    await page.getByRole('button', { name: 'Add the note' }).click();
+    await page
+      .getByRole('list', { name: 'Notes, oldest first' })
+      .getByText('Rang back; survey pencilled in for Thursday.')
+      .waitFor();
+    expect(await page.getByLabel('Add a note').inputValue()).toBe('');
+    const [row] = await q<{ status: string }>(
+      'SELECT status FROM leads WHERE id = ? AND organization_id = ?',
       [leadId, org.id],
     );
-    expect(row).toEqual({ status: 'contacted', notes: 'Rang back; survey pencilled in for Thursday.' });
+    expect(row).toEqual({ status: 'contacted' });
+    const notes = await q<{ body: string }>('SELECT body FROM lead_notes WHERE lead_id = ?', [leadId]);
+    expect(notes).toEqual([{ body: 'Rang back; survey pencilled in for Thursday.' }]);
     await screenshot(page, 'usage-lead');
   });
 
@@ -291,9 +299,10 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     expect(pageErrors).toEqual([]);
   });
 
-  it("erases the lead's personal data after a confirmation, and the run stays unlinked", async () => {
+  it("erases the lead's personal data after a confirmation; the run stays linked and the usage counts do not change", async () => {
     await page.locator(`[data-lead-row="${leadId}"] a`).click();
     await page.waitForURL(new RegExp(`/leads/${leadId}$`));
+    const ledBefore = await q<{ n: string }>('SELECT SUM(led) AS n FROM run_daily');
     await page.getByRole('button', { name: 'Erase personal data' }).click();
     // Nothing is erased by the first press.
     const [before] = await q<{ name: string | null }>('SELECT name FROM leads WHERE id = ?', [leadId]);
@@ -305,8 +314,9 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
       'SELECT name, email, run_id AS runId FROM leads WHERE id = ?',
       [leadId],
     );
-    expect(after).toEqual({ name: null, email: null, runId: null });
+    expect(after).toEqual({ name: null, email: null, runId: leadRunId });
     expect(await q('SELECT id FROM runs WHERE id = ?', [leadRunId])).toHaveLength(1);
+    expect(await q<{ n: string }>('SELECT SUM(led) AS n FROM run_daily')).toEqual(ledBefore);
     await screenshot(page, 'usage-lead-erased');
     expect(pageErrors).toEqual([]);
   });

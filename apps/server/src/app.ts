@@ -112,12 +112,12 @@ export function createApp(deps: AppDeps): Express {
   orgRoutes(routes, orgs);
   invitationRoutes(routes, { invitations, auth, sessions, limits });
   auditRoutes(routes, audit);
-  widgetRoutes(routes, widgets);
+  widgetRoutes(routes, widgets, audit);
   assetRoutes(routes, assets);
   runRoutes(routes, runs);
   usageRoutes(routes, usage);
-  leadRoutes(routes, leads);
-  retentionRoutes(routes, retention);
+  leadRoutes(routes, leads, audit);
+  retentionRoutes(routes, retention, audit);
   // Only while the fake SMTP server is in use; with a real relay the route does not exist.
   if (config.mail.fakeApiUrl) devMailRoutes(routes, createDevMailService(config.mail.fakeApiUrl));
   registries.set(app, routes.records);

@@ -138,6 +138,12 @@ export const auditEventTypes = [
   'member.joined',
   'member.role_changed',
   'member.removed',
+  'widget.created',
+  'widget.updated',
+  'lead.updated',
+  'lead.note_added',
+  'lead.erased',
+  'retention.changed',
 ] as const;
 export const auditEntrySchema = z.object({
   id: z.number().int(),

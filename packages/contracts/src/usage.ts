@@ -185,13 +185,27 @@ export type LeadFilters = z.output<typeof leadExportQuerySchema>;
 
 export const leadParamsSchema = z.strictObject({ orgId: id, leadId: id });
 
+export const MAX_LEAD_NOTE = 5000;
+export const leadNoteSchema = z.object({
+  id: z.number().int(),
+  body: z.string(),
+  createdAt: z.string(),
+  /** Who wrote it; null once that member's account is gone. */
+  author: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+});
+export type LeadNote = z.infer<typeof leadNoteSchema>;
+export const addLeadNoteBodySchema = z.strictObject({
+  body: z.string().trim().min(1, 'Required').max(MAX_LEAD_NOTE, `At most ${MAX_LEAD_NOTE} characters`),
+});
+export type AddLeadNoteBody = z.infer<typeof addLeadNoteBodySchema>;
+
 export const leadSchema = z.object({
   id: z.number().int(),
   createdAt: z.string(),
   updatedAt: z.string(),
   status: z.enum(leadStatuses),
   widget: z.object({ id: z.number().int(), name: z.string() }),
-  /** Null once the run was purged, or unlinked when the lead's personal data was erased. */
+  /** Null once the run was purged. */
   runId: z.string().nullable(),
   name: z.string().nullable(),
   email: z.string().nullable(),
@@ -204,7 +218,8 @@ export const leadSchema = z.object({
   consentAt: z.string(),
   sendCopy: z.boolean(),
   assignee: z.object({ id: z.number().int(), name: z.string(), email: z.string() }).nullable(),
-  notes: z.string().nullable(),
+  /** The firm's dated notes on the enquiry, oldest first. */
+  notes: z.array(leadNoteSchema),
   /** When its personal data was erased (name, contact details, message, address, notes); null if never. */
   erasedAt: z.string().nullable(),
 });
@@ -214,12 +229,10 @@ export type LeadListResponse = z.infer<typeof leadListResponseSchema>;
 export const leadDetailSchema = leadSchema.extend({ run: runDetailSchema.nullable() });
 export type LeadDetail = z.infer<typeof leadDetailSchema>;
 
-export const MAX_LEAD_NOTES = 5000;
 export const updateLeadBodySchema = z.strictObject({
   status: z.enum(leadStatuses).optional(),
   /** A member of the organisation, or null to leave the lead with nobody. */
   assigneeId: z.number().int().positive().max(4_294_967_295).nullable().optional(),
-  notes: z.string().max(MAX_LEAD_NOTES, `At most ${MAX_LEAD_NOTES} characters`).nullable().optional(),
 });
 export type UpdateLeadBody = z.infer<typeof updateLeadBodySchema>;
 

@@ -27,6 +27,12 @@ export const auditLabel: Record<AuditEntry['type'], string> = {
   'member.joined': 'Joined the team',
   'member.role_changed': 'Role changed',
   'member.removed': 'Removed from the team',
+  'widget.created': 'Widget created',
+  'widget.updated': 'Widget changed',
+  'lead.updated': 'Enquiry updated',
+  'lead.note_added': 'Note added to an enquiry',
+  'lead.erased': 'Enquirer’s personal data erased',
+  'retention.changed': 'Retention period changed',
 };
 
 const dateTime = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });

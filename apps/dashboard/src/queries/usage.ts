@@ -1,11 +1,13 @@
 import { keepPreviousData, queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import {
   leadDetailSchema,
+  leadNoteSchema,
   leadListResponseSchema,
   leadSchema,
   runDetailSchema,
   runListResponseSchema,
   usageSummarySchema,
+  type AddLeadNoteBody,
   type UpdateLeadBody,
 } from '@wickstone/contracts';
 import { apiFetch } from '../lib/api';
@@ -74,6 +76,14 @@ export function useUpdateLead(orgId: number, leadId: number) {
   // The answer is the lead without its run (the run does not change); the detail is re-read.
   return useLeadMutation(orgId, async (body: UpdateLeadBody) =>
     leadSchema.parse(await apiFetch(`/orgs/${orgId}/leads/${leadId}`, { method: 'PATCH', json: body })),
+  );
+}
+
+export function useAddLeadNote(orgId: number, leadId: number) {
+  return useLeadMutation(orgId, async (body: AddLeadNoteBody) =>
+    leadNoteSchema.parse(
+      await apiFetch(`/orgs/${orgId}/leads/${leadId}/notes`, { method: 'POST', json: body }),
+    ),
   );
 }
 

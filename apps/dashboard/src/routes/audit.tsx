@@ -34,12 +34,19 @@ function detailText(entry: AuditEntry): string {
     .map(([k, v]) => {
       const key = k.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
       if (v === true) return key;
-      const value =
-        typeof v === 'string' && v in roleLabel
-          ? roleLabel[v as keyof typeof roleLabel]
+      const word = (x: unknown): string =>
+        x === null || x === undefined
+          ? 'none'
+          : typeof x === 'string' && x in roleLabel
+            ? roleLabel[x as keyof typeof roleLabel]
+            : String(x);
+      const value = Array.isArray(v)
+        ? v.map(word).join(', ')
+        : typeof v === 'object' && v !== null && 'from' in v && 'to' in v
+          ? `${word(v.from)} → ${word(v.to)}`
           : typeof v === 'object'
             ? JSON.stringify(v)
-            : String(v);
+            : word(v);
       return `${key}: ${value}`;
     })
     .join(' · ');

@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router';
-import { can, MAX_LEAD_NOTES, type LeadDetail, type LeadStatus } from '@wickstone/contracts';
+import { can, MAX_LEAD_NOTE, type LeadDetail, type LeadStatus } from '@wickstone/contracts';
 import { isApiError } from '../lib/api';
 import { formatDateTime } from '../lib/labels';
 import { leadStatusLabel, leadStatusOptions } from '../lib/lead-labels';
@@ -9,7 +9,7 @@ import { useOrg } from '../lib/org-context';
 import { usePageTitle } from '../lib/use-page-title';
 import { orgPath } from '../nav';
 import { membersQuery } from '../queries/members';
-import { leadQuery, useEraseLead, useUpdateLead } from '../queries/usage';
+import { leadQuery, useAddLeadNote, useEraseLead, useUpdateLead } from '../queries/usage';
 import { ConfirmAction } from '../components/confirm';
 import { FormError, SelectField } from '../components/form';
 import { RunRecord } from '../components/run-record';
@@ -32,7 +32,7 @@ function Contact({ lead }: { lead: LeadDetail }) {
       {lead.erasedAt ? (
         <Notice tone="info" className="mt-2">
           The personal data of this lead was erased on {formatDateTime(lead.erasedAt)}. The run it came from
-          is kept without it.
+          stays, so the usage figures do not change.
         </Notice>
       ) : (
         <dl className="mt-2 grid grid-cols-[8rem_minmax(0,1fr)] gap-x-4 gap-y-1.5 text-sm">
@@ -69,7 +69,6 @@ function WorkForm({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
   const update = useUpdateLead(orgId, lead.id);
   const [status, setStatus] = useState<LeadStatus>(lead.status);
   const [assignee, setAssignee] = useState(lead.assignee ? String(lead.assignee.id) : '');
-  const [notes, setNotes] = useState(lead.notes ?? '');
   const [saved, setSaved] = useState<string | null>(null);
   const fieldError = (field: string) =>
     isApiError(update.error)
@@ -84,13 +83,12 @@ function WorkForm({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
     e.preventDefault();
     setSaved(null);
     update.mutate(
-      { status, assigneeId: assignee ? Number(assignee) : null, notes: notes.trim() ? notes : null },
+      { status, assigneeId: assignee ? Number(assignee) : null },
       {
         onSuccess: (l) => {
-          // Show what the server now holds (it trims notes), and say so where it is announced.
+          // Show what the server now holds, and say so where it is announced.
           setStatus(l.status);
           setAssignee(l.assignee ? String(l.assignee.id) : '');
-          setNotes(l.notes ?? '');
           setSaved(`Saved: the lead is ${leadStatusLabel[l.status].toLowerCase()}.`);
         },
       },
@@ -104,8 +102,6 @@ function WorkForm({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
       ? [{ value: String(lead.assignee.id), label: lead.assignee.name }]
       : []),
   ];
-  const notesId = `lead-notes-${lead.id}`;
-  const notesError = fieldError('notes');
 
   return (
     <Card className="p-4">
@@ -133,28 +129,6 @@ function WorkForm({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
           error={fieldError('assigneeId')}
           onChange={(e) => setAssignee(e.target.value)}
         />
-        <div className="space-y-1.5">
-          <label htmlFor={notesId} className="block text-sm font-semibold">
-            Notes
-          </label>
-          <textarea
-            id={notesId}
-            name="notes"
-            rows={5}
-            maxLength={MAX_LEAD_NOTES}
-            value={notes}
-            readOnly={!writable || Boolean(lead.erasedAt)}
-            aria-invalid={notesError ? true : undefined}
-            aria-describedby={notesError ? `${notesId}-error` : undefined}
-            onChange={(e) => setNotes(e.target.value)}
-            className="block w-full rounded-md border border-line-strong bg-card px-3 py-2 text-ink read-only:bg-paper aria-invalid:border-bad"
-          />
-          {notesError ? (
-            <p id={`${notesId}-error`} className="text-sm font-semibold text-bad">
-              {notesError}
-            </p>
-          ) : null}
-        </div>
         <LiveMessage message={saved} />
         {writable && !lead.erasedAt ? (
           <Button type="submit" tone="primary" busy={update.isPending}>
@@ -162,6 +136,82 @@ function WorkForm({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
           </Button>
         ) : null}
       </form>
+    </Card>
+  );
+}
+
+/** The firm's dated notes on the enquiry, oldest first, and a box to add one. */
+function Notes({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
+  const { orgId } = useOrg();
+  const add = useAddLeadNote(orgId, lead.id);
+  const [draft, setDraft] = useState('');
+  const [saved, setSaved] = useState<string | null>(null);
+  const id = `lead-note-${lead.id}`;
+  const error = isApiError(add.error)
+    ? (add.error.fields.find((f) => f.field === 'body.body')?.message ?? describeError(add.error))
+    : add.error
+      ? describeError(add.error)
+      : undefined;
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    setSaved(null);
+    add.mutate(
+      { body: draft },
+      {
+        onSuccess: () => {
+          setDraft('');
+          setSaved('Note added.');
+        },
+      },
+    );
+  };
+  return (
+    <Card className="p-4">
+      <h2 className="text-lg font-bold tracking-tight">Notes</h2>
+      {lead.notes.length === 0 ? (
+        <p className="mt-1 text-sm text-ink-soft">
+          {lead.erasedAt ? 'The notes were erased with the personal data.' : 'No notes yet.'}
+        </p>
+      ) : (
+        <ol className="mt-2 space-y-3" aria-label="Notes, oldest first">
+          {lead.notes.map((n) => (
+            <li key={n.id} className="border-l-2 border-line-strong pl-3">
+              <p className="text-xs text-ink-soft">
+                <time dateTime={n.createdAt}>{formatDateTime(n.createdAt)}</time> ·{' '}
+                {n.author?.name ?? 'a former member'}
+              </p>
+              <p className="whitespace-pre-wrap break-words text-sm">{n.body}</p>
+            </li>
+          ))}
+        </ol>
+      )}
+      {writable && !lead.erasedAt ? (
+        <form onSubmit={submit} noValidate className="mt-4 space-y-2">
+          <label htmlFor={id} className="block text-sm font-semibold">
+            Add a note
+          </label>
+          <textarea
+            id={id}
+            name="body"
+            rows={3}
+            maxLength={MAX_LEAD_NOTE}
+            value={draft}
+            aria-invalid={error ? true : undefined}
+            aria-describedby={error ? `${id}-error` : undefined}
+            onChange={(e) => setDraft(e.target.value)}
+            className="block w-full rounded-md border border-line-strong bg-card px-3 py-2 text-ink aria-invalid:border-bad"
+          />
+          {error ? (
+            <p id={`${id}-error`} className="text-sm font-semibold text-bad">
+              {error}
+            </p>
+          ) : null}
+          <LiveMessage message={saved} />
+          <Button type="submit" tone="primary" busy={add.isPending}>
+            Add the note
+          </Button>
+        </form>
+      ) : null}
     </Card>
   );
 }
@@ -174,7 +224,7 @@ function Erase({ lead }: { lead: LeadDetail }) {
       <h2 className="text-lg font-bold tracking-tight">Erase personal data</h2>
       <p className="text-sm text-ink-soft">
         When the visitor asks, remove their name, contact details, message, address and the notes. The run
-        stays, no longer linked to them. This cannot be undone.
+        stays, so the usage figures do not change. This cannot be undone.
       </p>
       {erase.isError ? <ErrorState title="The data could not be erased" error={erase.error} /> : null}
       <ConfirmAction
@@ -212,9 +262,10 @@ export function LeadPage() {
       <div className="space-y-6">
         <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
           <Contact lead={l} />
-          {/* A fresh form after an erasure, which empties the notes on the server. */}
+          {/* A fresh form after an erasure. */}
           <WorkForm key={`${l.id}-${l.erasedAt ?? ''}`} lead={l} writable={can(role, 'leads:write')} />
         </div>
+        <Notes lead={l} writable={can(role, 'leads:write')} />
         <section aria-labelledby="lead-run" className="space-y-3">
           <h2 id="lead-run" className="text-lg font-bold tracking-tight">
             The run it came from
@@ -225,11 +276,7 @@ export function LeadPage() {
               <TextLink to={orgPath(orgId, `usage/runs/${l.run.id}`)}>Open the run on its own page</TextLink>
             </>
           ) : (
-            <p className="text-sm text-ink-soft">
-              {l.erasedAt
-                ? 'The run was unlinked when the personal data was erased.'
-                : 'The run is no longer kept.'}
-            </p>
+            <p className="text-sm text-ink-soft">The run is no longer kept.</p>
           )}
         </section>
         {can(role, 'leads:erase') && !l.erasedAt ? <Erase lead={l} /> : null}

@@ -11,6 +11,22 @@ export interface AuditInput {
   details?: Record<string, unknown>;
 }
 
+/**
+ * One change's audit entry, already bound to its organisation, actor and request: services that
+ * change something take one of these and call it inside their own transaction, so the entry and the
+ * change commit together (and neither without the other), and the service never sees the request.
+ */
+export type AuditTrail = (entry: Omit<AuditInput, 'actorUserId'>, transaction?: Transaction) => Promise<void>;
+
+export function auditTrail(
+  audit: AuditService,
+  organizationId: number,
+  actorUserId: number,
+  meta: RequestMeta,
+): AuditTrail {
+  return (entry, transaction) => audit.record(organizationId, { ...entry, actorUserId }, meta, transaction);
+}
+
 export interface AuditService {
   /** One event in one organisation (or in none, for a failed sign-in of an unknown address). */
   record(

@@ -66,6 +66,7 @@ describe('the route table', () => {
       'GET /api/v1/orgs/:orgId/leads/export': 'leads:read',
       'GET /api/v1/orgs/:orgId/leads/:leadId': 'leads:read',
       'PATCH /api/v1/orgs/:orgId/leads/:leadId': 'leads:write',
+      'POST /api/v1/orgs/:orgId/leads/:leadId/notes': 'leads:write',
       'DELETE /api/v1/orgs/:orgId/leads/:leadId/personal-data': 'leads:erase',
       'GET /api/v1/orgs/:orgId/settings/retention': 'org:read',
       'PATCH /api/v1/orgs/:orgId/settings/retention': 'settings:write',

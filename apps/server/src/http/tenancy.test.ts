@@ -20,7 +20,8 @@ const validBodies: Record<string, unknown> = {
   'POST /api/v1/orgs/:orgId/invitations': { email: 'someone-new@tests.example', role: 'analyst' },
   'POST /api/v1/orgs/:orgId/widgets': { name: 'Intruder widget', calculatorId: 'tube-rise' },
   'PATCH /api/v1/orgs/:orgId/widgets/:widgetId': { name: 'Taken over' },
-  'PATCH /api/v1/orgs/:orgId/leads/:leadId': { status: 'closed', notes: 'Taken over' },
+  'PATCH /api/v1/orgs/:orgId/leads/:leadId': { status: 'closed' },
+  'POST /api/v1/orgs/:orgId/leads/:leadId/notes': { body: 'Taken over' },
   'PATCH /api/v1/orgs/:orgId/settings/retention': { months: 1 },
 };
 /** Path parameters naming an object inside an organisation: each is probed with the other organisation's. */

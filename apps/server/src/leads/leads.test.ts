@@ -184,7 +184,7 @@ describe('leads', () => {
   });
 
   describe('working a lead', () => {
-    it('moves it on, assigns it to a member and keeps notes', async () => {
+    it('moves it on, assigns it to a member and keeps a dated list of notes with their authors', async () => {
       const before = leadSchema.parse(
         (await analyst.get(`/orgs/${org.id}/leads/${lead.formula}`).expect(200)).body,
       );
@@ -193,27 +193,33 @@ describe('leads', () => {
         .patch(`/orgs/${org.id}/leads/${lead.formula}`, {
           status: 'contacted',
           assigneeId: org.users.analyst.id,
-          notes: 'Called back; survey booked.',
         })
         .expect(200);
       const after = leadSchema.parse(res.body);
       expect(after).toMatchObject({
         status: 'contacted',
         assignee: { id: org.users.analyst.id, email: org.users.analyst.email },
-        notes: 'Called back; survey booked.',
+        notes: [],
       });
+      for (const body of ['Called back; survey booked.', 'Survey moved to Friday.'])
+        await analyst.post(`/orgs/${org.id}/leads/${lead.formula}/notes`, { body: `  ${body} ` }).expect(201);
+      const noted = leadSchema.parse(
+        (await analyst.get(`/orgs/${org.id}/leads/${lead.formula}`).expect(200)).body,
+      );
+      expect(noted.notes.map((n) => [n.body, n.author?.id])).toEqual([
+        ['Called back; survey booked.', org.users.analyst.id],
+        ['Survey moved to Friday.', org.users.analyst.id],
+      ]);
+      expect(noted.notes[0]!.createdAt <= noted.notes[1]!.createdAt).toBe(true);
       expect(after.updatedAt > before.updatedAt).toBe(true);
       expect(await ids('status=contacted')).toEqual([lead.formula]);
       expect(await ids(`assigneeId=${org.users.analyst.id}`)).toEqual([lead.formula]);
       expect(await ids('assigneeId=none')).toEqual([lead.priya, lead.hester]);
       const unassigned = leadSchema.parse(
-        (
-          await analyst
-            .patch(`/orgs/${org.id}/leads/${lead.formula}`, { assigneeId: null, notes: '' })
-            .expect(200)
-        ).body,
+        (await analyst.patch(`/orgs/${org.id}/leads/${lead.formula}`, { assigneeId: null }).expect(200)).body,
       );
-      expect(unassigned).toMatchObject({ status: 'contacted', assignee: null, notes: null });
+      expect(unassigned).toMatchObject({ status: 'contacted', assignee: null });
+      expect(unassigned.notes).toHaveLength(2);
     });
 
     it('refuses an assignee who is not a member, bad statuses and long notes, naming the field and changing nothing', async () => {
@@ -224,7 +230,7 @@ describe('leads', () => {
         [{ assigneeId: other.users.analyst.id }, 'body.assigneeId'],
         [{ assigneeId: 4_000_000_000 }, 'body.assigneeId'],
         [{ status: 'won' }, 'body.status'],
-        [{ notes: 'x'.repeat(5001) }, 'body.notes'],
+        [{ notes: 'no longer set here' }, 'body.notes'],
         [{ status: 'qualified', colour: 'red' }, 'body.colour'],
         [{ assigneeId: 'me' }, 'body.assigneeId'],
       ] as const) {
@@ -234,7 +240,24 @@ describe('leads', () => {
       expect(
         await t.db.sequelize.query('SELECT * FROM leads ORDER BY id', { type: QueryTypes.SELECT }),
       ).toEqual(before);
-      await analyst.patch(`/orgs/${org.id}/leads/${lead.hester}`, { notes: 'x'.repeat(5000) }).expect(200);
+      const notesBefore = await t.db.sequelize.query('SELECT * FROM lead_notes ORDER BY id', {
+        type: QueryTypes.SELECT,
+      });
+      for (const [body, field] of [
+        [{ body: 'x'.repeat(5001) }, 'body.body'],
+        [{ body: '   ' }, 'body.body'],
+        [{}, 'body.body'],
+        [{ body: 'fine', pinned: true }, 'body.pinned'],
+      ] as const) {
+        const res = await analyst.post(`/orgs/${org.id}/leads/${lead.hester}/notes`, body).expect(400);
+        expect(fieldsOf(res.body), JSON.stringify(body).slice(0, 60)).toEqual([field]);
+      }
+      expect(
+        await t.db.sequelize.query('SELECT * FROM lead_notes ORDER BY id', { type: QueryTypes.SELECT }),
+      ).toEqual(notesBefore);
+      await analyst
+        .post(`/orgs/${org.id}/leads/${lead.hester}/notes`, { body: 'x'.repeat(5000) })
+        .expect(201);
     });
 
     it("answers 404 for another organisation's lead, and a developer may not change one", async () => {
@@ -255,17 +278,16 @@ describe('leads', () => {
   });
 
   describe('erasing personal data', () => {
-    it("erases the visitor's details and the notes, keeps status and times, unlinks the run and nothing of another organisation changes", async () => {
+    it("erases the visitor's details and the notes, keeps status, times and the run's link (usage unchanged), and nothing of another organisation changes", async () => {
+      await analyst.patch(`/orgs/${org.id}/leads/${lead.hester}`, { status: 'qualified' }).expect(200);
       await analyst
-        .patch(`/orgs/${org.id}/leads/${lead.hester}`, {
-          status: 'qualified',
-          notes: 'Hester prefers mornings.',
-        })
-        .expect(200);
+        .post(`/orgs/${org.id}/leads/${lead.hester}/notes`, { body: 'Hester prefers mornings.' })
+        .expect(201);
       const before = leadSchema.parse(
         (await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body,
       );
       const theirs = await otherRows();
+      const rollupsBefore = await storedRollups(t.db.sequelize);
       const erased = leadSchema.parse(
         (await analyst.delete(`/orgs/${org.id}/leads/${lead.hester}/personal-data`).expect(200)).body,
       );
@@ -278,8 +300,8 @@ describe('leads', () => {
         phone: null,
         message: null,
         siteAddress: null,
-        notes: null,
-        runId: null,
+        notes: [],
+        runId: runOf.hester,
         createdAt: before.createdAt,
         updatedAt: before.updatedAt,
       });
@@ -289,16 +311,28 @@ describe('leads', () => {
         type: QueryTypes.SELECT,
       });
       expect(JSON.stringify(row)).not.toMatch(/Hester|Quayle|Mill Lane|mornings/);
-      // The run stays, no longer linked; the rollups stop counting it as having led to a lead.
+      expect(
+        await t.db.sequelize.query('SELECT * FROM lead_notes WHERE lead_id = ?', {
+          replacements: [lead.hester],
+          type: QueryTypes.SELECT,
+        }),
+      ).toEqual([]);
+      // An erased enquiry takes no new notes.
+      const refused = await analyst
+        .post(`/orgs/${org.id}/leads/${lead.hester}/notes`, { body: 'Hester again' })
+        .expect(400);
+      expect(fieldsOf(refused.body)).toEqual(['body.body']);
+      // The run stays linked: usage statistics (runs that led to an enquiry) do not change.
       const run = runDetailSchema.parse(
         (await analyst.get(`/orgs/${org.id}/runs/${runOf.hester}`).expect(200)).body,
       );
-      expect(run).toMatchObject({ leadId: null, lead: null });
+      expect(run.leadId).toBe(lead.hester);
       const [stored, raw] = await Promise.all([
         storedRollups(t.db.sequelize),
         rollupsFromRaw(t.db.sequelize),
       ]);
       expect(stored).toEqual(raw);
+      expect(stored).toEqual(rollupsBefore);
       expect(await otherRows()).toBe(theirs);
       // Still listed, as erased, and no longer found by what was erased.
       expect((await list('')).items.find((l) => l.id === lead.hester)).toMatchObject({
@@ -309,7 +343,7 @@ describe('leads', () => {
       const detail = leadDetailSchema.parse(
         (await analyst.get(`/orgs/${org.id}/leads/${lead.hester}`).expect(200)).body,
       );
-      expect(detail.run).toBeNull();
+      expect(detail.run?.id).toBe(runOf.hester);
     });
 
     it('erasing again changes nothing; another organisation cannot erase it; a developer may not', async () => {
@@ -377,13 +411,15 @@ describe('leads', () => {
 
     it('keeps a message with line breaks, commas and quotes in one cell', async () => {
       await analyst
-        .patch(`/orgs/${org.id}/leads/${lead.priya}`, { notes: 'Rang twice,\r\nno answer; "try email"' })
-        .expect(200);
+        .post(`/orgs/${org.id}/leads/${lead.priya}/notes`, { body: 'Rang twice,\r\nno answer; "try email"' })
+        .expect(201);
       const rows = readCsv(
         (await analyst.get(`/orgs/${org.id}/leads/export?widgetId=${soil.id}`).expect(200)).text,
       );
       expect(rows).toHaveLength(2);
-      expect(rows[1]![12]).toBe('Rang twice,\r\nno answer; "try email"');
+      expect(rows[1]![12]).toMatch(
+        /^\d{4}-\d{2}-\d{2} \d{2}:\d{2} .+: Rang twice,\r\nno answer; "try email"$/,
+      );
       expect(rows[1]![7]).toBe('Venn & Co 50%');
     });
   });

@@ -1,31 +1,42 @@
-import { Op, QueryTypes, type Order, type Sequelize, type WhereOptions } from 'sequelize';
+import { Op, type Order, type Sequelize, type WhereOptions } from 'sequelize';
 import type {
+  AddLeadNoteBody,
   Lead as LeadDto,
+  LeadNote as LeadNoteDto,
   LeadDetail,
   LeadFilters,
   LeadListQuery,
   LeadListResponse,
   UpdateLeadBody,
 } from '@wickstone/contracts';
-import { Lead, Membership, User, Widget } from '../db/models/index.js';
+import { Lead, LeadNote, Membership, User, Widget } from '../db/models/index.js';
 import { AppError, fieldError, notFound } from '../errors.js';
 import { keysetCsv } from '../export/csv.js';
+import type { AuditTrail } from '../audit/service.js';
 import type { RunService } from '../runs/service.js';
 import { retryOnDeadlock } from '../runs/store.js';
 import { nextDay } from '../usage/days.js';
-import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
 
 export interface LeadService {
   list(orgId: number, query: LeadListQuery): Promise<LeadListResponse>;
   /** One lead with the run it came from and that run's working (null once the run is gone). */
   get(orgId: number, leadId: number): Promise<LeadDetail>;
-  update(orgId: number, leadId: number, body: UpdateLeadBody): Promise<LeadDto>;
+  /** `trail` records the change in the audit log (what changed, never the notes' text). */
+  update(orgId: number, leadId: number, body: UpdateLeadBody, trail?: AuditTrail): Promise<LeadDto>;
   /**
    * Erase the visitor's personal data (name, contact details, message, site address) and the
-   * firm's notes about them; status and timestamps stay, `erasedAt` is set, and the run stays but
-   * is no longer linked. Erasing again changes nothing.
+   * firm's notes about them; status and timestamps stay, `erasedAt` is set, and the run stays
+   * linked so usage statistics do not change. Erasing again changes nothing.
    */
-  erase(orgId: number, leadId: number): Promise<LeadDto>;
+  erase(orgId: number, leadId: number, trail?: AuditTrail): Promise<LeadDto>;
+  /** Add a dated note by `authorId`; refused once the lead's personal data was erased. */
+  addNote(
+    orgId: number,
+    leadId: number,
+    authorId: number,
+    body: AddLeadNoteBody,
+    trail?: AuditTrail,
+  ): Promise<LeadNoteDto>;
   exportCsv(orgId: number, filters: LeadFilters): AsyncGenerator<string>;
 }
 
@@ -74,15 +85,38 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
     const assigneeIds = [
       ...new Set(leads.map((l) => l.assigneeId).filter((id): id is number => id !== null)),
     ];
-    const [widgets, users] = await Promise.all([
+    const [widgets, users, notes] = await Promise.all([
       Widget.findAll({ where: { organizationId: orgId }, attributes: ['id', 'name'] }),
       assigneeIds.length
         ? User.findAll({ where: { id: assigneeIds }, attributes: ['id', 'name', 'email'] })
         : Promise.resolve([]),
+      leads.length
+        ? LeadNote.findAll({
+            where: { organizationId: orgId, leadId: leads.map((l) => l.id) },
+            include: [{ model: User, as: 'author', attributes: ['id', 'name'], required: false }],
+            order: [['id', 'ASC']],
+          })
+        : Promise.resolve([]),
     ]);
+    const notesByLead = new Map<number, LeadNoteDto[]>();
+    for (const n of notes) {
+      const list = notesByLead.get(n.leadId) ?? [];
+      list.push(noteDto(n));
+      notesByLead.set(n.leadId, list);
+    }
     return {
       widgets: new Map(widgets.map((w) => [w.id, w.name])),
       users: new Map(users.map((u) => [u.id, u])),
+      notes: notesByLead,
+    };
+  }
+
+  function noteDto(n: LeadNote): LeadNoteDto {
+    return {
+      id: n.id,
+      body: n.body,
+      createdAt: n.createdAt.toISOString(),
+      author: n.author ? { id: n.author.id, name: n.author.name } : null,
     };
   }
 
@@ -106,7 +140,7 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
       consentAt: l.consentAt.toISOString(),
       sendCopy: l.sendCopy,
       assignee: a ? { id: a.id, name: a.name, email: a.email } : null,
-      notes: l.notes,
+      notes: look.notes.get(l.id) ?? [],
       erasedAt: l.erasedAt?.toISOString() ?? null,
     };
   }
@@ -143,43 +177,44 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
       return { ...(await dtoOf(orgId, lead)), run };
     },
 
-    async update(orgId, leadId, body) {
+    async update(orgId, leadId, body, trail) {
       const lead = await one(orgId, leadId);
       if (body.assigneeId != null) {
         const member = await Membership.count({ where: { organizationId: orgId, userId: body.assigneeId } });
         if (!member) throw fieldError('body.assigneeId', 'Not a member of this organisation');
       }
-      const changes: Partial<Pick<Lead, 'status' | 'assigneeId' | 'notes'>> = {};
+      const changes: Partial<Pick<Lead, 'status' | 'assigneeId'>> = {};
       if (body.status !== undefined) changes.status = body.status;
       if (body.assigneeId !== undefined) changes.assigneeId = body.assigneeId;
-      if (body.notes !== undefined)
-        changes.notes = body.notes === null || body.notes.trim() === '' ? null : body.notes;
-      if (Object.keys(changes).length) await lead.update(changes);
+      const before = { status: lead.status, assigneeId: lead.assigneeId };
+      if (Object.keys(changes).length) {
+        await sequelize.transaction(async (transaction) => {
+          await lead.update(changes, { transaction });
+          const details: Record<string, unknown> = { leadId: lead.id };
+          if (changes.status !== undefined && changes.status !== before.status)
+            details.status = { from: before.status, to: changes.status };
+          if (changes.assigneeId !== undefined && changes.assigneeId !== before.assigneeId)
+            details.assigneeId = { from: before.assigneeId, to: changes.assigneeId };
+          if (Object.keys(details).length > 1)
+            await trail?.({ type: 'lead.updated', subject: `enquiry ${lead.id}`, details }, transaction);
+        });
+      }
       return dtoOf(orgId, lead);
     },
 
-    async erase(orgId, leadId) {
-      const seen = await one(orgId, leadId);
+    async erase(orgId, leadId, trail) {
+      await one(orgId, leadId);
       const erased = await retryOnDeadlock(() =>
         sequelize.transaction(async (transaction) => {
-          // Run first, then lead: the order the purge locks them in, so the two cannot deadlock.
-          const run = seen.runId
-            ? (
-                await sequelize.query<RollupColumnsRow & { id: string }>(
-                  `SELECT r.id, ${ROLLUP_COLUMNS} FROM runs r WHERE r.id = ? AND r.organization_id = ? FOR UPDATE`,
-                  { replacements: [seen.runId, orgId], type: QueryTypes.SELECT, transaction },
-                )
-              )[0]
-            : undefined;
           const lead = await Lead.findOne({
             where: { id: leadId, organizationId: orgId },
             lock: transaction.LOCK.UPDATE,
             transaction,
           });
           if (!lead) throw notFound('Lead');
-          // A link only ever goes from a run to none, so a lead still linked is linked to the run locked above.
-          if (lead.runId && run && lead.runId === run.id)
-            await countLeads(sequelize, [rollupRunOf(run)], -1, transaction);
+          const first = lead.erasedAt === null;
+          // The link to the run stays: it is no one's personal data, and usage statistics ("runs that
+          // led to an enquiry") must not change when a person's details are erased.
           await lead.update(
             {
               name: null,
@@ -188,17 +223,48 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
               phone: null,
               message: null,
               siteAddress: null,
-              notes: null,
-              runId: null,
               erasedAt: lead.erasedAt ?? new Date(),
             },
             // The lead's own timestamps are kept; erasedAt says when this happened.
             { transaction, silent: true },
           );
+          // The firm's notes are about the person: they go too.
+          await LeadNote.destroy({ where: { leadId: lead.id, organizationId: orgId }, transaction });
+          if (first)
+            await trail?.(
+              { type: 'lead.erased', subject: `enquiry ${lead.id}`, details: { leadId: lead.id } },
+              transaction,
+            );
           return lead;
         }),
       );
       return dtoOf(orgId, erased);
+    },
+
+    async addNote(orgId, leadId, authorId, body, trail) {
+      return sequelize.transaction(async (transaction) => {
+        const lead = await Lead.findOne({
+          where: { id: leadId, organizationId: orgId },
+          lock: transaction.LOCK.UPDATE,
+          transaction,
+        });
+        if (!lead) throw notFound('Lead');
+        if (lead.erasedAt)
+          throw fieldError('body.body', "This enquiry's personal data was erased: it takes no more notes");
+        const note = await LeadNote.create(
+          { organizationId: orgId, leadId, authorUserId: authorId, body: body.body },
+          { transaction },
+        );
+        // The lead was worked on: it moves up a list sorted by last update.
+        lead.changed('updatedAt', true);
+        await lead.save({ transaction });
+        await trail?.(
+          { type: 'lead.note_added', subject: `enquiry ${leadId}`, details: { leadId } },
+          transaction,
+        );
+        const author = await User.findByPk(authorId, { attributes: ['id', 'name'], transaction });
+        return { ...noteDto(note), author: author ? { id: author.id, name: author.name } : null };
+      });
     },
 
     async *exportCsv(orgId, f) {
@@ -261,7 +327,12 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
               l.siteAddress,
               l.message,
               l.assignee?.name ?? null,
-              l.notes,
+              l.notes
+                .map(
+                  (n) =>
+                    `${n.createdAt.slice(0, 16).replace('T', ' ')} ${n.author?.name ?? 'former member'}: ${n.body}`,
+                )
+                .join('\n'),
               l.origin,
               l.runId,
               l.erasedAt,

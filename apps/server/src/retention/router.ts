@@ -1,8 +1,9 @@
 import { orgParamsSchema, retentionBodySchema } from '@wickstone/contracts';
+import { auditTrail, type AuditService } from '../audit/service.js';
 import type { ApiRoutes } from '../http/routes.js';
 import type { RetentionService } from './service.js';
 
-export function retentionRoutes(routes: ApiRoutes, retention: RetentionService): void {
+export function retentionRoutes(routes: ApiRoutes, retention: RetentionService, audit: AuditService): void {
   // Every member may see how long usage and leads are kept; owners and admins choose it.
   routes.get(
     '/orgs/:orgId/settings/retention',
@@ -15,6 +16,13 @@ export function retentionRoutes(routes: ApiRoutes, retention: RetentionService):
   routes.patch(
     '/orgs/:orgId/settings/retention',
     { access: 'settings:write', params: orgParamsSchema, body: retentionBodySchema },
-    async ({ org, body }) => ({ body: await retention.set(org.id, body.months) }),
+    async ({ org, body, session, meta }) => ({
+      body: await retention.set(
+        org.id,
+        body.months,
+        new Date(),
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
+    }),
   );
 }

@@ -1,4 +1,5 @@
 import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { AuditTrail } from '../audit/service.js';
 import type { Retention } from '@wickstone/contracts';
 import { OrganizationSetting } from '../db/models/index.js';
 import { retryOnDeadlock } from '../runs/store.js';
@@ -17,7 +18,8 @@ export interface PurgeResult {
 
 export interface RetentionService {
   get(orgId: number, now?: Date): Promise<Retention>;
-  set(orgId: number, months: number | null, now?: Date): Promise<Retention>;
+  /** `trail` records the change in the audit log. */
+  set(orgId: number, months: number | null, now?: Date, trail?: AuditTrail): Promise<Retention>;
   /**
    * Delete one organisation's runs and leads created before the cutoff for `months`, a chunk per
    * transaction, keeping the rollups equal to what is left. A lead newer than the cutoff whose run
@@ -129,8 +131,16 @@ export function createRetentionService(deps: { sequelize: Sequelize; chunkSize: 
       return view(s?.retentionMonths ?? null, now);
     },
 
-    async set(orgId, months, now = new Date()) {
-      await OrganizationSetting.upsert({ organizationId: orgId, retentionMonths: months });
+    async set(orgId, months, now = new Date(), trail) {
+      await sequelize.transaction(async (transaction) => {
+        const before = (await OrganizationSetting.findByPk(orgId, { transaction }))?.retentionMonths ?? null;
+        await OrganizationSetting.upsert({ organizationId: orgId, retentionMonths: months }, { transaction });
+        if (before !== months)
+          await trail?.(
+            { type: 'retention.changed', subject: null, details: { months: { from: before, to: months } } },
+            transaction,
+          );
+      });
       return view(months, now);
     },
 

@@ -5,10 +5,11 @@ import {
   updateWidgetBodySchema,
   widgetParamsSchema,
 } from '@wickstone/contracts';
+import { auditTrail, type AuditService } from '../audit/service.js';
 import type { ApiRoutes } from '../http/routes.js';
 import type { WidgetService } from './service.js';
 
-export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService): void {
+export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService, audit: AuditService): void {
   routes.get(
     '/orgs/:orgId/widgets',
     { access: 'widgets:read', params: orgParamsSchema, query: pageQuerySchema },
@@ -20,9 +21,14 @@ export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService): void {
   routes.post(
     '/orgs/:orgId/widgets',
     { access: 'widgets:write', params: orgParamsSchema, body: createWidgetBodySchema },
-    async ({ org, session, body }) => ({
+    async ({ org, session, body, meta }) => ({
       status: 201,
-      body: await widgets.create(org.id, session.user.id, body),
+      body: await widgets.create(
+        org.id,
+        session.user.id,
+        body,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
     }),
   );
 
@@ -37,8 +43,14 @@ export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService): void {
   routes.patch(
     '/orgs/:orgId/widgets/:widgetId',
     { access: 'widgets:write', params: widgetParamsSchema, body: updateWidgetBodySchema },
-    async ({ org, session, params, body }) => ({
-      body: await widgets.update(org.id, params.widgetId, session.user.id, body),
+    async ({ org, session, params, body, meta }) => ({
+      body: await widgets.update(
+        org.id,
+        params.widgetId,
+        session.user.id,
+        body,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
     }),
   );
 

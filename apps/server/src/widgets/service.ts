@@ -17,6 +17,7 @@ import {
 import type { z } from 'zod';
 import { Asset, User, Widget, WidgetRevision } from '../db/models/index.js';
 import { AppError, fieldError } from '../errors.js';
+import type { AuditTrail } from '../audit/service.js';
 import type { ReleaseService } from '../releases/service.js';
 import { diff } from './diff.js';
 
@@ -26,8 +27,15 @@ type UpdateBody = z.output<typeof updateWidgetBodySchema>;
 export interface WidgetService {
   list(orgId: number, page: number, pageSize: number): Promise<{ items: WidgetDto[]; total: number }>;
   get(orgId: number, widgetId: number): Promise<WidgetDto>;
-  create(orgId: number, actorId: number, body: CreateBody): Promise<WidgetDto>;
-  update(orgId: number, widgetId: number, actorId: number, body: UpdateBody): Promise<WidgetDto>;
+  /** `trail` records the change in the audit log, in the same transaction. */
+  create(orgId: number, actorId: number, body: CreateBody, trail?: AuditTrail): Promise<WidgetDto>;
+  update(
+    orgId: number,
+    widgetId: number,
+    actorId: number,
+    body: UpdateBody,
+    trail?: AuditTrail,
+  ): Promise<WidgetDto>;
   revisions(
     orgId: number,
     widgetId: number,
@@ -187,7 +195,7 @@ export function createWidgetService(deps: {
       return dto(await find(orgId, widgetId));
     },
 
-    async create(orgId, actorId, body) {
+    async create(orgId, actorId, body, trail) {
       const calc = calculatorOf(body.calculatorId, 'body.calculatorId');
       const settings = body.settings ?? defaultWidgetSettings();
       checkInputSettings(calc, settings, 'body.settings');
@@ -218,12 +226,20 @@ export function createWidgetService(deps: {
           },
           { transaction },
         );
+        await trail?.(
+          {
+            type: 'widget.created',
+            subject: created.name,
+            details: { widgetId: created.id, calculatorId: calc.id },
+          },
+          transaction,
+        );
         return created;
       });
       return dto(w);
     },
 
-    async update(orgId, widgetId, actorId, body) {
+    async update(orgId, widgetId, actorId, body, trail) {
       return sequelize.transaction(async (transaction) => {
         const w = await Widget.findOne({
           where: { id: widgetId, organizationId: orgId },
@@ -256,6 +272,20 @@ export function createWidgetService(deps: {
         await WidgetRevision.create(
           { widgetId: w.id, organizationId: orgId, authorId: actorId, changes, snapshot: after },
           { transaction },
+        );
+        await trail?.(
+          {
+            type: 'widget.updated',
+            subject: after.name,
+            details: {
+              widgetId: w.id,
+              changed: changes.map((c) => c.path),
+              ...(before.status !== after.status
+                ? { status: { from: before.status, to: after.status } }
+                : {}),
+            },
+          },
+          transaction,
         );
         return dto(w);
       });

@@ -9,6 +9,7 @@ import { SessionRevocation } from './session-revocation.js';
 import { User } from './user.js';
 import { Asset } from './asset.js';
 import { Lead } from './lead.js';
+import { LeadNote } from './lead-note.js';
 import { Run } from './run.js';
 import { Widget } from './widget.js';
 import { WidgetRevision } from './widget-revision.js';
@@ -19,6 +20,7 @@ export {
   AuditEvent,
   Invitation,
   Lead,
+  LeadNote,
   Membership,
   Organization,
   OrganizationSetting,
@@ -44,6 +46,7 @@ export function initModels(sequelize: Sequelize): void {
   WidgetRevision.initModel(sequelize);
   Run.initModel(sequelize);
   Lead.initModel(sequelize);
+  LeadNote.initModel(sequelize);
   OrganizationSetting.initModel(sequelize);
 
   Organization.hasMany(Membership, { foreignKey: 'organizationId', as: 'memberships' });
@@ -56,4 +59,5 @@ export function initModels(sequelize: Sequelize): void {
   PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   AuditEvent.belongsTo(User, { foreignKey: 'actorUserId', as: 'actor' });
   AuditEvent.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });
+  LeadNote.belongsTo(User, { foreignKey: 'authorUserId', as: 'author' });
 }

@@ -26,7 +26,6 @@ export class Lead extends Model<InferAttributes<Lead>, InferCreationAttributes<L
   declare origin: string;
   declare sendCopy: boolean;
   declare assigneeId: CreationOptional<number | null>;
-  declare notes: CreationOptional<string | null>;
   declare erasedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -54,7 +53,6 @@ export class Lead extends Model<InferAttributes<Lead>, InferCreationAttributes<L
         origin: { type: DataTypes.STRING(200), allowNull: false },
         sendCopy: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         assigneeId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-        notes: { type: DataTypes.TEXT, allowNull: true },
         erasedAt: { type: DataTypes.DATE(3), allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),

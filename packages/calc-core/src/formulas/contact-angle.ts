@@ -1,0 +1,117 @@
+import { CalcInputError } from '../errors.js';
+import { contactAngle, cosDeg, finiteResult, nonNegative, positive } from '../guards.js';
+import { STANDARD_GRAVITY } from '../units.js';
+
+// Contact angles and surface tensions read backwards from a measurement: the force on a Wilhelmy
+// plate with the buoyancy of its immersed part, and the rise in a narrow tube with Rayleigh's
+// first-order meniscus correction. All SI: N, N/m, kg/m³, m, m/s².
+
+export interface PlateForceArgs {
+  /** Measured force on the plate, net of its weight in air (tare), N; positive pulls the plate down. */
+  readonly force: number;
+  /** N/m */
+  readonly surfaceTension: number;
+  /** Liquid density, kg/m³ */
+  readonly density: number;
+  /** m */
+  readonly plateWidth: number;
+  /** m */
+  readonly plateThickness: number;
+  /** Depth of the plate's lower edge below the undisturbed liquid surface, m (0 at the zero-depth reading). */
+  readonly immersionDepth: number;
+  /** m/s²; standard gravity when absent */
+  readonly gravity?: number;
+}
+
+/** The terms of the plate's force balance, each worth showing on a calculation sheet. */
+export interface PlateForceTerms {
+  /** Wetted perimeter P = 2(w + t), m. */
+  readonly perimeter: number;
+  /** Buoyancy of the immersed part, ρ·g·w·t·h, N. */
+  readonly buoyancy: number;
+  /** cos θ = (F + ρ·g·w·t·h) / (σ·P), unbounded: outside [−1, 1] no angle exists. */
+  readonly cosTheta: number;
+}
+
+/**
+ * Wilhelmy plate read for the contact angle, with buoyancy: the measured force is
+ * F = σ·P·cos θ − ρ·g·w·t·h, so cos θ = (F + ρ·g·w·t·h) / (σ·P), P = 2(w + t).
+ * The returned cos θ is not clamped: a value outside [−1, 1] means the force is more than the
+ * surface tension can give (a surface tension set too low, or a tare error), and no angle exists.
+ */
+export function plateForceTerms(args: PlateForceArgs): PlateForceTerms {
+  const force = finiteResult('force', args.force);
+  const sigma = positive('surfaceTension', args.surfaceTension);
+  const rho = positive('density', args.density);
+  const w = positive('plateWidth', args.plateWidth);
+  const t = nonNegative('plateThickness', args.plateThickness);
+  const h = nonNegative('immersionDepth', args.immersionDepth);
+  const g = positive('gravity', args.gravity ?? STANDARD_GRAVITY);
+  const perimeter = 2 * (w + t);
+  const buoyancy = rho * g * w * t * h;
+  return { perimeter, buoyancy, cosTheta: finiteResult('cos θ', (force + buoyancy) / (sigma * perimeter)) };
+}
+
+/**
+ * The contact angle whose cosine is `cos`, in degrees, 0–180.
+ * @throws CalcInputError with code COS_OUT_OF_RANGE when |cos| > 1 (no such angle)
+ */
+export function angleFromCos(field: string, cos: number): number {
+  if (!Number.isFinite(cos) || cos > 1 || cos < -1) {
+    throw new CalcInputError({
+      field,
+      code: 'COS_OUT_OF_RANGE',
+      message: `cos θ comes out at ${cos.toPrecision(3)}, outside −1…1: no contact angle gives this measurement`,
+    });
+  }
+  return (Math.acos(cos) * 180) / Math.PI;
+}
+
+export interface TubeRiseReading {
+  /** Rise to the bottom of the meniscus above the free surface, m. */
+  readonly rise: number;
+  /** Bore diameter, m. */
+  readonly diameter: number;
+  /** kg/m³ */
+  readonly density: number;
+  /** m/s²; standard gravity when absent */
+  readonly gravity?: number;
+}
+
+/**
+ * ρ·g·r·(h + r/3): the weight per unit length of the wall that the surface tension holds up, with
+ * Rayleigh's first-order meniscus term r/3 (Rayleigh 1915, Proc. R. Soc. A 92, 184), N/m.
+ */
+function heldWeight(args: TubeRiseReading): number {
+  const h = positive('rise', args.rise);
+  const r = positive('diameter', args.diameter) / 2;
+  const rho = positive('density', args.density);
+  const g = positive('gravity', args.gravity ?? STANDARD_GRAVITY);
+  return rho * g * r * (h + r / 3);
+}
+
+/**
+ * Surface tension from a measured rise, Rayleigh (1915) first order: σ = ρ·g·r·(h + r/3) / (2·cos θ).
+ * @param args.contactAngleDeg degrees, below 90 (a wetting meniscus)
+ * @returns N/m
+ */
+export function tensionFromRise(args: TubeRiseReading & { readonly contactAngleDeg: number }): number {
+  contactAngle('contactAngleDeg', args.contactAngleDeg);
+  if (args.contactAngleDeg >= 90) {
+    throw new CalcInputError({
+      field: 'contactAngleDeg',
+      code: 'ANGLE_NOT_WETTING',
+      message: 'a rise gives a surface tension only for a wetting liquid, θ below 90°',
+    });
+  }
+  return finiteResult('surface tension', heldWeight(args) / (2 * cosDeg(args.contactAngleDeg)));
+}
+
+/**
+ * cos θ from a measured rise with a known surface tension: cos θ = ρ·g·r·(h + r/3) / (2σ).
+ * Unclamped, as for the plate: above 1 the rise is more than the surface tension can hold.
+ */
+export function cosFromRise(args: TubeRiseReading & { readonly surfaceTension: number }): number {
+  const sigma = positive('surfaceTension', args.surfaceTension);
+  return finiteResult('cos θ', heldWeight(args) / (2 * sigma));
+}
