@@ -37,22 +37,24 @@ interface HostSite {
 
 let snippet = '';
 
-function hostPage(withHostileCss: boolean): string {
+function hostPage(withHostileCss: boolean, copies = 1): string {
   return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Damp advice · ${firm}</title>
 ${withHostileCss ? `<style>${hostileCss}</style>` : ''}</head>
 <body><h1>Is it rising damp?</h1><p>Try our calculator before you book a survey.</p>
-${snippet}
+${Array.from({ length: copies }, () => snippet).join('\n<p>And again, further down.</p>\n')}
 <p>Brackenridge Ground &amp; Damp, brackenridge-ground.example</p></body></html>`;
 }
 
 async function startHost(): Promise<HostSite> {
   const server = createServer((req, res) => {
     const path = new URL(req.url ?? '/', 'http://host').pathname;
-    if (path !== '/' && path !== '/hostile') {
+    if (path !== '/' && path !== '/hostile' && path !== '/twice') {
       res.writeHead(404).end();
       return;
     }
-    res.writeHead(200, { 'content-type': 'text/html; charset=utf-8' }).end(hostPage(path === '/hostile'));
+    res
+      .writeHead(200, { 'content-type': 'text/html; charset=utf-8' })
+      .end(hostPage(path === '/hostile', path === '/twice' ? 2 : 1));
   });
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
   return { origin: `http://127.0.0.1:${(server.address() as AddressInfo).port}`, server };
@@ -505,6 +507,68 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     // …and nothing of them reaches inside it.
     for (const [name, look] of Object.entries(plain.looks)) expect(look, `${name} missing`).not.toBeNull();
     expect(hostile.looks).toEqual(plain.looks);
+  });
+
+  it('shares one runtime between the widgets on a page, each file fetched once with its SRI hash', async () => {
+    expect(snippet).not.toBe('');
+    const page = await freshPage();
+    const fetched: string[] = [];
+    page.on('requestfinished', (req) => {
+      if (req.url().includes('/releases/')) fetched.push(new URL(req.url()).pathname.split('/').pop()!);
+    });
+    await page.goto(`${site.origin}/twice`);
+    const hosts = page.locator('wickstone-widget[data-wickstone="host"]');
+    await expect.poll(() => hosts.count()).toBe(2);
+    for (const i of [0, 1])
+      await hosts.nth(i).locator('[data-wickstone="root"]').waitFor({ timeout: 20_000 });
+    // Both work: one calculation in the second leaves the first alone.
+    await hosts.nth(1).locator('[data-wickstone="calculate"]').click();
+    await hosts.nth(1).locator('[data-result]').waitFor();
+    expect(await hosts.nth(0).locator('[data-result]').count()).toBe(0);
+    const runtimes = fetched.filter((f) => /^runtime-.*\.js$/.test(f));
+    expect(runtimes).toHaveLength(1);
+    expect(fetched.filter((f) => /^engine-tube-rise-.*\.js$/.test(f))).toHaveLength(1);
+    // Every chunk the loader added carries its hash and is fetched in CORS mode.
+    const tags = await page.evaluate(() =>
+      [...document.querySelectorAll<HTMLScriptElement>('script[src*="/releases/"]')].map((s) => ({
+        src: s.src,
+        integrity: s.integrity,
+        crossOrigin: s.crossOrigin,
+      })),
+    );
+    expect(tags.length).toBeGreaterThan(2);
+    for (const t of tags) {
+      expect(t.integrity, t.src).toMatch(/^sha384-/);
+      expect(t.crossOrigin, t.src).toBe('anonymous');
+    }
+  });
+
+  it('refuses a chunk whose bytes differ from the hash its loader carries', async () => {
+    expect(snippet).not.toBe('');
+    const page = await freshPage();
+    const messages: string[] = [];
+    page.on('console', (m) => messages.push(m.text()));
+    let tampered = '';
+    await page.route('**/releases/**/runtime-*.js', async (route) => {
+      const original = await route.fetch();
+      tampered = route.request().url();
+      // One changed statement at the end: the kind of edit a compromised server or cache would make.
+      await route.fulfill({
+        response: original,
+        body: `${await original.text()}\nwindow.__tampered = true;\n`,
+      });
+    });
+    await page.goto(`${site.origin}/`);
+    const host = widgetIn(page);
+    await page
+      .locator('wickstone-widget[data-wickstone="host"][data-state="unavailable"]')
+      .waitFor({ state: 'attached', timeout: 20_000 });
+    expect(tampered).not.toBe('');
+    expect(
+      await page.evaluate(() => (window as unknown as { __tampered?: boolean }).__tampered),
+    ).toBeUndefined();
+    expect(await host.locator('[data-wickstone="root"]').count()).toBe(0);
+    expect(messages.some((m) => /integrity/i.test(m) && m.includes('runtime-'))).toBe(true);
   });
 
   it('gives a site that is not allowed no widget and stores nothing it sends', async () => {

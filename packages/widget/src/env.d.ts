@@ -9,3 +9,5 @@ declare module 'virtual:wickstone-calculator' {
 
 /** packages/widget/package.json's version, put in by the build. */
 declare const __WICKSTONE_VERSION__: string;
+/** The Manrope file the release ships (one variable font), put in by the build. */
+declare const __WICKSTONE_MANROPE_FILE__: string;

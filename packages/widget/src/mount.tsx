@@ -1,34 +1,44 @@
 import type { CalculationResult, CalculatorDefinition } from '@wickstone/calc-core';
 import { render } from 'preact';
 import type { MountHandle, MountOptions } from './global.js';
-import { registerManrope } from './lib/look.js';
 import { createReporter, type Reporter } from './lib/reporter.js';
 import { App } from './ui/App.js';
+import { loadExtras, withExtras, type ExtrasModule } from './lazy.js';
+import { HOST_TAG } from './placement.js';
 import css from './ui/styles.css?inline';
 
-export const HOST_TAG = 'wickstone-widget';
-
 let sheet: CSSStyleSheet | null = null;
+let extrasSheet: CSSStyleSheet | null = null;
 
 /**
  * Styles go into the shadow root only. A constructed sheet is shared by every widget of this
  * bundle on the page (parsed once) and is not an inline style a page's CSP would block; where
  * that API is missing, a <style> inside the shadow root.
  */
-function adoptStyles(root: ShadowRoot): void {
+function adoptStyles(root: ShadowRoot, text: string, kind: 'styles' | 'extras'): void {
   if ('adoptedStyleSheets' in root && typeof CSSStyleSheet.prototype.replaceSync === 'function') {
-    sheet ??= new CSSStyleSheet();
-    if (sheet.cssRules.length === 0) sheet.replaceSync(css);
-    if (!root.adoptedStyleSheets.includes(sheet))
-      root.adoptedStyleSheets = [...root.adoptedStyleSheets, sheet];
+    let s = kind === 'styles' ? sheet : extrasSheet;
+    if (s === null) {
+      s = new CSSStyleSheet();
+      s.replaceSync(text);
+      if (kind === 'styles') sheet = s;
+      else extrasSheet = s;
+    }
+    if (!root.adoptedStyleSheets.includes(s)) root.adoptedStyleSheets = [...root.adoptedStyleSheets, s];
     return;
   }
-  if (root.querySelector('style[data-wickstone]') === null) {
+  if (root.querySelector(`style[data-wickstone="${kind}"]`) === null) {
     const style = document.createElement('style');
-    style.setAttribute('data-wickstone', 'styles');
-    style.textContent = css;
-    root.prepend(style);
+    style.setAttribute('data-wickstone', kind);
+    style.textContent = text;
+    if (kind === 'styles') root.prepend(style);
+    else root.querySelector('style[data-wickstone="styles"]')?.after(style);
   }
+}
+
+/** Fetches the extras once the browser has painted the widget (and had a moment to spare). */
+function afterFirstPaint(then: () => void): void {
+  requestAnimationFrame(() => setTimeout(then, 0));
 }
 
 /** The host element to render into: `element` itself when it is one of ours, else one made inside it. */
@@ -53,6 +63,8 @@ export interface Bundle {
   readonly releaseBase: string | null;
   /** The server the bundle came from: the default for runs and leads. */
   readonly defaultApiBase: string | null;
+  /** Fetches the extras chunk (working, lead form, font); null where there is none to fetch. */
+  readonly extras: (() => Promise<ExtrasModule>) | null;
 }
 
 /**
@@ -65,7 +77,8 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
   host.setAttribute('data-wickstone', 'host');
   host.setAttribute('data-calculator', calculator.id);
   const shadow = host.shadowRoot ?? host.attachShadow({ mode: 'open' });
-  adoptStyles(shadow);
+  adoptStyles(shadow, css, 'styles');
+  const stopWaiting = withExtras((extras) => adoptStyles(shadow, extras.css, 'extras'));
   let container = shadow.querySelector<HTMLElement>('div[data-wickstone="mount"]');
   if (container === null) {
     container = document.createElement('div');
@@ -92,8 +105,10 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
       reporter = createReporter({ apiBase, publicKey: widget.publicKey, href: () => location.href });
     }
     reporterKey = key;
-    if (widget.settings.look.font === 'manrope' && bundle.releaseBase !== null)
-      registerManrope(document.fonts, bundle.releaseBase);
+    const releaseBase = bundle.releaseBase;
+    // A shipped font is fetched with the extras, after first paint; until then the fallback stack shows.
+    if (widget.settings.look.font === 'manrope' && releaseBase !== null)
+      withExtras((extras) => extras.registerManrope(document.fonts, releaseBase));
     host.setAttribute('data-mode', preview ? 'preview' : 'live');
     host.setAttribute('data-state', 'ready');
     render(
@@ -102,9 +117,18 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
     );
   };
   draw(first);
+  // The working, the lead form and the font follow first paint; extras already here were used above.
+  const fetchExtras = bundle.extras;
+  if (fetchExtras)
+    afterFirstPaint(() => {
+      loadExtras(fetchExtras).catch((err: unknown) =>
+        console.warn('Wickstone: the working and lead form could not be loaded', err),
+      );
+    });
   return {
     update: draw,
     unmount() {
+      stopWaiting();
       render(null, target);
       if (made) host.remove();
     },

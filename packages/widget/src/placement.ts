@@ -65,16 +65,36 @@ export function findOwnScript(doc: Document, calculatorId: string): HTMLScriptEl
   );
 }
 
-/** Puts a host element right after the script (or into the body, for a script placed in the head). */
-export function insertHost(script: HTMLScriptElement, host: HTMLElement): void {
+/** The element a widget renders into (its shadow root holds the widget). */
+export const HOST_TAG = 'wickstone-widget';
+
+/**
+ * The host for a snippet's widget: the placeholder the snippet put just before its script (it
+ * reserves the widget's height, so nothing on the page moves when the widget appears), else a new
+ * one right after the script (or at the end of the body, for a script placed in the head).
+ */
+export function insertHost(script: HTMLScriptElement, calculatorId: string): HTMLElement {
   const doc = script.ownerDocument;
+  const before = script.previousElementSibling;
+  const reserved =
+    before instanceof HTMLElement &&
+    before.localName === HOST_TAG &&
+    before.getAttribute('data-calculator') === calculatorId &&
+    before.shadowRoot === null
+      ? before
+      : null;
+  const host = reserved ?? doc.createElement(HOST_TAG);
+  host.setAttribute('data-wickstone', 'host');
+  host.setAttribute('data-calculator', calculatorId);
+  if (reserved) return host;
   if (script.parentNode !== null && !doc.head?.contains(script)) {
     script.after(host);
-    return;
+    return host;
   }
   const append = (): void => {
     doc.body.append(host);
   };
   if (doc.body) append();
   else doc.addEventListener('DOMContentLoaded', append, { once: true });
+  return host;
 }

@@ -91,6 +91,36 @@ describe('public embed API', () => {
       expect(JSON.stringify(res.body)).not.toContain('allowedOrigins');
     });
 
+    it('sends the settings compressed, with a validator that answers an unchanged widget with 304', async () => {
+      const first = await embed()
+        .get(`/api/v1/embed/widgets/${widget.publicKey}`)
+        .set('Origin', SITE)
+        .set('Accept-Encoding', 'gzip')
+        .expect(200);
+      expect(first.headers['content-encoding']).toBe('gzip');
+      expect(first.headers['cache-control']).toBe('private, no-cache');
+      expect(first.headers.vary).toMatch(/Origin/);
+      expect(first.headers.vary).toMatch(/Accept-Encoding/);
+      const etag = first.headers.etag;
+      expect(etag).toMatch(/^W\/"/);
+      const again = await embed()
+        .get(`/api/v1/embed/widgets/${widget.publicKey}`)
+        .set('Origin', SITE)
+        .set('If-None-Match', etag as string)
+        .expect(304);
+      expect(again.text ?? '').toBe('');
+      // A changed widget no longer matches.
+      await owner
+        .patch(`/orgs/${org.id}/widgets/${widget.id}`, { name: 'Renamed for the validator' })
+        .expect(200);
+      await embed()
+        .get(`/api/v1/embed/widgets/${widget.publicKey}`)
+        .set('Origin', SITE)
+        .set('If-None-Match', etag as string)
+        .expect(200);
+      await owner.patch(`/orgs/${org.id}/widgets/${widget.id}`, { name: widget.name }).expect(200);
+    });
+
     it('gives an origin that is not allowed no widget and no settings', async () => {
       const res = await embed()
         .get(`/api/v1/embed/widgets/${widget.publicKey}`)

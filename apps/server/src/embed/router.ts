@@ -1,3 +1,4 @@
+import compression from 'compression';
 import express, { type NextFunction, type Request, type Response, type Router } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import { z } from 'zod';
@@ -98,13 +99,17 @@ export function embedRouter(service: EmbedService, limits: EmbedLimits): Router 
     String((req.body as { publicKey?: unknown } | undefined)?.publicKey ?? ''),
   );
 
-  router.get('/widgets/:publicKey', async (req, res) => {
+  // The settings a widget asks for on every page view: compressed, and kept by the browser with a
+  // validator (ETag, made by res.json) so an unchanged widget costs a 304 with no body.
+  router.get('/widgets/:publicKey', compression({ threshold: 0 }), async (req, res) => {
     // Any page may read this route's answer: a refused origin then learns at once that there is no
     // widget for it (403, no data) instead of waiting out retries on what looks like a network error.
     const origin = req.get('origin');
     if (origin) res.set('Access-Control-Allow-Origin', origin);
     const { publicKey } = parseRequest(keyParams, req.params, 'params');
-    res.json(await service.widgetFor(publicKey, req.get('origin')));
+    const widget = await service.widgetFor(publicKey, req.get('origin'));
+    res.set('Cache-Control', 'private, no-cache');
+    res.json(widget);
   });
 
   router.post('/runs', async (req, res) => {

@@ -1,3 +1,4 @@
+import { embedSnippet, reservedHeight } from './snippet.js';
 import { randomBytes } from 'node:crypto';
 import type { Sequelize } from 'sequelize';
 import {
@@ -128,9 +129,14 @@ export function createWidgetService(deps: {
   function embed(w: Widget): WidgetDto['embed'] {
     const script = releases.script(w.release, w.calculatorId);
     if (!script) return { scriptUrl: '', integrity: '', snippet: '' };
-    const snippet =
-      `<script async src="${script.url}" integrity="${script.integrity}" crossorigin="anonymous" ` +
-      `data-wickstone-key="${w.publicKey}"></script>`;
+    const calc = getCalculator(w.calculatorId);
+    const snippet = embedSnippet({
+      url: script.url,
+      integrity: script.integrity,
+      publicKey: w.publicKey,
+      calculatorId: w.calculatorId,
+      height: calc ? reservedHeight(calc, w.settings) : 0,
+    });
     return { scriptUrl: script.url, integrity: script.integrity, snippet };
   }
 

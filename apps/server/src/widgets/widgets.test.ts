@@ -50,6 +50,14 @@ describe('widgets API', () => {
     expect(w.publicKey).toMatch(/^wk_[a-z0-9]{20}$/);
     expect(w.settings).toEqual(defaultWidgetSettings());
     expect(w.embed.snippet).toContain(`data-wickstone-key="${w.publicKey}"`);
+    // A placeholder before the script holds the widget's place: tube-rise shows five inputs by default
+    // (liquid, temperature, contact angle preset, bore, gravity), each a row at a phone's width.
+    const held =
+      /^<wickstone-widget data-calculator="tube-rise" style="display:block;min-height:(\d+)px;--wk-held:\1px"><\/wickstone-widget>\n<script /.exec(
+        w.embed.snippet,
+      );
+    expect(held).not.toBeNull();
+    expect(Number(held?.[1])).toBe(440 + 100 * 5 + 100);
     expect(w.embed.integrity).toMatch(/^sha384-[A-Za-z0-9+/]+=*$/);
     expect(w.embed.scriptUrl).toMatch(
       new RegExp(`/releases/${w.release.replace(/\./g, '\\.')}/wickstone-tube-rise\\.js$`),

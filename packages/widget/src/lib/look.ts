@@ -5,13 +5,6 @@ type Look = EmbedWidget['settings']['look'];
 /** The family name the bundle registers Manrope under; unlikely to clash with a page's own fonts. */
 export const MANROPE_FAMILY = 'Wickstone Manrope';
 
-/** The Manrope files shipped in every release folder, by weight. */
-export const MANROPE_FILES: Readonly<Record<'400' | '600' | '700', string>> = {
-  '400': 'manrope-latin-400-normal.woff2',
-  '600': 'manrope-latin-600-normal.woff2',
-  '700': 'manrope-latin-700-normal.woff2',
-};
-
 const FONT_STACKS: Readonly<Record<Look['font'], string>> = {
   manrope: `'${MANROPE_FAMILY}', ui-sans-serif, system-ui, sans-serif`,
   'system-sans':
@@ -52,22 +45,4 @@ export function lookVariables(look: Look): Record<string, string> {
     '--wk-rc': control,
     '--wk-font': FONT_STACKS[look.font] ?? FONT_STACKS['system-sans'],
   };
-}
-
-/**
- * Registers Manrope with the document's FontFaceSet (a shadow tree uses the document's fonts), once
- * per document whichever bundles ask: no style element is put into the page. The faces load only
- * when text needs them.
- * @param releaseBase the release folder's URL, ending in `/`
- */
-export function registerManrope(fonts: FontFaceSet, releaseBase: string): void {
-  for (const face of fonts) if (face.family.replace(/["']/g, '') === MANROPE_FAMILY) return;
-  for (const [weight, file] of Object.entries(MANROPE_FILES)) {
-    const face = new FontFace(MANROPE_FAMILY, `url(${JSON.stringify(releaseBase + file)}) format("woff2")`, {
-      weight,
-      style: 'normal',
-      display: 'swap',
-    });
-    fonts.add(face);
-  }
 }

@@ -21,7 +21,8 @@ import type { Reporter } from '../lib/reporter.js';
 import { resolveInputSettings, type ResolvedInput } from '../lib/settings.js';
 import { formatValue, outputUnitFor, toDisplay, withUnit } from '../lib/units.js';
 import { controlId, Field } from './Field.js';
-import { LeadForm, type LeadTarget } from './LeadForm.js';
+import { useExtras } from '../lazy.js';
+import type { LeadTarget } from './LeadForm.js';
 import { Result, warningId } from './Result.js';
 
 export interface AppProps {
@@ -91,6 +92,8 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
   const [report, setReport] = useState<'pending' | 'stored' | 'failed' | null>(null);
   const [announcement, setAnnouncement] = useState('');
   const rootRef = useRef<HTMLDivElement>(null);
+  // The working and the lead form arrive after first paint (the extras chunk).
+  const extras = useExtras();
 
   // New settings (the dashboard's preview as an admin edits): start the form again from them.
   const settingsKey = JSON.stringify([settings.inputs, settings.units]);
@@ -271,11 +274,12 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
           firmCautions={settings.cautions}
           runId={leadTarget?.runId ?? null}
           report={report}
+          Working={extras?.Working ?? null}
         />
       )}
       {/* In preview the form shows from the start, so an admin sees the fields as they set them. */}
-      {(outcome !== null || preview) && settings.leadForm.enabled && (
-        <LeadForm
+      {extras && (outcome !== null || preview) && settings.leadForm.enabled && (
+        <extras.LeadForm
           form={settings.leadForm}
           publicKey={widget.publicKey}
           apiBase={preview ? null : apiBase}

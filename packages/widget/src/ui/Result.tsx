@@ -5,10 +5,10 @@ import {
   toDisplay,
   displayUnitOf,
   unitGap,
-  unitKind,
   unitSymbol,
   withUnit,
 } from '../lib/units.js';
+import type { ExtrasModule } from '../lazy.js';
 
 export const DISCLAIMER =
   'Results are estimates. They do not replace a site investigation or the judgement of a licensed professional working to local codes.';
@@ -24,6 +24,8 @@ interface ResultProps {
   readonly firmCautions: string;
   readonly runId: string | null;
   readonly report: 'pending' | 'stored' | 'failed' | null;
+  /** The working and its sources, once the extras chunk is here (it follows first paint). */
+  readonly Working: ExtrasModule['Working'] | null;
 }
 
 function Figure({ value, unit }: { value: number; unit: UnitId }) {
@@ -54,7 +56,16 @@ export function splitCautions(text: string): string[] {
 }
 
 /** The result of the last calculation: figures, band, warnings, working, cautions and the standing disclaimer. */
-export function Result({ calculator, result, system, stale, firmCautions, runId, report }: ResultProps) {
+export function Result({
+  calculator,
+  result,
+  system,
+  stale,
+  firmCautions,
+  runId,
+  report,
+  Working,
+}: ResultProps) {
   const outputs = calculator.outputs.filter((o) => typeof result.outputs[o.id] === 'number');
   const band = result.band;
   const inputLabel = (id: string): string => calculator.inputs.find((i) => i.id === id)?.label ?? id;
@@ -138,39 +149,7 @@ export function Result({ calculator, result, system, stale, firmCautions, runId,
         </div>
       )}
 
-      <details class="working" data-wickstone="working">
-        <summary>How this was worked out</summary>
-        <ol class="steps">
-          {result.working.map((step, i) => {
-            // Working is stated in SI, as the formulas are; the value is repeated in the visitor's units.
-            const shown = displayUnitOf({ kind: unitKind(step.unit) }, system);
-            const converted = shown !== step.unit;
-            return (
-              <li class="step" key={i} data-step={i}>
-                <p class="step-label">{step.label}</p>
-                <code class="math">{step.formula}</code>
-                <code class="math">{step.substituted}</code>
-                <p class="step-value">
-                  = {withUnit(formatValue(step.value), step.unit)}
-                  {converted && (
-                    <span class="note"> ({withUnit(formatValue(toDisplay(step.value, shown)), shown)})</span>
-                  )}
-                </p>
-                {step.source && <p class="step-source">{step.source}</p>}
-              </li>
-            );
-          })}
-        </ol>
-        {calculator.references.length > 0 && (
-          <ul class="refs" aria-label="Sources">
-            {calculator.references.map((r) => (
-              <li key={r.id}>
-                {r.citation} — {r.usedFor}
-              </li>
-            ))}
-          </ul>
-        )}
-      </details>
+      {Working && <Working calculator={calculator} result={result} system={system} />}
 
       <div class="cautions" data-wickstone="cautions">
         <h4 class="label">Before relying on this</h4>

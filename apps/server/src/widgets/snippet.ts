@@ -1,0 +1,54 @@
+import { resolveInputs, type CalculatorDefinition } from '@wickstone/calc-core';
+import type { WidgetSettings } from '@wickstone/contracts';
+
+// The embed snippet a firm pastes: a placeholder that holds the widget's place, then the script.
+// The placeholder is in the page from its first paint, so nothing on the page moves when the
+// widget appears in it (the script is async and may arrive after the page has been drawn).
+
+/**
+ * Heights (CSS px) of the widget's parts when it is narrow (one field a row, titles and labels
+ * wrapping), so the space held is enough at every width; on a wide page the widget's card fills
+ * what the form leaves and the result later uses it. Taken from the heights Chromium drew on the
+ * demo page (tests/bench/first-flight.ts prints shown/held heights and the layout shift left).
+ */
+const HEAD = 440;
+const FIELD = 100;
+const ACTIONS = 100;
+
+/** The inputs a visitor sees before touching anything: not hidden, and applying with the defaults. */
+export function visibleInputs(calc: CalculatorDefinition, settings: WidgetSettings['inputs']): number {
+  const shown = calc.inputs.filter((i) => settings[i.id]?.mode !== 'hidden');
+  const defaults: Record<string, unknown> = {};
+  for (const i of calc.inputs) {
+    const d = settings[i.id]?.default;
+    if (d !== undefined) defaults[i.id] = d;
+  }
+  try {
+    const applying = resolveInputs(calc, defaults);
+    return shown.filter((i) => Object.hasOwn(applying, i.id)).length;
+  } catch {
+    // A firm default calc-core refuses: the widget will say so; count what applies unconditionally.
+    return shown.filter((i) => !i.appliesWhen).length;
+  }
+}
+
+/** The height to hold for a widget before its script has run. */
+export function reservedHeight(calc: CalculatorDefinition, settings: WidgetSettings): number {
+  return HEAD + FIELD * visibleInputs(calc, settings.inputs) + ACTIONS;
+}
+
+const attr = (s: string) => s.replace(/&/g, '&amp;').replace(/"/g, '&quot;').replace(/</g, '&lt;');
+
+export function embedSnippet(args: {
+  url: string;
+  integrity: string;
+  publicKey: string;
+  calculatorId: string;
+  height: number;
+}): string {
+  return (
+    `<wickstone-widget data-calculator="${attr(args.calculatorId)}" style="display:block;min-height:${args.height}px;--wk-held:${args.height}px"></wickstone-widget>\n` +
+    `<script async src="${attr(args.url)}" integrity="${attr(args.integrity)}" crossorigin="anonymous" ` +
+    `data-wickstone-key="${attr(args.publicKey)}"></script>`
+  );
+}

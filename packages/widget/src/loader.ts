@@ -1,0 +1,126 @@
+// The snippet's script: one small classic script per calculator. It registers the calculator on
+// the shared `window.Wickstone`, reserves the widget's place right after its tag, asks for the
+// widget's settings while it fetches the runtime (shared by every widget of the release on the
+// page) and this calculator's engine, each checked against the SRI hash this file carries, then
+// renders. Everything else (working, sources, the lead form, fonts) is fetched after first paint.
+// It exports nothing, so the IIFE defines no global of its own.
+import { chunkLoader, installRegistry, type ChunkRegistry, type ChunkTable } from './chunks.js';
+import { installGlobal, type MountHandle, type MountOptions } from './global.js';
+import { isEmbedWidget } from './lib/shape.js';
+import { request } from './lib/transport.js';
+import type { Engine } from './engine.js';
+import type { ExtrasModule } from './lazy.js';
+import {
+  apiBaseFor,
+  findOwnScript,
+  insertHost,
+  isPublicKey,
+  PLACED_ATTR,
+  releaseBaseFor,
+} from './placement.js';
+
+declare const __WICKSTONE_CALCULATOR__: string;
+declare const __WICKSTONE_CALC_CORE_VERSION__: string;
+/** The engine chunk of this calculator. */
+declare const __WICKSTONE_ENGINE__: string;
+/** The extras chunk: what follows first paint. */
+declare const __WICKSTONE_EXTRAS__: string;
+/** Every chunk this loader may fetch, with its SRI hash and static imports. */
+declare const __WICKSTONE_CHUNKS__: ChunkTable;
+
+const calculatorId = __WICKSTONE_CALCULATOR__;
+const version = __WICKSTONE_VERSION__;
+const script = findOwnScript(document, calculatorId);
+const releaseBase = script ? releaseBaseFor(script.src) : null;
+const g = installGlobal(window, version, {
+  calculatorId,
+  version,
+  calcCoreVersion: __WICKSTONE_CALC_CORE_VERSION__,
+  mount,
+}) as ReturnType<typeof installGlobal> & Partial<ChunkRegistry>;
+const load =
+  releaseBase === null ? null : chunkLoader(installRegistry(g), version, releaseBase, __WICKSTONE_CHUNKS__);
+
+function engine(): Promise<Engine> {
+  if (load === null) return Promise.reject(new Error('Wickstone: the release folder is unknown'));
+  return load(__WICKSTONE_ENGINE__) as Promise<Engine>;
+}
+
+/**
+ * `Wickstone.mount` for this calculator: answers at once with a handle, and renders as soon as
+ * the runtime and engine are here (updates and unmounts made before then are kept in order).
+ */
+function mount(element: Element, first: MountOptions): MountHandle {
+  let latest = first;
+  let handle: MountHandle | null = null;
+  let gone = false;
+  engine().then(
+    (e) => {
+      if (gone) return;
+      handle = e.mountWidget(
+        {
+          calculator: e.calculator,
+          run: e.run,
+          releaseBase,
+          defaultApiBase: script ? apiBaseFor(script.src, null) : null,
+          extras: load && (() => load(__WICKSTONE_EXTRAS__) as Promise<ExtrasModule>),
+        },
+        element,
+        latest,
+      );
+    },
+    (err: unknown) => {
+      element.setAttribute('data-state', 'unavailable');
+      console.warn(`Wickstone: ${err instanceof Error ? err.message : String(err)}`);
+    },
+  );
+  return {
+    update(options) {
+      latest = options;
+      handle?.update(options);
+    },
+    unmount() {
+      gone = true;
+      handle?.unmount();
+    },
+  };
+}
+
+async function place(tag: HTMLScriptElement, key: string): Promise<void> {
+  tag.setAttribute(PLACED_ATTR, '');
+  const host = insertHost(tag, calculatorId);
+  host.setAttribute('data-state', 'loading');
+  const apiBase = apiBaseFor(tag.src, tag.getAttribute('data-wickstone-api'));
+  const unavailable = (why: string): void => {
+    host.setAttribute('data-state', 'unavailable');
+    // No widget is coming: give back the place the snippet held for it.
+    host.style.removeProperty('min-height');
+    host.style.removeProperty('--wk-held');
+    console.warn(`Wickstone: widget ${key} is not shown: ${why}`);
+  };
+  if (apiBase === null) return unavailable('no server to ask for its settings');
+  // The code and the settings travel at the same time.
+  const code = engine();
+  code.catch(() => undefined);
+  // Fewer retries than a run report: a page the widget may not be embedded on sees a refused
+  // CORS read, which looks exactly like a network failure, and asking again will not change it.
+  const reply = await request(`${apiBase}/api/v1/embed/widgets/${key}`, undefined, { delays: [1000, 3000] });
+  if (reply.status === 403) return unavailable('this site is not one the widget may be embedded on');
+  if (reply.status === 404) return unavailable('the widget is not live (draft, paused or unknown key)');
+  if (reply.status !== 200 || !isEmbedWidget(reply.body))
+    return unavailable(`the server answered ${reply.status || 'nothing'}`);
+  if (reply.body.calculatorId !== calculatorId)
+    return unavailable(`it is a ${reply.body.calculatorId} widget, not ${calculatorId}`);
+  try {
+    await code;
+  } catch (err) {
+    return unavailable(err instanceof Error ? err.message : String(err));
+  }
+  mount(host, { widget: reply.body, apiBase });
+}
+
+const key = script?.getAttribute('data-wickstone-key') ?? undefined;
+if (script && key !== undefined && !script.hasAttribute(PLACED_ATTR)) {
+  if (isPublicKey(key)) void place(script, key);
+  else console.warn(`Wickstone: "${key}" is not a widget key`);
+}

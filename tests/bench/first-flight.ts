@@ -1,0 +1,285 @@
+// The widget's first flight, measured in Chromium through the DevTools protocol on a slow network
+// with the CPU slowed four times: for one widget of each calculator and for the demo firm's page
+// with two widgets, the requests and compressed bytes the app sent before the calculator could be
+// used, the bytes after the page went quiet, the time to usable, the cumulative layout shift and
+// the time from typing a value to seeing its result. The baseline, measured in the same run under
+// the same profile, is the firm's page with no widget on it.
+//
+// A benchmark, not a test: it prints figures and asserts nothing. Needs the built tree
+// (`npm run build`) and the test database's DB_* variables exported (see DEVELOPERS.md):
+//   npm run bench -w tests            (BENCH_PORT, default 5670; the firm's site on BENCH_PORT + 1)
+import { readFileSync } from 'node:fs';
+import { createServer, type Server } from 'node:http';
+import { calculators } from '@wickstone/calc-core';
+import { defaultWidgetSettings, type WidgetSettings } from '@wickstone/contracts';
+import { createApp } from '@wickstone/server/app';
+import { createLogger } from '@wickstone/server/logger';
+import { createTestDatabase, seedOrgWithTeam, TestClient } from '@wickstone/server/testing';
+import type { Browser, CDPSession } from 'playwright-core';
+import { launchBrowser } from '../support/browser.js';
+
+const appPort = Number(process.env.BENCH_PORT ?? 5670);
+const sitePort = appPort + 1;
+const appOrigin = `http://127.0.0.1:${appPort}`;
+const siteOrigin = `http://127.0.0.1:${sitePort}`;
+
+/** A slow mobile link (about 1.6 Mbit/s down, 150 ms round trip) and a CPU four times slower. */
+const NETWORK = {
+  offline: false,
+  latency: 150,
+  downloadThroughput: (1.6 * 1024 * 1024) / 8,
+  uploadThroughput: (750 * 1024) / 8,
+};
+const CPU_SLOWDOWN = 4;
+const QUIET_MS = 1500;
+
+function listen(server: Server, port: number): Promise<void> {
+  return new Promise((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(port, '127.0.0.1', () => resolve());
+  });
+}
+
+const template = readFileSync(new URL('../../scripts/demo-site/index.html', import.meta.url), 'utf8');
+const sitePage = (one: string, two: string) =>
+  template.replace('{{WIDGET_1}}', one).replace('{{WIDGET_2}}', two);
+
+interface Figures {
+  requests: number;
+  bytes: number;
+  totalRequests: number;
+  totalBytes: number;
+  usableMs: number;
+  cls: number;
+  typingMs: number | null;
+  runtimeLoads: number;
+  heights: string;
+}
+
+/**
+ * Runs in the page before anything else: records layout shifts and when every widget is usable.
+ * Plain source text, not a function: the TypeScript runner adds helpers the page does not have.
+ */
+const pageProbe = (expected: number) => `
+  window.__cls = 0;
+  window.__usableAt = null;
+  new PerformanceObserver((list) => {
+    for (const e of list.getEntries()) if (!e.hadRecentInput) window.__cls += e.value;
+  }).observe({ type: 'layout-shift', buffered: true });
+  const usable = () => {
+    const hosts = [...document.querySelectorAll('wickstone-widget')];
+    return hosts.length === ${expected} && hosts.every((h) => {
+      const button = h.shadowRoot && h.shadowRoot.querySelector('[data-wickstone="calculate"]');
+      return h.getAttribute('data-state') === 'ready' && button && !button.disabled;
+    });
+  };
+  const tick = () => {
+    if (${expected} > 0 ? usable() : document.readyState === 'complete') {
+      window.__usableAt = performance.now();
+      window.__heights = [...document.querySelectorAll('wickstone-widget')].map((h) => {
+        const shown = h.shadowRoot.querySelector('[data-wickstone="root"]').getBoundingClientRect().height;
+        return Math.round(shown) + '/' + (parseInt(h.style.minHeight, 10) || 0);
+      });
+      window.__usable();
+    } else requestAnimationFrame(tick);
+  };
+  requestAnimationFrame(tick);
+`;
+
+/** Types into the first widget, presses Calculate and resolves with the milliseconds until the new result is painted. */
+const typeAndWait = `(async () => {
+  const root = document.querySelector('wickstone-widget').shadowRoot;
+  const control = [...root.querySelectorAll('input[data-input]')].find((i) => i.type !== 'radio' && i.type !== 'checkbox' && !i.readOnly && Number(i.value) > 0);
+  const before = root.querySelector('[data-result]') ? root.querySelector('[data-result]').outerHTML : '';
+  const t0 = performance.now();
+  control.value = String(Number(control.value) * 1.5);
+  control.dispatchEvent(new Event('input', { bubbles: true }));
+  root.querySelector('[data-wickstone="calculate"]').click();
+  await new Promise((resolve) => {
+    const check = () => {
+      const now = root.querySelector('[data-result]:not([data-stale])');
+      if (now && now.outerHTML !== before) resolve();
+      else requestAnimationFrame(check);
+    };
+    check();
+  });
+  await new Promise((r) => requestAnimationFrame(r));
+  return performance.now() - t0;
+})()`;
+
+async function measure(browser: Browser, path: string, expected: number, typing: boolean): Promise<Figures> {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const page = await context.newPage();
+  const cdp: CDPSession = await context.newCDPSession(page);
+  await cdp.send('Network.enable');
+  await cdp.send('Network.setCacheDisabled', { cacheDisabled: true });
+  await cdp.send('Network.emulateNetworkConditions', NETWORK);
+  await cdp.send('Emulation.setCPUThrottlingRate', { rate: CPU_SLOWDOWN });
+
+  const urls = new Map<string, string>();
+  const done = new Map<string, number>();
+  let last = Date.now();
+  cdp.on('Network.requestWillBeSent', (e: { requestId: string; request: { url: string } }) => {
+    urls.set(e.requestId, e.request.url);
+    last = Date.now();
+  });
+  cdp.on('Network.loadingFinished', (e: { requestId: string; encodedDataLength: number }) => {
+    done.set(e.requestId, e.encodedDataLength);
+    last = Date.now();
+  });
+  const fromApp = () =>
+    [...done]
+      .filter(([id]) => (urls.get(id) ?? '').startsWith(appOrigin))
+      .map(([id, n]) => [urls.get(id)!, n] as const);
+
+  let atUsable: (readonly [string, number])[] = [];
+  let usable!: () => void;
+  const ready = new Promise<void>((resolve) => (usable = resolve));
+  await page.exposeFunction('__usable', () => {
+    atUsable = fromApp();
+    usable();
+  });
+  await page.addInitScript({ content: pageProbe(expected) });
+  const log = (what: string) => process.env.BENCH_DEBUG && console.error(`${path}: ${what}`);
+  log('going');
+  await page.goto(`${siteOrigin}${path}`, { waitUntil: 'commit' });
+  log('committed');
+  let timer: NodeJS.Timeout | undefined;
+  await Promise.race([
+    ready,
+    new Promise((_, reject) => {
+      timer = setTimeout(async () => {
+        const state = await page.evaluate(() => ({
+          ready: document.readyState,
+          hosts: [...document.querySelectorAll('wickstone-widget')].map((h) => h.getAttribute('data-state')),
+          usableAt: (window as unknown as { __usableAt: number | null }).__usableAt,
+        }));
+        reject(new Error(`${path} never became usable: ${JSON.stringify(state)}`));
+      }, 90_000);
+    }),
+  ]);
+  clearTimeout(timer);
+  log('usable');
+  const usableMs = await page.evaluate(() => (window as unknown as { __usableAt: number }).__usableAt);
+  // Quiet: nothing started or finished for a while.
+  while (Date.now() - last < QUIET_MS) await new Promise((r) => setTimeout(r, 200));
+
+  let typingMs: number | null = null;
+  if (typing) {
+    typingMs = (await page.evaluate(typeAndWait)) as number;
+  }
+  const cls = await page.evaluate(() => (window as unknown as { __cls: number }).__cls);
+  const heights = await page.evaluate(() =>
+    ((window as unknown as { __heights?: string[] }).__heights ?? []).join(' '),
+  );
+  const total = fromApp();
+  await context.close();
+  const sum = (list: (readonly [string, number])[]) => list.reduce((s, [, n]) => s + n, 0);
+  return {
+    requests: atUsable.length,
+    bytes: sum(atUsable),
+    totalRequests: total.length,
+    totalBytes: sum(total),
+    usableMs,
+    cls,
+    typingMs,
+    runtimeLoads: total.filter(([u]) => /runtime/.test(u)).length,
+    heights,
+  };
+}
+
+const db = await createTestDatabase({
+  PORT: String(appPort),
+  PUBLIC_URL: appOrigin,
+  BCRYPT_COST: '4',
+  // Another build's releases, to compare with (the "before" of a change).
+  ...(process.env.RELEASES_DIR ? { RELEASES_DIR: process.env.RELEASES_DIR } : {}),
+});
+const app = createApp({ config: db.config, sequelize: db.sequelize, logger: createLogger(db.config) });
+const appServer = createServer(app);
+const snippets = new Map<string, string>();
+const site = createServer((req, res) => {
+  const url = new URL(req.url ?? '/', siteOrigin);
+  let html: string | null = null;
+  if (url.pathname === '/')
+    html = sitePage(snippets.get('tube-rise') ?? '', snippets.get('soil-capillary-rise') ?? '');
+  else if (url.pathname === '/plain') html = sitePage('', '');
+  else if (url.pathname.startsWith('/one/')) html = sitePage(snippets.get(url.pathname.slice(5)) ?? '', '');
+  if (html === null) return void res.writeHead(404).end();
+  res.writeHead(200, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' }).end(html);
+});
+let browser: Browser | undefined;
+try {
+  await listen(appServer, appPort);
+  await listen(site, sitePort);
+  const org = await seedOrgWithTeam('Brackenridge Ground & Damp');
+  console.log('seeded');
+  const owner = new TestClient(app);
+  await owner.login(org.users.owner.email, org.users.owner.password);
+  for (const calc of calculators) {
+    const created = await owner
+      .post(`/orgs/${org.id}/widgets`, {
+        name: calc.title,
+        calculatorId: calc.id,
+        allowedOrigins: [siteOrigin],
+      })
+      .expect(201);
+    const settings: WidgetSettings = defaultWidgetSettings();
+    const live = await owner
+      .patch(`/orgs/${org.id}/widgets/${(created.body as { id: number }).id}`, { status: 'live', settings })
+      .expect(200);
+    snippets.set(calc.id, (live.body as { embed: { snippet: string } }).embed.snippet);
+  }
+  console.log(`${snippets.size} widgets live; launching Chromium`);
+  browser = await launchBrowser();
+  // One throwaway load so the first measured one does not pay for Chromium's own start.
+  await measure(browser, '/plain', 0, false);
+  const base = await measure(browser, '/plain', 0, false);
+
+  const kb = (n: number) => `${(n / 1024).toFixed(1)} KB`;
+  const ms = (n: number | null) => (n === null ? '—' : `${Math.round(n)} ms`);
+  console.log(
+    `first flight, Chromium over ${NETWORK.latency} ms RTT at ${(NETWORK.downloadThroughput / 1024).toFixed(0)} KB/s, CPU ${CPU_SLOWDOWN}× slower; bytes as sent (compressed), from the app's origin`,
+  );
+  console.log(`baseline: the firm's page with no widget, loaded in ${ms(base.usableMs)}`);
+  console.log(
+    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'CLS'.padStart(8)}${'type→result'.padStart(13)}${'runtimes'.padStart(10)}   shown/held px`,
+  );
+  const row = (name: string, f: Figures) =>
+    console.log(
+      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${f.cls.toFixed(3).padStart(8)}${ms(f.typingMs).padStart(13)}${String(f.runtimeLoads).padStart(10)}   ${f.heights}`,
+    );
+  for (const calc of calculators) row(calc.id, await measure(browser, `/one/${calc.id}`, 1, true));
+  row('two widgets (demo page)', await measure(browser, '/', 2, true));
+
+  // BENCH_SHOTS=<dir>: the demo page at desktop and phone widths, unthrottled, once settled.
+  if (process.env.BENCH_SHOTS) {
+    for (const width of [1280, 390]) {
+      const context = await browser.newContext({ viewport: { width, height: 900 } });
+      const page = await context.newPage();
+      await page.goto(`${siteOrigin}/`);
+      await page.waitForFunction(() => {
+        const hosts = [...document.querySelectorAll('wickstone-widget')];
+        return hosts.length === 2 && hosts.every((h) => h.getAttribute('data-state') === 'ready');
+      });
+      await page.evaluate(() => document.fonts.ready.then(() => undefined));
+      await page.waitForTimeout(1000);
+      const heights = await page.evaluate(() =>
+        [...document.querySelectorAll<HTMLElement>('wickstone-widget')].map(
+          (h) =>
+            `${Math.round(h.shadowRoot!.querySelector('[data-wickstone="root"] > .body')!.getBoundingClientRect().bottom - h.getBoundingClientRect().top)}/${h.style.minHeight}`,
+        ),
+      );
+      console.log(`${width} px: form bottom / held: ${heights.join(' ')}`);
+      await page.screenshot({ path: `${process.env.BENCH_SHOTS}/demo-${width}.png`, fullPage: true });
+      await context.close();
+    }
+  }
+} finally {
+  await browser?.close();
+  appServer.closeAllConnections();
+  await new Promise((r) => appServer.close(r));
+  site.closeAllConnections();
+  await new Promise((r) => site.close(r));
+  await db.drop();
+}
