@@ -82,105 +82,91 @@ const envSchema = z.object({
   TRUST_PROXY: bool.default(false),
 });
 
-export type Config = {
-  env: 'development' | 'test' | 'production';
-  host: string;
-  port: number;
-  publicUrl: string;
-  logLevel: z.infer<typeof envSchema>['LOG_LEVEL'];
-  db: { host: string; port: number; name: string; user: string; password: string; poolMax: number };
-  jwtSecret: string;
-  auth: {
-    bcryptCost: number;
-    sessionTtlS: number;
-    sessionMaxS: number;
-    /** Secure cookies everywhere except a loopback http address (local development and tests). */
-    secureCookies: boolean;
-  };
-  rateLimits: { loginPerAccount: number; loginPerIp: number; windowMs: number };
-  mail: {
-    smtpHost: string;
-    smtpPort: number;
-    smtpSecure: boolean;
-    smtpUser: string | undefined;
-    smtpPassword: string | undefined;
-    from: string;
-    fakeApiUrl: string | undefined;
-  };
-  dashboardDir: string | undefined;
-  releasesDir: string | undefined;
-  demo: { sitePort: number; snippetsFile: string | undefined };
-  embed: { leadsPerIp: number; leadsPerWidget: number; windowMs: number };
-  retention: { purgeIntervalMs: number; firstPurgeDelayMs: number; chunkSize: number };
-  trustProxy: boolean;
-};
+/**
+ * The environment checked and shaped into the config the app takes. The `Config` type is inferred
+ * from it, so the type and what `loadConfig` returns cannot drift apart.
+ */
+const configSchema = envSchema
+  .superRefine((e, ctx) => {
+    if (e.NODE_ENV !== 'production') return;
+    if (e.JWT_SECRET === DEV_JWT_SECRET)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['JWT_SECRET'],
+        message: 'set a secret of your own in production',
+      });
+    if (e.FAKE_MAIL_API_URL)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['FAKE_MAIL_API_URL'],
+        message: 'the fake mailbox is for local runs, not production',
+      });
+  })
+  .transform((e) => {
+    const publicUrl = e.PUBLIC_URL ?? `http://${e.HOST}:${e.PORT}`;
+    return {
+      env: e.NODE_ENV,
+      host: e.HOST,
+      port: e.PORT,
+      publicUrl,
+      logLevel: e.LOG_LEVEL,
+      db: {
+        host: e.DB_HOST,
+        port: e.DB_PORT,
+        name: e.DB_NAME,
+        user: e.DB_USER,
+        password: e.DB_PASSWORD,
+        poolMax: e.DB_POOL_MAX,
+      },
+      jwtSecret: e.JWT_SECRET,
+      auth: {
+        bcryptCost: e.BCRYPT_COST,
+        sessionTtlS: e.SESSION_TTL_MINUTES * 60,
+        sessionMaxS: e.SESSION_MAX_HOURS * 3600,
+        /** Secure cookies everywhere except a loopback http address (local development and tests). */
+        secureCookies: !isLoopbackHttp(publicUrl),
+      },
+      rateLimits: {
+        loginPerAccount: e.LOGIN_LIMIT_PER_ACCOUNT,
+        loginPerIp: e.LOGIN_LIMIT_PER_IP,
+        windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
+      },
+      mail: {
+        smtpHost: e.SMTP_HOST,
+        smtpPort: e.SMTP_PORT,
+        smtpSecure: e.SMTP_SECURE,
+        smtpUser: e.SMTP_USER,
+        smtpPassword: e.SMTP_PASSWORD,
+        from: e.MAIL_FROM,
+        fakeApiUrl: e.FAKE_MAIL_API_URL,
+      },
+      dashboardDir: e.DASHBOARD_DIR,
+      releasesDir: e.RELEASES_DIR,
+      demo: { sitePort: e.DEMO_SITE_PORT, snippetsFile: e.DEMO_SITE_FILE },
+      embed: {
+        leadsPerIp: e.LEAD_LIMIT_PER_IP,
+        leadsPerWidget: e.LEAD_LIMIT_PER_WIDGET,
+        windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
+      },
+      retention: {
+        purgeIntervalMs: e.RETENTION_PURGE_INTERVAL_HOURS * 3_600_000,
+        firstPurgeDelayMs: e.RETENTION_FIRST_PURGE_MINUTES * 60_000,
+        chunkSize: e.RETENTION_PURGE_CHUNK,
+      },
+      trustProxy: e.TRUST_PROXY,
+    };
+  });
+
+export type Config = z.output<typeof configSchema>;
 
 /** Parse the environment once; everything else takes a `Config`, never `process.env`. */
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
-  const parsed = envSchema.safeParse(env);
+  const parsed = configSchema.safeParse(env);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
-  const e = parsed.data;
-  if (e.NODE_ENV === 'production') {
-    const wrong: string[] = [];
-    if (e.JWT_SECRET === DEV_JWT_SECRET) wrong.push('  JWT_SECRET: set a secret of your own in production');
-    if (e.FAKE_MAIL_API_URL)
-      wrong.push('  FAKE_MAIL_API_URL: the fake mailbox is for local runs, not production');
-    if (wrong.length) throw new Error(`Invalid configuration:\n${wrong.join('\n')}`);
-  }
-  const publicUrl = e.PUBLIC_URL ?? `http://${e.HOST}:${e.PORT}`;
-  return {
-    env: e.NODE_ENV,
-    host: e.HOST,
-    port: e.PORT,
-    publicUrl,
-    logLevel: e.LOG_LEVEL,
-    db: {
-      host: e.DB_HOST,
-      port: e.DB_PORT,
-      name: e.DB_NAME,
-      user: e.DB_USER,
-      password: e.DB_PASSWORD,
-      poolMax: e.DB_POOL_MAX,
-    },
-    jwtSecret: e.JWT_SECRET,
-    auth: {
-      bcryptCost: e.BCRYPT_COST,
-      sessionTtlS: e.SESSION_TTL_MINUTES * 60,
-      sessionMaxS: e.SESSION_MAX_HOURS * 3600,
-      secureCookies: !isLoopbackHttp(publicUrl),
-    },
-    rateLimits: {
-      loginPerAccount: e.LOGIN_LIMIT_PER_ACCOUNT,
-      loginPerIp: e.LOGIN_LIMIT_PER_IP,
-      windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
-    },
-    mail: {
-      smtpHost: e.SMTP_HOST,
-      smtpPort: e.SMTP_PORT,
-      smtpSecure: e.SMTP_SECURE,
-      smtpUser: e.SMTP_USER,
-      smtpPassword: e.SMTP_PASSWORD,
-      from: e.MAIL_FROM,
-      fakeApiUrl: e.FAKE_MAIL_API_URL,
-    },
-    dashboardDir: e.DASHBOARD_DIR,
-    releasesDir: e.RELEASES_DIR,
-    demo: { sitePort: e.DEMO_SITE_PORT, snippetsFile: e.DEMO_SITE_FILE },
-    embed: {
-      leadsPerIp: e.LEAD_LIMIT_PER_IP,
-      leadsPerWidget: e.LEAD_LIMIT_PER_WIDGET,
-      windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
-    },
-    retention: {
-      purgeIntervalMs: e.RETENTION_PURGE_INTERVAL_HOURS * 3_600_000,
-      firstPurgeDelayMs: e.RETENTION_FIRST_PURGE_MINUTES * 60_000,
-      chunkSize: e.RETENTION_PURGE_CHUNK,
-    },
-    trustProxy: e.TRUST_PROXY,
-  };
+  return parsed.data;
 }
 
 /** A browser sends a Secure cookie over https or to loopback only; keep cookies unsecured just for loopback http. */

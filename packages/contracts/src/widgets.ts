@@ -168,15 +168,20 @@ export const widgetRevisionSchema = z.object({
   changes: z.array(z.object({ path: z.string(), before: z.unknown(), after: z.unknown() })),
   createdAt: z.string(),
 });
+export type WidgetRevision = z.infer<typeof widgetRevisionSchema>;
 export const widgetRevisionListSchema = z.object({
   items: z.array(widgetRevisionSchema),
   total: z.number().int(),
 });
 
+/** The image types a logo may be (checked by content, not by name). */
+export const imageTypes = ['image/png', 'image/jpeg', 'image/webp'] as const;
+export type ImageType = (typeof imageTypes)[number];
+
 export const assetSchema = z.object({
   id: z.number().int(),
   url: z.string(),
-  contentType: z.enum(['image/png', 'image/jpeg', 'image/webp']),
+  contentType: z.enum(imageTypes),
   bytes: z.number().int(),
   width: z.number().int().nullable(),
   height: z.number().int().nullable(),

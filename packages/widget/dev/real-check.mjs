@@ -1,19 +1,19 @@
-// Dev-only smoke check against the real server (apps/server/dist) over a fresh test database:
+// Dev-only smoke check against the real server (from its source) over a fresh test database:
 // a widget made through the API, its real embed snippet on a page of another origin in Debian's
 // Chromium, a run and a lead, then the rows in MariaDB. The product's end-to-end test lives in
 // tests/; this is for checking the bundle against the server while both are being built.
-// Usage: npm run test:env, then set -a; . ../../var/test-env.env; set +a; node dev/real-check.mjs
-// (after building server and widget)
+// Usage: npm run test:env, then set -a; . ../../var/test-env.env; set +a; npx tsx dev/real-check.mjs
+// (after building the widget; tsx, because the server's test helpers are TypeScript in no build)
 import assert from 'node:assert/strict';
 import { createServer } from 'node:http';
 import { fileURLToPath } from 'node:url';
 import { QueryTypes } from 'sequelize';
 import { chromium } from 'playwright-core';
 
-// SERVER_TESTING points at another build of the server's testing module (a fresher one than the
-// workspace's dist while the server is in progress); the workspace's by default.
+// The server's test helpers (apps/server/testing/), which ship in no build: SERVER_TESTING may point
+// at another copy of them.
 const { createTestApp, seedOrgWithTeam, TestClient } = await import(
-  process.env.SERVER_TESTING ?? '@wickstone/server/testing'
+  process.env.SERVER_TESTING ?? new URL('../../../apps/server/testing/index.ts', import.meta.url).href
 );
 
 // The host pages come from real loopback servers too (in this process): Chromium will not let a

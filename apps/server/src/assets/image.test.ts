@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { inspectImage, MAX_LOGO_BYTES } from './image.js';
 import { AppError } from '../errors.js';
-import { makePng } from '../testing/images.js';
+import { makePng } from '../../testing/images.js';
 
 function refusal(buf: Buffer): string {
   try {

@@ -1,10 +1,9 @@
 import { imageSize } from 'image-size';
+import type { ImageType } from '@wickstone/contracts';
 import { fieldError } from '../errors.js';
 
 export const MAX_LOGO_BYTES = 512 * 1024;
 const MAX_SIDE_PX = 4096;
-
-export type ImageType = 'image/png' | 'image/jpeg' | 'image/webp';
 
 /** Magic numbers: PNG (ISO/IEC 15948 signature), JPEG (SOI + marker), WebP (RIFF container, "WEBP" form). */
 function sniff(buf: Buffer): ImageType | null {

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditResponseSchema, type AuditEntry } from '@wickstone/contracts';
 import { AuditEvent, Membership } from '../db/models/index.js';
-import { TestClient, createTestApp, type TestApp } from '../testing/client.js';
-import { seedOrgWithTeam, uniqueEmail, type FixtureOrg } from '../testing/fixtures.js';
+import { TestClient, createTestApp, type TestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, uniqueEmail, type FixtureOrg } from '../../testing/fixtures.js';
 
 describe('the audit log', () => {
   let t: TestApp;

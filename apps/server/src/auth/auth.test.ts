@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { errorBodySchema, meResponseSchema } from '@wickstone/contracts';
-import { TestClient, createTestApp, linkToken, mailbox, type TestApp } from '../testing/client.js';
-import { uniqueEmail } from '../testing/fixtures.js';
+import { TestClient, createTestApp, linkToken, mailbox, type TestApp } from '../../testing/client.js';
+import { uniqueEmail } from '../../testing/fixtures.js';
 
 describe('sign-up, sign-in, sign-out and password reset', () => {
   let t: TestApp;

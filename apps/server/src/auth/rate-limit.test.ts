@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestApp, type TestApp, TestClient } from '../testing/client.js';
-import { seedOrgWithTeam, type FixtureOrg } from '../testing/fixtures.js';
+import { createTestApp, type TestApp, TestClient } from '../../testing/client.js';
+import { seedOrgWithTeam, type FixtureOrg } from '../../testing/fixtures.js';
 
 /*
  * Sign-in limits: per account (3 failures here) and per client address (5 here). The app trusts

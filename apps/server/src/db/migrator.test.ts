@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
-import { createTestDatabase, type TestDatabase } from '../testing/db.js';
+import { createTestDatabase, type TestDatabase } from '../../testing/db.js';
 import { createMigrator, migrateUp } from './migrator.js';
 import { migrations } from './migrations/index.js';
 

@@ -3,8 +3,8 @@ import request from 'supertest';
 import { devMailResponseSchema } from '@wickstone/contracts';
 import { createApp } from '../app.js';
 import { createLogger } from '../logger.js';
-import { TestClient, createTestApp, type TestApp } from '../testing/client.js';
-import { seedOrgWithTeam, uniqueEmail } from '../testing/fixtures.js';
+import { TestClient, createTestApp, type TestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, uniqueEmail } from '../../testing/fixtures.js';
 
 describe('GET /api/v1/dev/mail', () => {
   let t: TestApp;

@@ -11,7 +11,7 @@ import {
   uniqueEmail,
   type FixtureOrg,
   type TestApp,
-} from '../testing/index.js';
+} from '../../testing/index.js';
 import { Lead, Run } from '../db/models/index.js';
 
 const SITE = 'https://www.brackenridge-ground.example';

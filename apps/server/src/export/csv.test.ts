@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { csvCell, csvRow, UTF8_BOM } from './csv.js';
-import { readCsv } from '../testing/csv.js';
+import { readCsv } from '../../testing/csv.js';
 
 describe('CSV cells (RFC 4180)', () => {
   it.each([

@@ -4,7 +4,7 @@ import type { Express } from 'express';
 import { errorBodySchema, healthResponseSchema } from '@wickstone/contracts';
 import { createApp } from '../app.js';
 import { createLogger } from '../logger.js';
-import { createTestDatabase, type TestDatabase } from '../testing/db.js';
+import { createTestDatabase, type TestDatabase } from '../../testing/db.js';
 
 describe('GET /api/v1/health', () => {
   let db: TestDatabase;

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { can, permissions, roles, type Role } from '@wickstone/contracts';
 import { routeTable } from '../app.js';
-import { TestClient, createTestApp } from '../testing/client.js';
-import { seedOrgWithTeam, type FixtureOrg } from '../testing/fixtures.js';
-import { probeUrl, routeKey } from '../testing/routes.js';
+import { TestClient, createTestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, type FixtureOrg } from '../../testing/fixtures.js';
+import { probeUrl, routeKey } from '../../testing/routes.js';
 import type { RouteRecord } from './routes.js';
 
 /*

@@ -2,9 +2,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { z } from 'zod';
 import type request from 'supertest';
 import { routeTable } from '../app.js';
-import { TestClient, createTestApp } from '../testing/client.js';
-import { seedOrgWithTeam, snapshotTables, type FixtureOrg } from '../testing/fixtures.js';
-import { probeUrl, routeKey } from '../testing/routes.js';
+import { TestClient, createTestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, snapshotTables, type FixtureOrg } from '../../testing/fixtures.js';
+import { probeUrl, routeKey } from '../../testing/routes.js';
 import type { RouteRecord } from './routes.js';
 
 /*

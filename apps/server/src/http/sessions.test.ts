@@ -4,9 +4,9 @@ import request from 'supertest';
 import { routeTable } from '../app.js';
 import { createLogger } from '../logger.js';
 import { Membership, User } from '../db/models/index.js';
-import { TestClient, createTestApp } from '../testing/client.js';
-import { seedOrgWithTeam, snapshotTables, uniqueEmail, type FixtureOrg } from '../testing/fixtures.js';
-import { probeUrl, routeKey } from '../testing/routes.js';
+import { TestClient, createTestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, snapshotTables, uniqueEmail, type FixtureOrg } from '../../testing/fixtures.js';
+import { probeUrl, routeKey } from '../../testing/routes.js';
 import { createSessions, deriveKey } from './session.js';
 
 /*

@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { routeTable } from '../app.js';
 import { Invitation, User } from '../db/models/index.js';
-import { TestClient, createTestApp } from '../testing/client.js';
-import { seedOrgWithTeam, snapshotTables, uniqueEmail, type FixtureOrg } from '../testing/fixtures.js';
-import { probeUrl, routeKey } from '../testing/routes.js';
-import { liveWidget, reportRun, requestAssessment } from '../usage/fixtures.js';
+import { TestClient, createTestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, snapshotTables, uniqueEmail, type FixtureOrg } from '../../testing/fixtures.js';
+import { probeUrl, routeKey } from '../../testing/routes.js';
+import { liveWidget, reportRun, requestAssessment } from '../../testing/usage.js';
 
 /*
  * Two organisations. Everything of one, asked for by the other, answers 404 and changes nothing:

@@ -7,8 +7,8 @@ import {
   membersResponseSchema,
 } from '@wickstone/contracts';
 import { Invitation, Membership } from '../db/models/index.js';
-import { TestClient, createTestApp, linkToken, mailbox, type TestApp } from '../testing/client.js';
-import { seedOrgWithTeam, uniqueEmail, type FixtureOrg } from '../testing/fixtures.js';
+import { TestClient, createTestApp, linkToken, mailbox, type TestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, uniqueEmail, type FixtureOrg } from '../../testing/fixtures.js';
 
 describe('invitations', () => {
   let t: TestApp;

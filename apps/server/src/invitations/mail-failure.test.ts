@@ -3,8 +3,8 @@ import { invitationSchema } from '@wickstone/contracts';
 import { loadConfig } from '../config.js';
 import { Invitation } from '../db/models/index.js';
 import { createSmtpMailer, type Mailer } from '../mail/mailer.js';
-import { TestClient, createTestApp, linkToken, mailbox, type TestApp } from '../testing/client.js';
-import { seedOrgWithTeam, uniqueEmail } from '../testing/fixtures.js';
+import { TestClient, createTestApp, linkToken, mailbox, type TestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, uniqueEmail } from '../../testing/fixtures.js';
 
 describe('when the mail relay is down', () => {
   let t: TestApp;

@@ -7,10 +7,16 @@ import {
   TestClient,
   type FixtureOrg,
   type TestApp,
-} from '../testing/index.js';
+} from '../../testing/index.js';
 import { UTF8_BOM } from '../export/csv.js';
-import { readCsv } from '../testing/csv.js';
-import { fieldsOf, liveWidget, reportRun, requestAssessment, type FixtureWidget } from '../usage/fixtures.js';
+import { readCsv } from '../../testing/csv.js';
+import {
+  fieldsOf,
+  liveWidget,
+  reportRun,
+  requestAssessment,
+  type FixtureWidget,
+} from '../../testing/usage.js';
 import { rollupsFromRaw, storedRollups } from '../usage/rollups.js';
 
 describe('leads', () => {

@@ -6,8 +6,8 @@ import {
   organizationResponseSchema,
 } from '@wickstone/contracts';
 import { Membership } from '../db/models/index.js';
-import { TestClient, createTestApp, type TestApp } from '../testing/client.js';
-import { seedOrgWithTeam, type FixtureOrg } from '../testing/fixtures.js';
+import { TestClient, createTestApp, type TestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, type FixtureOrg } from '../../testing/fixtures.js';
 
 describe('members: roles and removal', () => {
   let t: TestApp;

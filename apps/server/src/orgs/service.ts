@@ -1,5 +1,12 @@
 import { Op, type Sequelize, type Transaction } from 'sequelize';
-import { can, canAssignRole, type Member, type MembersResponse, type Role } from '@wickstone/contracts';
+import {
+  can,
+  canAssignRole,
+  type Member,
+  type MembersResponse,
+  type OrganizationResponse,
+  type Role,
+} from '@wickstone/contracts';
 import { Invitation, Membership, User } from '../db/models/index.js';
 import { AppError, fieldError } from '../errors.js';
 import type { AuditService } from '../audit/service.js';
@@ -12,15 +19,8 @@ export interface Actor {
   org: OrgScope;
 }
 
-export interface OrganizationDto {
-  id: number;
-  name: string;
-  slug: string;
-  role: Role;
-}
-
 export interface OrgService {
-  get(org: OrgScope): OrganizationDto;
+  get(org: OrgScope): OrganizationResponse;
   listMembers(org: OrgScope, withInvitations: boolean): Promise<MembersResponse>;
   changeRole(actor: Actor, userId: number, role: Role, meta: RequestMeta): Promise<Member>;
   removeMember(actor: Actor, userId: number, meta: RequestMeta): Promise<void>;

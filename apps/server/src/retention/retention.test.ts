@@ -8,9 +8,9 @@ import {
   TestClient,
   type FixtureOrg,
   type TestApp,
-} from '../testing/index.js';
+} from '../../testing/index.js';
 import { storeLeadsForRuns, type RunRow } from '../runs/store.js';
-import { fieldsOf, liveWidget, runAt, store, type FixtureWidget } from '../usage/fixtures.js';
+import { fieldsOf, liveWidget, runAt, store, type FixtureWidget } from '../../testing/usage.js';
 import { rollupsFromRaw, storedRollups } from '../usage/rollups.js';
 import { startRetentionSchedule } from './schedule.js';
 import { createRetentionService, retentionCutoff, type RetentionService } from './service.js';

@@ -7,9 +7,9 @@ import {
   TestClient,
   type FixtureOrg,
   type TestApp,
-} from '../testing/index.js';
+} from '../../testing/index.js';
 import { UTF8_BOM } from '../export/csv.js';
-import { readCsv } from '../testing/csv.js';
+import { readCsv } from '../../testing/csv.js';
 import {
   fieldsOf,
   liveWidget,
@@ -20,7 +20,7 @@ import {
   SITE,
   store,
   type FixtureWidget,
-} from '../usage/fixtures.js';
+} from '../../testing/usage.js';
 import { EXPORT_CHUNK } from './service.js';
 
 /*

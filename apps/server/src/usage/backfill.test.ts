@@ -1,13 +1,13 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultWidgetSettings } from '@wickstone/contracts';
-import { createTestDatabase, type TestDatabase } from '../testing/db.js';
-import { seedOrgWithTeam } from '../testing/fixtures.js';
+import { createTestDatabase, type TestDatabase } from '../../testing/db.js';
+import { seedOrgWithTeam } from '../../testing/fixtures.js';
 import { createMigrator } from '../db/migrator.js';
 import { Lead, Run, Widget } from '../db/models/index.js';
 import { inventRun } from '../runs/invent.js';
 import { rollupsFromRaw, storedRollups } from './rollups.js';
-import { SITE, PORTAL } from './fixtures.js';
+import { SITE, PORTAL } from '../../testing/usage.js';
 
 const MIGRATION = '20261202020600-usage-rollups-and-retention';
 

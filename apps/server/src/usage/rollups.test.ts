@@ -6,7 +6,7 @@ import {
   TestClient,
   type FixtureOrg,
   type TestApp,
-} from '../testing/index.js';
+} from '../../testing/index.js';
 import { createRetentionService } from '../retention/service.js';
 import { seededRandom } from '../runs/invent.js';
 import {
@@ -18,7 +18,7 @@ import {
   SITE,
   store,
   type FixtureWidget,
-} from './fixtures.js';
+} from '../../testing/usage.js';
 import { rollupsFromRaw, storedRollups } from './rollups.js';
 
 const INPUTS: Record<string, Record<string, number | string>[]> = {

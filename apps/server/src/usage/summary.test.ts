@@ -7,7 +7,7 @@ import {
   TestClient,
   type FixtureOrg,
   type TestApp,
-} from '../testing/index.js';
+} from '../../testing/index.js';
 import { storeLeadsForRuns, type RunRow } from '../runs/store.js';
 import {
   fieldsOf,
@@ -18,7 +18,7 @@ import {
   SITE,
   store,
   type FixtureWidget,
-} from './fixtures.js';
+} from '../../testing/usage.js';
 
 /*
  * The usage summary against a fixture small enough to count by hand. The expected numbers below

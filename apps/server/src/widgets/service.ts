@@ -10,6 +10,7 @@ import {
 import {
   defaultWidgetSettings,
   type Widget as WidgetDto,
+  type WidgetRevision as WidgetRevisionDto,
   type WidgetSettings,
   type WidgetStatus,
   type createWidgetBodySchema,
@@ -42,16 +43,8 @@ export interface WidgetService {
     widgetId: number,
     page: number,
     pageSize: number,
-  ): Promise<{ items: RevisionDto[]; total: number }>;
+  ): Promise<{ items: WidgetRevisionDto[]; total: number }>;
   toDto(widget: Widget): WidgetDto;
-}
-
-export interface RevisionDto {
-  id: number;
-  widgetId: number;
-  author: { id: number; name: string } | null;
-  changes: { path: string; before: unknown; after: unknown }[];
-  createdAt: string;
 }
 
 function newPublicKey(): string {

@@ -6,8 +6,8 @@ import {
   TestClient,
   type FixtureOrg,
   type TestApp,
-} from '../testing/index.js';
-import { makePng } from '../testing/images.js';
+} from '../../testing/index.js';
+import { makePng } from '../../testing/images.js';
 import { WidgetRevision } from '../db/models/index.js';
 
 const fieldsOf = (body: unknown) =>

@@ -6,11 +6,12 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
+import type { ImageType } from '@wickstone/contracts';
 
 export class Asset extends Model<InferAttributes<Asset>, InferCreationAttributes<Asset>> {
   declare id: CreationOptional<number>;
   declare organizationId: number;
-  declare contentType: 'image/png' | 'image/jpeg' | 'image/webp';
+  declare contentType: ImageType;
   declare bytes: number;
   declare width: number | null;
   declare height: number | null;

@@ -6,8 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
-
-export type LeadStatus = 'new' | 'contacted' | 'qualified' | 'closed';
+import { leadStatuses, type LeadStatus } from '@wickstone/contracts';
 
 export class Lead extends Model<InferAttributes<Lead>, InferCreationAttributes<Lead>> {
   declare id: CreationOptional<number>;
@@ -38,7 +37,7 @@ export class Lead extends Model<InferAttributes<Lead>, InferCreationAttributes<L
         widgetId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         runId: { type: DataTypes.CHAR(36), allowNull: true },
         status: {
-          type: DataTypes.ENUM('new', 'contacted', 'qualified', 'closed'),
+          type: DataTypes.ENUM(...leadStatuses),
           allowNull: false,
           defaultValue: 'new',
         },

@@ -6,6 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
+import { unitSystems, type UnitSystem } from '@wickstone/contracts';
 
 /** What calc-core gave, kept as JSON: outputs, warning codes, working, band, version, input hash. */
 export type StoredResult = Record<string, unknown>;
@@ -19,7 +20,7 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
   declare pageUrl: string | null;
   declare release: string;
   declare calcVersion: string;
-  declare unitSystem: 'si' | 'us';
+  declare unitSystem: UnitSystem;
   declare inputs: Record<string, number | string>;
   declare clientResult: StoredResult;
   declare serverResult: StoredResult | null;
@@ -42,7 +43,7 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
         pageUrl: { type: DataTypes.STRING(2000), allowNull: true },
         release: { type: DataTypes.STRING(40), allowNull: false },
         calcVersion: { type: DataTypes.STRING(40), allowNull: false },
-        unitSystem: { type: DataTypes.ENUM('si', 'us'), allowNull: false },
+        unitSystem: { type: DataTypes.ENUM(...unitSystems), allowNull: false },
         inputs: { type: DataTypes.JSON, allowNull: false },
         clientResult: { type: DataTypes.JSON, allowNull: false },
         serverResult: { type: DataTypes.JSON, allowNull: true },

@@ -6,7 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
-import type { WidgetSettings, WidgetStatus } from '@wickstone/contracts';
+import { widgetStatuses, type WidgetSettings, type WidgetStatus } from '@wickstone/contracts';
 
 export class Widget extends Model<InferAttributes<Widget>, InferCreationAttributes<Widget>> {
   declare id: CreationOptional<number>;
@@ -29,7 +29,7 @@ export class Widget extends Model<InferAttributes<Widget>, InferCreationAttribut
         publicKey: { type: DataTypes.CHAR(23), allowNull: false, unique: true },
         name: { type: DataTypes.STRING(120), allowNull: false },
         calculatorId: { type: DataTypes.STRING(60), allowNull: false },
-        status: { type: DataTypes.ENUM('draft', 'live', 'paused'), allowNull: false, defaultValue: 'draft' },
+        status: { type: DataTypes.ENUM(...widgetStatuses), allowNull: false, defaultValue: 'draft' },
         allowedOrigins: { type: DataTypes.JSON, allowNull: false },
         settings: { type: DataTypes.JSON, allowNull: false },
         release: { type: DataTypes.STRING(40), allowNull: false },

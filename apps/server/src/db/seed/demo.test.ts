@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Membership, Organization, User } from '../models/index.js';
-import { TestClient, createTestApp, type TestApp } from '../../testing/client.js';
-import { snapshotTables } from '../../testing/fixtures.js';
+import { TestClient, createTestApp, type TestApp } from '../../../testing/client.js';
+import { snapshotTables } from '../../../testing/fixtures.js';
 import { DEMO_PASSWORD, demoUsers, seedDemo } from './demo.js';
 
 describe('the demo seed', () => {

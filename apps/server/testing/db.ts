@@ -1,10 +1,10 @@
 import { randomBytes } from 'node:crypto';
 import * as mariadb from 'mariadb';
 import type { Sequelize } from 'sequelize';
-import { loadConfig, type Config } from '../config.js';
-import { createSequelize } from '../db/sequelize.js';
-import { initModels } from '../db/models/index.js';
-import { migrateUp } from '../db/migrator.js';
+import { loadConfig, type Config } from '../src/config.js';
+import { createSequelize } from '../src/db/sequelize.js';
+import { initModels } from '../src/db/models/index.js';
+import { migrateUp } from '../src/db/migrator.js';
 
 export interface TestDatabase {
   config: Config;

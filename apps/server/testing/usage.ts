@@ -4,9 +4,9 @@ import type { Express } from 'express';
 import type { Sequelize } from 'sequelize';
 import { calculate } from '@wickstone/calc-core';
 import { errorBodySchema, widgetSchema, type WidgetSettings } from '@wickstone/contracts';
-import type { TestClient } from '../testing/client.js';
-import { inventRun, type InventedRun, type RunWidget } from '../runs/invent.js';
-import { storeRuns, type RunRow } from '../runs/store.js';
+import type { TestClient } from './client.js';
+import { inventRun, type InventedRun, type RunWidget } from '../src/runs/invent.js';
+import { storeRuns, type RunRow } from '../src/runs/store.js';
 
 /*
  * Fixtures for the usage and lead tests: live widgets made through the API, runs at chosen times

@@ -1,4 +1,4 @@
-import type { RouteRecord } from '../http/routes.js';
+import type { RouteRecord } from '../src/http/routes.js';
 
 /**
  * For the generated route tests: a concrete URL for a route pattern. Organisation ids come from

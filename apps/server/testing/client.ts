@@ -1,7 +1,7 @@
 import request from 'supertest';
 import type { Express } from 'express';
-import { createApp, type AppDeps } from '../app.js';
-import { createLogger } from '../logger.js';
+import { createApp, type AppDeps } from '../src/app.js';
+import { createLogger } from '../src/logger.js';
 import { createTestDatabase, type TestDatabase } from './db.js';
 
 export const API = '/api/v1';

@@ -3,7 +3,7 @@ import bcrypt from 'bcryptjs';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { Role } from '@wickstone/contracts';
 import { roles } from '@wickstone/contracts';
-import { Membership, Organization, User } from '../db/models/index.js';
+import { Membership, Organization, User } from '../src/db/models/index.js';
 
 /** An address no other test uses, on a reserved domain. */
 export function uniqueEmail(tag = 'user'): string {
