@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditResponseSchema, type AuditEntry } from '@wickstone/contracts';
-import { TestClient, createTestApp, type TestApp } from '../testing/client.js';
-import { seedOrgWithTeam, type FixtureOrg } from '../testing/fixtures.js';
-import { liveWidget, reportRun, requestAssessment, type FixtureWidget } from '../usage/fixtures.js';
+import { TestClient, createTestApp, type TestApp } from '../../testing/client.js';
+import { seedOrgWithTeam, type FixtureOrg } from '../../testing/fixtures.js';
+import { liveWidget, reportRun, requestAssessment, type FixtureWidget } from '../../testing/usage.js';
 
 // Every change that matters leaves an entry in the organisation's audit log, with who, what and
 // from where, in the same transaction as the change; a refused change leaves none.
