@@ -37,6 +37,6 @@ export function withExtras(then: (m: ExtrasModule) => void): () => void {
 /** The extras module in a component: null until it is here, then a re-render with it. */
 export function useExtras(): ExtrasModule | null {
   const [m, setM] = useState<ExtrasModule | null>(loaded);
-  useEffect(() => (m ? undefined : withExtras(setM)), []);
+  useEffect(() => (m ? undefined : withExtras(setM)), [m]);
   return m;
 }
