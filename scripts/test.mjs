@@ -13,6 +13,7 @@ import {
 } from './lib/mariadb.mjs';
 import { log, root, run, runStatus, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
 import { build, ensureChromium, ensureNodeModules } from './lib/setup.mjs';
+import { startFakePayments } from './lib/payments.mjs';
 
 const dbPort = Number(process.env.TEST_DB_PORT ?? 3308);
 const smtpPort = Number(process.env.TEST_SMTP_PORT ?? 2526);
@@ -72,6 +73,9 @@ try {
     }),
   );
   await waitForHttp(`http://127.0.0.1:${mailHttpPort}/messages`);
+  const payments = await startFakePayments({ port: Number(process.env.TEST_FAKE_PAYMENTS_PORT ?? 12111) });
+  children.push(payments.child);
+  Object.assign(env, payments.env);
 
   log('running every test (vitest run)');
   code = runStatus('npx', ['vitest', 'run'], { env });

@@ -80,6 +80,12 @@ const envSchema = z.object({
   /** Runs or leads deleted per purge transaction: short transactions, short row locks. */
   RETENTION_PURGE_CHUNK: z.coerce.number().int().min(10).max(50_000).default(2000),
   TRUST_PROXY: bool.default(false),
+  /** The payments provider's API; unset means the provider's own host. Locally, the fake (scripts/fake-payments.mjs). */
+  PAYMENTS_API_URL: z.url().optional(),
+  /** Without a secret key the billing routes answer 503 and every firm is held to its stored plan. */
+  PAYMENTS_SECRET_KEY: z.string().min(8).optional(),
+  /** The signing secret of our webhook endpoint at the provider. */
+  PAYMENTS_WEBHOOK_SECRET: z.string().min(8).optional(),
 });
 
 export type Config = {
@@ -113,6 +119,11 @@ export type Config = {
   embed: { leadsPerIp: number; leadsPerWidget: number; windowMs: number };
   retention: { purgeIntervalMs: number; firstPurgeDelayMs: number; chunkSize: number };
   trustProxy: boolean;
+  payments: {
+    apiUrl: string | undefined;
+    secretKey: string | undefined;
+    webhookSecret: string | undefined;
+  };
 };
 
 /** Parse the environment once; everything else takes a `Config`, never `process.env`. */
@@ -180,6 +191,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       chunkSize: e.RETENTION_PURGE_CHUNK,
     },
     trustProxy: e.TRUST_PROXY,
+    payments: {
+      apiUrl: e.PAYMENTS_API_URL,
+      secretKey: e.PAYMENTS_SECRET_KEY,
+      webhookSecret: e.PAYMENTS_WEBHOOK_SECRET,
+    },
   };
 }
 

@@ -138,6 +138,8 @@ export const auditEventTypes = [
   'member.joined',
   'member.role_changed',
   'member.removed',
+  'billing.plan_changed',
+  'billing.cancel_requested',
 ] as const;
 export const auditEntrySchema = z.object({
   id: z.number().int(),
