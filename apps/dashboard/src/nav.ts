@@ -18,6 +18,7 @@ export const orgNav: readonly NavEntry[] = [
   { label: 'Leads', path: 'leads', permission: 'leads:read' },
   { label: 'Team', path: 'team', permission: 'members:read' },
   { label: 'Audit log', path: 'audit', permission: 'audit:read' },
+  { label: 'Billing', path: 'billing', permission: 'billing:manage' },
 ];
 
 export function orgPath(orgId: number, path = ''): string {

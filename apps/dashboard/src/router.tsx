@@ -21,6 +21,7 @@ import { OverviewPage } from './routes/overview';
 import { TeamPage } from './routes/team';
 import { AuditPage } from './routes/audit';
 import { AccountPage } from './routes/account';
+import { BillingPage } from './routes/billing';
 import { widgetRoutes } from './routes/widgets-routes';
 import { usageRoutes } from './routes/usage-routes';
 
@@ -62,6 +63,7 @@ export const router = createBrowserRouter([
               { index: true, element: guarded('org:read', <OverviewPage />) },
               { path: 'team', element: guarded('members:read', <TeamPage />) },
               { path: 'audit', element: guarded('audit:read', <AuditPage />) },
+              { path: 'billing', element: guarded('billing:manage', <BillingPage />) },
               ...widgetRoutes,
               ...usageRoutes,
               { path: '*', element: <NotFoundPage /> },

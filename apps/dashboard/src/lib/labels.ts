@@ -27,6 +27,8 @@ export const auditLabel: Record<AuditEntry['type'], string> = {
   'member.joined': 'Joined the team',
   'member.role_changed': 'Role changed',
   'member.removed': 'Removed from the team',
+  'billing.plan_changed': 'Plan changed',
+  'billing.cancel_requested': 'Plan set to end',
 };
 
 const dateTime = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });

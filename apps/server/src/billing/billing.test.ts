@@ -6,6 +6,7 @@ import { seedOrgWithTeam, snapshotTables, type FixtureOrg } from '../testing/fix
 import { CARD_DECLINED, CARD_OK, startBillingApp, type BillingTestApp } from '../testing/payments.js';
 import { liveWidget, reportRun, runAt, SITE, store } from '../usage/fixtures.js';
 import { BillingAccount } from '../db/models/index.js';
+import { seedDemoBilling } from '../db/seed/demo-billing.js';
 
 /*
  * Billing against the payments fake, through the SDK, with webhooks delivered to this app over
@@ -334,5 +335,26 @@ describe('limits', () => {
     // No second notice for the same level in the same month.
     await reportRun(t.app, w, { diameter: 0.001 });
     expect(await mailbox(t.db.config.mail.fakeApiUrl, org.users.owner.email, 3, 300)).toHaveLength(2);
+  });
+});
+
+describe('the demo seed', () => {
+  it('puts the demo firm on a paid plan with months of invoices made at the provider', async () => {
+    const { org, owner } = await firm();
+    const line = await seedDemoBilling(t.db.sequelize, t.sdk, org, org.users.owner.email, t.url);
+    expect(line).toBe('demo plan: Field, paid, with 4 invoices at the payments fake');
+    expect(await summaryOf(owner, org.id)).toMatchObject({ plan: 'field', state: 'active' });
+    const invoices = (await owner.get(`/orgs/${org.id}/billing/invoices`).expect(200)).body.items as {
+      status: string;
+      createdAt: string;
+    }[];
+    expect(invoices.map((i) => i.status)).toEqual(['paid', 'paid', 'paid', 'paid']);
+    // Monthly, newest first, the oldest about three months back.
+    const ages = invoices.map((i) => (Date.now() - Date.parse(i.createdAt)) / 86_400_000);
+    expect(ages[3]).toBeGreaterThan(85);
+    expect(ages[3]).toBeLessThan(94);
+    expect(await seedDemoBilling(t.db.sequelize, t.sdk, org, org.users.owner.email, t.url)).toBe(
+      'demo plan: Field (already set)',
+    );
   });
 });

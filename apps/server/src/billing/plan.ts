@@ -42,3 +42,20 @@ export function standingOf(account: BillingAccount | null): PlanStanding {
 export async function standingFor(orgId: number, transaction?: Transaction): Promise<PlanStanding> {
   return standingOf(await BillingAccount.findByPk(orgId, { transaction }));
 }
+
+/** A billing row with no subscription at the provider: the free plan, or a plan granted without one. */
+export function accountRow(
+  organizationId: number,
+  opts: { plan?: PlanId; status?: string; customerId?: string | null } = {},
+) {
+  return {
+    organizationId,
+    plan: opts.plan ?? 'bench',
+    status: opts.status ?? 'none',
+    customerId: opts.customerId ?? null,
+    subscriptionId: null,
+    currentPeriodEnd: null,
+    nextPaymentAttempt: null,
+    syncedAt: null,
+  } satisfies Partial<BillingAccount>;
+}

@@ -7,7 +7,7 @@ import type { AuditService } from '../audit/service.js';
 import type { RequestMeta } from '../http/request-state.js';
 import { monthOf, runsInMonth, runsOverAllowance } from './allowance.js';
 import { assertFitsPlan } from './limits.js';
-import { standingOf, standingFor } from './plan.js';
+import { accountRow, standingOf, standingFor } from './plan.js';
 import { planOfLookupKey, priceIds, type PaymentsClient } from './provider.js';
 import { dashboardLink } from '../mail/templates.js';
 
@@ -233,17 +233,7 @@ export function createBillingService(deps: {
           }),
         );
         if (account) await account.update({ customerId: customer.id });
-        else
-          account = await BillingAccount.create({
-            organizationId: orgId,
-            plan: 'bench',
-            status: 'none',
-            customerId: customer.id,
-            subscriptionId: null,
-            currentPeriodEnd: null,
-            nextPaymentAttempt: null,
-            syncedAt: null,
-          });
+        else account = await BillingAccount.create(accountRow(orgId, { customerId: customer.id }));
       }
       const back = dashboardLink(publicUrl, `/orgs/${orgId}/billing`);
       const session = await provider('start the checkout', () =>

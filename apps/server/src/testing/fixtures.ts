@@ -4,6 +4,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import type { PlanId, Role } from '@wickstone/contracts';
 import { roles } from '@wickstone/contracts';
 import { BillingAccount, Membership, Organization, User } from '../db/models/index.js';
+import { accountRow } from '../billing/plan.js';
 
 /** An address no other test uses, on a reserved domain. */
 export function uniqueEmail(tag = 'user'): string {
@@ -35,17 +36,7 @@ export async function seedOrgWithTeam(
   const org = await Organization.create({ name, slug: `t-${randomBytes(6).toString('hex')}` });
   // On the largest plan unless a test asks otherwise, so plan limits stay out of tests about other things.
   const plan = opts.plan ?? 'office';
-  if (plan !== 'bench')
-    await BillingAccount.create({
-      organizationId: org.id,
-      plan,
-      status: 'active',
-      customerId: null,
-      subscriptionId: null,
-      currentPeriodEnd: null,
-      nextPaymentAttempt: null,
-      syncedAt: null,
-    });
+  if (plan !== 'bench') await BillingAccount.create(accountRow(org.id, { plan, status: 'active' }));
   const users = {} as Record<Role, FixtureUser>;
   for (const role of roles) {
     const password = `pw-${role}-${randomBytes(6).toString('hex')}`;
