@@ -42,6 +42,38 @@ describe('billing in Chromium: the owner upgrades through the checkout page, an 
     await app?.stop();
   });
 
+  it("refuses a widget past the Bench plan's count, with the way to a larger plan", async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await context.newPage();
+    await signIn(page, app.url, org.users.owner.email, org.users.owner.password);
+    await page.goto(`${app.url}/orgs/${org.id}`);
+    // Three drafts through the API, as the dashboard sends them (the Bench plan allows three widgets).
+    const statuses = await page.evaluate(async (orgId) => {
+      const { csrfToken } = (await (await fetch('/api/v1/auth/csrf')).json()) as { csrfToken: string };
+      const out: number[] = [];
+      for (const name of ['Kerb rise', 'Slab break', 'Wall damp']) {
+        const res = await fetch(`/api/v1/orgs/${orgId}/widgets`, {
+          method: 'POST',
+          headers: { 'Content-Type': 'application/json', 'x-csrf-token': csrfToken },
+          body: JSON.stringify({ name, calculatorId: 'tube-rise' }),
+        });
+        out.push(res.status);
+      }
+      return out;
+    }, org.id);
+    expect(statuses).toEqual([201, 201, 201]);
+    await page.goto(`${app.url}/orgs/${org.id}/widgets/new`);
+    await page.getByRole('radio').first().check();
+    await page.getByLabel('Name', { exact: true }).fill('Fourth widget');
+    await page.getByRole('button', { name: 'Create the widget' }).click();
+    await page.getByText('The Bench plan allows 3 widgets and this firm has 3.', { exact: false }).waitFor();
+    if (process.env.SCREENSHOTS_DIR)
+      await page.screenshot({ path: path.join(process.env.SCREENSHOTS_DIR, 'widget-refused-1280.png') });
+    await page.getByRole('link', { name: 'See the plans and move to a larger one' }).click();
+    await page.waitForURL(`${app.url}/orgs/${org.id}/billing`);
+    await context.close();
+  });
+
   it('upgrades the owner from Bench to Field and shows the new plan and its invoice', async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();

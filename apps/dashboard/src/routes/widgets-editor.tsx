@@ -25,6 +25,7 @@ import { useUpdateWidget, widgetQuery } from '../queries/widgets';
 import { ConfirmAction } from '../components/confirm';
 import { TextField } from '../components/form';
 import { ErrorState, LoadingState, describeError } from '../components/states';
+import { UpgradeHint } from '../components/upgrade-hint';
 import { Button, Card, Notice, TextLink } from '../components/ui';
 import {
   CheckField,
@@ -419,9 +420,12 @@ function Editor({
                 data-save-state={outcome?.tone ?? (dirty ? 'dirty' : 'clean')}
               >
                 {outcome ? (
-                  <span className={`font-semibold ${outcome.tone === 'ok' ? 'text-ok' : 'text-bad'}`}>
-                    {outcome.text}
-                  </span>
+                  <>
+                    <span className={`font-semibold ${outcome.tone === 'ok' ? 'text-ok' : 'text-bad'}`}>
+                      {outcome.text}
+                    </span>
+                    {outcome.tone === 'bad' ? <UpgradeHint error={update.error} /> : null}
+                  </>
                 ) : dirty ? (
                   <span className="font-semibold text-warn">Unsaved changes</span>
                 ) : (
