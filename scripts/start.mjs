@@ -10,6 +10,7 @@ import {
 } from './lib/mariadb.mjs';
 import { isAlive, log, readPid, root, run, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
 import { build, ensureNodeModules } from './lib/setup.mjs';
+import { startFakePayments } from './lib/payments.mjs';
 
 const port = Number(process.env.PORT ?? 5180);
 const dbPort = Number(process.env.DB_PORT ?? 3307);
@@ -59,6 +60,13 @@ try {
     DEMO_SITE_PORT: String(demoPort),
     DEMO_SITE_FILE: demoSnippets,
   };
+  const payments = await startFakePayments({
+    port: Number(process.env.FAKE_PAYMENTS_PORT ?? 12110),
+    stateFile: path.join(root, 'var', 'payments', 'state.json'),
+    webhookUrl: `http://127.0.0.1:${port}/api/v1/billing/webhook`,
+  });
+  children.push(payments.child);
+  Object.assign(env, payments.env);
   run('node', ['apps/server/dist/cli/migrate.js'], { env });
   run('node', ['apps/server/dist/cli/seed.js'], { env });
 

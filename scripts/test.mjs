@@ -8,6 +8,7 @@ import { log, runStatus, startChild, stopPid, waitForHttp } from './lib/proc.mjs
 import { build, ensureChromium, ensureNodeModules } from './lib/setup.mjs';
 import { staticChecks } from './lib/checks.mjs';
 import { startTestDatabase, stopTestEnv, testDbInstance, testEnv, testPorts } from './lib/test-env.mjs';
+import { startFakePayments } from './lib/payments.mjs';
 
 const vitestArgs = process.argv.slice(2);
 const ports = testPorts();
@@ -39,6 +40,9 @@ try {
     }),
   );
   await waitForHttp(`${env.FAKE_MAIL_API_URL}/messages`);
+  const payments = await startFakePayments({ port: Number(process.env.TEST_FAKE_PAYMENTS_PORT ?? 12111) });
+  children.push(payments.child);
+  Object.assign(env, payments.env);
 
   log(`running ${vitestArgs.length ? `vitest run ${vitestArgs.join(' ')}` : 'every test (vitest run)'}`);
   code = runStatus('npx', ['vitest', 'run', ...vitestArgs], { env });

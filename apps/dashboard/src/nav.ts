@@ -19,6 +19,7 @@ export const orgNav: readonly NavEntry[] = [
   { label: 'Team', path: 'team', permission: 'members:read' },
   { label: 'Audit log', path: 'audit', permission: 'audit:read' },
   { label: 'Data retention', path: 'settings/retention', permission: 'org:read' },
+  { label: 'Billing', path: 'billing', permission: 'billing:manage' },
 ];
 
 export function orgPath(orgId: number, path = ''): string {

@@ -22,6 +22,7 @@ import { TeamPage } from './routes/team';
 import { AuditPage } from './routes/audit';
 import { AccountPage } from './routes/account';
 import { RetentionPage } from './routes/retention';
+import { BillingPage } from './routes/billing';
 import { widgetRoutes } from './routes/widgets-routes';
 import { usageRoutes } from './routes/usage-routes';
 
@@ -64,6 +65,7 @@ export const router = createBrowserRouter([
               { path: 'team', element: guarded('members:read', <TeamPage />) },
               { path: 'audit', element: guarded('audit:read', <AuditPage />) },
               { path: 'settings/retention', element: guarded('org:read', <RetentionPage />) },
+              { path: 'billing', element: guarded('billing:manage', <BillingPage />) },
               ...widgetRoutes,
               ...usageRoutes,
               { path: '*', element: <NotFoundPage /> },

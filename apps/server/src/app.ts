@@ -43,6 +43,10 @@ import { createLeadService } from './leads/service.js';
 import { leadRoutes } from './leads/router.js';
 import { createRetentionService } from './retention/service.js';
 import { retentionRoutes } from './retention/router.js';
+import { createPaymentsClient } from './billing/provider.js';
+import { createBillingService } from './billing/service.js';
+import { billingRoutes, billingWebhookRouter } from './billing/router.js';
+import { createRunAllowance } from './billing/allowance.js';
 
 export interface AppDeps {
   config: Config;
@@ -100,7 +104,21 @@ export function createApp(deps: AppDeps): Express {
     widgetVersion: serverVersion,
   });
   const assets = createAssetService(config.publicUrl);
-  const embed = createEmbedService({ sequelize, mailer, logger, publicUrl: config.publicUrl });
+  const afterRunsStored = createRunAllowance({ sequelize, mailer, logger, publicUrl: config.publicUrl });
+  const embed = createEmbedService({
+    sequelize,
+    mailer,
+    logger,
+    publicUrl: config.publicUrl,
+    afterRunsStored,
+  });
+  const billing = createBillingService({
+    sequelize,
+    client: createPaymentsClient(config.payments),
+    webhookSecret: config.payments.webhookSecret,
+    audit,
+    publicUrl: config.publicUrl,
+  });
   const runs = createRunService({ sequelize });
   const usage = createUsageService({ sequelize });
   const leads = createLeadService({ sequelize, runs });
@@ -118,6 +136,7 @@ export function createApp(deps: AppDeps): Express {
   usageRoutes(routes, usage);
   leadRoutes(routes, leads, audit);
   retentionRoutes(routes, retention, audit);
+  billingRoutes(routes, billing);
   // Only while the fake SMTP server is in use; with a real relay the route does not exist.
   if (config.mail.fakeApiUrl) devMailRoutes(routes, createDevMailService(config.mail.fakeApiUrl));
   registries.set(app, routes.records);
@@ -125,6 +144,8 @@ export function createApp(deps: AppDeps): Express {
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
   app.use('/releases', releasesRouter(releasesDir));
   app.use(`${API_BASE}/embed`, embedRouter(embed, config.embed));
+  // The payments provider's signed events: raw bytes for the signature check, no session, no CSRF.
+  app.use(`${API_BASE}/billing/webhook`, billingWebhookRouter(billing));
 
   const api = express.Router();
   api.use(express.json({ limit: '64kb' }));

@@ -80,6 +80,12 @@ const envSchema = z.object({
   /** Runs or leads deleted per purge transaction: short transactions, short row locks. */
   RETENTION_PURGE_CHUNK: z.coerce.number().int().min(10).max(50_000).default(2000),
   TRUST_PROXY: bool.default(false),
+  /** The payments provider's API; unset means the provider's own host. Locally, the fake (scripts/fake-payments.mjs). */
+  PAYMENTS_API_URL: z.url().optional(),
+  /** Without a secret key the billing routes answer 503 and every firm is held to its stored plan. */
+  PAYMENTS_SECRET_KEY: z.string().min(8).optional(),
+  /** The signing secret of our webhook endpoint at the provider. */
+  PAYMENTS_WEBHOOK_SECRET: z.string().min(8).optional(),
 });
 
 /**
@@ -154,6 +160,11 @@ const configSchema = envSchema
         chunkSize: e.RETENTION_PURGE_CHUNK,
       },
       trustProxy: e.TRUST_PROXY,
+      payments: {
+        apiUrl: e.PAYMENTS_API_URL,
+        secretKey: e.PAYMENTS_SECRET_KEY,
+        webhookSecret: e.PAYMENTS_WEBHOOK_SECRET,
+      },
     };
   });
 

@@ -1,9 +1,10 @@
 import { randomBytes } from 'node:crypto';
 import bcrypt from 'bcryptjs';
 import { QueryTypes, type Sequelize } from 'sequelize';
-import type { Role } from '@wickstone/contracts';
+import type { PlanId, Role } from '@wickstone/contracts';
 import { roles } from '@wickstone/contracts';
-import { Membership, Organization, User } from '../src/db/models/index.js';
+import { BillingAccount, Membership, Organization, User } from '../src/db/models/index.js';
+import { accountRow } from '../src/billing/plan.js';
 
 /** An address no other test uses, on a reserved domain. */
 export function uniqueEmail(tag = 'user'): string {
@@ -30,8 +31,12 @@ export interface FixtureOrg {
  */
 export async function seedOrgWithTeam(
   name = `Test Ground ${randomBytes(3).toString('hex')}`,
+  opts: { plan?: PlanId } = {},
 ): Promise<FixtureOrg> {
   const org = await Organization.create({ name, slug: `t-${randomBytes(6).toString('hex')}` });
+  // On the largest plan unless a test asks otherwise, so plan limits stay out of tests about other things.
+  const plan = opts.plan ?? 'office';
+  if (plan !== 'bench') await BillingAccount.create(accountRow(org.id, { plan, status: 'active' }));
   const users = {} as Record<Role, FixtureUser>;
   for (const role of roles) {
     const password = `pw-${role}-${randomBytes(6).toString('hex')}`;

@@ -18,3 +18,4 @@ export {
 } from './client.js';
 export { probeUrl, routeKey } from './routes.js';
 export { makePng } from './images.js';
+export { CARD_DECLINED, CARD_OK, FakePayments, startBillingApp, type BillingTestApp } from './payments.js';

@@ -144,6 +144,8 @@ export const auditEventTypes = [
   'lead.note_added',
   'lead.erased',
   'retention.changed',
+  'billing.plan_changed',
+  'billing.cancel_requested',
 ] as const;
 export const auditEntrySchema = z.object({
   id: z.number().int(),

@@ -8,6 +8,10 @@ export const errorStatus = {
   validation_failed: 400,
   bad_request: 400,
   unauthenticated: 401,
+  /** The plan does not allow it (a widget over the plan's count): upgrading does. */
+  plan_limit: 402,
+  /** The payments provider declined the card. */
+  payment_failed: 402,
   forbidden: 403,
   csrf_failed: 403,
   not_found: 404,

@@ -20,6 +20,8 @@ export const permissions = {
   'leads:write': ['owner', 'admin', 'analyst'],
   'leads:erase': ['owner', 'admin', 'analyst'],
   'settings:write': ['owner', 'admin'],
+  /** The plan, payments and invoices: the owner alone, since it commits the firm to paying. */
+  'billing:manage': ['owner'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;

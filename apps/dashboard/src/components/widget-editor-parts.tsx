@@ -1,4 +1,5 @@
 import type { Ref } from 'react';
+import { UpgradeHint } from './upgrade-hint';
 import type { Blocker } from 'react-router';
 import type { CalculatorDefinition } from '@wickstone/calc-core';
 import type { EmbedWidget, Widget } from '@wickstone/contracts';
@@ -132,6 +133,7 @@ export function SaveBar({
   outcome,
   dirty,
   saving,
+  saveError,
   onSave,
   onDiscard,
 }: {
@@ -139,6 +141,7 @@ export function SaveBar({
   outcome: SaveOutcome | null;
   dirty: boolean;
   saving: boolean;
+  saveError: unknown;
   onSave: () => void;
   onDiscard: () => void;
 }) {
@@ -168,9 +171,12 @@ export function SaveBar({
             data-save-state={outcome?.tone ?? (dirty ? 'dirty' : 'clean')}
           >
             {outcome ? (
-              <span className={`font-semibold ${outcome.tone === 'ok' ? 'text-ok' : 'text-bad'}`}>
-                {outcome.text}
-              </span>
+              <>
+                <span className={`font-semibold ${outcome.tone === 'ok' ? 'text-ok' : 'text-bad'}`}>
+                  {outcome.text}
+                </span>
+                {outcome.tone === 'bad' ? <UpgradeHint error={saveError} /> : null}
+              </>
             ) : dirty ? (
               <span className="font-semibold text-warn">Unsaved changes</span>
             ) : (

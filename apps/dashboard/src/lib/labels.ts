@@ -33,6 +33,8 @@ export const auditLabel: Record<AuditEntry['type'], string> = {
   'lead.note_added': 'Note added to an enquiry',
   'lead.erased': 'Enquirer’s personal data erased',
   'retention.changed': 'Retention period changed',
+  'billing.plan_changed': 'Plan changed',
+  'billing.cancel_requested': 'Plan set to end',
 };
 
 const dateTime = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });

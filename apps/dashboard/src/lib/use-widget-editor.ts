@@ -143,6 +143,8 @@ export function useWidgetEditor(
     preview,
     fallbackColors,
     saving: update.isPending,
+    /** The last save's refusal, for a hint beside the outcome (a plan limit links to the plans). */
+    saveError: update.error,
     onChange,
     save,
     discard,

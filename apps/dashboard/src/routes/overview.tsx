@@ -1,10 +1,12 @@
 import { useQuery } from '@tanstack/react-query';
-import { can } from '@wickstone/contracts';
+import { can, plans } from '@wickstone/contracts';
 import { useOrg } from '../lib/org-context';
 import { roleLabel, roleSummary } from '../lib/labels';
 import { usePageTitle } from '../lib/use-page-title';
 import { orgPath } from '../nav';
 import { membersQuery } from '../queries/members';
+import { planQuery } from '../queries/billing';
+import { PlanUsage } from '../components/plan-usage';
 import { HealthStatus } from '../components/health-status';
 import { Card, PageHeader, Spinner, TextLink } from '../components/ui';
 import { describeError } from '../components/states';
@@ -44,6 +46,35 @@ function TeamSummary() {
   );
 }
 
+/** Use against the plan, for every member; the owner gets the way to change it. */
+function PlanSummary() {
+  const { orgId, role } = useOrg();
+  const plan = useQuery(planQuery(orgId));
+  return (
+    <Card className="space-y-4 p-5">
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h2 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">
+          {plan.data ? `${plans[plan.data.plan].name} plan` : 'Plan'}
+        </h2>
+        {can(role, 'billing:manage') ? (
+          <TextLink to={orgPath(orgId, 'billing')} className="text-sm">
+            Plan and billing
+          </TextLink>
+        ) : null}
+      </div>
+      {plan.isPending ? (
+        <p role="status" className="flex items-center gap-2 text-ink-soft">
+          <Spinner /> Reading the plan…
+        </p>
+      ) : plan.isError ? (
+        <p className="text-bad">{describeError(plan.error)}</p>
+      ) : (
+        <PlanUsage summary={plan.data} />
+      )}
+    </Card>
+  );
+}
+
 export function OverviewPage() {
   const { organizationName, role } = useOrg();
   usePageTitle(organizationName);
@@ -58,6 +89,7 @@ export function OverviewPage() {
         </Card>
         <TeamSummary />
       </div>
+      <PlanSummary />
       <Card className="flex flex-wrap items-center justify-between gap-3 px-5 py-4">
         <h2 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">Service</h2>
         <HealthStatus />

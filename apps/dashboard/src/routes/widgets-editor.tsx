@@ -105,6 +105,7 @@ export function Editor({
           outcome={editor.outcome}
           dirty={editor.dirty}
           saving={editor.saving}
+          saveError={editor.saveError}
           onSave={editor.save}
           onDiscard={editor.discard}
         />

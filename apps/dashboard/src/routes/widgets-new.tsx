@@ -10,6 +10,7 @@ import { useCreateWidget } from '../queries/widgets';
 import { SchemaFormView, TextField } from '../components/form';
 import { Button, ButtonLink, Card, PageHeader } from '../components/ui';
 import { ChoiceCards } from '../components/widget-fields';
+import { UpgradeHint } from '../components/upgrade-hint';
 
 export function NewWidgetPage() {
   usePageTitle('New widget');
@@ -75,6 +76,7 @@ export function NewWidgetPage() {
             </Button>
             <ButtonLink to={orgPath(orgId, 'widgets')}>Cancel</ButtonLink>
           </div>
+          <UpgradeHint error={create.error} />
         </SchemaFormView>
       </Card>
     </section>

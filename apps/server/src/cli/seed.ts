@@ -2,8 +2,10 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { loadConfig } from '../config.js';
 import { createSequelize } from '../db/sequelize.js';
-import { initModels, Membership, Organization } from '../db/models/index.js';
 import { seedDemo } from '../db/seed/demo.js';
+import { seedDemoBilling } from '../db/seed/demo-billing.js';
+import { createPaymentsClient } from '../billing/provider.js';
+import { initModels, Membership, Organization, User } from '../db/models/index.js';
 import { demoSiteOrigins, seedDemoWidgets } from '../db/seed/demo-widgets.js';
 import { createReleaseService } from '../releases/service.js';
 import { defaultReleasesDir } from '../releases/paths.js';
@@ -21,6 +23,17 @@ try {
     (await Membership.findOne({ where: { organizationId: org.id, role: 'owner' }, order: [['id', 'ASC']] }));
   const lines = [summary];
   if (org && owner) {
+    // The plan first: the demo widgets need a plan that allows two live ones.
+    const ownerUser = await User.findByPk(owner.userId, { attributes: ['email'] });
+    lines.push(
+      await seedDemoBilling(
+        sequelize,
+        createPaymentsClient(config.payments),
+        org,
+        ownerUser?.email ?? '',
+        config.publicUrl,
+      ),
+    );
     const releases = createReleaseService(config.releasesDir ?? defaultReleasesDir, config.publicUrl);
     const widgets = createWidgetService({
       sequelize,

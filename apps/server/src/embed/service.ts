@@ -79,6 +79,8 @@ export function createEmbedService(deps: {
   mailer: Mailer;
   logger: Logger;
   publicUrl: string;
+  /** Called with runs once they are committed (the plan's run allowance); its failure never fails the report. */
+  afterRunsStored?: (runs: { id: string; organizationId: number; createdAt: Date }[]) => Promise<void>;
 }): EmbedService {
   const { sequelize, mailer, logger, publicUrl } = deps;
 
@@ -205,6 +207,9 @@ export function createEmbedService(deps: {
         if (e instanceof UniqueConstraintError) return sameOrConflict(body.id, hash);
         throw e;
       }
+      await deps
+        .afterRunsStored?.([row])
+        .catch((err: unknown) => logger.error({ err }, 'run allowance hook failed'));
       return { id: body.id, agreed: mismatch === null, duplicate: false };
     },
 

@@ -70,6 +70,13 @@ describe('the route table', () => {
       'DELETE /api/v1/orgs/:orgId/leads/:leadId/personal-data': 'leads:erase',
       'GET /api/v1/orgs/:orgId/settings/retention': 'org:read',
       'PATCH /api/v1/orgs/:orgId/settings/retention': 'settings:write',
+      // issue 18: every member sees the plan and use against it; only the owner pays and changes it
+      'GET /api/v1/orgs/:orgId/plan': 'org:read',
+      'GET /api/v1/orgs/:orgId/billing/invoices': 'billing:manage',
+      'POST /api/v1/orgs/:orgId/billing/checkout': 'billing:manage',
+      'POST /api/v1/orgs/:orgId/billing/plan': 'billing:manage',
+      'POST /api/v1/orgs/:orgId/billing/cancel': 'billing:manage',
+      'POST /api/v1/orgs/:orgId/billing/resume': 'billing:manage',
     };
     const declared = Object.fromEntries(routes.map((r) => [routeKey(r), r.access]));
     for (const [key, access] of Object.entries(issue4)) expect(declared[key], key).toBe(access);

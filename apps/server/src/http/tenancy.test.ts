@@ -23,6 +23,8 @@ const validBodies: Record<string, unknown> = {
   'PATCH /api/v1/orgs/:orgId/leads/:leadId': { status: 'closed' },
   'POST /api/v1/orgs/:orgId/leads/:leadId/notes': { body: 'Taken over' },
   'PATCH /api/v1/orgs/:orgId/settings/retention': { months: 1 },
+  'POST /api/v1/orgs/:orgId/billing/checkout': { plan: 'field' },
+  'POST /api/v1/orgs/:orgId/billing/plan': { plan: 'office' },
 };
 /** Path parameters naming an object inside an organisation: each is probed with the other organisation's. */
 const OBJECT_IDS = /:(userId|invitationId|widgetId|runId|leadId)/;

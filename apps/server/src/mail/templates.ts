@@ -10,7 +10,7 @@ export const escapeHtml = (s: string): string =>
 /** Names come from users: keep them on one line in a subject. */
 export const oneLine = (s: string): string => s.replace(/[\r\n\t]+/g, ' ').trim();
 
-function layout(
+export function layout(
   title: string,
   paragraphs: string[],
   action: { label: string; url: string },

@@ -22,7 +22,8 @@ describe('the rollup migration', () => {
   it('fills the rollups from the runs already stored', async () => {
     const migrator = createMigrator(db.sequelize);
     await migrator.down({ to: MIGRATION });
-    const org = await seedOrgWithTeam('Brackenridge Ground & Damp');
+    // On the free plan: the billing tables come in a later migration than the one rolled back to.
+    const org = await seedOrgWithTeam('Brackenridge Ground & Damp', { plan: 'bench' });
     const w = await Widget.create({
       organizationId: org.id,
       publicKey: 'wk_backfill000000000001',
@@ -59,7 +60,7 @@ describe('the rollup migration', () => {
       origin: SITE,
       sendCopy: false,
     });
-    expect((await migrator.up()).map((m) => m.name)).toContain(MIGRATION);
+    expect(await migrator.up({ to: MIGRATION })).toEqual([expect.objectContaining({ name: MIGRATION })]);
     const stored = await storedRollups(db.sequelize);
     expect(stored).toEqual(await rollupsFromRaw(db.sequelize));
     expect(stored.daily.reduce((n, d) => n + d.runs, 0)).toBe(rows.length);

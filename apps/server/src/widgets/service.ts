@@ -22,6 +22,7 @@ import { AppError, fieldError } from '../errors.js';
 import type { AuditTrail } from '../audit/service.js';
 import type { ReleaseService } from '../releases/service.js';
 import { diff } from './diff.js';
+import { assertLiveRoom, assertWidgetRoom } from '../billing/limits.js';
 
 type CreateBody = z.output<typeof createWidgetBodySchema>;
 type UpdateBody = z.output<typeof updateWidgetBodySchema>;
@@ -201,6 +202,7 @@ export function createWidgetService(deps: {
       await checkLogo(orgId, settings, 'body.settings');
       const release = releases.latest()?.version ?? deps.widgetVersion;
       const w = await sequelize.transaction(async (transaction) => {
+        await assertWidgetRoom(orgId, transaction);
         const created = await Widget.create(
           {
             organizationId: orgId,
@@ -265,6 +267,8 @@ export function createWidgetService(deps: {
             'A live widget needs at least one site allowed to embed it',
           );
         }
+        if (after.status === 'live' && before.status !== 'live')
+          await assertLiveRoom(orgId, w.id, transaction);
         const changes = diff(before, after);
         if (changes.length === 0) return dto(w);
         await w.update(after, { transaction });

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { AuditEvent } from './audit-event.js';
+import { BillingAccount } from './billing-account.js';
 import { Invitation } from './invitation.js';
 import { Membership } from './membership.js';
 import { Organization } from './organization.js';
@@ -18,6 +19,7 @@ export type { AuditEventType } from './audit-event.js';
 export {
   Asset,
   AuditEvent,
+  BillingAccount,
   Invitation,
   Lead,
   LeadNote,
@@ -48,6 +50,7 @@ export function initModels(sequelize: Sequelize): void {
   Lead.initModel(sequelize);
   LeadNote.initModel(sequelize);
   OrganizationSetting.initModel(sequelize);
+  BillingAccount.initModel(sequelize);
 
   Organization.hasMany(Membership, { foreignKey: 'organizationId', as: 'memberships' });
   Membership.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });

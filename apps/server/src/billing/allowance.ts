@@ -1,0 +1,123 @@
+import { Op, QueryTypes, type Sequelize } from 'sequelize';
+import type { Logger } from 'pino';
+import { allowanceNoticeLevels } from '@wickstone/contracts';
+import { Membership, Organization, User } from '../db/models/index.js';
+import { sendSafely, type Mailer } from '../mail/mailer.js';
+import { allowanceMail } from './mail.js';
+import { standingFor } from './plan.js';
+
+/** What the hook needs of a stored run. */
+export interface StoredRunRef {
+  id: string;
+  organizationId: number;
+  createdAt: Date;
+}
+
+/** `2026-12` for a UTC time. */
+export const monthOf = (d: Date): string => d.toISOString().slice(0, 7);
+
+function monthBounds(month: string): [string, string] {
+  const [y, m] = month.split('-').map(Number) as [number, number];
+  const next = m === 12 ? `${y + 1}-01` : `${y}-${String(m + 1).padStart(2, '0')}`;
+  return [`${month}-01`, `${next}-01`];
+}
+
+/** Runs an organisation logged in a month, from the daily rollups the run's own transaction kept. */
+export async function runsInMonth(sequelize: Sequelize, orgId: number, month: string): Promise<number> {
+  const [from, to] = monthBounds(month);
+  const rows = await sequelize.query<{ n: number | string | null }>(
+    'SELECT SUM(runs) AS n FROM run_daily WHERE organization_id = ? AND day >= ? AND day < ?',
+    { replacements: [orgId, from, to], type: QueryTypes.SELECT },
+  );
+  return Number(rows[0]?.n ?? 0);
+}
+
+/**
+ * After runs are stored (committed): mark those past the plan's monthly allowance, and tell the
+ * firm's owners once when the month's runs reach 80 % and 100 % of it. Runs are never refused or
+ * lost for being over: the firm's site keeps working. Call it with each stored batch; it costs one
+ * query per organisation in the batch, plus an update only when runs are over.
+ *
+ * Two batches committing at the same moment near the limit may each count the other's runs, so a
+ * run at the boundary can be marked when it was exactly the last one allowed; never the other way.
+ */
+export function createRunAllowance(deps: {
+  sequelize: Sequelize;
+  mailer: Mailer;
+  logger: Logger;
+  publicUrl: string;
+}) {
+  const { sequelize, mailer, logger, publicUrl } = deps;
+
+  async function notify(orgId: number, month: string, level: number, used: number, allowance: number) {
+    // Once per organisation, month and level, whichever process gets there first.
+    const [, affected] = await sequelize.query(
+      'INSERT IGNORE INTO billing_usage_notices (organization_id, month, level, created_at) VALUES (?, ?, ?, NOW(3))',
+      { replacements: [orgId, month, level], type: QueryTypes.INSERT },
+    );
+    if (!affected) return;
+    const org = await Organization.findByPk(orgId, { attributes: ['id', 'name'] });
+    const owners = await Membership.findAll({
+      where: { organizationId: orgId, role: { [Op.eq]: 'owner' } },
+      include: [{ model: User, as: 'user', required: true, attributes: ['email'] }],
+    });
+    const standing = await standingFor(orgId);
+    for (const m of owners) {
+      if (!m.user) continue;
+      await sendSafely(
+        mailer,
+        logger,
+        allowanceMail({
+          to: m.user.email,
+          orgName: org?.name ?? '',
+          orgId,
+          planName: standing.plan.name,
+          level,
+          used,
+          allowance,
+          month,
+          publicUrl,
+        }),
+        'run allowance notice',
+      );
+    }
+  }
+
+  return async function afterRunsStored(runs: readonly StoredRunRef[]): Promise<void> {
+    const groups = new Map<string, StoredRunRef[]>();
+    for (const r of runs) {
+      const k = `${r.organizationId}|${monthOf(r.createdAt)}`;
+      groups.set(k, [...(groups.get(k) ?? []), r]);
+    }
+    for (const [k, batch] of groups) {
+      const orgId = batch[0]!.organizationId;
+      const month = k.split('|')[1]!;
+      const allowance = (await standingFor(orgId)).plan.limits.runsPerMonth;
+      const used = await runsInMonth(sequelize, orgId, month);
+      const before = used - batch.length;
+      const over = Math.min(batch.length, used - allowance);
+      if (over > 0) {
+        await sequelize.query('UPDATE runs SET over_allowance = 1 WHERE id IN (?)', {
+          replacements: [batch.slice(batch.length - over).map((r) => r.id)],
+          type: QueryTypes.UPDATE,
+        });
+      }
+      for (const level of allowanceNoticeLevels) {
+        const threshold = Math.ceil((allowance * level) / 100);
+        if (before < threshold && used >= threshold) await notify(orgId, month, level, used, allowance);
+      }
+    }
+  };
+}
+
+export type RunAllowanceHook = ReturnType<typeof createRunAllowance>;
+
+/** For the plan summary: runs past the allowance this month. */
+export async function runsOverAllowance(sequelize: Sequelize, orgId: number, month: string): Promise<number> {
+  const [from, to] = monthBounds(month);
+  const rows = await sequelize.query<{ n: number | string }>(
+    'SELECT COUNT(*) AS n FROM runs WHERE organization_id = ? AND over_allowance = 1 AND created_at >= ? AND created_at < ?',
+    { replacements: [orgId, `${from} 00:00:00`, `${to} 00:00:00`], type: QueryTypes.SELECT },
+  );
+  return Number(rows[0]?.n ?? 0);
+}
