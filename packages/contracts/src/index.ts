@@ -5,3 +5,4 @@ export * from './auth.js';
 export * from './color.js';
 export * from './widgets.js';
 export * from './usage.js';
+export * from './text.js';
