@@ -17,4 +17,5 @@ export {
   type TestApp,
 } from './client.js';
 export { probeUrl, routeKey } from './routes.js';
-export { makePng } from './images.js';
+export { makePng, makeZip } from './images.js';
+export { createLiveWidget, runReportBody } from './embed.js';
