@@ -11,6 +11,7 @@ import {
 import { isAlive, log, readPid, root, run, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
 import { build, ensureNodeModules } from './lib/setup.mjs';
 import { startFakePayments } from './lib/payments.mjs';
+import { ensureSessionSecret } from './lib/secrets.mjs';
 
 const port = Number(process.env.PORT ?? 5180);
 const dbPort = Number(process.env.DB_PORT ?? 3307);
@@ -52,6 +53,7 @@ try {
     ...process.env,
     ...dbEnv,
     NODE_ENV: 'development',
+    JWT_SECRET: process.env.JWT_SECRET ?? ensureSessionSecret(path.join(root, 'var')),
     PORT: String(port),
     HOST: '127.0.0.1',
     SMTP_HOST: '127.0.0.1',

@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '@wickstone/server/app';
 import { loadConfig } from '@wickstone/server/config';
 import { createLogger } from '@wickstone/server/logger';
-import { createSequelize } from '@wickstone/server/db';
+import { createSequelize, initModels, migrateUp } from '@wickstone/server/db';
 import { errorBodySchema, healthResponseSchema } from '@wickstone/contracts';
 import {
   ensureDatabase,
@@ -16,6 +16,7 @@ import {
   stopMariaDB,
   type MariaDBInstance,
 } from '../../scripts/lib/mariadb.mjs';
+import { ApiSession } from '../support/api-session.js';
 
 // A MariaDB of this test's own, so stopping it harms no other test.
 // Its own MariaDB instance; the port can be moved so that several checkouts can test at once.
@@ -40,8 +41,11 @@ describe('health when the database goes away and comes back', () => {
       DB_PASSWORD: 'outage-pass',
       LOG_LEVEL: 'silent',
       NODE_ENV: 'test',
+      BCRYPT_COST: '4',
     });
     const sequelize = createSequelize(config.db);
+    initModels(sequelize);
+    await migrateUp(sequelize);
     closePool = () => sequelize.close();
     const app = createApp({ config, sequelize, logger: createLogger(config) });
     server = await new Promise((resolve) => {
@@ -58,7 +62,20 @@ describe('health when the database goes away and comes back', () => {
     rmSync(dir, { recursive: true, force: true });
   });
 
+  /** A browser that signs up while the database is up. */
+  let browser: ApiSession;
+  const call = (path: string) => browser.call('GET', path);
+
   it('answers 200 while the database is up', async () => {
+    browser = new ApiSession(url.replace('/api/v1/health', ''));
+    const signup = await browser.call('POST', '/auth/signup', {
+      organizationName: 'Outage Testing Ltd',
+      name: 'Wren Outage',
+      email: 'wren@outage.example',
+      password: 'a-long-enough-passphrase-2026',
+    });
+    expect(signup.status).toBe(201);
+    expect((await call('/auth/me')).status).toBe(200);
     const res = await fetch(url);
     expect(res.status).toBe(200);
     expect(healthResponseSchema.parse(await res.json()).database.status).toBe('up');
@@ -87,8 +104,19 @@ describe('health when the database goes away and comes back', () => {
     expect(body.error.code).toBe('service_unavailable');
   });
 
+  it('answers a signed-in API route 503 with Retry-After, not 500 or a sign-out, while the database is down', async () => {
+    for (const path of ['/auth/me', '/orgs/1', '/orgs/1/widgets']) {
+      const res = await call(path);
+      expect(res.status).toBe(503);
+      expect(Number(res.headers.get('retry-after'))).toBeGreaterThan(0);
+      expect(errorBodySchema.parse(await res.json()).error.code).toBe('service_unavailable');
+    }
+  });
+
   it('recovers once the database is back', async () => {
     await startMariaDB(inst, { quiet: true });
     await expect.poll(async () => (await fetch(url)).status, { timeout: 20_000, interval: 250 }).toBe(200);
+    // The session outlived the outage: the signed-in route answers again, no new sign-in needed.
+    expect((await call('/auth/me')).status).toBe(200);
   });
 });

@@ -3,6 +3,7 @@ import { createRoot } from 'react-dom/client';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router';
 import { router } from './router';
+import { OutageBanner } from './components/outage-banner';
 import { queryClient } from './lib/query-client';
 import { refreshCsrf } from './lib/api';
 import './theme.css';
@@ -15,6 +16,8 @@ if (!rootEl) throw new Error('index.html has no #root element');
 createRoot(rootEl).render(
   <StrictMode>
     <QueryClientProvider client={queryClient}>
+      {/* Outside the router: it shows while route loaders are still waiting out an outage too. */}
+      <OutageBanner />
       <RouterProvider router={router} />
     </QueryClientProvider>
   </StrictMode>,

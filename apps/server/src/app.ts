@@ -19,6 +19,9 @@ import { createDevMailService } from './dev-mail/service.js';
 import { devMailRoutes } from './dev-mail/router.js';
 import { createCsrf } from './http/csrf.js';
 import { createRateLimits } from './http/rate-limit.js';
+import { createCounters } from './http/counters.js';
+import { createDeviceCookies } from './http/device-cookie.js';
+import { createLoginThrottle } from './auth/throttle.js';
 import { ApiRoutes, type RouteRecord } from './http/routes.js';
 import { createSessions } from './http/session.js';
 import { createInvitationService } from './invitations/service.js';
@@ -90,9 +93,15 @@ export function createApp(deps: AppDeps): Express {
   const mailer = deps.mailer ?? createSmtpMailer(config.mail);
   const csrf = createCsrf(config);
   const sessions = createSessions(config, logger);
-  const limits = createRateLimits(config);
+  // Rate-limit counters in MariaDB: every server process over this database counts as one.
+  const counters = createCounters(sequelize);
+  const limits = createRateLimits(config, counters);
+  const devices = createDeviceCookies(config);
   const audit = createAuditService();
-  const auth = createAuthService({ config, sequelize, audit, mailer, logger });
+  const auth = createAuthService(
+    { config, sequelize, audit, mailer, logger },
+    createLoginThrottle(counters, { windowMs: config.rateLimits.windowMs, ...config.rateLimits.signIn }),
+  );
   const orgs = createOrgService({ sequelize, audit });
   const invitations = createInvitationService({ config, sequelize, audit, mailer, logger });
   const releasesDir = config.releasesDir ?? defaultReleasesDir;
@@ -111,6 +120,8 @@ export function createApp(deps: AppDeps): Express {
     logger,
     publicUrl: config.publicUrl,
     afterRunsStored,
+    counters,
+    copyLimits: config.embed.copies,
   });
   const billing = createBillingService({
     sequelize,
@@ -126,7 +137,7 @@ export function createApp(deps: AppDeps): Express {
   const retention = createRetentionService({ sequelize, chunkSize: config.retention.chunkSize });
 
   const routes = new ApiRoutes(API_BASE, csrf);
-  authRoutes(routes, { auth, sessions, csrf, limits });
+  authRoutes(routes, { auth, sessions, csrf, limits, devices });
   orgRoutes(routes, orgs);
   invitationRoutes(routes, { invitations, auth, sessions, limits });
   auditRoutes(routes, audit);
@@ -143,7 +154,7 @@ export function createApp(deps: AppDeps): Express {
 
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
   app.use('/releases', releasesRouter(releasesDir));
-  app.use(`${API_BASE}/embed`, embedRouter(embed, config.embed));
+  app.use(`${API_BASE}/embed`, embedRouter(embed, config.embed, counters));
   // The payments provider's signed events: raw bytes for the signature check, no session, no CSRF.
   app.use(`${API_BASE}/billing/webhook`, billingWebhookRouter(billing));
 

@@ -37,4 +37,22 @@ describe('loadConfig', () => {
       /FAKE_MAIL_API_URL/,
     );
   });
+
+  it('reads TRUST_PROXY as off, on, a hop count or a list of proxy addresses', () => {
+    expect(loadConfig({}).trustProxy).toBe(false);
+    expect(loadConfig({ TRUST_PROXY: 'true' }).trustProxy).toBe(true);
+    expect(loadConfig({ TRUST_PROXY: '0' }).trustProxy).toBe(false);
+    expect(loadConfig({ TRUST_PROXY: '1' }).trustProxy).toBe(1);
+    expect(loadConfig({ TRUST_PROXY: 'loopback, 10.0.0.0/8' }).trustProxy).toBe('loopback, 10.0.0.0/8');
+  });
+
+  it('never shares a session secret between development processes that were given none', () => {
+    const a = loadConfig({ NODE_ENV: 'development' }).jwtSecret;
+    const b = loadConfig({ NODE_ENV: 'development' }).jwtSecret;
+    expect(a.length).toBeGreaterThanOrEqual(32);
+    expect(a).not.toBe(b);
+    expect(loadConfig({ NODE_ENV: 'development', JWT_SECRET: 'x'.repeat(40) }).jwtSecret).toBe(
+      'x'.repeat(40),
+    );
+  });
 });

@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto';
 import { z } from 'zod';
 
 const bool = z
@@ -6,7 +7,8 @@ const bool = z
 
 /** Measured with bench/bcrypt.ts on the project's machine: cost 12 takes 0.26 s per bcryptjs hash. */
 export const DEFAULT_BCRYPT_COST = 12;
-const DEV_JWT_SECRET = 'local-development-secret-change-me-0123456789';
+/** Only for NODE_ENV=test: tests sign tokens of their own with it. */
+const TEST_JWT_SECRET = 'test-only-secret-never-used-outside-tests-0123';
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -23,7 +25,12 @@ const envSchema = z.object({
   DB_USER: z.string().default('wickstone'),
   DB_PASSWORD: z.string().default('wickstone-local'),
   DB_POOL_MAX: z.coerce.number().int().min(1).max(200).default(10),
-  JWT_SECRET: z.string().min(32).default(DEV_JWT_SECRET),
+  /**
+   * Signs sessions, CSRF tokens and device cookies. `npm start` makes one per checkout
+   * (var/session-secret); production must set its own; without one, development gets a random
+   * secret per process (sessions end when it restarts).
+   */
+  JWT_SECRET: z.string().min(32).optional(),
   /** bcrypt work factor; the default takes about 0.25 s per hash on the project's 2-core machine (bench/bcrypt.ts). */
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(DEFAULT_BCRYPT_COST),
   /** A session cookie lives this long and is renewed while it is used... */
@@ -40,9 +47,21 @@ const envSchema = z.object({
     .min(1)
     .max(24 * 30)
     .default(12),
-  /** Failed sign-ins allowed per e-mail address and per client address in one window. */
+  /** Failed invitation acceptances per invitation in one window (reset mails per address: half of it). */
   LOGIN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).max(10_000).default(10),
-  LOGIN_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(50),
+  /** The generous per-client ceiling: failed password checks from one client address in one window. */
+  LOGIN_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(100),
+  /** Sign-in throttle (auth/throttle.ts): failures per account and client before delays start... */
+  LOGIN_FREE_FAILURES: z.coerce.number().int().min(1).max(1_000).default(5),
+  /** ...failures per account from all untrusted clients together before those are delayed too... */
+  LOGIN_ACCOUNT_FREE_FAILURES: z.coerce.number().int().min(1).max(10_000).default(20),
+  /** ...the longest delay (they double from 1 s)... */
+  LOGIN_MAX_DELAY_SECONDS: z.coerce.number().int().min(1).max(3_600).default(900),
+  /** ...and the failures of one account in one window that send its holder a warning mail. */
+  LOGIN_BURST_NOTIFY: z.coerce.number().int().min(1).max(10_000).default(10),
+  /** Result copies mailed to one recipient address per day, and from one widget per hour. */
+  COPY_LIMIT_PER_RECIPIENT: z.coerce.number().int().min(1).max(1_000).default(3),
+  COPY_LIMIT_PER_WIDGET: z.coerce.number().int().min(1).max(100_000).default(60),
   RATE_LIMIT_WINDOW_MINUTES: z.coerce
     .number()
     .int()
@@ -64,7 +83,9 @@ const envSchema = z.object({
   /** The demo consultancy's site (npm start): its port, and where the seed writes its snippets. */
   DEMO_SITE_PORT: z.coerce.number().int().min(1).max(65535).default(5181),
   DEMO_SITE_FILE: z.string().optional(),
+  /** Accepted lead requests from one client address to one widget, and to all widgets (the higher ceiling). */
   LEAD_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(10),
+  LEAD_LIMIT_PER_IP_ALL_WIDGETS: z.coerce.number().int().min(1).max(100_000).default(40),
   LEAD_LIMIT_PER_WIDGET: z.coerce.number().int().min(1).max(1_000_000).default(200),
   /** How often the retention purge runs, and how long after start the first one does. */
   RETENTION_PURGE_INTERVAL_HOURS: z.coerce
@@ -79,7 +100,14 @@ const envSchema = z.object({
     .default(5),
   /** Runs or leads deleted per purge transaction: short transactions, short row locks. */
   RETENTION_PURGE_CHUNK: z.coerce.number().int().min(10).max(50_000).default(2000),
-  TRUST_PROXY: bool.default(false),
+  /**
+   * Which proxies' X-Forwarded-For to believe for the client address (the sign-in throttle and
+   * every rate limit key on it): `false` (none: the direct peer), a number of hops in front of the
+   * app (`1` for one load balancer), or a comma list of proxy addresses/subnets
+   * (`loopback, 10.0.0.0/8`). `true` believes any X-Forwarded-For: only behind a proxy that
+   * overwrites the header. README, "Deployment notes".
+   */
+  TRUST_PROXY: z.string().trim().default('false').transform(parseTrustProxy),
   /** The payments provider's API; unset means the provider's own host. Locally, the fake (scripts/fake-payments.mjs). */
   PAYMENTS_API_URL: z.url().optional(),
   /** Without a secret key the billing routes answer 503 and every firm is held to its stored plan. */
@@ -95,7 +123,7 @@ const envSchema = z.object({
 const configSchema = envSchema
   .superRefine((e, ctx) => {
     if (e.NODE_ENV !== 'production') return;
-    if (e.JWT_SECRET === DEV_JWT_SECRET)
+    if (!e.JWT_SECRET || e.JWT_SECRET === TEST_JWT_SECRET)
       ctx.addIssue({
         code: 'custom',
         path: ['JWT_SECRET'],
@@ -124,7 +152,9 @@ const configSchema = envSchema
         password: e.DB_PASSWORD,
         poolMax: e.DB_POOL_MAX,
       },
-      jwtSecret: e.JWT_SECRET,
+      // Development without a secret gets a random one per process (npm start makes one per checkout).
+      jwtSecret:
+        e.JWT_SECRET ?? (e.NODE_ENV === 'test' ? TEST_JWT_SECRET : randomBytes(32).toString('base64url')),
       auth: {
         bcryptCost: e.BCRYPT_COST,
         sessionTtlS: e.SESSION_TTL_MINUTES * 60,
@@ -136,6 +166,13 @@ const configSchema = envSchema
         loginPerAccount: e.LOGIN_LIMIT_PER_ACCOUNT,
         loginPerIp: e.LOGIN_LIMIT_PER_IP,
         windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
+        signIn: {
+          pairFree: e.LOGIN_FREE_FAILURES,
+          accountFree: e.LOGIN_ACCOUNT_FREE_FAILURES,
+          perClient: e.LOGIN_LIMIT_PER_IP,
+          maxDelayS: e.LOGIN_MAX_DELAY_SECONDS,
+          burstNotify: e.LOGIN_BURST_NOTIFY,
+        },
       },
       mail: {
         smtpHost: e.SMTP_HOST,
@@ -151,14 +188,17 @@ const configSchema = envSchema
       demo: { sitePort: e.DEMO_SITE_PORT, snippetsFile: e.DEMO_SITE_FILE },
       embed: {
         leadsPerIp: e.LEAD_LIMIT_PER_IP,
+        leadsPerIpAllWidgets: e.LEAD_LIMIT_PER_IP_ALL_WIDGETS,
         leadsPerWidget: e.LEAD_LIMIT_PER_WIDGET,
         windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
+        copies: { perRecipientPerDay: e.COPY_LIMIT_PER_RECIPIENT, perWidgetPerHour: e.COPY_LIMIT_PER_WIDGET },
       },
       retention: {
         purgeIntervalMs: e.RETENTION_PURGE_INTERVAL_HOURS * 3_600_000,
         firstPurgeDelayMs: e.RETENTION_FIRST_PURGE_MINUTES * 60_000,
         chunkSize: e.RETENTION_PURGE_CHUNK,
       },
+      /** Express's `trust proxy`: false, true, a hop count, or a list of proxy addresses/subnets. */
       trustProxy: e.TRUST_PROXY,
       payments: {
         apiUrl: e.PAYMENTS_API_URL,
@@ -178,6 +218,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
   return parsed.data;
+}
+
+function parseTrustProxy(v: string): boolean | number | string {
+  if (v === 'true' || v === 'yes') return true;
+  if (v === 'false' || v === 'no' || v === '' || v === '0') return false;
+  return /^\d+$/.test(v) ? Number(v) : v;
 }
 
 /** A browser sends a Secure cookie over https or to loopback only; keep cookies unsecured just for loopback http. */

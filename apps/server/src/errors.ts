@@ -144,6 +144,10 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     if (err.status >= 500) req.log?.error({ err }, err.message);
     if (err.code === 'service_unavailable' && !res.getHeader('Retry-After'))
       res.setHeader('Retry-After', String(OUTAGE_RETRY_AFTER_S));
+    // A throttled sign-in says how long to wait, in the header as in the body.
+    const wait = (err.details as { retryAfterS?: unknown } | null)?.retryAfterS;
+    if (err.code === 'rate_limited' && typeof wait === 'number' && !res.getHeader('Retry-After'))
+      res.setHeader('Retry-After', String(wait));
     res.status(err.status).json(body(err.code, err.message, err.details));
     return;
   }

@@ -24,6 +24,10 @@ export async function createTestApp(
     BCRYPT_COST: '4',
     LOGIN_LIMIT_PER_IP: '100000',
     LOGIN_LIMIT_PER_ACCOUNT: '1000',
+    LOGIN_FREE_FAILURES: '1000',
+    LOGIN_ACCOUNT_FREE_FAILURES: '1000',
+    LOGIN_BURST_NOTIFY: '1000',
+    COPY_LIMIT_PER_RECIPIENT: '1000',
     ...env,
   });
   const app = createApp({

@@ -1,4 +1,4 @@
-import { deflateSync } from 'node:zlib';
+import { deflateRawSync, deflateSync } from 'node:zlib';
 
 /** A real, minimal PNG (one IHDR, one IDAT, IEND) built by the PNG specification's rules. */
 export function makePng(width: number, height: number): Buffer {
@@ -33,4 +33,29 @@ export function makePng(width: number, height: number): Buffer {
     chunk('IDAT', deflateSync(raw)),
     chunk('IEND', Buffer.alloc(0)),
   ]);
+}
+
+/** A ZIP archive holding one deflated file (local header, central directory, end record: PKWARE APPNOTE 4.3). */
+export function makeZip(name: string, content: Buffer): Buffer {
+  const fileName = Buffer.from(name);
+  const body = deflateRawSync(content);
+  const local = Buffer.alloc(30);
+  local.writeUInt32LE(0x04034b50, 0);
+  local.writeUInt16LE(8, 8); // deflate
+  local.writeUInt32LE(body.length, 18);
+  local.writeUInt32LE(content.length, 22);
+  local.writeUInt16LE(fileName.length, 26);
+  const central = Buffer.alloc(46);
+  central.writeUInt32LE(0x02014b50, 0);
+  central.writeUInt16LE(8, 10);
+  central.writeUInt32LE(body.length, 20);
+  central.writeUInt32LE(content.length, 24);
+  central.writeUInt16LE(fileName.length, 28);
+  const end = Buffer.alloc(22);
+  end.writeUInt32LE(0x06054b50, 0);
+  end.writeUInt16LE(1, 8);
+  end.writeUInt16LE(1, 10);
+  end.writeUInt32LE(central.length + fileName.length, 12);
+  end.writeUInt32LE(local.length + fileName.length + body.length, 16);
+  return Buffer.concat([local, fileName, body, central, fileName, end]);
 }

@@ -17,5 +17,6 @@ export {
   type TestApp,
 } from './client.js';
 export { probeUrl, routeKey } from './routes.js';
-export { makePng } from './images.js';
+export { makePng, makeZip } from './images.js';
 export { CARD_DECLINED, CARD_OK, FakePayments, startBillingApp, type BillingTestApp } from './payments.js';
+export { createLiveWidget, runReportBody } from './embed.js';

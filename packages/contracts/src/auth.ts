@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { roles } from './permissions.js';
+import { displayNameSchema } from './text.js';
 
 const utf8 = new TextEncoder();
 
@@ -19,11 +20,11 @@ export const newPasswordSchema = z
   .min(8, 'At least 8 characters')
   .refine((p) => utf8.encode(p).length <= 72, 'At most 72 bytes (bcrypt ignores the rest)');
 
-export const personNameSchema = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters');
+export const personNameSchema = displayNameSchema(120);
 export const roleSchema = z.enum(roles);
 
 export const signupBodySchema = z.strictObject({
-  organizationName: z.string().trim().min(2, 'At least 2 characters').max(120, 'At most 120 characters'),
+  organizationName: displayNameSchema(120, 2),
   name: personNameSchema,
   email: emailSchema,
   password: newPasswordSchema,

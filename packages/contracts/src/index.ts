@@ -7,3 +7,4 @@ export * from './widgets.js';
 export * from './usage.js';
 export * from './releases.js';
 export * from './plans.js';
+export * from './text.js';

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { contrastRatio, hexColorPattern, WCAG_AA_TEXT } from './color.js';
 import { emailSchema } from './auth.js';
+import { displayNameSchema, webUrlSchema } from './text.js';
 
 export const widgetStatuses = ['draft', 'live', 'paused'] as const;
 export type WidgetStatus = (typeof widgetStatuses)[number];
@@ -125,7 +126,7 @@ export function defaultWidgetSettings(): WidgetSettings {
   };
 }
 
-export const widgetNameSchema = z.string().trim().min(1, 'Required').max(120, 'At most 120 characters');
+export const widgetNameSchema = displayNameSchema(120);
 
 export const createWidgetBodySchema = z.strictObject({
   name: widgetNameSchema,
@@ -236,7 +237,7 @@ export const embedRunBodySchema = z.strictObject({
     inputHash: z.string().max(128),
     version: z.string().max(40),
   }),
-  pageUrl: z.url().max(2000).optional(),
+  pageUrl: webUrlSchema.max(2000).optional(),
 });
 export type EmbedRunBody = z.infer<typeof embedRunBodySchema>;
 export const embedRunResponseSchema = z.object({
@@ -250,7 +251,7 @@ export const embedLeadBodySchema = z.strictObject({
   runId: z.uuid(),
   publicKey: publicKeySchema,
   fields: z.strictObject({
-    name: leadText(120).optional(),
+    name: displayNameSchema(120).optional(),
     email: emailSchema.optional(),
     company: leadText(160).optional(),
     phone: z

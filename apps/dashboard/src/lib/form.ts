@@ -44,13 +44,18 @@ function focusField(form: HTMLFormElement | null, name: string | undefined) {
  */
 export function useSchemaForm<T>(
   schema: Parser<T>,
-  /** Gets the parsed body and the form's own `showServerError` and `formRef`, for the request's outcome. */
-  onValid: (body: T, form: Pick<SchemaForm, 'showServerError' | 'formRef'>) => void,
+  /** Gets the parsed body and the form's own `showServerError`, `formRef` and `reset`, for the request's outcome. */
+  onValid: (body: T, form: Pick<SchemaForm, 'showServerError' | 'formRef' | 'reset'>) => void,
   toBody: (values: Record<string, string>) => unknown = (v) => v,
 ): SchemaForm {
   const formRef = useRef<HTMLFormElement | null>(null);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [formError, setFormError] = useState<string | null>(null);
+
+  const reset = useCallback(() => {
+    setErrors({});
+    setFormError(null);
+  }, []);
 
   const showServerError = useCallback((error: unknown, messages: Partial<Record<string, string>> = {}) => {
     const form = formRef.current;
@@ -103,15 +108,10 @@ export function useSchemaForm<T>(
       }
       setErrors({});
       setFormError(null);
-      onValid(parsed.data, { showServerError, formRef });
+      onValid(parsed.data, { showServerError, formRef, reset });
     },
-    [schema, onValid, toBody, showServerError],
+    [schema, onValid, toBody, showServerError, reset],
   );
-
-  const reset = useCallback(() => {
-    setErrors({});
-    setFormError(null);
-  }, []);
 
   return { errors, formError, formRef, onSubmit, showServerError, reset };
 }

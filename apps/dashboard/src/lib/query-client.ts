@@ -1,5 +1,6 @@
 import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
 import { isApiError } from './api';
+import { retryDelay, shouldRetry } from './outage';
 import { meKey } from '../queries/session';
 
 /*
@@ -24,8 +25,10 @@ export const queryClient: QueryClient = new QueryClient({
   defaultOptions: {
     queries: {
       staleTime: 15_000,
-      // A 4xx will not change by asking again; network trouble and 5xx get two more tries.
-      retry: (count, error) => count < 2 && !(isApiError(error) && error.status >= 400 && error.status < 500),
+      // Through an outage (503, or no answer) keep trying as Retry-After asks, with a banner
+      // (OutageBanner); other 5xx get two more tries; a 4xx will not change by asking again.
+      retry: shouldRetry,
+      retryDelay,
     },
   },
 });

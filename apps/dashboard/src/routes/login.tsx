@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useLocation, useNavigate, useSearchParams } from 'react-router';
 import { loginBodySchema, type LoginBody } from '@wickstone/contracts';
 import { useSchemaForm } from '../lib/form';
@@ -7,6 +8,8 @@ import { useLogin } from '../queries/session';
 import { AuthPage } from '../components/auth-page';
 import { PasswordField, SchemaFormView, TextField } from '../components/form';
 import { Button, Notice, TextLink } from '../components/ui';
+import { SlowedNotice, useSecondsLeft } from '../components/slowed-notice';
+import { isApiError } from '../lib/api';
 
 export interface NoticeState {
   notice?: string;
@@ -19,10 +22,21 @@ export function LoginPage() {
   const notice = (useLocation().state as NoticeState | null)?.notice;
   const next = safeNext(params.get('next'));
   const login = useLogin();
-  const form = useSchemaForm(loginBodySchema, (body: LoginBody, { showServerError }) =>
+  const [slowed, setSlowed] = useState<{ until: number; byClient: boolean } | null>(null);
+  const secondsLeft = useSecondsLeft(slowed?.until ?? null);
+  const form = useSchemaForm(loginBodySchema, (body: LoginBody, { showServerError, reset }) =>
     login.mutate(body, {
       onSuccess: (me) => navigate(next ?? homeFor(me), { replace: true }),
-      onError: (error) => showServerError(error),
+      onError: (error) => {
+        if (isApiError(error, 429) && error.retryAfterS) {
+          const by = (error.body.details as { slowedBy?: unknown } | null)?.slowedBy;
+          setSlowed({ until: Date.now() + error.retryAfterS * 1000, byClient: by === 'client' });
+          reset();
+          return;
+        }
+        setSlowed(null);
+        showServerError(error);
+      },
     }),
   );
 
@@ -42,6 +56,7 @@ export function LoginPage() {
         </Notice>
       ) : null}
       {next && !notice ? <Notice>Sign in to continue to the page you asked for.</Notice> : null}
+      {slowed ? <SlowedNotice secondsLeft={secondsLeft} byClient={slowed.byClient} /> : null}
       <SchemaFormView form={form}>
         <TextField
           label="E-mail address"
@@ -57,7 +72,7 @@ export function LoginPage() {
           error={form.errors.password}
         />
         <div className="flex flex-wrap items-center justify-between gap-3 pt-1">
-          <Button type="submit" tone="primary" busy={login.isPending}>
+          <Button type="submit" tone="primary" busy={login.isPending} disabled={secondsLeft > 0}>
             Sign in
           </Button>
           <TextLink to="/forgot-password" className="text-sm">

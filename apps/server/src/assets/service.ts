@@ -2,10 +2,13 @@ import { createHash } from 'node:crypto';
 import type { Asset as AssetDto } from '@wickstone/contracts';
 import { Asset } from '../db/models/index.js';
 import { assetUrl } from '../widgets/service.js';
-import { inspectImage } from './image.js';
+import { cleanImage } from './image.js';
 
 export interface AssetService {
-  /** Store an uploaded image after checking what it is by its bytes; the same image twice is stored once. */
+  /**
+   * Store an uploaded image as decoded and encoded again (`cleanImage`); the same image twice is
+   * stored once.
+   */
   upload(orgId: number, userId: number, data: Buffer): Promise<AssetDto>;
 }
 
@@ -19,8 +22,9 @@ export function createAssetService(publicUrl: string): AssetService {
     height: a.height,
   });
   return {
-    async upload(orgId, userId, data) {
-      const info = inspectImage(data);
+    async upload(orgId, userId, upload) {
+      const clean = await cleanImage(upload);
+      const data = clean.data;
       const sha256 = createHash('sha256').update(data).digest('hex');
       const existing = await Asset.findOne({
         where: { organizationId: orgId, sha256 },
@@ -29,10 +33,10 @@ export function createAssetService(publicUrl: string): AssetService {
       if (existing) return dto(existing);
       const a = await Asset.create({
         organizationId: orgId,
-        contentType: info.contentType,
+        contentType: clean.contentType,
         bytes: data.length,
-        width: info.width,
-        height: info.height,
+        width: clean.width,
+        height: clean.height,
         sha256,
         data,
         uploadedBy: userId,

@@ -6,16 +6,17 @@ import {
   updateAccountBodySchema,
 } from '@wickstone/contracts';
 import type { Csrf } from '../http/csrf.js';
-import type { RateLimits } from '../http/rate-limit.js';
+import type { DeviceCookies } from '../http/device-cookie.js';
+import { byIp, type RateLimits } from '../http/rate-limit.js';
 import type { ApiRoutes } from '../http/routes.js';
 import type { Sessions } from '../http/session.js';
 import type { AuthService } from './service.js';
 
 export function authRoutes(
   routes: ApiRoutes,
-  d: { auth: AuthService; sessions: Sessions; csrf: Csrf; limits: RateLimits },
+  d: { auth: AuthService; sessions: Sessions; csrf: Csrf; limits: RateLimits; devices: DeviceCookies },
 ): void {
-  const { auth, sessions, csrf, limits } = d;
+  const { auth, sessions, csrf, limits, devices } = d;
 
   routes.get('/auth/csrf', { access: 'public' }, ({ req, res }) => ({
     body: { csrfToken: csrf.token(req, res) },
@@ -33,10 +34,13 @@ export function authRoutes(
 
   routes.post(
     '/auth/login',
-    { access: 'public', body: loginBodySchema, use: [limits.failuresPerIp, limits.loginFailuresPerAccount] },
-    async ({ body, res, meta }) => {
-      const user = await auth.login(body.email, body.password, meta);
+    // Throttled inside the service (auth/throttle.ts): growing delays per account and client, never a lockout.
+    { access: 'public', body: loginBodySchema },
+    async ({ req, body, res, meta }) => {
+      const device = await devices.read(req);
+      const user = await auth.login(body.email, body.password, meta, { client: byIp(req), device });
       await sessions.start(res, user);
+      await devices.issue(res, user.id);
       return { body: await auth.me(user) };
     },
   );

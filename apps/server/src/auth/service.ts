@@ -6,15 +6,25 @@ import { AppError, fieldError } from '../errors.js';
 import type { ServiceDeps } from '../service-deps.js';
 import type { RequestMeta } from '../http/request-state.js';
 import { sendSafely } from '../mail/mailer.js';
-import { dashboardLink, passwordResetMail } from '../mail/templates.js';
+import { dashboardLink, passwordResetMail, signInFailuresMail } from '../mail/templates.js';
 import { assertAcceptablePassword, hashPassword, verifyPassword } from './passwords.js';
 import { hashLinkToken, newLinkToken } from './tokens.js';
+import type { LoginThrottle } from './throttle.js';
 
 export const RESET_TTL_MS = 60 * 60 * 1000;
 
 export interface AuthService {
   signup(body: SignupBody, meta: RequestMeta): Promise<User>;
-  login(email: string, password: string, meta: RequestMeta): Promise<User>;
+  /**
+   * Check a password, throttled per account and client (`auth/throttle.ts`): `client` is the
+   * client's address key, `device` the device cookie the browser sent, if any.
+   */
+  login(
+    email: string,
+    password: string,
+    meta: RequestMeta,
+    from: { client: string; device: { userId: number; deviceId: string } | null },
+  ): Promise<User>;
   logout(user: User, meta: RequestMeta): Promise<void>;
   me(user: User): Promise<MeResponse>;
   updateAccount(
@@ -43,7 +53,7 @@ export function slugify(name: string): string {
   return base || 'organisation';
 }
 
-export function createAuthService(deps: ServiceDeps): AuthService {
+export function createAuthService(deps: ServiceDeps, throttle: LoginThrottle): AuthService {
   const { config, sequelize, audit, mailer, logger } = deps;
   const cost = config.auth.bcryptCost;
 
@@ -107,10 +117,36 @@ export function createAuthService(deps: ServiceDeps): AuthService {
       }
     },
 
-    async login(email, password, meta) {
+    async login(email, password, meta, from) {
       const user = await User.findOne({ where: { email } });
+      // The device cookie counts only for the account it was issued to.
+      const deviceId = user && from.device?.userId === user.id ? from.device.deviceId : null;
+      const who = { email, ip: from.client, deviceId };
+      const verdict = await throttle.check(who);
+      if (verdict.waitS > 0) {
+        throw new AppError(
+          'rate_limited',
+          `Too many failed sign-ins: try again in ${verdict.waitS} second${verdict.waitS === 1 ? '' : 's'}`,
+          { retryAfterS: verdict.waitS, slowedBy: verdict.slowedBy },
+        );
+      }
       const ok = await verifyPassword(password, user?.passwordHash ?? null, cost);
       if (!user || !ok) {
+        const { notify, accountFailures } = await throttle.failed({ ...who, trusted: verdict.trusted });
+        if (notify && user) {
+          void sendSafely(
+            mailer,
+            logger,
+            signInFailuresMail({
+              to: user.email,
+              name: user.name,
+              failures: accountFailures,
+              windowMinutes: Math.round(config.rateLimits.windowMs / 60_000),
+              resetLink: dashboardLink(config.publicUrl, 'forgot-password'),
+            }),
+            'sign-in failures warning',
+          );
+        }
         const failed = {
           type: 'auth.login_failed' as const,
           actorUserId: null,
@@ -126,6 +162,7 @@ export function createAuthService(deps: ServiceDeps): AuthService {
         user.passwordHash = await hashPassword(password, cost);
         await user.save();
       }
+      await throttle.succeeded(who);
       await audit.recordForUser(
         user.id,
         { type: 'auth.login', actorUserId: user.id, subject: user.email },

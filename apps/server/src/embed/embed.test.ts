@@ -1,11 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { calculate } from '@wickstone/calc-core';
 import { embedWidgetSchema, errorBodySchema, widgetSchema, type Widget } from '@wickstone/contracts';
 import {
   createTestApp,
   mailbox,
+  runReportBody,
   seedOrgWithTeam,
   TestClient,
   uniqueEmail,
@@ -26,7 +26,7 @@ describe('public embed API', () => {
   let notify: string;
 
   beforeAll(async () => {
-    t = await createTestApp({ LEAD_LIMIT_PER_IP: '6' });
+    t = await createTestApp();
     org = await seedOrgWithTeam();
     owner = new TestClient(t.app);
     await owner.login(org.users.owner.email, org.users.owner.password);
@@ -61,22 +61,8 @@ describe('public embed API', () => {
       .set('Content-Type', 'text/plain;charset=UTF-8')
       .send(JSON.stringify(body));
 
-  function runBody(inputs: Record<string, number | string> = { diameter: 0.0008 }) {
-    const r = calculate('tube-rise', inputs);
-    return {
-      id: randomUUID(),
-      publicKey: widget.publicKey,
-      inputs: r.inputs,
-      unitSystem: 'si',
-      result: {
-        outputs: r.outputs,
-        warnings: r.warnings.map((w) => w.code),
-        inputHash: r.inputHash,
-        version: r.version,
-      },
-      pageUrl: `${SITE}/services/rising-damp`,
-    };
-  }
+  const runBody = (inputs: Record<string, number | string> = { diameter: 0.0008 }) =>
+    runReportBody(widget.publicKey, { id: randomUUID(), inputs, pageUrl: `${SITE}/services/rising-damp` });
 
   describe('settings', () => {
     it('answers an allowed origin with what the widget needs and nothing private', async () => {
@@ -319,21 +305,6 @@ describe('public embed API', () => {
       expect(fieldsOf(unknownRun.body)).toEqual(['body.runId']);
       expect(await Lead.count({ where: { runId: run.id } })).toBe(0);
     });
-
-    it('limits requests per address with the standard headers', async () => {
-      let last: request.Response | undefined;
-      for (let i = 0; i < 8; i++) {
-        last = await sendLead({
-          runId: randomUUID(),
-          publicKey: widget.publicKey,
-          fields: { name: 'A', email: uniqueEmail() },
-          consent: true,
-        });
-        if (last.status === 429) break;
-      }
-      expect(last?.status).toBe(429);
-      expect(last?.headers['ratelimit-policy']).toBeDefined();
-      expect(errorBodySchema.parse(last?.body).error.code).toBe('rate_limited');
-    });
+    // Lead and copy limits: limits.test.ts.
   });
 });

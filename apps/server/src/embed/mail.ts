@@ -57,16 +57,30 @@ export function leadNotificationMail(p: {
   };
 }
 
+/**
+ * The copy of a result a visitor asked for. It goes to an address the visitor typed, under the
+ * firm's name, so nothing else they typed is in it but their name (no message, company or other
+ * free text that could turn it into someone else's letter), and it says why it came.
+ */
 export function resultCopyMail(p: {
   to: string;
+  visitorName: string | null;
   orgName: string;
   widgetName: string;
+  /** The page's origin: one the firm allowed for this widget, not something the visitor typed. */
+  origin: string;
   calc: CalculatorDefinition;
   result: CalculationResult;
   system: UnitSystemId;
   firmCautions: string;
 }): OutgoingMail {
   const title = `Your ${oneLine(p.widgetName)} result from ${oneLine(p.orgName)}`;
+  const greeting = p.visitorName ? `Hello ${oneLine(p.visitorName)},` : 'Hello,';
+  const thanks = `Thank you for your request. ${oneLine(p.orgName)} will be in touch.`;
+  const why =
+    `You received this e-mail because this address was entered, with a request for a copy of the result, ` +
+    `in the ${oneLine(p.widgetName)} calculator on ${p.origin}. If that was not you, you can ignore it: ` +
+    'nothing else will be sent to you.';
   const cautions = [
     ...p.calc.cautions.map((c) => c.text),
     ...(p.firmCautions ? [p.firmCautions] : []),
@@ -74,7 +88,9 @@ export function resultCopyMail(p: {
   ];
   const lines = resultLines(p.calc, p.result, p.system);
   const text = [
-    `Thank you for your request. ${oneLine(p.orgName)} will be in touch.`,
+    greeting,
+    '',
+    thanks,
     '',
     ...lines,
     '',
@@ -82,16 +98,20 @@ export function resultCopyMail(p: {
     ...cautions.map((c) => `  - ${c}`),
     '',
     `Calculation core ${p.result.version}, input hash ${p.result.inputHash}`,
+    '',
+    why,
   ].join('\n');
   return {
     to: p.to,
     subject: title,
     text,
     html: html(title, [
-      `<p>Thank you for your request. ${escapeHtml(oneLine(p.orgName))} will be in touch.</p>`,
+      `<p>${escapeHtml(greeting)}</p>`,
+      `<p>${escapeHtml(thanks)}</p>`,
       pre(lines),
       `<h2 style="font-size:15px">Cautions</h2><ul>${cautions.map((c) => `<li>${escapeHtml(c)}</li>`).join('')}</ul>`,
       `<p style="font-size:12px;color:#4b5d66">Calculation core ${escapeHtml(p.result.version)}, input hash ${escapeHtml(p.result.inputHash)}</p>`,
+      `<p style="font-size:12px;color:#4b5d66">${escapeHtml(why)}</p>`,
     ]),
   };
 }

@@ -1,14 +1,19 @@
 import compression from 'compression';
 import express, { type NextFunction, type Request, type Response, type Router } from 'express';
-import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import { z } from 'zod';
 import { embedLeadBodySchema, embedRunBodySchema, publicKeySchema } from '@wickstone/contracts';
 import { AppError, parseRequest } from '../errors.js';
+import type { Counters } from '../http/counters.js';
+import { byIp, sharedRateLimit } from '../http/rate-limit.js';
 import type { EmbedService } from './service.js';
 
 export interface EmbedLimits {
   windowMs: number;
+  /** Accepted requests from one client address to one widget... */
   leadsPerIp: number;
+  /** ...and to every widget together: a higher ceiling. */
+  leadsPerIpAllWidgets: number;
+  /** Accepted requests to one widget from everyone. */
   leadsPerWidget: number;
 }
 
@@ -49,7 +54,7 @@ function jsonBody(req: Request, _res: Response, next: NextFunction): void {
  * may read an answer only when the page's origin is one a live widget allows (CORS), and each
  * call checks the origin against its own widget.
  */
-export function embedRouter(service: EmbedService, limits: EmbedLimits): Router {
+export function embedRouter(service: EmbedService, limits: EmbedLimits, counters: Counters): Router {
   const router = express.Router();
   const known = new Map<string, { ok: boolean; until: number }>();
 
@@ -83,21 +88,25 @@ export function embedRouter(service: EmbedService, limits: EmbedLimits): Router 
   });
   router.use(express.text({ type: ['text/plain', 'application/json'], limit: '32kb' }), jsonBody);
 
-  const limited = (name: string, limit: number, key: (req: Request) => string) =>
-    rateLimit({
-      windowMs: limits.windowMs,
+  // Only accepted requests count (a 4xx or 5xx answer gives its hit back): a visitor's mistakes, or
+  // another firm's widget, never use up what one widget allows. Counters are shared by all processes.
+  const leadLimit = (name: string, limit: number, key: (req: Request) => string) =>
+    sharedRateLimit(counters, name, {
       limit,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      identifier: name,
+      windowMs: limits.windowMs,
       keyGenerator: key,
-      handler: (_req, _res, next) =>
-        next(new AppError('rate_limited', 'Too many requests from here: wait a while and try again')),
+      skipFailedRequests: true,
+      message: 'Too many requests from here: wait a while and try again',
     });
-  const leadsPerIp = limited('leads-per-ip', limits.leadsPerIp, (req) => ipKeyGenerator(req.ip ?? 'unknown'));
-  const leadsPerWidget = limited('leads-per-widget', limits.leadsPerWidget, (req) =>
-    String((req.body as { publicKey?: unknown } | undefined)?.publicKey ?? ''),
+  const leadKey = (req: Request) =>
+    String((req.res?.locals.leadBody as { publicKey?: string } | undefined)?.publicKey ?? '');
+  const leadsPerIpPerWidget = leadLimit(
+    'leads-per-ip-widget',
+    limits.leadsPerIp,
+    (req) => `${leadKey(req)}|${byIp(req)}`,
   );
+  const leadsPerIp = leadLimit('leads-per-ip', limits.leadsPerIpAllWidgets, byIp);
+  const leadsPerWidget = leadLimit('leads-per-widget', limits.leadsPerWidget, leadKey);
 
   // The settings a widget asks for on every page view: compressed, and kept by the browser with a
   // validator (ETag, made by res.json) so an unchanged widget costs a 304 with no body.
@@ -120,12 +129,13 @@ export function embedRouter(service: EmbedService, limits: EmbedLimits): Router 
 
   router.post(
     '/leads',
-    leadsPerIp,
     (req, res, next) => {
-      // Validate before counting against the widget, so a malformed body cannot use up its quota.
+      // Validated first: the limits are per widget, named in the body.
       res.locals.leadBody = parseRequest(embedLeadBodySchema, req.body, 'body');
       next();
     },
+    leadsPerIpPerWidget,
+    leadsPerIp,
     leadsPerWidget,
     async (_req, res) => {
       res.status(201).json(await service.recordLead(res.locals.leadBody, res.req.get('origin')));

@@ -13,6 +13,7 @@ import type { EmbedLeadBody, EmbedRunBody, EmbedWidget, LeadFieldId } from '@wic
 import { leadFieldIds } from '@wickstone/contracts';
 import { Asset, Lead, Membership, Organization, Run, User, Widget } from '../db/models/index.js';
 import { AppError } from '../errors.js';
+import type { Counters } from '../http/counters.js';
 import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { assetUrl } from '../widgets/service.js';
 import { leadNotificationMail, resultCopyMail } from './mail.js';
@@ -81,8 +82,23 @@ export function createEmbedService(deps: {
   publicUrl: string;
   /** Called with runs once they are committed (the plan's run allowance); its failure never fails the report. */
   afterRunsStored?: (runs: { id: string; organizationId: number; createdAt: Date }[]) => Promise<void>;
+  counters: Counters;
+  /** Result copies mailed per recipient address per day and per widget per hour. */
+  copyLimits: { perRecipientPerDay: number; perWidgetPerHour: number };
 }): EmbedService {
-  const { sequelize, mailer, logger, publicUrl } = deps;
+  const { sequelize, mailer, logger, publicUrl, counters, copyLimits } = deps;
+
+  /**
+   * Whether one more result copy may go to this address from this widget. A copy goes to whatever
+   * address a visitor typed, under the firm's name, so it is limited per recipient (a stranger's
+   * mailbox cannot be flooded) and per widget (one widget cannot be used to mail many addresses).
+   */
+  async function copyAllowed(to: string, widgetId: number): Promise<boolean> {
+    const recipient = await counters.hit(`copy-to:${to.toLowerCase()}`, 24 * 3_600_000);
+    if (recipient.hits > copyLimits.perRecipientPerDay) return false;
+    const widget = await counters.hit(`copy-widget:${widgetId}`, 3_600_000);
+    return widget.hits <= copyLimits.perWidgetPerHour;
+  }
 
   async function liveWidget(publicKey: string, origin: string | undefined): Promise<Widget> {
     const w = await Widget.findOne({ where: { publicKey } });
@@ -301,20 +317,26 @@ export function createEmbedService(deps: {
         );
       }
       if (body.sendCopy && lead.email && calc && result) {
-        await sendSafely(
-          mailer,
-          logger,
-          resultCopyMail({
-            to: lead.email,
-            orgName: org?.name ?? '',
-            widgetName: w.name,
-            calc,
-            result,
-            system: run.unitSystem,
-            firmCautions: w.settings.cautions,
-          }),
-          'result copy',
-        );
+        if (await copyAllowed(lead.email, w.id)) {
+          await sendSafely(
+            mailer,
+            logger,
+            resultCopyMail({
+              to: lead.email,
+              visitorName: lead.name,
+              orgName: org?.name ?? '',
+              widgetName: w.name,
+              origin: lead.origin,
+              calc,
+              result,
+              system: run.unitSystem,
+              firmCautions: w.settings.cautions,
+            }),
+            'result copy',
+          );
+        } else {
+          logger.warn({ widgetId: w.id, leadId: lead.id }, 'result copy not sent: copy limit reached');
+        }
       }
       return { id: lead.id };
     },

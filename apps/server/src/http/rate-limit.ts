@@ -2,17 +2,17 @@ import type { Request, RequestHandler } from 'express';
 import { rateLimit, ipKeyGenerator, type Options } from 'express-rate-limit';
 import type { Config } from '../config.js';
 import { AppError } from '../errors.js';
+import { SharedCounterStore, type Counters } from './counters.js';
 
 /**
  * Rate limits with the standard headers (IETF draft 8: `RateLimit-Policy` and `RateLimit`, plus
- * `Retry-After` on a 429) and the one error shape. Counters live in this process's memory: enough
- * for one server process; several would need a shared store.
+ * `Retry-After` on a 429) and the one error shape. Counters live in MariaDB (`Counters`), so N
+ * server processes over one database count as one. Sign-in itself is throttled by
+ * `auth/throttle.ts` (growing delays per account and client), not by these.
  */
 export interface RateLimits {
-  /** Failed sign-ins (and invitation/reset attempts) from one client address. */
+  /** Failed password checks (account settings, reset, invitation) from one client address. */
   failuresPerIp: RequestHandler;
-  /** Failed sign-ins for one e-mail address, from anywhere. */
-  loginFailuresPerAccount: RequestHandler;
   /** Wrong passwords tried against one invitation. */
   acceptFailuresPerInvitation: RequestHandler;
   /** Every sign-up, password-reset mail or invitation mail from one client address. */
@@ -27,34 +27,50 @@ function validatedBody(req: Request): Record<string, unknown> {
   return typeof ctx.body === 'object' && ctx.body !== null ? (ctx.body as Record<string, unknown>) : {};
 }
 
-const byIp = (req: Request): string => ipKeyGenerator(req.ip ?? 'unknown');
+export const byIp = (req: Request): string => ipKeyGenerator(req.ip ?? 'unknown');
 
-export function createRateLimits(config: Config): RateLimits {
+/** One limiter over the shared counters; `name` keeps its keys apart from every other limiter's. */
+export function sharedRateLimit(
+  counters: Counters,
+  name: string,
+  p: { limit: number; windowMs: number; message?: string } & Partial<
+    Omit<Options, 'limit' | 'windowMs' | 'message'>
+  >,
+): RequestHandler {
+  const { limit, windowMs, message, ...extra } = p;
+  return rateLimit({
+    windowMs,
+    limit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    identifier: name,
+    store: new SharedCounterStore(counters, `${name}:`),
+    // The counter is in the database: if it cannot be reached, answer the outage (503), do not let all through.
+    passOnStoreError: false,
+    handler: (_req, res, next, options) => {
+      const retryAfterS = Number(res.getHeader('Retry-After')) || Math.round(windowMs / 1000);
+      next(
+        new AppError('rate_limited', message ?? 'Too many attempts: wait a while and try again', {
+          limit: options.limit,
+          windowS: Math.round(windowMs / 1000),
+          retryAfterS,
+        }),
+      );
+    },
+    ...extra,
+  });
+}
+
+export function createRateLimits(config: Config, counters: Counters): RateLimits {
   const { windowMs, loginPerAccount, loginPerIp } = config.rateLimits;
-  const base = (name: string, limit: number, extra: Partial<Options>): RequestHandler =>
-    rateLimit({
-      windowMs,
-      limit,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      identifier: name,
-      handler: (_req, _res, next, options) => {
-        next(
-          new AppError('rate_limited', 'Too many attempts: wait a while and try again', {
-            limit: options.limit,
-            windowS: Math.round(windowMs / 1000),
-          }),
-        );
-      },
-      ...extra,
-    });
+  const base = (
+    name: string,
+    limit: number,
+    extra: Partial<Omit<Options, 'limit' | 'windowMs' | 'message'>>,
+  ) => sharedRateLimit(counters, name, { limit, windowMs, ...extra });
 
   return {
     failuresPerIp: base('failures-per-ip', loginPerIp, { keyGenerator: byIp, skipSuccessfulRequests: true }),
-    loginFailuresPerAccount: base('login-per-account', loginPerAccount, {
-      keyGenerator: (req) => `login:${String(validatedBody(req).email ?? '')}`,
-      skipSuccessfulRequests: true,
-    }),
     acceptFailuresPerInvitation: base('accept-per-invitation', loginPerAccount, {
       keyGenerator: (req) => `invitation:${String(req.params.token ?? '')}`,
       skipSuccessfulRequests: true,

@@ -91,6 +91,32 @@ export function passwordResetMail(p: {
   return { to: p.to, subject: title, text, html };
 }
 
+/**
+ * To the holder of an account that saw a burst of failed sign-ins (OWASP ASVS 5.0 V6.3.4: users are
+ * notified of suspicious authentication attempts). Nothing in it comes from whoever failed.
+ */
+export function signInFailuresMail(p: {
+  to: string;
+  name: string;
+  failures: number;
+  windowMinutes: number;
+  resetLink: string;
+}): OutgoingMail {
+  const title = 'Failed sign-ins to your Wickstone account';
+  const what = `Your Wickstone account has seen ${p.failures} failed sign-ins in the last ${p.windowMinutes} minutes.`;
+  const calm =
+    'If that was you, there is nothing to do. If not, your password held: those attempts are being slowed down, and you can still sign in from a browser you used before.';
+  const advice = 'If you think someone knows your password, choose a new one.';
+  const text = [`Hello ${oneLine(p.name)},`, '', what, '', calm, '', `${advice} ${p.resetLink}`].join('\n');
+  const html = layout(
+    title,
+    [`Hello ${escapeHtml(p.name)},`, escapeHtml(what), escapeHtml(calm), escapeHtml(advice)],
+    { label: 'Choose a new password', url: p.resetLink },
+    'You receive this because it is your account. We send it at most once per burst.',
+  );
+  return { to: p.to, subject: title, text, html };
+}
+
 /** Links in e-mails point at the dashboard's pages under the public URL. */
 export function dashboardLink(publicUrl: string, path: string): string {
   // Relative to the base, so a public URL with a path prefix (https://host/app/) keeps it.
