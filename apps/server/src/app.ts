@@ -30,6 +30,7 @@ import { createAssetService } from './assets/service.js';
 import { assetRoutes } from './assets/router.js';
 import { createEmbedService } from './embed/service.js';
 import { embedRouter } from './embed/router.js';
+import { createRunIngest } from './embed/ingest.js';
 import { createReleaseService } from './releases/service.js';
 import { releasesRouter } from './releases/router.js';
 import { defaultReleasesDir } from './releases/paths.js';
@@ -100,7 +101,11 @@ export function createApp(deps: AppDeps): Express {
     widgetVersion: serverVersion,
   });
   const assets = createAssetService(config.publicUrl);
-  const embed = createEmbedService({ sequelize, mailer, logger, publicUrl: config.publicUrl });
+  const ingest = createRunIngest(sequelize, {
+    maxBatch: config.ingest.maxBatch,
+    maxInFlight: config.ingest.batchesInFlight,
+  });
+  const embed = createEmbedService({ sequelize, mailer, logger, publicUrl: config.publicUrl, ingest });
   const runs = createRunService({ sequelize });
   const usage = createUsageService({ sequelize });
   const leads = createLeadService({ sequelize, runs });

@@ -23,6 +23,12 @@ const envSchema = z.object({
   DB_USER: z.string().default('wickstone'),
   DB_PASSWORD: z.string().default('wickstone-local'),
   DB_POOL_MAX: z.coerce.number().int().min(1).max(200).default(10),
+  /** A read replica (binlog replication of the primary): usage and runs reads go there when set. */
+  DB_REPLICA_HOST: z.string().optional(),
+  DB_REPLICA_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  /** Run reports stored per transaction at most (group commit), and such transactions at once. */
+  INGEST_MAX_BATCH: z.coerce.number().int().min(1).max(5_000).default(500),
+  INGEST_BATCHES_IN_FLIGHT: z.coerce.number().int().min(1).max(32).default(4),
   JWT_SECRET: z.string().min(32).default(DEV_JWT_SECRET),
   /** bcrypt work factor; the default takes about 0.25 s per hash on the project's 2-core machine (bench/bcrypt.ts). */
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(DEFAULT_BCRYPT_COST),
@@ -88,7 +94,17 @@ export type Config = {
   port: number;
   publicUrl: string;
   logLevel: z.infer<typeof envSchema>['LOG_LEVEL'];
-  db: { host: string; port: number; name: string; user: string; password: string; poolMax: number };
+  db: {
+    host: string;
+    port: number;
+    name: string;
+    user: string;
+    password: string;
+    poolMax: number;
+    /** Where reads that may lag a moment (usage, runs) go; the primary when unset. */
+    replica: { host: string; port: number } | null;
+  };
+  ingest: { maxBatch: number; batchesInFlight: number };
   jwtSecret: string;
   auth: {
     bcryptCost: number;
@@ -144,7 +160,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       user: e.DB_USER,
       password: e.DB_PASSWORD,
       poolMax: e.DB_POOL_MAX,
+      replica:
+        e.DB_REPLICA_HOST || e.DB_REPLICA_PORT
+          ? { host: e.DB_REPLICA_HOST ?? e.DB_HOST, port: e.DB_REPLICA_PORT ?? e.DB_PORT }
+          : null,
     },
+    ingest: { maxBatch: e.INGEST_MAX_BATCH, batchesInFlight: e.INGEST_BATCHES_IN_FLIGHT },
     jwtSecret: e.JWT_SECRET,
     auth: {
       bcryptCost: e.BCRYPT_COST,

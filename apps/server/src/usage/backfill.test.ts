@@ -59,7 +59,7 @@ describe('the rollup migration', () => {
       origin: SITE,
       sendCopy: false,
     });
-    expect(await migrator.up()).toEqual([expect.objectContaining({ name: MIGRATION })]);
+    expect((await migrator.up()).map((m) => m.name)).toContain(MIGRATION);
     const stored = await storedRollups(db.sequelize);
     expect(stored).toEqual(await rollupsFromRaw(db.sequelize));
     expect(stored.daily.reduce((n, d) => n + d.runs, 0)).toBe(rows.length);
