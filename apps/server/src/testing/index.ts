@@ -18,3 +18,4 @@ export {
 } from './client.js';
 export { probeUrl, routeKey } from './routes.js';
 export { makePng } from './images.js';
+export { storedRollups, rollupsFromRaw } from '../usage/rollups.js';
