@@ -23,9 +23,6 @@ const envSchema = z.object({
   DB_USER: z.string().default('wickstone'),
   DB_PASSWORD: z.string().default('wickstone-local'),
   DB_POOL_MAX: z.coerce.number().int().min(1).max(200).default(10),
-  /** A read replica (binlog replication of the primary): usage and runs reads go there when set. */
-  DB_REPLICA_HOST: z.string().optional(),
-  DB_REPLICA_PORT: z.coerce.number().int().min(1).max(65535).optional(),
   /** Run reports stored per transaction at most (group commit), and such transactions at once. */
   INGEST_MAX_BATCH: z.coerce.number().int().min(1).max(5_000).default(500),
   INGEST_BATCHES_IN_FLIGHT: z.coerce.number().int().min(1).max(32).default(4),
@@ -101,8 +98,6 @@ export type Config = {
     user: string;
     password: string;
     poolMax: number;
-    /** Where reads that may lag a moment (usage, runs) go; the primary when unset. */
-    replica: { host: string; port: number } | null;
   };
   ingest: { maxBatch: number; batchesInFlight: number };
   jwtSecret: string;
@@ -160,10 +155,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       user: e.DB_USER,
       password: e.DB_PASSWORD,
       poolMax: e.DB_POOL_MAX,
-      replica:
-        e.DB_REPLICA_HOST || e.DB_REPLICA_PORT
-          ? { host: e.DB_REPLICA_HOST ?? e.DB_HOST, port: e.DB_REPLICA_PORT ?? e.DB_PORT }
-          : null,
     },
     ingest: { maxBatch: e.INGEST_MAX_BATCH, batchesInFlight: e.INGEST_BATCHES_IN_FLIGHT },
     jwtSecret: e.JWT_SECRET,

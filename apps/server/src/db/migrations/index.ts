@@ -5,6 +5,7 @@ import * as createWidgets from './20261202010000-create-widgets.js';
 import * as createRunsAndLeads from './20261202010100-create-runs-and-leads.js';
 import * as usageRollupsAndRetention from './20261202020600-usage-rollups-and-retention.js';
 import * as runsClusteredByTime from './20261202100000-runs-clustered-by-time.js';
+import * as leadsByRunAndOrganisation from './20261202100100-leads-by-run-and-organisation.js';
 
 /**
  * Every migration, in order, listed explicitly so the same list runs from the TypeScript sources
@@ -18,4 +19,5 @@ export const migrations = [
   { name: '20261202010100-create-runs-and-leads', ...createRunsAndLeads },
   { name: '20261202020600-usage-rollups-and-retention', ...usageRollupsAndRetention },
   { name: '20261202100000-runs-clustered-by-time', ...runsClusteredByTime },
+  { name: '20261202100100-leads-by-run-and-organisation', ...leadsByRunAndOrganisation },
 ];
