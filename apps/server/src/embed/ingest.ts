@@ -32,8 +32,6 @@ export interface RunReceipt {
 export interface RunIngest {
   /** Store one report; resolves once it has committed (or was already stored with the same body). */
   submit(body: EmbedRunBody, origin: string | undefined): Promise<RunReceipt>;
-  /** Resolves when every report submitted so far has been answered. */
-  drain(): Promise<void>;
 }
 
 export interface IngestOptions {
@@ -224,7 +222,6 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
   const queue: Pending[] = [];
   let inFlight = 0;
   let scheduled = false;
-  let idle: (() => void)[] = [];
   /** Live facts of widgets seen lately, checked again inside every batch's transaction. */
   const widgetCache = new Map<string, CachedWidget>();
 
@@ -410,11 +407,6 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
       inFlight += 1;
       void flush(batch).finally(() => {
         inFlight -= 1;
-        if (!queue.length && inFlight === 0) {
-          const waiting = idle;
-          idle = [];
-          for (const w of waiting) w();
-        }
         kick();
       });
       kick();
@@ -427,10 +419,6 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         queue.push({ body, origin, resolve, reject });
         kick();
       });
-    },
-    drain() {
-      if (!queue.length && inFlight === 0) return Promise.resolve();
-      return new Promise((r) => idle.push(r));
     },
   };
 }
