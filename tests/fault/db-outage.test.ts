@@ -1,66 +1,21 @@
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
-import type { AddressInfo } from 'node:net';
-import type { Server } from 'node:http';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createApp } from '@wickstone/server/app';
-import { loadConfig } from '@wickstone/server/config';
-import { createLogger } from '@wickstone/server/logger';
-import { createSequelize, initModels, migrateUp } from '@wickstone/server/db';
 import { errorBodySchema, healthResponseSchema } from '@wickstone/contracts';
-import {
-  ensureDatabase,
-  instance,
-  startMariaDB,
-  stopMariaDB,
-  type MariaDBInstance,
-} from '../../scripts/lib/mariadb.mjs';
+import { startMariaDB, stopMariaDB, type MariaDBInstance } from '../../scripts/lib/mariadb.mjs';
+import { startFaultServer, type FaultServer } from './fault-server.js';
 import { ApiSession } from '../support/api-session.js';
 
-// A MariaDB of this test's own, so stopping it harms no other test.
-// Its own MariaDB instance; the port can be moved so that several checkouts can test at once.
-const faultDbPort = process.env.TEST_FAULT_DB_PORT ?? '3399';
-
 describe('health when the database goes away and comes back', () => {
-  let dir: string;
+  let fault: FaultServer;
   let inst: MariaDBInstance;
-  let server: Server;
   let url: string;
-  let closePool: () => Promise<void>;
 
   beforeAll(async () => {
-    dir = mkdtempSync(path.join(tmpdir(), 'wst-outage-'));
-    inst = instance(dir, Number(faultDbPort));
-    await startMariaDB(inst, { quiet: true });
-    ensureDatabase(inst, { database: 'outage', user: 'outage', password: 'outage-pass' });
-    const config = loadConfig({
-      DB_PORT: faultDbPort,
-      DB_NAME: 'outage',
-      DB_USER: 'outage',
-      DB_PASSWORD: 'outage-pass',
-      LOG_LEVEL: 'silent',
-      NODE_ENV: 'test',
-      BCRYPT_COST: '4',
-    });
-    const sequelize = createSequelize(config.db);
-    initModels(sequelize);
-    await migrateUp(sequelize);
-    closePool = () => sequelize.close();
-    const app = createApp({ config, sequelize, logger: createLogger(config) });
-    server = await new Promise((resolve) => {
-      const s = app.listen(0, '127.0.0.1', () => resolve(s));
-    });
-    url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/v1/health`;
+    fault = await startFaultServer('outage', { migrate: true });
+    inst = fault.inst;
+    url = `${fault.api}/health`;
   });
 
-  afterAll(async () => {
-    server?.closeAllConnections();
-    await new Promise((r) => server?.close(r));
-    await closePool?.();
-    if (inst) await stopMariaDB(inst, { quiet: true });
-    rmSync(dir, { recursive: true, force: true });
-  });
+  afterAll(() => fault?.close());
 
   /** A browser that signs up while the database is up. */
   let browser: ApiSession;

@@ -25,9 +25,9 @@ export const args = parseArgs({
 
 /** The configured MariaDB, but a database of the benchmark's own (never the app's or the tests'). */
 export async function openBenchDatabase(
-  opts: { fresh?: boolean } = {},
+  opts: { fresh?: boolean; db?: string } = {},
 ): Promise<{ sequelize: Sequelize; config: Config }> {
-  const config = loadConfig({ ...process.env, LOG_LEVEL: 'silent', DB_NAME: args.db });
+  const config = loadConfig({ ...process.env, LOG_LEVEL: 'silent', DB_NAME: opts.db ?? args.db });
   const admin = await mariadb.createConnection({
     host: config.db.host,
     port: config.db.port,

@@ -2,7 +2,7 @@
 // store it replaced, measured in the same run: `npx tsx apps/server/bench/counters.ts` with the
 // test database's DB_* variables exported. Prints figures; asserts nothing.
 import { MemoryStore } from 'express-rate-limit';
-import { createTestDatabase } from '../src/testing/db.js';
+import { createTestDatabase } from '../testing/db.js';
 import { createCounters, SharedCounterStore } from '../src/http/counters.js';
 
 const N = 2000;

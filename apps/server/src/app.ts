@@ -33,6 +33,7 @@ import { createAssetService } from './assets/service.js';
 import { assetRoutes } from './assets/router.js';
 import { createEmbedService } from './embed/service.js';
 import { embedRouter } from './embed/router.js';
+import { createRunIngest } from './embed/ingest.js';
 import { createReleaseService } from './releases/service.js';
 import { releasesRouter } from './releases/router.js';
 import { defaultReleasesDir } from './releases/paths.js';
@@ -114,12 +115,19 @@ export function createApp(deps: AppDeps): Express {
   });
   const assets = createAssetService(config.publicUrl);
   const afterRunsStored = createRunAllowance({ sequelize, mailer, logger, publicUrl: config.publicUrl });
+  const ingest = createRunIngest(sequelize, {
+    maxBatch: config.ingest.maxBatch,
+    maxInFlight: config.ingest.batchesInFlight,
+    // Once per committed batch: runs past the plan's allowance are marked and the owner mailed.
+    afterStored: (runs) =>
+      afterRunsStored(runs).catch((err: unknown) => logger.error({ err }, 'run allowance hook failed')),
+  });
   const embed = createEmbedService({
     sequelize,
     mailer,
     logger,
     publicUrl: config.publicUrl,
-    afterRunsStored,
+    ingest,
     counters,
     copyLimits: config.embed.copies,
   });

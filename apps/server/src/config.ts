@@ -25,6 +25,9 @@ const envSchema = z.object({
   DB_USER: z.string().default('wickstone'),
   DB_PASSWORD: z.string().default('wickstone-local'),
   DB_POOL_MAX: z.coerce.number().int().min(1).max(200).default(10),
+  /** Run reports stored per transaction at most (group commit), and such transactions at once. */
+  INGEST_MAX_BATCH: z.coerce.number().int().min(1).max(5_000).default(500),
+  INGEST_BATCHES_IN_FLIGHT: z.coerce.number().int().min(1).max(32).default(4),
   /**
    * Signs sessions, CSRF tokens and device cookies. `npm start` makes one per checkout
    * (var/session-secret); production must set its own; without one, development gets a random
@@ -152,6 +155,7 @@ const configSchema = envSchema
         password: e.DB_PASSWORD,
         poolMax: e.DB_POOL_MAX,
       },
+      ingest: { maxBatch: e.INGEST_MAX_BATCH, batchesInFlight: e.INGEST_BATCHES_IN_FLIGHT },
       // Development without a secret gets a random one per process (npm start makes one per checkout).
       jwtSecret:
         e.JWT_SECRET ?? (e.NODE_ENV === 'test' ? TEST_JWT_SECRET : randomBytes(32).toString('base64url')),

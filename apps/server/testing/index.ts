@@ -20,3 +20,4 @@ export { probeUrl, routeKey } from './routes.js';
 export { makePng, makeZip } from './images.js';
 export { CARD_DECLINED, CARD_OK, FakePayments, startBillingApp, type BillingTestApp } from './payments.js';
 export { createLiveWidget, runReportBody } from './embed.js';
+export { storedRollups, rollupsFromRaw } from '../src/usage/rollups.js';

@@ -5,7 +5,7 @@ import type { Sequelize } from 'sequelize';
 import { calculate } from '@wickstone/calc-core';
 import { errorBodySchema, widgetSchema, type WidgetSettings } from '@wickstone/contracts';
 import type { TestClient } from './client.js';
-import { inventRun, type InventedRun, type RunWidget } from '../src/runs/invent.js';
+import { inventRun, reportOf, type InventedRun, type RunWidget } from '../src/runs/invent.js';
 import { storeRuns, type RunRow } from '../src/runs/store.js';
 
 /*
@@ -72,19 +72,12 @@ export async function reportRun(
   origin = SITE,
 ): Promise<string> {
   const r = calculate(w.calculatorId, inputs);
-  const body = {
+  const body = reportOf(r, {
     id: randomUUID(),
     publicKey: w.publicKey,
-    inputs: r.inputs,
     unitSystem: w.settings.units.system,
-    result: {
-      outputs: r.outputs,
-      warnings: r.warnings.map((x) => x.code),
-      inputHash: r.inputHash,
-      version: r.version,
-    },
     pageUrl: `${origin}/services/damp-survey`,
-  };
+  });
   await request(app).post('/api/v1/embed/runs').set('Origin', origin).send(body).expect(201);
   return body.id;
 }

@@ -13,6 +13,8 @@ import {
   type TestApp,
 } from '../../testing/index.js';
 import { Lead, Run } from '../db/models/index.js';
+import { rollupsFromRaw, storedRollups } from '../usage/rollups.js';
+import { reportOf } from '../runs/invent.js';
 
 const SITE = 'https://www.brackenridge-ground.example';
 const fieldsOf = (body: unknown) =>
@@ -177,6 +179,40 @@ describe('public embed API', () => {
       const res = await report(changed).expect(409);
       expect(fieldsOf(res.body)).toEqual(['body.id']);
       expect((await Run.findByPk(body.id))?.inputs.diameter).toBe(0.0008);
+    });
+
+    it('stores reports arriving together in one batch: each once, a repeat as a duplicate, a changed repeat refused, rollups equal to the rows', async () => {
+      const stored = runBody();
+      await report(stored).expect(201);
+      const fresh = Array.from({ length: 40 }, (_, i) => runBody({ diameter: 0.0002 + i * 0.00005 }));
+      const twin = runBody();
+      const changedTwin = { ...twin, inputs: { ...twin.inputs, diameter: 0.003 } };
+      const changedStored = { ...stored, inputs: { ...stored.inputs, diameter: 0.004 } };
+      // Sent at once, so they queue behind one another and share batches.
+      const answers = await Promise.all(
+        [...fresh, twin, twin, changedTwin, stored, changedStored].map((b) => report(b)),
+      );
+      const statuses = answers.map((a) => a.status);
+      expect(statuses.slice(0, 40)).toEqual(Array(40).fill(201));
+      // The twin: one stored (201), its exact repeat a duplicate (200); the changed one refused.
+      expect(statuses.slice(40, 43).sort()).toEqual([200, 201, 409]);
+      expect(answers[42]!.status).toBe(409);
+      expect(answers[43]!.status).toBe(200);
+      expect(answers[43]!.body).toEqual({ id: stored.id, agreed: true, duplicate: true });
+      expect(answers[44]!.status).toBe(409);
+      const ids = [...fresh, twin, stored].map((b) => b.id);
+      expect(await Run.count({ where: { id: ids } })).toBe(ids.length);
+      expect((await Run.findByPk(twin.id))?.inputs.diameter).toBe(twin.inputs.diameter);
+      expect(await storedRollups(t.db.sequelize)).toEqual(await rollupsFromRaw(t.db.sequelize));
+    });
+
+    it('refuses reports as soon as the widget is paused, and takes them again when it is live', async () => {
+      await report(runBody()).expect(201);
+      await owner.patch(`/orgs/${org.id}/widgets/${widget.id}`, { status: 'paused' }).expect(200);
+      const paused = runBody();
+      await report(paused).expect(404);
+      await owner.patch(`/orgs/${org.id}/widgets/${widget.id}`, { status: 'live' }).expect(200);
+      await report(paused).expect(201);
     });
 
     it('flags a report whose numbers the server does not reproduce', async () => {

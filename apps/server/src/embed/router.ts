@@ -2,7 +2,7 @@ import compression from 'compression';
 import express, { type NextFunction, type Request, type Response, type Router } from 'express';
 import { z } from 'zod';
 import { embedLeadBodySchema, embedRunBodySchema, publicKeySchema } from '@wickstone/contracts';
-import { AppError, parseRequest } from '../errors.js';
+import { AppError, isDatabaseUnavailable, parseRequest } from '../errors.js';
 import type { Counters } from '../http/counters.js';
 import { byIp, sharedRateLimit } from '../http/rate-limit.js';
 import type { EmbedService } from './service.js';
@@ -49,6 +49,12 @@ function jsonBody(req: Request, _res: Response, next: NextFunction): void {
   }
 }
 
+/** Let the page read the answer, and the `Retry-After` of an outage (not a CORS-safelisted header). */
+function allowOrigin(res: Response, origin: string): void {
+  res.set('Access-Control-Allow-Origin', origin);
+  res.set('Access-Control-Expose-Headers', 'Retry-After');
+}
+
 /**
  * `/api/v1/embed`: what widgets on the firms' sites call. No cookies and no CSRF token: a browser
  * may read an answer only when the page's origin is one a live widget allows (CORS), and each
@@ -72,8 +78,13 @@ export function embedRouter(service: EmbedService, limits: EmbedLimits, counters
     res.set('Cache-Control', 'no-store');
     res.vary('Origin');
     const origin = req.get('origin');
-    if (origin && (await originAllowed(origin.toLowerCase()))) {
-      res.set('Access-Control-Allow-Origin', origin);
+    try {
+      if (origin && (await originAllowed(origin.toLowerCase()))) allowOrigin(res, origin);
+    } catch (e) {
+      // While the database is down the origin cannot be checked; the 503 carries no data, so the
+      // widget may read it and its Retry-After.
+      if (origin && isDatabaseUnavailable(e)) allowOrigin(res, origin);
+      throw e;
     }
     if (req.method === 'OPTIONS') {
       if (res.get('Access-Control-Allow-Origin')) {

@@ -1,14 +1,6 @@
-import { createHash } from 'node:crypto';
-import { Op, QueryTypes, UniqueConstraintError, type Sequelize } from 'sequelize';
+import { Op, QueryTypes, type Sequelize } from 'sequelize';
 import type { Logger } from 'pino';
-import {
-  CalcInputError,
-  calculate,
-  canonicalJson,
-  getCalculator,
-  type CalculationResult,
-  type JsonValue,
-} from '@wickstone/calc-core';
+import { getCalculator, type CalculationResult } from '@wickstone/calc-core';
 import type { EmbedLeadBody, EmbedRunBody, EmbedWidget, LeadFieldId } from '@wickstone/contracts';
 import { leadFieldIds } from '@wickstone/contracts';
 import { Asset, Lead, Membership, Organization, Run, User, Widget } from '../db/models/index.js';
@@ -17,63 +9,21 @@ import type { Counters } from '../http/counters.js';
 import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { assetUrl } from '../widgets/service.js';
 import { leadNotificationMail, resultCopyMail } from './mail.js';
-import { retryOnDeadlock, storeRuns, type RunRow } from '../runs/store.js';
+import { checkWidget, createRunIngest, type RunIngest, type RunReceipt } from './ingest.js';
 import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
 
 export interface EmbedService {
   widgetFor(publicKey: string, origin: string | undefined): Promise<EmbedWidget>;
-  recordRun(
-    body: EmbedRunBody,
-    origin: string | undefined,
-  ): Promise<{ id: string; agreed: boolean; duplicate: boolean }>;
+  /** Answered once the run has committed with its batch (see ingest.ts). */
+  recordRun(body: EmbedRunBody, origin: string | undefined): Promise<RunReceipt>;
   recordLead(body: EmbedLeadBody, origin: string | undefined): Promise<{ id: number }>;
   /** Whether any live widget lets this origin embed it (for CORS preflight). */
   originKnown(origin: string): Promise<boolean>;
   asset(id: number): Promise<Asset | null>;
 }
 
-const RELATIVE_TOLERANCE = 1e-9;
-
 const field = (name: string, message: string) =>
   new AppError('validation_failed', `Invalid request: check ${name}`, { fields: [{ field: name, message }] });
-
-/** The same 404 for unknown, draft and paused keys: a key's existence is not revealed. */
-const notLive = () => new AppError('not_found', 'No live widget has this key');
-
-function close(a: number, b: number): boolean {
-  return a === b || Math.abs(a - b) <= RELATIVE_TOLERANCE * Math.max(Math.abs(a), Math.abs(b));
-}
-
-/** Where the client's result and the server's recomputation differ; null when they agree. */
-export function compareResults(
-  client: EmbedRunBody['result'],
-  server: CalculationResult,
-): Record<string, unknown> | null {
-  const problems: Record<string, unknown> = {};
-  if (client.version !== server.version)
-    problems.version = { client: client.version, server: server.version };
-  if (client.inputHash !== server.inputHash)
-    problems.inputHash = { client: client.inputHash, server: server.inputHash };
-  const serverCodes = server.warnings.map((w) => w.code);
-  if (client.warnings.join(',') !== serverCodes.join(','))
-    problems.warnings = { client: client.warnings, server: serverCodes };
-  const outputs: Record<string, unknown> = {};
-  for (const k of new Set([...Object.keys(client.outputs), ...Object.keys(server.outputs)])) {
-    const c = client.outputs[k];
-    const s = server.outputs[k];
-    const same =
-      c === undefined || s === undefined ? false : c === null || s === null ? c === s : close(c, s);
-    if (!same) outputs[k] = { client: c ?? null, server: s ?? null };
-  }
-  if (Object.keys(outputs).length) problems.outputs = outputs;
-  return Object.keys(problems).length ? problems : null;
-}
-
-export function bodyHash(body: EmbedRunBody): string {
-  return createHash('sha256')
-    .update(canonicalJson(body as unknown as JsonValue))
-    .digest('hex');
-}
 
 export function createEmbedService(deps: {
   sequelize: Sequelize;
@@ -85,8 +35,21 @@ export function createEmbedService(deps: {
   counters: Counters;
   /** Result copies mailed per recipient address per day and per widget per hour. */
   copyLimits: { perRecipientPerDay: number; perWidgetPerHour: number };
+  /** The group-commit ingest of run reports; one per process. */
+  ingest?: RunIngest;
 }): EmbedService {
   const { sequelize, mailer, logger, publicUrl, counters, copyLimits } = deps;
+  const afterStored = deps.afterRunsStored;
+  const ingest =
+    deps.ingest ??
+    createRunIngest(sequelize, {
+      ...(afterStored
+        ? {
+            afterStored: (runs) =>
+              afterStored(runs).catch((err: unknown) => logger.error({ err }, 'run allowance hook failed')),
+          }
+        : {}),
+    });
 
   /**
    * Whether one more result copy may go to this address from this widget. A copy goes to whatever
@@ -101,51 +64,7 @@ export function createEmbedService(deps: {
   }
 
   async function liveWidget(publicKey: string, origin: string | undefined): Promise<Widget> {
-    const w = await Widget.findOne({ where: { publicKey } });
-    if (!w || w.status !== 'live') throw notLive();
-    if (!origin || !w.allowedOrigins.includes(origin.toLowerCase())) {
-      throw new AppError('forbidden', 'This site is not allowed to embed this widget', {
-        origin: origin ?? null,
-      });
-    }
-    return w;
-  }
-
-  async function recompute(w: Widget, body: EmbedRunBody): Promise<CalculationResult> {
-    const calc = getCalculator(w.calculatorId);
-    if (!calc) throw new AppError('internal', `widget ${w.id} names a calculator this server lacks`);
-    // A locked or hidden input is the firm's choice: a visitor's report may not change it.
-    for (const [id, s] of Object.entries(w.settings.inputs)) {
-      if (s.mode === 'editable' || s.default === undefined) continue;
-      const sent = body.inputs[id];
-      if (sent !== undefined && sent !== s.default)
-        throw field(`body.inputs.${id}`, 'This input is fixed by the widget');
-    }
-    try {
-      return calculate(w.calculatorId, body.inputs);
-    } catch (e) {
-      if (!(e instanceof CalcInputError)) throw e;
-      const fields = e.issues.map((i) => ({ field: `body.inputs.${i.field}`, message: i.message }));
-      throw new AppError(
-        'validation_failed',
-        `Invalid request: check ${fields.map((f) => f.field).join(', ')}`,
-        { fields },
-      );
-    }
-  }
-
-  async function sameOrConflict(
-    id: string,
-    hash: string,
-  ): Promise<{ id: string; agreed: boolean; duplicate: true }> {
-    const existing = await Run.findByPk(id, { attributes: ['id', 'bodyHash', 'agreed'] });
-    if (!existing) throw new AppError('internal', 'run vanished after a duplicate key');
-    if (existing.bodyHash !== hash) {
-      throw new AppError('conflict', 'This run id was already reported with different content', {
-        fields: [{ field: 'body.id', message: 'Already used for another run' }],
-      });
-    }
-    return { id, agreed: existing.agreed, duplicate: true };
+    return checkWidget(await Widget.findOne({ where: { publicKey } }), origin);
   }
 
   async function recipientsFor(w: Widget): Promise<string[]> {
@@ -185,49 +104,7 @@ export function createEmbedService(deps: {
       };
     },
 
-    async recordRun(body, origin) {
-      const w = await liveWidget(body.publicKey, origin);
-      const hash = bodyHash(body);
-      const known = await Run.findByPk(body.id, { attributes: ['id'] });
-      if (known) return sameOrConflict(body.id, hash);
-      const server = await recompute(w, body);
-      const mismatch = compareResults(body.result, server);
-      const row: RunRow = {
-        id: body.id,
-        organizationId: w.organizationId,
-        widgetId: w.id,
-        calculatorId: w.calculatorId,
-        origin: (origin as string).toLowerCase(),
-        pageUrl: body.pageUrl ?? null,
-        release: w.release,
-        calcVersion: body.result.version,
-        unitSystem: body.unitSystem,
-        inputs: body.inputs,
-        clientResult: body.result,
-        serverResult: server as unknown as Record<string, unknown>,
-        warningCodes: server.warnings.map((x) => x.code),
-        hasWarning: server.warnings.length > 0,
-        agreed: mismatch === null,
-        mismatch,
-        inputHash: server.inputHash,
-        bodyHash: hash,
-        // Chosen here, not by the database, so the rollups count the run on the day it is stored with.
-        createdAt: new Date(),
-      };
-      try {
-        // Answered only once the run and its rollup counts have committed: an acknowledged run is stored.
-        await retryOnDeadlock(() =>
-          sequelize.transaction((transaction) => storeRuns(sequelize, [row], transaction)),
-        );
-      } catch (e) {
-        if (e instanceof UniqueConstraintError) return sameOrConflict(body.id, hash);
-        throw e;
-      }
-      await deps
-        .afterRunsStored?.([row])
-        .catch((err: unknown) => logger.error({ err }, 'run allowance hook failed'));
-      return { id: body.id, agreed: mismatch === null, duplicate: false };
-    },
+    recordRun: (body, origin) => ingest.submit(body, origin),
 
     async recordLead(body, origin) {
       const w = await liveWidget(body.publicKey, origin);

@@ -82,3 +82,20 @@ export function runRowFrom(w: RunWidget, result: CalculationResult, run: Invente
 export function inventRun(w: RunWidget, inputs: Record<string, number | string>, run: InventedRun): RunRow {
   return runRowFrom(w, calculate(w.calculatorId, inputs), run);
 }
+
+/** The report a widget sends for a calculation, as `POST /api/v1/embed/runs` takes it (tests, benchmarks). */
+export function reportOf(
+  r: CalculationResult,
+  report: { id: string; publicKey: string; unitSystem: 'si' | 'us'; pageUrl: string },
+) {
+  return {
+    ...report,
+    inputs: r.inputs,
+    result: {
+      outputs: r.outputs,
+      warnings: r.warnings.map((x) => x.code),
+      inputHash: r.inputHash,
+      version: r.version,
+    },
+  };
+}

@@ -1,6 +1,6 @@
-import type { CreationAttributes, Sequelize, Transaction } from 'sequelize';
-import { Lead, Run } from '../db/models/index.js';
-import { addRuns, countLeads } from '../usage/rollups.js';
+import { QueryTypes, type CreationAttributes, type Sequelize, type Transaction } from 'sequelize';
+import { Lead, type Run } from '../db/models/index.js';
+import { addRuns, countLeads, type Statement } from '../usage/rollups.js';
 
 /** A run as stored, with its time chosen by the caller: the rollups count it on that time's UTC day. */
 export type RunRow = CreationAttributes<Run> & { createdAt: Date };
@@ -15,7 +15,7 @@ export async function storeRuns(
   transaction: Transaction,
 ): Promise<void> {
   if (!rows.length) return;
-  await Run.bulkCreate([...rows], { transaction });
+  await insertRuns(sequelize, rows, transaction);
   await addRuns(
     sequelize,
     rows.map((r) => ({ ...r, led: false })),
@@ -23,11 +23,79 @@ export async function storeRuns(
   );
 }
 
-const DEADLOCK = 1213;
-function isDeadlock(e: unknown): boolean {
-  const original = (e as { original?: { errno?: unknown } } | null)?.original;
-  return original?.errno === DEADLOCK;
+const RUN_COLUMNS =
+  'id, organization_id, widget_id, calculator_id, origin, page_url, `release`, calc_version, unit_system, inputs, ' +
+  'client_result, server_result, warning_codes, has_warning, agreed, mismatch, input_hash, body_hash, created_at';
+const RUN_TUPLE = `(${RUN_COLUMNS.split(',')
+  .map(() => '?')
+  .join(',')})`;
+/** Rows per INSERT: a few hundred kilobytes at most, well under max_allowed_packet. */
+const INSERT_ROWS = 500;
+
+const json = (v: unknown): string | null => (v === null || v === undefined ? null : JSON.stringify(v));
+
+function runValues(r: RunRow): unknown[] {
+  return [
+    r.id,
+    r.organizationId,
+    r.widgetId,
+    r.calculatorId,
+    r.origin,
+    r.pageUrl ?? null,
+    r.release,
+    r.calcVersion,
+    r.unitSystem,
+    json(r.inputs),
+    json(r.clientResult),
+    json(r.serverResult),
+    json(r.warningCodes),
+    r.hasWarning ?? false,
+    r.agreed,
+    json(r.mismatch),
+    r.inputHash,
+    r.bodyHash,
+    r.createdAt,
+  ];
 }
+
+/**
+ * Multi-row INSERTs of runs with `?` values, built directly (no model instances: the ingest's hot
+ * path sends them on a connection of its own). A duplicate id fails the whole statement
+ * (ER_DUP_ENTRY) and InnoDB rolls back just that statement.
+ */
+export function insertRunStatements(rows: readonly RunRow[]): Statement[] {
+  const out: Statement[] = [];
+  for (let i = 0; i < rows.length; i += INSERT_ROWS) {
+    const chunk = rows.slice(i, i + INSERT_ROWS);
+    out.push({
+      sql: `INSERT INTO runs (${RUN_COLUMNS}) VALUES ${chunk.map(() => RUN_TUPLE).join(',')}`,
+      values: chunk.flatMap(runValues),
+    });
+  }
+  return out;
+}
+
+/** The same INSERTs in the caller's Sequelize transaction (seeds, fixtures). */
+export async function insertRuns(
+  sequelize: Sequelize,
+  rows: readonly RunRow[],
+  transaction: Transaction,
+): Promise<void> {
+  for (const s of insertRunStatements(rows)) {
+    await sequelize.query(s.sql, { replacements: s.values, type: QueryTypes.INSERT, transaction });
+  }
+}
+
+/** The server's error number, from the connector's error or Sequelize's wrapper around it. */
+function errno(e: unknown): unknown {
+  const err = e as { errno?: unknown; original?: { errno?: unknown } } | null;
+  return err?.original?.errno ?? err?.errno;
+}
+
+/** A duplicate key (the client-made run id reported twice). */
+export const isDuplicateKey = (e: unknown): boolean => errno(e) === 1062;
+
+const isDeadlock = (e: unknown): boolean => errno(e) === 1213;
 
 /**
  * Run a transaction again when InnoDB chose it as a deadlock victim (it was rolled back whole).

@@ -76,22 +76,39 @@ function group(
   };
 }
 
-async function upsert(
-  sequelize: Sequelize,
-  transaction: Transaction | null,
-  tableAndColumns: string,
-  counters: string[],
-  rows: unknown[][],
-): Promise<void> {
+/** A statement with its `?` values, for a caller that sends it on a connection of its own. */
+export interface Statement {
+  sql: string;
+  values: unknown[];
+}
+
+function upserts(tableAndColumns: string, counters: string[], rows: unknown[][]): Statement[] {
+  const out: Statement[] = [];
   for (let i = 0; i < rows.length; i += UPSERT_ROWS) {
     const chunk = rows.slice(i, i + UPSERT_ROWS);
     const tuple = `(${chunk[0]!.map(() => '?').join(',')})`;
-    await sequelize.query(
-      `INSERT INTO ${tableAndColumns} VALUES ${chunk.map(() => tuple).join(',')}
+    out.push({
+      sql: `INSERT INTO ${tableAndColumns} VALUES ${chunk.map(() => tuple).join(',')}
        ON DUPLICATE KEY UPDATE ${counters.map((c) => `${c} = ${c} + VALUES(${c})`).join(', ')}`,
-      { replacements: chunk.flat(), type: QueryTypes.INSERT, transaction },
-    );
+      values: chunk.flat(),
+    });
   }
+  return out;
+}
+
+function statements(deltas: { daily: DailyDelta[]; warnings: WarningDelta[] }): Statement[] {
+  return [
+    ...upserts(
+      'run_daily (organization_id, day, widget_id, calculator_id, origin, runs, warned, disagreed, warned_disagreed, led)',
+      ['runs', 'warned', 'disagreed', 'warned_disagreed', 'led'],
+      deltas.daily.map((d) => [...d.key, d.runs, d.warned, d.disagreed, d.warnedDisagreed, d.led]),
+    ),
+    ...upserts(
+      'run_warning_daily (organization_id, day, widget_id, code, runs)',
+      ['runs'],
+      deltas.warnings.map((w) => [...w.key, w.runs]),
+    ),
+  ];
 }
 
 async function apply(
@@ -99,20 +116,14 @@ async function apply(
   deltas: { daily: DailyDelta[]; warnings: WarningDelta[] },
   transaction: Transaction | null,
 ): Promise<void> {
-  await upsert(
-    sequelize,
-    transaction,
-    'run_daily (organization_id, day, widget_id, calculator_id, origin, runs, warned, disagreed, warned_disagreed, led)',
-    ['runs', 'warned', 'disagreed', 'warned_disagreed', 'led'],
-    deltas.daily.map((d) => [...d.key, d.runs, d.warned, d.disagreed, d.warnedDisagreed, d.led]),
-  );
-  await upsert(
-    sequelize,
-    transaction,
-    'run_warning_daily (organization_id, day, widget_id, code, runs)',
-    ['runs'],
-    deltas.warnings.map((w) => [...w.key, w.runs]),
-  );
+  for (const s of statements(deltas)) {
+    await sequelize.query(s.sql, { replacements: s.values, type: QueryTypes.INSERT, transaction });
+  }
+}
+
+/** The upserts that count newly stored runs: increments summed per rollup row, rows in key order. */
+export function addRunsStatements(runs: readonly RollupRun[]): Statement[] {
+  return statements(group(runs, 1, 'all'));
 }
 
 /** Count newly stored runs (in the transaction that inserted them). */

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { errorMessage, fieldErrors, request, RETRY_DELAYS_MS, type FetchLike } from './transport.js';
+import {
+  errorMessage,
+  fieldErrors,
+  MAX_RETRY_AFTER_MS,
+  request,
+  RETRY_DELAYS_MS,
+  type FetchLike,
+} from './transport.js';
 
 type Step = number | 'network';
 
@@ -35,6 +42,39 @@ describe('request', () => {
         mode: 'cors',
       });
     }
+  });
+
+  it('waits as long as Retry-After asks when that is longer than its own wait, never sooner, and at most a minute', async () => {
+    const answers: [number, string | null][] = [
+      [503, '5'],
+      [503, '1'],
+      [503, 'soon'],
+      [503, '3600'],
+      [201, null],
+    ];
+    const waits: number[] = [];
+    let i = 0;
+    const fetch: FetchLike = async () => {
+      const [status, after] = answers[i++]!;
+      return {
+        status,
+        text: async () => '{}',
+        headers: { get: (h: string) => (h === 'retry-after' ? after : null) },
+      };
+    };
+    const reply = await request(
+      'https://wickstone.example/api/v1/embed/runs',
+      { id: 'r-2' },
+      {
+        fetch,
+        sleep: async (ms) => {
+          waits.push(ms);
+        },
+      },
+    );
+    expect(reply.status).toBe(201);
+    // 5 s asked beside 1 s of its own; 1 s asked beside 2 s; unreadable; an hour asked, capped.
+    expect(waits).toEqual([5000, 2000, 4000, MAX_RETRY_AFTER_MS]);
   });
 
   it('gives up after the last wait, reporting what it last saw', async () => {

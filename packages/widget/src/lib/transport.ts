@@ -8,12 +8,28 @@ export type FetchLike = (
     credentials: 'omit';
     mode: 'cors';
   },
-) => Promise<{ readonly status: number; text(): Promise<string> }>;
+) => Promise<{
+  readonly status: number;
+  text(): Promise<string>;
+  readonly headers?: { get(name: string): string | null };
+}>;
 
 export type Sleep = (ms: number) => Promise<void>;
 
 /** Waits between attempts after a network failure or a 5xx: 1 s, 2 s, 4 s, 8 s, 16 s, then gives up (six attempts in about half a minute). */
 export const RETRY_DELAYS_MS: readonly number[] = [1000, 2000, 4000, 8000, 16000];
+
+/** The longest wait a `Retry-After` can ask for: a visitor's page does not wait minutes. */
+export const MAX_RETRY_AFTER_MS = 60_000;
+
+/**
+ * `Retry-After` in milliseconds when it is a number of seconds (what the API sends while its
+ * database is unavailable), capped at `MAX_RETRY_AFTER_MS`; undefined when absent or unreadable.
+ */
+export function retryAfterMs(value: string | null | undefined): number | undefined {
+  if (!value || !/^\d+$/.test(value.trim())) return undefined;
+  return Math.min(Number(value.trim()) * 1000, MAX_RETRY_AFTER_MS);
+}
 
 /** An answer from the API. `status` 0 means no answer at all (every attempt failed on the network). */
 export interface Reply {
@@ -22,6 +38,8 @@ export interface Reply {
   readonly body: unknown;
   /** How many requests were made. */
   readonly attempts: number;
+  /** What the server's `Retry-After` asked for, in milliseconds. */
+  readonly retryAfterMs?: number;
 }
 
 export interface SendOptions {
@@ -48,7 +66,8 @@ export function shouldRetry(status: number): boolean {
 }
 
 /**
- * One request, repeated unchanged after a network failure or a 5xx with the waits in `delays`.
+ * One request, repeated unchanged after a network failure or a 5xx with the waits in `delays`, or
+ * longer when the server's `Retry-After` asks for longer (never sooner than it asks).
  * The body is sent byte-for-byte the same each time, so a report keeps its run id and the server
  * stores it once however many attempts reach it.
  * @param body JSON sent as `text/plain;charset=UTF-8`: a CORS-simple request, so no preflight
@@ -72,13 +91,19 @@ export async function request(url: string, body: unknown, options: SendOptions =
     let reply: Reply;
     try {
       const res = await doFetch(url, init);
-      reply = { status: res.status, body: parse(await res.text().catch(() => '')), attempts: attempt };
+      const after = retryAfterMs(res.headers?.get('retry-after'));
+      reply = {
+        status: res.status,
+        body: parse(await res.text().catch(() => '')),
+        attempts: attempt,
+        ...(after === undefined ? {} : { retryAfterMs: after }),
+      };
     } catch {
       reply = { status: 0, body: null, attempts: attempt };
     }
     const wait = delays[attempt - 1];
     if (!shouldRetry(reply.status) || wait === undefined) return reply;
-    await sleep(wait);
+    await sleep(Math.max(wait, reply.retryAfterMs ?? 0));
   }
 }
 

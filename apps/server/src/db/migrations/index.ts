@@ -4,6 +4,8 @@ import * as createAuditEvents from './20261202000100-create-audit-events.js';
 import * as createWidgets from './20261202010000-create-widgets.js';
 import * as createRunsAndLeads from './20261202010100-create-runs-and-leads.js';
 import * as usageRollupsAndRetention from './20261202020600-usage-rollups-and-retention.js';
+import * as runsClusteredByTime from './20261202100000-runs-clustered-by-time.js';
+import * as leadsByRunAndOrganisation from './20261202100100-leads-by-run-and-organisation.js';
 import * as createRateLimitCounters from './20261202110000-create-rate-limit-counters.js';
 import * as billing from './20261202120000-billing.js';
 import * as leadNotes from './20261202130000-lead-notes.js';
@@ -19,6 +21,8 @@ export const migrations = [
   { name: '20261202010000-create-widgets', ...createWidgets },
   { name: '20261202010100-create-runs-and-leads', ...createRunsAndLeads },
   { name: '20261202020600-usage-rollups-and-retention', ...usageRollupsAndRetention },
+  { name: '20261202100000-runs-clustered-by-time', ...runsClusteredByTime },
+  { name: '20261202100100-leads-by-run-and-organisation', ...leadsByRunAndOrganisation },
   { name: '20261202110000-create-rate-limit-counters', ...createRateLimitCounters },
   { name: '20261202120000-billing', ...billing },
   { name: '20261202130000-lead-notes', ...leadNotes },

@@ -1,0 +1,434 @@
+import { createHash } from 'node:crypto';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import {
+  CalcInputError,
+  calculate,
+  canonicalJson,
+  getCalculator,
+  type CalculationResult,
+  type JsonValue,
+} from '@wickstone/calc-core';
+import type { EmbedRunBody, WidgetSettings } from '@wickstone/contracts';
+import { AppError } from '../errors.js';
+import { insertRunStatements, isDuplicateKey, retryOnDeadlock, type RunRow } from '../runs/store.js';
+import { addRunsStatements, jsonValue, type Statement } from '../usage/rollups.js';
+
+/*
+ * The ingest of visitors' run reports, the platform's hot path, by group commit: reports that
+ * arrive while a batch is being stored wait (a few milliseconds) and are stored together by the
+ * next one, in one transaction: one lookup of the batch's widgets, one multi-row INSERT of the runs,
+ * one upsert per rollup table with the increments summed per key. Each report's request is answered
+ * when its batch has committed, so an acknowledged run is stored. Nothing is read per report before
+ * it is written: a run id seen before is found by the INSERT's duplicate-key error, and only then
+ * are the batch's known ids read.
+ */
+
+export interface RunReceipt {
+  id: string;
+  agreed: boolean;
+  duplicate: boolean;
+}
+
+export interface RunIngest {
+  /** Store one report; resolves once it has committed (or was already stored with the same body). */
+  submit(body: EmbedRunBody, origin: string | undefined): Promise<RunReceipt>;
+}
+
+export interface IngestOptions {
+  /** Reports per batch at most. */
+  maxBatch?: number;
+  /** Batches being stored at once: while one commits, the next is recomputed. */
+  maxInFlight?: number;
+  /**
+   * Called once per committed batch with the runs it newly stored (the plan's run allowance marks
+   * and mails from here), before the batch's reports are answered. It must not throw: a report is
+   * stored whatever it does.
+   */
+  afterStored?: (runs: { id: string; organizationId: number; createdAt: Date }[]) => Promise<void>;
+}
+
+/** What a report needs of its widget: read once per batch with plain SQL, no model instances. */
+interface WidgetFacts {
+  id: number;
+  organizationId: number;
+  calculatorId: string;
+  status: string;
+  allowedOrigins: string[];
+  settings: WidgetSettings;
+  release: string;
+}
+
+/** The connector's connection under Sequelize's pool: what the pipelined batch is sent on. */
+interface RawConnection {
+  query(sql: string, values?: unknown[]): Promise<unknown>;
+}
+
+interface Pending {
+  body: EmbedRunBody;
+  origin: string | undefined;
+  resolve: (r: RunReceipt) => void;
+  reject: (e: unknown) => void;
+}
+
+const RELATIVE_TOLERANCE = 1e-9;
+
+const field = (name: string, message: string) =>
+  new AppError('validation_failed', `Invalid request: check ${name}`, { fields: [{ field: name, message }] });
+
+/** The same 404 for unknown, draft and paused keys: a key's existence is not revealed. */
+const notLive = () => new AppError('not_found', 'No live widget has this key');
+
+const conflict = () =>
+  new AppError('conflict', 'This run id was already reported with different content', {
+    fields: [{ field: 'body.id', message: 'Already used for another run' }],
+  });
+
+function close(a: number, b: number): boolean {
+  return a === b || Math.abs(a - b) <= RELATIVE_TOLERANCE * Math.max(Math.abs(a), Math.abs(b));
+}
+
+/** Where the client's result and the server's recomputation differ; null when they agree. */
+export function compareResults(
+  client: EmbedRunBody['result'],
+  server: CalculationResult,
+): Record<string, unknown> | null {
+  const problems: Record<string, unknown> = {};
+  if (client.version !== server.version)
+    problems.version = { client: client.version, server: server.version };
+  if (client.inputHash !== server.inputHash)
+    problems.inputHash = { client: client.inputHash, server: server.inputHash };
+  const serverCodes = server.warnings.map((w) => w.code);
+  if (client.warnings.join(',') !== serverCodes.join(','))
+    problems.warnings = { client: client.warnings, server: serverCodes };
+  const outputs: Record<string, unknown> = {};
+  for (const k of new Set([...Object.keys(client.outputs), ...Object.keys(server.outputs)])) {
+    const c = client.outputs[k];
+    const s = server.outputs[k];
+    const same =
+      c === undefined || s === undefined ? false : c === null || s === null ? c === s : close(c, s);
+    if (!same) outputs[k] = { client: c ?? null, server: s ?? null };
+  }
+  if (Object.keys(outputs).length) problems.outputs = outputs;
+  return Object.keys(problems).length ? problems : null;
+}
+
+export function bodyHash(body: EmbedRunBody): string {
+  return createHash('sha256')
+    .update(canonicalJson(body as unknown as JsonValue))
+    .digest('hex');
+}
+
+/** The live widget a report names, or why the report is refused. */
+export function checkWidget<W extends Pick<WidgetFacts, 'status' | 'allowedOrigins'>>(
+  w: W | null | undefined,
+  origin: string | undefined,
+): W {
+  if (!w || w.status !== 'live') throw notLive();
+  if (!origin || !w.allowedOrigins.includes(origin.toLowerCase())) {
+    throw new AppError('forbidden', 'This site is not allowed to embed this widget', {
+      origin: origin ?? null,
+    });
+  }
+  return w;
+}
+
+/** The server's own calculation of a report; a 400 naming the input when it cannot be made. */
+export function recompute(
+  w: Pick<WidgetFacts, 'id' | 'calculatorId' | 'settings'>,
+  body: EmbedRunBody,
+): CalculationResult {
+  const calc = getCalculator(w.calculatorId);
+  if (!calc) throw new AppError('internal', `widget ${w.id} names a calculator this server lacks`);
+  // A locked or hidden input is the firm's choice: a visitor's report may not change it.
+  for (const [id, s] of Object.entries(w.settings.inputs)) {
+    if (s.mode === 'editable' || s.default === undefined) continue;
+    const sent = body.inputs[id];
+    if (sent !== undefined && sent !== s.default)
+      throw field(`body.inputs.${id}`, 'This input is fixed by the widget');
+  }
+  try {
+    return calculate(w.calculatorId, body.inputs);
+  } catch (e) {
+    if (!(e instanceof CalcInputError)) throw e;
+    const fields = e.issues.map((i) => ({ field: `body.inputs.${i.field}`, message: i.message }));
+    throw new AppError(
+      'validation_failed',
+      `Invalid request: check ${fields.map((f) => f.field).join(', ')}`,
+      { fields },
+    );
+  }
+}
+
+interface WidgetRow {
+  id: number;
+  organization_id: number;
+  public_key: string;
+  calculator_id: string;
+  status: string;
+  allowed_origins: unknown;
+  settings: unknown;
+  release: string;
+}
+
+/**
+ * A digest of everything a report's handling reads from its widget, computed by the database: the
+ * batch's transaction reads it again (under a shared lock) to show the facts it used are current.
+ */
+const WIDGET_VERSION =
+  "MD5(CONCAT_WS('|', id, organization_id, calculator_id, status, allowed_origins, settings, `release`)) AS version";
+
+interface CachedWidget {
+  facts: WidgetFacts;
+  version: string;
+}
+
+async function widgetsByKey(sequelize: Sequelize, keys: string[]): Promise<Map<string, CachedWidget>> {
+  const rows = await sequelize.query<WidgetRow & { version: string }>(
+    `SELECT id, organization_id, public_key, calculator_id, status, allowed_origins, settings, \`release\`, ${WIDGET_VERSION}
+     FROM widgets WHERE public_key IN (?)`,
+    { replacements: [keys], type: QueryTypes.SELECT },
+  );
+  return new Map(
+    rows.map((r) => [
+      r.public_key,
+      {
+        version: r.version,
+        facts: {
+          id: Number(r.id),
+          organizationId: Number(r.organization_id),
+          calculatorId: r.calculator_id,
+          status: r.status,
+          allowedOrigins: jsonValue<string[]>(r.allowed_origins),
+          settings: jsonValue<WidgetSettings>(r.settings),
+          release: r.release,
+        },
+      },
+    ]),
+  );
+}
+
+/** One report made ready to store. */
+interface Prepared {
+  item: Pending;
+  row: RunRow;
+}
+
+/** A batch sorted out: rows to store, repeats of an id earlier in the batch, and refusals. */
+interface Batch {
+  rows: Prepared[];
+  followers: { item: Pending; of: Prepared; same: boolean }[];
+  refused: { item: Pending; error: unknown }[];
+}
+
+type Known = Map<string, { bodyHash: string; agreed: boolean }>;
+
+export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {}): RunIngest {
+  const maxBatch = options.maxBatch ?? 500;
+  const maxInFlight = options.maxInFlight ?? 2;
+  const queue: Pending[] = [];
+  let inFlight = 0;
+  let scheduled = false;
+  /** Live facts of widgets seen lately, checked again inside every batch's transaction. */
+  const widgetCache = new Map<string, CachedWidget>();
+
+  /**
+   * Turn a batch's reports into rows: the widget checks and recomputation per report (a refusal
+   * answers that report alone), and a second report of the same id in the batch follows the first.
+   */
+  function prepare(batch: Pending[], widgets: Map<string, CachedWidget>, now: Date): Batch {
+    const refused: { item: Pending; error: unknown }[] = [];
+    const rows: Prepared[] = [];
+    const byId = new Map<string, Prepared>();
+    const followers: { item: Pending; of: Prepared; same: boolean }[] = [];
+    for (const item of batch) {
+      try {
+        const { body, origin } = item;
+        const w = checkWidget(widgets.get(body.publicKey)?.facts, origin);
+        const hash = bodyHash(body);
+        const first = byId.get(body.id);
+        if (first) {
+          followers.push({ item, of: first, same: first.row.bodyHash === hash });
+          continue;
+        }
+        const server = recompute(w, body);
+        const mismatch = compareResults(body.result, server);
+        const p: Prepared = {
+          item,
+          row: {
+            id: body.id,
+            organizationId: w.organizationId,
+            widgetId: w.id,
+            calculatorId: w.calculatorId,
+            origin: (origin as string).toLowerCase(),
+            pageUrl: body.pageUrl ?? null,
+            release: w.release,
+            calcVersion: body.result.version,
+            unitSystem: body.unitSystem,
+            inputs: body.inputs,
+            clientResult: body.result,
+            serverResult: server as unknown as Record<string, unknown>,
+            warningCodes: server.warnings.map((x) => x.code),
+            hasWarning: server.warnings.length > 0,
+            agreed: mismatch === null,
+            mismatch,
+            inputHash: server.inputHash,
+            bodyHash: hash,
+            // Chosen here, not by the database, so the rollups count the run on the day it is stored with.
+            createdAt: now,
+          },
+        };
+        byId.set(body.id, p);
+        rows.push(p);
+      } catch (e) {
+        refused.push({ item, error: e });
+      }
+    }
+    return { rows, followers, refused };
+  }
+
+  /**
+   * Store the rows in one transaction. Returns, per run id already stored before this batch, its
+   * stored body hash and flag: those reports are answered as duplicates or conflicts, not inserted.
+   *
+   * The statements go on one pooled connection without waiting for each other (the connector
+   * pipelines them): one round trip for the whole batch, then one for COMMIT. autocommit is off
+   * rather than a START TRANSACTION, so that if InnoDB rolls the transaction back (a deadlock) the
+   * statements queued behind it still land in a transaction, which is rolled back, never committed
+   * on their own.
+   */
+  async function store(rows: Prepared[], keys: string[]): Promise<{ known: Known; stale: string[] }> {
+    const known: Known = new Map();
+    const pool = sequelize.connectionManager;
+    const conn = (await pool.getConnection({ type: 'INSERT' } as never)) as unknown as RawConnection;
+    const inList = (n: number) => Array.from({ length: n }, () => '?').join(',');
+    try {
+      const send = async (statements: Statement[]): Promise<{ failure: unknown; results: unknown[] }> => {
+        const settled = await Promise.allSettled(statements.map((st) => conn.query(st.sql, st.values)));
+        const failed = settled.find((r) => r.status === 'rejected');
+        return {
+          failure: failed ? (failed as PromiseRejectedResult).reason : null,
+          results: settled.map((r) => (r.status === 'fulfilled' ? r.value : null)),
+        };
+      };
+      const attempt = (fresh: RunRow[]) =>
+        send([
+          { sql: 'SET autocommit = 0', values: [] },
+          {
+            sql: `SELECT public_key, ${WIDGET_VERSION} FROM widgets WHERE public_key IN (${inList(keys.length)}) LOCK IN SHARE MODE`,
+            values: keys,
+          },
+          ...insertRunStatements(fresh),
+          ...addRunsStatements(fresh.map((r) => ({ ...r, led: false }))),
+        ]);
+      let fresh = rows.map((p) => p.row);
+      let sent = await attempt(fresh);
+      if (sent.failure && isDuplicateKey(sent.failure)) {
+        await conn.query('ROLLBACK');
+        // A locking read sees the latest committed rows, also those another process committed
+        // while this batch waited on their keys.
+        const ids = fresh.map((r) => r.id);
+        const stored = (await conn.query(
+          `SELECT id, body_hash, agreed FROM runs WHERE id IN (${inList(ids.length)}) LOCK IN SHARE MODE`,
+          ids,
+        )) as { id: string; body_hash: string; agreed: number | boolean }[];
+        for (const r of stored) known.set(r.id, { bodyHash: r.body_hash, agreed: Boolean(Number(r.agreed)) });
+        fresh = fresh.filter((r) => !known.has(r.id));
+        sent = await attempt(fresh);
+      }
+      if (sent.failure) throw sent.failure;
+      const current = new Map(
+        (sent.results[1] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
+      );
+      const stale = keys.filter((k) => current.get(k) !== widgetCache.get(k)?.version);
+      await conn.query(stale.length ? 'ROLLBACK' : 'COMMIT');
+      void conn.query('SET autocommit = 1').then(
+        () => pool.releaseConnection(conn as never),
+        () => pool.destroyConnection(conn as never).catch(() => undefined),
+      );
+      return { known, stale };
+    } catch (e) {
+      // Nothing committed; a connection in an unknown state is not handed back to the pool.
+      await conn.query('ROLLBACK').catch(() => undefined);
+      await pool.destroyConnection(conn as never).catch(() => undefined);
+      throw e;
+    }
+  }
+
+  /** Fetch these widgets' facts into the cache (a key no widget has is left out of it). */
+  async function refresh(keys: string[]): Promise<void> {
+    for (const k of keys) widgetCache.delete(k);
+    if (widgetCache.size > 10_000) widgetCache.clear();
+    for (const [k, v] of await widgetsByKey(sequelize, keys)) widgetCache.set(k, v);
+  }
+
+  async function flush(batch: Pending[]): Promise<void> {
+    try {
+      const keys = [...new Set(batch.map((b) => b.body.publicKey))];
+      const missing = keys.filter((k) => !widgetCache.has(k));
+      if (missing.length) await refresh(missing);
+      let prepared: Batch;
+      let known: Known;
+      for (let attempt = 1; ; attempt++) {
+        prepared = prepare(batch, widgetCache, new Date());
+        const stored = await retryOnDeadlock(() => store(prepared.rows, keys));
+        if (!stored.stale.length) {
+          known = stored.known;
+          break;
+        }
+        // A widget changed since its facts were cached: nothing was stored; sort the batch out again.
+        if (attempt >= 3)
+          throw new AppError('service_unavailable', 'Widget settings are changing: try again');
+        await refresh(stored.stale);
+      }
+      if (options.afterStored) {
+        const fresh = prepared.rows
+          .filter(({ row }) => !known.has(row.id))
+          .map(({ row }) => ({ id: row.id, organizationId: row.organizationId, createdAt: row.createdAt }));
+        if (fresh.length) await options.afterStored(fresh);
+      }
+      for (const { item, error } of prepared.refused) item.reject(error);
+      for (const { item, row } of prepared.rows) {
+        const before = known.get(row.id);
+        if (!before) item.resolve({ id: row.id, agreed: row.agreed, duplicate: false });
+        else if (before.bodyHash === row.bodyHash)
+          item.resolve({ id: row.id, agreed: before.agreed, duplicate: true });
+        else item.reject(conflict());
+      }
+      for (const { item, of, same } of prepared.followers) {
+        const before = known.get(of.row.id);
+        if (same && (!before || before.bodyHash === of.row.bodyHash))
+          item.resolve({ id: of.row.id, agreed: before ? before.agreed : of.row.agreed, duplicate: true });
+        else item.reject(conflict());
+      }
+    } catch (e) {
+      // Nothing of the batch committed.
+      for (const item of batch) item.reject(e);
+    }
+  }
+
+  function kick(): void {
+    if (scheduled || !queue.length || inFlight >= maxInFlight) return;
+    scheduled = true;
+    // The rest of this turn of the event loop joins the batch.
+    setImmediate(() => {
+      scheduled = false;
+      if (!queue.length || inFlight >= maxInFlight) return;
+      const batch = queue.splice(0, maxBatch);
+      inFlight += 1;
+      void flush(batch).finally(() => {
+        inFlight -= 1;
+        kick();
+      });
+      kick();
+    });
+  }
+
+  return {
+    submit(body, origin) {
+      return new Promise<RunReceipt>((resolve, reject) => {
+        queue.push({ body, origin, resolve, reject });
+        kick();
+      });
+    },
+  };
+}
