@@ -15,9 +15,13 @@ export function useSecondsLeft(until: number | null): number {
   const [now, setNow] = useState(() => Date.now());
   useEffect(() => {
     if (until === null) return;
-    setNow(Date.now());
+    // The first tick right away (not during the effect itself), then once a second.
+    const first = setTimeout(() => setNow(Date.now()), 0);
     const timer = setInterval(() => setNow(Date.now()), 1000);
-    return () => clearInterval(timer);
+    return () => {
+      clearTimeout(first);
+      clearInterval(timer);
+    };
   }, [until]);
   return until === null ? 0 : Math.max(0, Math.ceil((until - now) / 1000));
 }

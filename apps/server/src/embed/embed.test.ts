@@ -14,7 +14,6 @@ import {
 } from '../../testing/index.js';
 import { Lead, Run } from '../db/models/index.js';
 import { rollupsFromRaw, storedRollups } from '../usage/rollups.js';
-import { reportOf } from '../runs/invent.js';
 
 const SITE = 'https://www.brackenridge-ground.example';
 const fieldsOf = (body: unknown) =>
