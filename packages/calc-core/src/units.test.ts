@@ -187,3 +187,39 @@ describe('unit systems', () => {
     }
   });
 });
+
+describe('errors and spellings, exactly', () => {
+  const issue = (f: () => unknown) => {
+    try {
+      f();
+    } catch (e) {
+      return (e as CalcInputError).issues[0];
+    }
+    return undefined;
+  };
+
+  it('names the field, the code and the unit it did not know', () => {
+    expect(issue(() => getUnit('furlong'))).toEqual({
+      field: 'unit',
+      code: 'UNKNOWN_UNIT',
+      message: 'unknown unit "furlong"',
+    });
+    expect(issue(() => convert(1, 'm', 'furlong'))?.field).toBe('toUnit');
+    expect(issue(() => convert(1, 'furlong', 'm'))?.field).toBe('fromUnit');
+    expect(issue(() => toCanonical(1, 'furlong'))?.field).toBe('fromUnit');
+    expect(issue(() => fromCanonical(1, 'furlong'))?.field).toBe('toUnit');
+    expect(issue(() => convert(1, 'm', 'N'))).toMatchObject({ field: 'toUnit', code: 'UNIT_KIND_MISMATCH' });
+  });
+
+  it('reads °F and ° as typed', () => {
+    expect(getUnit('°F').id).toBe('degF');
+    expect(getUnit('°').id).toBe('deg');
+    expect(getUnit('°C').id).toBe('degC');
+  });
+
+  it('returns a value unchanged when the units are the same (no round trip through the canonical unit)', () => {
+    // 0.1 °F through °C and back is 0.09999999999999432 in binary64.
+    expect(convert(0.1, 'degF', 'degF')).toBe(0.1);
+    expect(convert(0.1, 'in', 'in')).toBe(0.1);
+  });
+});
