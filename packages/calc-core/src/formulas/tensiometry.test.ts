@@ -159,6 +159,19 @@ describe('the ring correction with its pieces', () => {
     expect(at(80 * (1 - 1e-9), 1)).toBe(true);
     expect(at(29.9, 1)).toBe(false);
     expect(at(80.1, 1)).toBe(false);
+    // R/r exactly 30 and 80 in binary64 (both radii multiples of 2⁻¹²): the edges are inside.
+    const u = 2 ** -12;
+    const exact = (ratio: number) =>
+      ringCorrection({
+        ringRadius: ratio * u,
+        wireRadius: u,
+        densityDifference: 1000,
+        force: ((ratio * u) ** 3 / 1) * 1000 * STANDARD_GRAVITY,
+      });
+    expect(exact(30).ringToWire).toBe(30);
+    expect(exact(30).inTableRange).toBe(true);
+    expect(exact(80).ringToWire).toBe(80);
+    expect(exact(80).inTableRange).toBe(true);
     expect(at(47, 0.3 * 1.0001)).toBe(true);
     expect(at(47, 4.5 * 0.9999)).toBe(true);
     expect(at(47, 0.299)).toBe(false);

@@ -148,3 +148,24 @@ describe('water viscosity, IAPWS 2008 and SR6-08', () => {
     expect(water.surfaceTension(25)).toBe(waterSurfaceTension(25));
   });
 });
+
+describe('what the water correlations refuse, exactly', () => {
+  it('names the correlation and its range in every refusal', () => {
+    expect(() => waterSurfaceTension(-1)).toThrow(/^water surface tension \(IAPWS R1-76\): -1 °C is outside/);
+    expect(() => waterDensity(151)).toThrow(/^water density \(Tanaka 2001 \/ Kell 1975\): 151 °C/);
+    expect(() => waterViscosity(111)).toThrow(/^water viscosity \(IAPWS SR6-08\): 111 °C/);
+  });
+
+  it('takes IAPWS 2008 viscosity over exactly 253.15–1173.15 K and names a bad argument', () => {
+    expect(iapws2008Viscosity({ density: 1000, temperatureK: 253.15 })).toBeGreaterThan(0);
+    expect(iapws2008Viscosity({ density: 100, temperatureK: 1173.15 })).toBeGreaterThan(0);
+    expect(() => iapws2008Viscosity({ density: 1000, temperatureK: 253.14 })).toThrow(RangeError);
+    expect(() => iapws2008Viscosity({ density: 100, temperatureK: 1173.16 })).toThrow(RangeError);
+    expect(() => iapws2008Viscosity({ density: -1, temperatureK: 300 })).toThrow(
+      expect.objectContaining({ field: 'density' }),
+    );
+    expect(() => iapws2008Viscosity({ density: 1000, temperatureK: Number.NaN })).toThrow(
+      expect.objectContaining({ field: 'temperatureK' }),
+    );
+  });
+});
