@@ -215,6 +215,10 @@ describe('errors and spellings, exactly', () => {
     expect(getUnit('°F').id).toBe('degF');
     expect(getUnit('°').id).toBe('deg');
     expect(getUnit('°C').id).toBe('degC');
+    expect(getUnit('Pa·s').id).toBe('Pa*s');
+    expect(getUnit('mPa·s').id).toBe('mPa*s');
+    expect(getUnit('m/s²').id).toBe('m/s2');
+    expect(getUnit('ft/s²').id).toBe('ft/s2');
   });
 
   it('returns a value unchanged when the units are the same (no round trip through the canonical unit)', () => {
