@@ -82,7 +82,8 @@ export function resultCopyMail(p: {
     `in the ${oneLine(p.widgetName)} calculator on ${p.origin}. If that was not you, you can ignore it: ` +
     'nothing else will be sent to you.';
   const cautions = [
-    ...p.calc.cautions.map((c) => c.text),
+    // The result's own cautions: the liquid's hazard first, then the calculator's.
+    ...p.result.cautions.map((c) => (c.source ? `${c.text} (${c.source})` : c.text)),
     ...(p.firmCautions ? [p.firmCautions] : []),
     ESTIMATE_NOTE,
   ];

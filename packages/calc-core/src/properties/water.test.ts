@@ -54,13 +54,13 @@ describe('water surface tension, IAPWS R1-76(2014)', () => {
 describe('water density, Tanaka 2001 and Kell 1975', () => {
   // [t °C, ρ kg/m³, tolerance, source]
   const tanaka: [number, number, number, string][] = [
-    [0, 999.8428, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [4, 999.9749, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [10, 999.7027, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [20, 998.2067, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [25, 997.047, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [30, 995.6488, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [40, 992.2152, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
+    [0, 999.8428, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [4, 999.9749, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [10, 999.7027, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [20, 998.2067, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [25, 997.047, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [30, 995.6488, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [40, 992.2152, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
   ];
   it.each(tanaka)('Tanaka: %s °C → %s kg/m³ ±%s (%s)', (t, expected, tol) => {
     const d = waterDensity(t);
@@ -85,7 +85,7 @@ describe('water density, Tanaka 2001 and Kell 1975', () => {
     expect(at(3.983035)).toBeGreaterThan(at(4.07));
   });
 
-  it('switches formulation at 40 °C with a step under 0.001 kg/m³ (Kell within 0.0033 of Tanaka, REFERENCES.md computed)', () => {
+  it('switches formulation at 40 °C with a step under 0.001 kg/m³ (Kell within 0.0033 of Tanaka over 0–40 °C, computed from both printed formulas)', () => {
     const below = waterDensity(40).value;
     const above = waterDensity(40 + 1e-9).value;
     expect(waterDensity(40 + 1e-9).formulation).toBe('kell-1975');
@@ -146,5 +146,26 @@ describe('water viscosity, IAPWS 2008 and SR6-08', () => {
     expect(water.viscosity(25)).toBe(waterViscosity(25));
     expect(water.density(25).value).toBe(waterDensity(25).value);
     expect(water.surfaceTension(25)).toBe(waterSurfaceTension(25));
+  });
+});
+
+describe('what the water correlations refuse, exactly', () => {
+  it('names the correlation and its range in every refusal', () => {
+    expect(() => waterSurfaceTension(-1)).toThrow(/^water surface tension \(IAPWS R1-76\): -1 °C is outside/);
+    expect(() => waterDensity(151)).toThrow(/^water density \(Tanaka 2001 \/ Kell 1975\): 151 °C/);
+    expect(() => waterViscosity(111)).toThrow(/^water viscosity \(IAPWS SR6-08\): 111 °C/);
+  });
+
+  it('takes IAPWS 2008 viscosity over exactly 253.15–1173.15 K and names a bad argument', () => {
+    expect(iapws2008Viscosity({ density: 1000, temperatureK: 253.15 })).toBeGreaterThan(0);
+    expect(iapws2008Viscosity({ density: 100, temperatureK: 1173.15 })).toBeGreaterThan(0);
+    expect(() => iapws2008Viscosity({ density: 1000, temperatureK: 253.14 })).toThrow(RangeError);
+    expect(() => iapws2008Viscosity({ density: 100, temperatureK: 1173.16 })).toThrow(RangeError);
+    expect(() => iapws2008Viscosity({ density: -1, temperatureK: 300 })).toThrow(
+      expect.objectContaining({ field: 'density' }),
+    );
+    expect(() => iapws2008Viscosity({ density: 1000, temperatureK: Number.NaN })).toThrow(
+      expect.objectContaining({ field: 'temperatureK' }),
+    );
   });
 });
