@@ -40,7 +40,7 @@ try {
     }),
   );
   await waitForHttp(`${env.FAKE_MAIL_API_URL}/messages`);
-  const payments = await startFakePayments({ port: Number(process.env.TEST_FAKE_PAYMENTS_PORT ?? 12111) });
+  const payments = await startFakePayments({ port: ports.payments });
   children.push(payments.child);
   Object.assign(env, payments.env);
 

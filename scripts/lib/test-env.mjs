@@ -11,13 +11,18 @@ import { isAlive, log, readPid, root, stopPid, waitForHttp } from './proc.mjs';
 export const testEnvFile = path.join(root, 'var', 'test-env.env');
 const smtpPidFile = path.join(root, 'var', 'test-env-smtp.pid');
 const smtpLogFile = path.join(root, 'var', 'test-env-smtp.log');
+const paymentsPidFile = path.join(root, 'var', 'test-env-payments.pid');
 
-/** Ports from TEST_DB_PORT, TEST_SMTP_PORT, TEST_FAKE_MAIL_HTTP_PORT (several checkouts can test at once). */
+/**
+ * Ports from TEST_DB_PORT, TEST_SMTP_PORT, TEST_FAKE_MAIL_HTTP_PORT and TEST_FAKE_PAYMENTS_PORT
+ * (several checkouts can test at once).
+ */
 export function testPorts(env = process.env) {
   return {
     db: Number(env.TEST_DB_PORT ?? 3308),
     smtp: Number(env.TEST_SMTP_PORT ?? 2526),
     mailHttp: Number(env.TEST_FAKE_MAIL_HTTP_PORT ?? 8026),
+    payments: Number(env.TEST_FAKE_PAYMENTS_PORT ?? 12111),
   };
 }
 
@@ -38,6 +43,8 @@ export function testEnv(ports, env = process.env) {
     SMTP_HOST: '127.0.0.1',
     SMTP_PORT: String(ports.smtp),
     FAKE_MAIL_API_URL: `http://127.0.0.1:${ports.mailHttp}`,
+    // The payments provider's fake (scripts/fake-payments.mjs); tests make their own accounts in it.
+    PAYMENTS_API_URL: `http://127.0.0.1:${ports.payments}`,
     CHROMIUM_PATH: '/usr/bin/chromium',
     ...(env.TEST_FAULT_DB_PORT ? { TEST_FAULT_DB_PORT: env.TEST_FAULT_DB_PORT } : {}),
   };
@@ -80,10 +87,28 @@ async function startDetachedFakeSmtp(ports) {
   return child.pid;
 }
 
-/** `npm run test:env`: start both, keep them running, write the environment file. */
+/** The payments provider's fake, detached like the fake SMTP server (its state in memory). */
+async function startDetachedFakePayments(ports) {
+  const known = readPid(paymentsPidFile);
+  if (known && isAlive(known)) return known;
+  const out = openSync(path.join(root, 'var', 'test-env-payments.log'), 'a');
+  const child = spawn('node', ['scripts/fake-payments.mjs'], {
+    cwd: root,
+    detached: true,
+    stdio: ['ignore', out, out],
+    env: { ...process.env, FAKE_PAYMENTS_PORT: String(ports.payments) },
+  });
+  child.unref();
+  writeFileSync(paymentsPidFile, `${child.pid}\n`);
+  await waitForHttp(`http://127.0.0.1:${ports.payments}/_fake/health`);
+  return child.pid;
+}
+
+/** `npm run test:env`: start them, keep them running, write the environment file. */
 export async function startTestEnv(ports = testPorts()) {
   await startTestDatabase(testDbInstance(ports), { fresh: false });
   const smtpPid = await startDetachedFakeSmtp(ports);
+  await startDetachedFakePayments(ports);
   const env = testEnv(ports);
   writeFileSync(
     testEnvFile,
@@ -93,7 +118,7 @@ export async function startTestEnv(ports = testPorts()) {
       .map(([k, v]) => `${k}=${v}`)
       .join('\n')}\n`,
   );
-  log(`test MariaDB on 127.0.0.1:${ports.db}, fake SMTP on ${ports.smtp} (pid ${smtpPid})`);
+  log(`test MariaDB on 127.0.0.1:${ports.db}, fake SMTP on ${ports.smtp} (pid ${smtpPid}), fake payments on ${ports.payments}`);
   log(`environment written to ${path.relative(root, testEnvFile)}: now run  npx vitest run <file>`);
 }
 
@@ -103,6 +128,8 @@ export async function stopTestEnv() {
   const port = Number(written.DB_PORT ?? testPorts().db);
   await stopPid(readPid(smtpPidFile), 5_000);
   rmSync(smtpPidFile, { force: true });
+  await stopPid(readPid(paymentsPidFile), 5_000);
+  rmSync(paymentsPidFile, { force: true });
   await stopMariaDB(testDbInstance({ db: port }), { quiet: true });
   rmSync(testEnvFile, { force: true });
 }
