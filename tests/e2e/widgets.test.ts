@@ -383,6 +383,11 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(Number(await rise.getAttribute('data-value'))).toBeCloseTo(jurin, 4);
     expect(await widget.locator('[data-caution="firm"]').textContent()).toContain(firmCaution);
     expect(await widget.locator('[data-warning="BORE_NOT_SMALL"]').count()).toBe(0);
+    // What the visitor can file: the assumptions, the engine version and the input hash; no hazard for water.
+    expect(await widget.locator('[data-wickstone="assumptions"] li').count()).toBeGreaterThan(3);
+    expect(await widget.locator('[data-wickstone="engine-version"]').textContent()).toMatch(/^\d+\.\d+\.\d+/);
+    expect(await widget.locator('[data-wickstone="input-hash"]').textContent()).toMatch(/^[0-9a-f]{64}$/);
+    expect(await widget.locator('[data-hazard]').count()).toBe(0);
 
     // Metric: the same result in millimetres.
     await widget.locator('[data-unit="si"]').check();

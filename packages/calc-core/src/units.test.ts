@@ -30,6 +30,10 @@ const mathjsName: Readonly<Record<UnitId, string | null>> = {
   mm2: 'mm^2',
   in2: 'inch^2',
   ft2: 'ft^2',
+  m3: 'm^3',
+  cm3: 'cm^3',
+  mm3: 'mm^3',
+  in3: 'inch^3',
   N: 'N',
   mN: 'mN',
   uN: 'uN',
@@ -47,6 +51,7 @@ const mathjsName: Readonly<Record<UnitId, string | null>> = {
   'lbf/ft': 'lbf/ft',
   'kg/m3': 'kg/m^3',
   'g/cm3': 'g/cm^3',
+  'g/mL': 'g/mL',
   'lb/ft3': 'lbm/ft^3',
   degC: 'degC',
   degF: 'degF',
@@ -94,8 +99,8 @@ describe('unit factors against NIST SP 811', () => {
     ['in', 0.0254, 0, 'NIST SP 811 B.8, exact'],
     ['ft', 0.3048, 0, 'NIST SP 811 B.8, exact'],
     ['lbf', 4.4482216152605, 0, 'NIST SP 811 B.8: 0.45359237 kg × 9.80665 m/s², exact'],
-    ['psi', 6894.757293168, 1e-9, 'NIST SP 811 B.8 via REFERENCES.md, printed'],
-    ['lbf/ft', 14.59390294, 1e-8, 'NIST SP 811 B.8 via REFERENCES.md, printed'],
+    ['psi', 6894.757293168, 1e-9, 'NIST SP 811 (2008) B.8, printed'],
+    ['lbf/ft', 14.59390294, 1e-8, 'NIST SP 811 (2008) B.8, printed'],
     ['dyn/cm', 1e-3, 0, 'NIST SP 811 B.8, exact'],
     ['inH2O', 249.08891, 1e-10, 'NIST SP 811 B.8: conventional inch of water, printed'],
     ['psf', 47.88026, 1e-5, 'NIST SP 811 B.8: 4.788 026 E+01, from memory'],
@@ -180,5 +185,41 @@ describe('unit systems', () => {
     for (const kind of quantityKinds) {
       expect(units[canonicalUnits[kind]]).toMatchObject({ kind, factor: 1, offset: 0 });
     }
+  });
+});
+
+describe('errors and spellings, exactly', () => {
+  const issue = (f: () => unknown) => {
+    try {
+      f();
+    } catch (e) {
+      return (e as CalcInputError).issues[0];
+    }
+    return undefined;
+  };
+
+  it('names the field, the code and the unit it did not know', () => {
+    expect(issue(() => getUnit('furlong'))).toEqual({
+      field: 'unit',
+      code: 'UNKNOWN_UNIT',
+      message: 'unknown unit "furlong"',
+    });
+    expect(issue(() => convert(1, 'm', 'furlong'))?.field).toBe('toUnit');
+    expect(issue(() => convert(1, 'furlong', 'm'))?.field).toBe('fromUnit');
+    expect(issue(() => toCanonical(1, 'furlong'))?.field).toBe('fromUnit');
+    expect(issue(() => fromCanonical(1, 'furlong'))?.field).toBe('toUnit');
+    expect(issue(() => convert(1, 'm', 'N'))).toMatchObject({ field: 'toUnit', code: 'UNIT_KIND_MISMATCH' });
+  });
+
+  it('reads °F and ° as typed', () => {
+    expect(getUnit('°F').id).toBe('degF');
+    expect(getUnit('°').id).toBe('deg');
+    expect(getUnit('°C').id).toBe('degC');
+  });
+
+  it('returns a value unchanged when the units are the same (no round trip through the canonical unit)', () => {
+    // 0.1 °F through °C and back is 0.09999999999999432 in binary64.
+    expect(convert(0.1, 'degF', 'degF')).toBe(0.1);
+    expect(convert(0.1, 'in', 'in')).toBe(0.1);
   });
 });

@@ -5,6 +5,7 @@ import { finite } from './guards.js';
 export type QuantityKind =
   | 'length'
   | 'area'
+  | 'volume'
   | 'force'
   | 'pressure'
   | 'surfaceTension'
@@ -19,6 +20,7 @@ export type QuantityKind =
 export const quantityKinds: readonly QuantityKind[] = [
   'length',
   'area',
+  'volume',
   'force',
   'pressure',
   'surfaceTension',
@@ -79,6 +81,11 @@ export const units = {
   mm2: unit('area', 'mm²', 'square millimetre', 1e-6),
   in2: unit('area', 'in²', 'square inch', SQUARE_INCH_M2),
   ft2: unit('area', 'ft²', 'square foot', SQUARE_FOOT_M2),
+  // volume, canonical m³
+  m3: unit('volume', 'm³', 'cubic metre', 1),
+  cm3: unit('volume', 'cm³', 'cubic centimetre', 1e-6),
+  mm3: unit('volume', 'mm³', 'cubic millimetre', 1e-9),
+  in3: unit('volume', 'in³', 'cubic inch', INCH_M ** 3),
   // force, canonical N
   N: unit('force', 'N', 'newton', 1),
   mN: unit('force', 'mN', 'millinewton', 1e-3),
@@ -100,6 +107,8 @@ export const units = {
   // density, canonical kg/m³
   'kg/m3': unit('density', 'kg/m³', 'kilogram per cubic metre', 1),
   'g/cm3': unit('density', 'g/cm³', 'gram per cubic centimetre', 1000),
+  // ASTM D971 states the density difference of the ring correction in g/mL (1 mL = 1 cm³ exactly).
+  'g/mL': unit('density', 'g/mL', 'gram per millilitre', 1000),
   'lb/ft3': unit('density', 'lb/ft³', 'pound per cubic foot', POUND_KG / CUBIC_FOOT_M3),
   // temperature, canonical °C; NIST SP 811 4.2.1.1: t/°C = T/K − 273.15 and t/°C = (t/°F − 32)/1.8
   degC: unit('temperature', '°C', 'degree Celsius', 1),
@@ -142,6 +151,7 @@ const aliases: Readonly<Record<string, UnitId>> = {
 export const canonicalUnits: Readonly<Record<QuantityKind, UnitId>> = {
   length: 'm',
   area: 'm2',
+  volume: 'm3',
   force: 'N',
   pressure: 'Pa',
   surfaceTension: 'N/m',
@@ -165,6 +175,7 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
   si: {
     length: 'm',
     area: 'cm2',
+    volume: 'cm3',
     force: 'mN',
     pressure: 'kPa',
     surfaceTension: 'mN/m',
@@ -179,6 +190,7 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
   us: {
     length: 'in',
     area: 'in2',
+    volume: 'in3',
     force: 'lbf',
     pressure: 'psi',
     surfaceTension: 'dyn/cm',

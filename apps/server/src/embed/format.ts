@@ -37,6 +37,12 @@ export function resultLines(
   lines.push('', 'Result');
   for (const out of calc.outputs) {
     const v = result.outputs[out.id];
+    // A withheld output is named with the reason, never given a figure.
+    const withheldBy = result.warnings.find((w) => (w.withholds ?? []).includes(out.id));
+    if (v === null && withheldBy) {
+      lines.push(`  ${out.label}: not defined here (${withheldBy.code})`);
+      continue;
+    }
     if (v === undefined || v === null) continue;
     const band = result.band?.outputs[out.id];
     const range = band ? ` (band ${shown(band.low, out, system)} to ${shown(band.high, out, system)})` : '';
@@ -46,12 +52,17 @@ export function resultLines(
     lines.push('', 'Validity warnings');
     for (const w of result.warnings) lines.push(`  [${w.code}] ${w.message}`);
   }
+  if (result.assumptions.length) {
+    lines.push('', 'Assumptions');
+    for (const a of result.assumptions) lines.push(`  - ${a}`);
+  }
   lines.push('', 'Working');
   for (const step of result.working) {
     lines.push(
       `  ${step.label}: ${step.formula}`,
       `    = ${step.substituted}`,
       `    = ${withUnit(formatNumber(step.value), step.unit)}`,
+      ...(step.source ? [`    (${step.source})`] : []),
     );
   }
   return lines;

@@ -68,7 +68,8 @@ export function resultCopyMail(p: {
 }): OutgoingMail {
   const title = `Your ${oneLine(p.widgetName)} result from ${oneLine(p.orgName)}`;
   const cautions = [
-    ...p.calc.cautions.map((c) => c.text),
+    // The result's own cautions: the liquid's hazard first, then the calculator's.
+    ...p.result.cautions.map((c) => (c.source ? `${c.text} (${c.source})` : c.text)),
     ...(p.firmCautions ? [p.firmCautions] : []),
     ESTIMATE_NOTE,
   ];

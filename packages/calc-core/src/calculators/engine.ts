@@ -13,6 +13,7 @@ import type {
   InputValues,
   Outputs,
   QuantityInput,
+  Solution,
 } from './types.js';
 
 function isPlainObject(value: unknown): value is Readonly<Record<string, unknown>> {
@@ -91,8 +92,9 @@ export function resolveInputs(def: CalculatorDefinition, raw: unknown): InputVal
   return resolved;
 }
 
-function checkSolution(def: CalculatorDefinition, outputs: Outputs, warningCodes: readonly string[]): void {
+function checkSolution(def: CalculatorDefinition, solution: Solution): void {
   // A definition that breaks its own contract is a bug in calc-core, not a bad input: plain Error.
+  const { outputs, warnings, working } = solution;
   for (const out of def.outputs) {
     const v = outputs[out.id];
     if (v === undefined || (v !== null && !Number.isFinite(v))) {
@@ -100,8 +102,16 @@ function checkSolution(def: CalculatorDefinition, outputs: Outputs, warningCodes
     }
   }
   const declared = new Set(def.warnings.map((w) => w.code));
-  for (const code of warningCodes) {
-    if (!declared.has(code)) throw new Error(`${def.id}: warning ${code} is not declared`);
+  const steps = new Set(working.map((s) => s.id).filter((id) => id !== undefined));
+  for (const w of warnings) {
+    if (!declared.has(w.code)) throw new Error(`${def.id}: warning ${w.code} is not declared`);
+    if (w.step !== undefined && !steps.has(w.step)) {
+      throw new Error(`${def.id}: warning ${w.code} points at a step ${w.step} the working does not have`);
+    }
+    // A withheld output is null: never a figure beside the warning that says it does not hold.
+    for (const id of w.withholds ?? []) {
+      if (outputs[id] !== null) throw new Error(`${def.id}: ${w.code} withholds ${id} but it has a value`);
+    }
   }
 }
 
@@ -127,11 +137,7 @@ export function runCalculation(def: CalculatorDefinition, raw: unknown): Calcula
     }
     throw err;
   }
-  checkSolution(
-    def,
-    solution.outputs,
-    solution.warnings.map((w) => w.code),
-  );
+  checkSolution(def, solution);
   return {
     calculator: def.id,
     inputs,
@@ -139,6 +145,8 @@ export function runCalculation(def: CalculatorDefinition, raw: unknown): Calcula
     warnings: solution.warnings,
     working: solution.working,
     band: solution.band,
+    assumptions: solution.assumptions,
+    cautions: [...(solution.hazards ?? []), ...def.cautions],
     version: VERSION,
     inputHash: hashInputs(def.id, inputs),
   };
@@ -161,9 +169,10 @@ export function bandOver(
 ): Band | null {
   if (basis.length === 0) return null;
   const ranges: Record<string, { low: number; high: number }> = {};
+  // Only outputs that have a value at the nominal inputs get a band: a withheld output gets none.
   const take = (outputs: Outputs): void => {
     for (const [id, v] of Object.entries(outputs)) {
-      if (v === null) continue;
+      if (v === null || v === undefined || typeof nominal[id] !== 'number') continue;
       const r = ranges[id];
       if (r === undefined) ranges[id] = { low: v, high: v };
       else {

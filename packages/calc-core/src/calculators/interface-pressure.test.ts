@@ -6,11 +6,31 @@ const sigma = waterSurfaceTension(20);
 
 describe('interface-pressure calculator', () => {
   it.each([
-    ['drop', { radius: 1e-3 }, (2 * sigma) / 1e-3, 'REFERENCES.md: drop 2σ/R'],
-    ['film-bubble', { radius: 1e-3 }, (4 * sigma) / 1e-3, 'REFERENCES.md: bubble with two surfaces 4σ/R'],
-    ['jet', { radius: 1e-3 }, sigma / 1e-3, 'REFERENCES.md: cylindrical jet σ/R'],
-    ['general', { r1: 1e-3, r2: 3e-3 }, sigma * (1 / 1e-3 + 1 / 3e-3), 'REFERENCES.md: σ(1/R1 + 1/R2)'],
-    ['pore', { poreRadius: 1e-6 }, (2 * sigma) / 1e-6, 'REFERENCES.md: Pc = 2σcosθ/r'],
+    [
+      'drop',
+      { radius: 1e-3 },
+      (2 * sigma) / 1e-3,
+      'Young–Laplace, Δp = 2σ/R for a sphere (Adamson & Gast 1997, ch. II)',
+    ],
+    [
+      'film-bubble',
+      { radius: 1e-3 },
+      (4 * sigma) / 1e-3,
+      'Young–Laplace, two surfaces of a soap film, 4σ/R (Adamson & Gast 1997, ch. II)',
+    ],
+    ['jet', { radius: 1e-3 }, sigma / 1e-3, 'Young–Laplace, cylinder R₂ = ∞ (Adamson & Gast 1997, ch. II)'],
+    [
+      'general',
+      { r1: 1e-3, r2: 3e-3 },
+      sigma * (1 / 1e-3 + 1 / 3e-3),
+      'Young–Laplace, σ(1/R1 + 1/R2) (Adamson & Gast 1997, ch. II)',
+    ],
+    [
+      'pore',
+      { poreRadius: 1e-6 },
+      (2 * sigma) / 1e-6,
+      'capillary pressure of a cylindrical pore, 2σ cos θ/r (Young–Laplace, Adamson & Gast 1997)',
+    ],
   ] as [string, Record<string, number>, number, string][])('%s (%s)', (shape, extra, expected) => {
     expect(run({ shape, ...extra }).outputs.pressure).toBeCloseTo(expected, 9);
   });

@@ -9,10 +9,11 @@ import {
   contactAngleInputs,
   ESTIMATE_CAUTION,
   fmt,
+  gravityAssumption,
   gravityInput,
+  STATIC_ASSUMPTIONS,
   LIQUID_TABLE_REFERENCES,
   liquidInputs,
-  MERCURY_CAUTION,
   nearNinety,
   MM,
   num,
@@ -22,6 +23,8 @@ import {
   resolveLiquid,
   warning,
   WATER_REFERENCES,
+  capillaryLengthStep,
+  solved,
 } from './shared.js';
 import type {
   CalculatorDefinition,
@@ -112,41 +115,52 @@ function solve(inputs: InputValues): Solution {
     return { pressure: p, pressureHead: p / (rho * g) };
   };
   const theta = angle?.angleDeg ?? 0;
-  const outputs = evaluate(theta);
-  const p = outputs.pressure ?? 0;
+  // A resting drop as wide as the capillary length is flattened: one radius does not describe it,
+  // so neither figure is given (the Bond number (R/ℓc)² is at least 1).
+  const lc = capillaryLength({ surfaceTension: sigma, density: rho, gravity: g });
+  const flattened = shape === 'drop' && num(inputs, 'radius') >= lc;
+  const computed = evaluate(theta);
+  const outputs: Outputs = flattened ? { pressure: null, pressureHead: null } : computed;
+  const p = computed.pressure ?? 0;
 
-  const working: WorkingStep[] = [
-    ...liquid.working,
-    ...(angle?.working ?? []),
-    {
-      label: 'Pressure across the interface',
-      formula: FORMULAS[shape],
-      substituted: pressureAt(theta).substituted,
-      value: p,
-      unit: 'Pa',
-    },
-    {
-      label: 'As a head of the liquid',
-      formula: 'Δp / (ρ·g)',
-      substituted: `${q(p, 'Pa')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')})`,
-      value: outputs.pressureHead ?? 0,
-      unit: 'm',
-    },
-  ];
+  const working: WorkingStep[] = [...liquid.working, ...(angle?.working ?? [])];
+  if (shape === 'drop') {
+    working.push(capillaryLengthStep(sigma, rho, g, lc));
+  }
+  if (!flattened) {
+    working.push(
+      {
+        id: 'pressure',
+        label: shape === 'pore' ? 'Capillary (entry) pressure of the pore' : 'Pressure across the interface',
+        formula: FORMULAS[shape],
+        substituted: pressureAt(theta).substituted,
+        value: p,
+        unit: 'Pa',
+        source: 'Young–Laplace equation (Young 1805, Laplace 1806)',
+      },
+      {
+        id: 'head',
+        label: 'As a head of the liquid',
+        formula: 'Δp / (ρ·g)',
+        substituted: `${q(p, 'Pa')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')})`,
+        value: computed.pressureHead ?? 0,
+        unit: 'm',
+        source: 'hydrostatics, p = ρ·g·h',
+      },
+    );
+  }
 
   const warnings: Warning[] = [];
-  if (shape === 'drop') {
-    const lc = capillaryLength({ surfaceTension: sigma, density: rho, gravity: g });
+  if (flattened) {
     const R = num(inputs, 'radius');
-    if (R >= lc) {
-      warnings.push(
-        warning(
-          'SHAPE_NOT_SPHERICAL',
-          `A radius of ${q(R, 'm')} is at least the capillary length (${q(lc, 'm')}): a resting drop of this size is flattened by gravity and one radius does not describe it (Bond number ${fmt((R / lc) ** 2)}).`,
-          ['radius'],
-        ),
-      );
-    }
+    warnings.push(
+      warning(
+        'SHAPE_NOT_SPHERICAL',
+        `A radius of ${q(R, 'm')} is at least the capillary length (${q(lc, 'm')}): a resting drop of this size is flattened by gravity and one radius does not describe it (Bond number ${fmt((R / lc) ** 2)}), so no pressure is given.`,
+        ['radius'],
+        { step: 'capillary-length', withholds: ['pressure', 'pressureHead'] },
+      ),
+    );
   }
   if (shape === 'pore') {
     if (theta > 90) {
@@ -155,14 +169,29 @@ function solve(inputs: InputValues): Solution {
           'PORE_NON_WETTING',
           'The liquid does not wet the pore (θ > 90°): the negative value is the pressure needed to push the liquid in.',
           ANGLE_FIELDS,
+          { step: 'pressure' },
         ),
       );
     }
     const near = nearNinety(theta);
-    if (near !== null) warnings.push(near);
+    if (near !== null) warnings.push({ ...near, step: 'pressure' });
   }
   const band = bandOver(angle?.basis ?? [], outputs, (v) => evaluate(v.contactAngleDeg ?? theta));
-  return { outputs, working, warnings, band };
+  const shapes: Readonly<Record<Shape, string>> = {
+    drop: 'A spherical drop: one radius of curvature, the same everywhere.',
+    'film-bubble': 'A thin-film bubble with two surfaces of the same radius.',
+    jet: 'A long cylindrical jet: one radius, the other infinite.',
+    general: 'The two principal radii of curvature as entered, at the point of interest.',
+    pore: 'A cylindrical pore of the radius entered, with a hemispherical meniscus at the contact angle.',
+  };
+  const assumptions = [
+    ...STATIC_ASSUMPTIONS,
+    shapes[shape],
+    liquid.assumption,
+    ...(angle !== null ? [angle.assumption] : []),
+    gravityAssumption(g),
+  ];
+  return solved({ outputs, working, warnings, band, assumptions }, liquid);
 }
 
 export const calculator: CalculatorDefinition = {
@@ -230,7 +259,6 @@ export const calculator: CalculatorDefinition = {
       text: 'A soil or building material has a distribution of pore sizes and shapes; its air-entry value comes from a measured water-retention curve, and the single-pore figure is a guide to the order of magnitude.',
     },
     CLEAN_SURFACES_CAUTION,
-    MERCURY_CAUTION,
   ],
   references: [
     {

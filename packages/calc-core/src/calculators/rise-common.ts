@@ -1,14 +1,17 @@
 import {
   capillaryLength,
   jurinRise,
-  meniscusCorrection,
-  slotMeniscusCorrection,
+  meniscusGeometry,
+  slotMeniscusGeometry,
   slotRise,
+  type MeniscusGeometry,
 } from '../formulas/capillary.js';
 import { bandOver } from './engine.js';
 import {
   contactAngleInputs,
   fmt,
+  gravityAssumption,
+  STATIC_ASSUMPTIONS,
   gravityInput,
   liquidInputs,
   MM,
@@ -20,6 +23,8 @@ import {
   resolveContactAngle,
   resolveLiquid,
   warning,
+  capillaryLengthStep,
+  solved,
 } from './shared.js';
 import type {
   InputDefinition,
@@ -49,7 +54,11 @@ export interface RiseGeometry {
     size: number;
     gravity: number;
   }) => number;
-  readonly correction: (size: number, contactAngleDeg: number) => number;
+  readonly correction: (size: number, contactAngleDeg: number) => MeniscusGeometry;
+  /** How the liquid held above the meniscus's lowest point is worked out, for the working. */
+  readonly heldFormula: string;
+  readonly riseSource: string;
+  readonly shape: string;
   /** Half the bore or gap over ℓc above which the meniscus correction exceeds 2 % of the rise at θ = 0. */
   readonly notSmallRatio: number;
   readonly codes: { readonly notSmall: string; readonly tooWide: string };
@@ -63,9 +72,12 @@ export const TUBE: RiseGeometry = {
   sizeId: 'diameter',
   sizeSymbol: 'd',
   riseFormula: 'h = 4·σ·cos θ / (ρ·g·d)',
-  correctionFormula: 'δ = s − V_cap / (π·r²), s = r/cos θ·(1 − sin θ); δ = r/3 at θ = 0',
+  correctionFormula: 'δ = V_held / (π·r²); δ = r/3 at θ = 0',
+  heldFormula: 'R_m = r / cos θ, s = R_m·(1 − sin θ), V_cap = π·s²·(3·R_m − s) / 3, V_held = π·r²·s − V_cap',
   rise: (a) => jurinRise({ ...a, diameter: a.size }),
-  correction: (size, angle) => meniscusCorrection({ diameter: size, contactAngleDeg: angle }),
+  correction: (size, angle) => meniscusGeometry({ diameter: size, contactAngleDeg: angle }),
+  riseSource: "Jurin 1718 (Jurin's law)",
+  shape: 'A round, uniform, vertical bore, open to the liquid below.',
   notSmallRatio: Math.sqrt(0.12),
   codes: { notSmall: 'BORE_NOT_SMALL', tooWide: 'BORE_TOO_WIDE' },
   noun: 'bore',
@@ -77,9 +89,13 @@ export const SLOT: RiseGeometry = {
   sizeId: 'gap',
   sizeSymbol: 'w',
   riseFormula: 'h = 2·σ·cos θ / (ρ·g·w)',
-  correctionFormula: 'δ = s − A_seg / w, s = (w/2)/cos θ·(1 − sin θ); δ = (1/2 − π/8)·w at θ = 0',
+  correctionFormula: 'δ = A_held / w; δ = (1/2 − π/8)·w at θ = 0',
+  heldFormula:
+    'R_m = (w/2) / cos θ, s = R_m·(1 − sin θ), φ = 90° − θ, A_seg = R_m²·(φ − sin φ·cos φ), A_held = w·s − A_seg',
   rise: (a) => slotRise({ ...a, gap: a.size }),
-  correction: (size, angle) => slotMeniscusCorrection({ gap: size, contactAngleDeg: angle }),
+  correction: (size, angle) => slotMeniscusGeometry({ gap: size, contactAngleDeg: angle }),
+  riseSource: "Jurin's force balance per unit length of two parallel walls (common practice)",
+  shape: 'Two flat, parallel, vertical walls, long against the gap, open to the liquid below.',
   notSmallRatio: Math.sqrt(0.01 / (0.5 - Math.PI / 8)),
   codes: { notSmall: 'GAP_NOT_SMALL', tooWide: 'GAP_TOO_WIDE' },
   noun: 'gap',
@@ -143,6 +159,9 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
   const rho = liquid.density;
   const lc = capillaryLength({ surfaceTension: sigma, density: rho, gravity: g });
   const ratio = size / 2 / lc;
+  // Half the bore or gap at or above ℓc: the meniscus is flattened by gravity and neither the rise
+  // law nor its correction holds, so neither is given (Rayleigh 1915: both are for r ≪ ℓc).
+  const tooWide = ratio >= 1;
 
   const evaluate = (theta: number): Outputs => {
     const rise = geometry.rise({
@@ -153,62 +172,103 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
       gravity: g,
     });
     return {
-      rise,
-      riseCorrected: theta <= 90 ? rise - geometry.correction(size, theta) : null,
+      rise: tooWide ? null : rise,
+      riseCorrected: !tooWide && theta <= 90 ? rise - geometry.correction(size, theta).correction : null,
       capillaryLength: lc,
       [geometry.ratioId]: ratio,
     };
   };
   const outputs = evaluate(angle.angleDeg);
-  const rise = outputs.rise ?? 0;
+  const rise = geometry.rise({
+    surfaceTension: sigma,
+    contactAngleDeg: angle.angleDeg,
+    density: rho,
+    size,
+    gravity: g,
+  });
   const s = geometry.sizeSymbol;
 
   const working: WorkingStep[] = [
     ...liquid.working,
     ...angle.working,
+    capillaryLengthStep(sigma, rho, g, lc),
     {
-      label: 'Capillary length',
-      formula: 'ℓc = √(σ / (ρ·g))',
-      substituted: `√(${q(sigma, 'N/m')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')}))`,
-      value: lc,
-      unit: 'm',
+      id: 'size-ratio',
+      label: `Half the ${geometry.noun} against the capillary length`,
+      formula: `(${s}/2) / ℓc`,
+      substituted: `${q(size / 2, 'm')} / ${q(lc, 'm')}`,
+      value: ratio,
+      unit: '1',
+      source: 'Rayleigh 1915 (the rise law and its correction need r ≪ ℓc)',
     },
-    {
+  ];
+  if (outputs.rise !== null && outputs.rise !== undefined) {
+    working.push({
+      id: 'rise',
       label: geometry.sizeId === 'diameter' ? "Rise, Jurin's law" : 'Rise between parallel walls',
       formula: geometry.riseFormula,
       substituted: `${geometry.sizeId === 'diameter' ? 4 : 2} × ${q(sigma, 'N/m')} × cos ${q(angle.angleDeg, 'deg')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(size, 'm')})`,
       value: rise,
       unit: 'm',
-    },
-  ];
+      source: geometry.riseSource,
+    });
+  }
   if (outputs.riseCorrected !== null && outputs.riseCorrected !== undefined) {
-    const delta = rise - outputs.riseCorrected;
+    const m = geometry.correction(size, angle.angleDeg);
+    const tube = geometry.sizeId === 'diameter';
     working.push(
       {
-        label: 'Meniscus-weight correction',
-        formula: geometry.correctionFormula,
-        substituted: `${s} = ${q(size, 'm')}, θ = ${q(angle.angleDeg, 'deg')}`,
-        value: delta,
+        id: 'meniscus-sag',
+        label: 'Meniscus radius and sag',
+        formula: tube ? 'R_m = r / cos θ, s = R_m·(1 − sin θ)' : 'R_m = (w/2) / cos θ, s = R_m·(1 − sin θ)',
+        substituted: `${tube ? 'r' : 'w/2'} = ${q(size / 2, 'm')}, θ = ${q(angle.angleDeg, 'deg')}: R_m = ${Number.isFinite(m.radius) ? q(m.radius, 'm') : '∞ (flat)'}`,
+        value: m.sag,
         unit: 'm',
+        source: 'spherical (tube) or cylindrical (slot) meniscus, Rayleigh 1915',
       },
       {
+        id: 'meniscus-held',
+        label: tube
+          ? 'Liquid held above the lowest point of the meniscus'
+          : 'Liquid held above the lowest point, per unit length',
+        formula: geometry.heldFormula,
+        substituted: `s = ${q(m.sag, 'm')}, ${s} = ${q(size, 'm')}`,
+        value: m.held,
+        unit: tube ? 'm3' : 'm2',
+        source: 'geometry of the meniscus, derived here',
+      },
+      {
+        id: 'meniscus-correction',
+        label: 'Meniscus-weight correction',
+        formula: geometry.correctionFormula,
+        substituted: tube
+          ? `${q(m.held, 'm3')} / (π × (${q(size / 2, 'm')})²)`
+          : `${q(m.held, 'm2')} / ${q(size, 'm')}`,
+        value: m.correction,
+        unit: 'm',
+        source: 'Rayleigh 1915 (r/3 at θ = 0); the same geometry for θ > 0, derived here',
+      },
+      {
+        id: 'rise-corrected',
         label: 'Rise to the bottom of the meniscus, corrected',
         formula: 'h − δ',
-        substituted: `${q(rise, 'm')} − ${q(delta, 'm')}`,
+        substituted: `${q(rise, 'm')} − ${q(m.correction, 'm')}`,
         value: outputs.riseCorrected,
         unit: 'm',
+        source: 'Rayleigh 1915',
       },
     );
   }
 
   const warnings: Warning[] = [];
   const fields = [geometry.sizeId];
-  if (ratio >= 1) {
+  if (tooWide) {
     warnings.push(
       warning(
         geometry.codes.tooWide,
-        `Half the ${geometry.noun} is ${fmt(ratio)} times the capillary length (${q(lc, 'm')}): the meniscus is flattened by gravity and neither ${geometry.sizeId === 'diameter' ? "Jurin's law" : 'the slot formula'} nor its correction holds.`,
+        `Half the ${geometry.noun} is ${fmt(ratio)} times the capillary length (${q(lc, 'm')}): the meniscus is flattened by gravity and neither ${geometry.sizeId === 'diameter' ? "Jurin's law" : 'the slot formula'} nor its correction holds, so no rise is given.`,
         fields,
+        { step: 'size-ratio', withholds: ['rise', 'riseCorrected'] },
       ),
     );
   } else if (ratio > geometry.notSmallRatio) {
@@ -217,23 +277,33 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
         geometry.codes.notSmall,
         `Half the ${geometry.noun} is ${fmt(ratio)} of the capillary length (${q(lc, 'm')}), so the liquid in the meniscus changes the rise by more than 2 %: use the corrected rise.`,
         fields,
+        { step: 'size-ratio' },
       ),
     );
   }
   const near = nearNinety(angle.angleDeg);
-  if (near !== null) warnings.push(near);
-  if (outputs.riseCorrected === null) {
+  if (near !== null) warnings.push(tooWide ? near : { ...near, step: 'rise' });
+  if (!tooWide && angle.angleDeg > 90) {
     warnings.push(
       warning(
         'MENISCUS_CORRECTION_NOT_APPLIED',
-        'The meniscus is convex (θ > 90°); the meniscus-weight correction is for a concave meniscus and is not applied.',
+        'The meniscus is convex (θ > 90°); the meniscus-weight correction is for a concave meniscus and is not applied: the corrected rise is not defined here.',
         ANGLE_FIELDS,
+        { step: 'rise', withholds: ['riseCorrected'] },
       ),
     );
   }
 
   const band = bandOver(angle.basis, outputs, (v) => evaluate(v.contactAngleDeg ?? angle.angleDeg));
-  return { outputs, working, warnings, band };
+  const assumptions = [
+    ...STATIC_ASSUMPTIONS,
+    geometry.shape,
+    'The rise is measured from the flat free surface of a wide reservoir to the bottom of the meniscus.',
+    liquid.assumption,
+    angle.assumption,
+    gravityAssumption(g),
+  ];
+  return solved({ outputs, working, warnings, band, assumptions }, liquid);
 }
 
 /** The warning catalogue of a rise calculator. */

@@ -1,8 +1,12 @@
 import { CalcInputError } from '../errors.js';
 import { contactAnglePresets, getContactAnglePreset } from '../properties/contactAngles.js';
-import { getLiquid, liquids, MERCURY_HAZARD } from '../properties/liquids.js';
+import { getLiquid, liquids } from '../properties/liquids.js';
 import {
+  IAPWS_R1_76,
+  IAPWS_SR6_08,
+  KELL_1975,
   KELL_SOURCE,
+  TANAKA_2001,
   TANAKA_SOURCE,
   waterDensity,
   waterSurfaceTension,
@@ -20,6 +24,7 @@ import type {
   InputValues,
   QuantityInput,
   Reference,
+  Solution,
   Warning,
   WorkingStep,
 } from './types.js';
@@ -39,14 +44,36 @@ import type {
 /** Working and warnings print numbers with the one formatter people see everywhere (`format.ts`). */
 export { formatValue as fmt } from '../format.js';
 
+/** Superscript digits, for the powers of t in a printed polynomial (Kell 1975). */
+const SUPERSCRIPT: Readonly<Record<string, string>> = { '2': '²', '3': '³', '4': '⁴', '5': '⁵' };
+
 /** A number with its unit symbol, spaced by the one rule (`display.ts`): `0.07274 N/m`, `20 °C`, `0°`. */
 export function q(value: number, unit: UnitId, digits = 4): string {
   return withUnit(formatValue(value, digits), unit);
 }
 
+/**
+ * A published coefficient exactly as the code holds it (all its digits, a true minus sign), so the
+ * working shows the very number computed with.
+ */
+export function coef(value: number): string {
+  return String(value).replace('-', '−');
+}
+
 /** A warning instance; `fields` are the input ids a form should highlight. */
-export function warning(code: string, message: string, fields: readonly string[]): Warning {
-  return { code, message, fields };
+export function warning(
+  code: string,
+  message: string,
+  fields: readonly string[],
+  extra: { readonly step?: string; readonly withholds?: readonly string[] } = {},
+): Warning {
+  return {
+    code,
+    message,
+    fields,
+    ...(extra.step !== undefined ? { step: extra.step } : {}),
+    ...(extra.withholds !== undefined && extra.withholds.length > 0 ? { withholds: extra.withholds } : {}),
+  };
 }
 
 // ---------------------------------------------------------------- reading resolved inputs
@@ -152,7 +179,10 @@ export interface ResolvedLiquid {
   readonly density: number;
   readonly viscosity: number;
   readonly working: readonly WorkingStep[];
-  readonly hazard?: string;
+  /** The liquid's own hazard, for the result's cautions (first in the list). */
+  readonly hazard?: Caution;
+  /** Where the properties come from, as an assumption of the result. */
+  readonly assumption: string;
 }
 
 const IAPWS_ST = 'IAPWS R1-76(2014)';
@@ -184,10 +214,12 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
     const t = num(inputs, 'temperatureC');
     const T = t + 273.15;
     const sigma = waterProperty(() => waterSurfaceTension(t));
+    const { B, b, mu: expo, Tc } = IAPWS_R1_76;
+    const tau = 1 - T / Tc;
     working.push({
       label: `Surface tension of water at ${q(t, 'degC')}`,
-      formula: 'σ = 235.8 mN/m · τ^1.256 · (1 − 0.625·τ), τ = 1 − T / 647.096 K',
-      substituted: `T = ${q(T, 'K', 6)}, τ = ${formatValue(1 - T / 647.096)}`,
+      formula: `σ = B·τ^μ·(1 + b·τ), τ = 1 − T / Tc; B = ${coef(B * 1000)} mN/m, b = ${coef(b)}, μ = ${coef(expo)}, Tc = ${coef(Tc)} K`,
+      substituted: `T = ${q(T, 'K', 6)}, τ = 1 − ${formatValue(T, 6)} / ${coef(Tc)} = ${formatValue(tau, 6)}; σ = ${coef(B)} N/m × ${formatValue(tau, 6)}^${coef(expo)} × (1 + (${coef(b)}) × ${formatValue(tau, 6)})`,
       value: sigma,
       unit: 'N/m',
       source: IAPWS_ST,
@@ -196,13 +228,20 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
     if (needs.density === true) {
       const d = waterProperty(() => waterDensity(t));
       rho = d.value;
+      const { a1, a2, a3, a4, a5 } = TANAKA_2001;
+      const kellTerms = KELL_1975.a.map((a, n) =>
+        n === 0 ? coef(a) : `${coef(a)}·t${n === 1 ? '' : SUPERSCRIPT[String(n)]}`,
+      );
       working.push({
         label: `Density of water at ${q(t, 'degC')}`,
         formula:
           d.formulation === 'tanaka-2001'
-            ? 'ρ = a₅·[1 − (t + a₁)²·(t + a₂) / (a₃·(t + a₄))]'
-            : 'ρ = (999.83952 + 16.945176·t − 7.9870401×10⁻³·t² − 46.170461×10⁻⁶·t³ + 105.56302×10⁻⁹·t⁴ − 280.54253×10⁻¹²·t⁵) / (1 + 16.87985×10⁻³·t)',
-        substituted: `t = ${q(t, 'degC')}`,
+            ? `ρ = a₅·[1 − (t + a₁)²·(t + a₂) / (a₃·(t + a₄))]; a₁ = ${coef(a1)} °C, a₂ = ${coef(a2)} °C, a₃ = ${coef(a3)} °C², a₄ = ${coef(a4)} °C, a₅ = ${coef(a5)} kg/m³`
+            : `ρ = (${kellTerms.join(' + ').replaceAll('+ −', '− ')}) / (1 + ${coef(KELL_1975.b)}·t), kg/m³, t in °C`,
+        substituted:
+          d.formulation === 'tanaka-2001'
+            ? `t = ${q(t, 'degC')}: ${coef(a5)} × [1 − (${formatValue(t + a1, 6)})² × ${formatValue(t + a2, 6)} / (${coef(a3)} × ${formatValue(t + a4, 6)})]`
+            : `t = ${q(t, 'degC')}`,
         value: rho,
         unit: 'kg/m3',
         source: d.formulation === 'tanaka-2001' ? 'Tanaka et al. 2001' : 'Kell 1975',
@@ -211,17 +250,25 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
     let mu = 0;
     if (needs.viscosity === true) {
       mu = waterProperty(() => waterViscosity(t));
+      const { a, b: bs, Tstar } = IAPWS_SR6_08;
       working.push({
         label: `Viscosity of water at ${q(t, 'degC')}`,
-        formula:
-          'μ = Σ aᵢ·(T / 300 K)^bᵢ μPa·s, a = 280.68, 511.45, 61.131, 0.45903; b = −1.9, −7.7, −19.6, −40',
-        substituted: `T = ${q(T, 'K', 6)}`,
+        formula: `μ = Σ aᵢ·(T / ${coef(Tstar)} K)^bᵢ μPa·s; a = ${a.map(coef).join(', ')}; b = ${bs.map(coef).join(', ')}`,
+        substituted: `T / ${coef(Tstar)} K = ${formatValue(T / Tstar, 6)}`,
         value: mu,
         unit: 'Pa*s',
         source: SR6,
       });
     }
-    return { id, name: 'water', surfaceTension: sigma, density: rho, viscosity: mu, working };
+    return {
+      id,
+      name: 'water',
+      surfaceTension: sigma,
+      density: rho,
+      viscosity: mu,
+      working,
+      assumption: `Pure, air-free water at ${q(t, 'degC')} and atmospheric pressure, properties from the IAPWS, Tanaka and Kell correlations.`,
+    };
   }
   if (id === CUSTOM) {
     const sigma = num(inputs, 'surfaceTension');
@@ -252,7 +299,16 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
         unit: 'Pa*s',
       });
     }
-    return { id, name: 'the liquid', surfaceTension: sigma, density: rho, viscosity: mu, working };
+    return {
+      id,
+      name: 'the liquid',
+      surfaceTension: sigma,
+      density: rho,
+      viscosity: mu,
+      working,
+      hazard: OTHER_LIQUID_CAUTION,
+      assumption: 'The liquid properties as entered, taken as those of the liquid at the temperature of use.',
+    };
   }
   const row = getLiquid(id);
   if (row === undefined) throw new Error(`liquid ${id} is offered but not tabulated`);
@@ -284,7 +340,16 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
     density: needs.density === true ? row.density.value : 0,
     viscosity: needs.viscosity === true ? row.viscosity.value : 0,
     working,
-    ...(row.hazard !== undefined ? { hazard: row.hazard } : {}),
+    ...(row.hazard !== undefined
+      ? {
+          hazard: {
+            code: row.hazard.code,
+            text: row.hazard.text,
+            source: `${row.hazard.source} (${row.hazard.basis})`,
+          },
+        }
+      : {}),
+    assumption: `${row.name} at ${q(row.temperatureC, 'degC')}, pure, with the table's values; at another temperature they differ.`,
   };
 }
 
@@ -333,6 +398,8 @@ export interface ResolvedAngle {
   readonly angleDeg: number;
   readonly basis: readonly BandBasis[];
   readonly working: readonly WorkingStep[];
+  /** Where the angle comes from, as an assumption of the result. */
+  readonly assumption: string;
 }
 
 /** The contact angle from the preset or the typed value; a preset for another liquid is refused. */
@@ -343,6 +410,7 @@ export function resolveContactAngle(inputs: InputValues, liquidId: string): Reso
     return {
       angleDeg: a,
       basis: [],
+      assumption: `A contact angle of ${q(a, 'deg')} as entered, taken as the static angle of the liquid on this surface.`,
       working: [
         { label: 'Contact angle (entered)', formula: 'θ', substituted: q(a, 'deg'), value: a, unit: 'deg' },
       ],
@@ -360,6 +428,7 @@ export function resolveContactAngle(inputs: InputValues, liquidId: string): Reso
   const spread = preset.spreadDeg;
   return {
     angleDeg: preset.angleDeg,
+    assumption: `A contact angle of ${q(preset.angleDeg, 'deg')} from the preset "${preset.label}" (${preset.source}, ${preset.basis})${spread === undefined ? '' : `; the likely range spans ${spread.low}–${spread.high}°`}.`,
     basis:
       spread === undefined
         ? []
@@ -439,12 +508,58 @@ export const CLEAN_SURFACES_CAUTION: Caution = {
   text: 'Surface tension falls sharply with contamination (detergents, oils, organic matter) and contact angles depend on the cleanliness of the surface; the values assume clean liquids and surfaces.',
 };
 
-export const MERCURY_CAUTION: Caution = { code: 'MERCURY_TOXIC', text: MERCURY_HAZARD };
+/** Attached to a result whose liquid was entered by hand: its hazards are unknown to the table. */
+export const OTHER_LIQUID_CAUTION: Caution = {
+  code: 'OTHER_LIQUID_HAZARD',
+  text: "The liquid's hazards are not known to this calculator: read its safety data sheet before handling it.",
+};
 
 export const DAMP_CAUTION: Caution = {
   code: 'DAMP_DIAGNOSIS',
-  text: 'Capillary rise in walls and floors also depends on salts, evaporation, the pore structure of the material and its history. Measure moisture on site before specifying damp-proofing or remedial work.',
+  text: 'A rise in a tube, slot or crack is not the height of rising damp in a wall: in a wall, evaporation from its faces limits how high water climbs, and salts, the pore structure and the history of the masonry change it. Diagnose damp from gravimetric moisture profiles of drilled samples (BS 6576, BRE Digest 245) before specifying damp-proofing or remedial work.',
+  source: 'BS 6576 and BRE Digest 245 (from memory)',
 };
+
+/** The assumptions every capillary result shares. */
+export const STATIC_ASSUMPTIONS: readonly string[] = [
+  'Static equilibrium: the liquid has stopped moving.',
+  'Clean liquid and clean surfaces: no surfactant, oil or dirt.',
+  'Air density neglected against the liquid density (0.12 % for water).',
+];
+
+/** The capillary length step ℓc = √(σ/(ρ·g)), id `capillary-length`, for a warning to point at. */
+export function capillaryLengthStep(
+  sigma: number,
+  rho: number,
+  g: number,
+  lc: number,
+  label = 'Capillary length',
+): WorkingStep {
+  return {
+    id: 'capillary-length',
+    label,
+    formula: 'ℓc = √(σ / (ρ·g))',
+    substituted: `√(${q(sigma, 'N/m')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')}))`,
+    value: lc,
+    unit: 'm',
+    source: 'de Gennes, Brochard-Wyart & Quéré (2004) Capillarity and Wetting Phenomena',
+  };
+}
+
+/** A solution with the liquid's hazard (if it has one) attached to the result's cautions. */
+export function solved(
+  parts: Omit<Solution, 'hazards'>,
+  liquid?: { readonly hazard?: Caution } | null,
+): Solution {
+  return liquid?.hazard !== undefined ? { ...parts, hazards: [liquid.hazard] } : parts;
+}
+
+/** The gravity assumption, naming the value used. */
+export function gravityAssumption(g: number): string {
+  return g === STANDARD_GRAVITY
+    ? `Standard gravity, ${coef(STANDARD_GRAVITY)} m/s².`
+    : `Local gravity of ${q(g, 'm/s2')} as entered.`;
+}
 
 export const FROST_CAUTION: Caution = {
   code: 'FROST_HEAVE',

@@ -6,7 +6,7 @@ import { SLOT } from './rise-common.js';
 import { run } from './slot-rise.js';
 
 describe('slot-rise calculator', () => {
-  it('rises half as high as a tube of the same size (REFERENCES.md: 2σcosθ/(ρgw))', () => {
+  it('rises half as high as a tube of the same size (the Jurin force balance per unit length of a slot, 2σ cos θ/(ρ g w); common practice)', () => {
     const slot = run({ gap: 0.3e-3 }).outputs.rise ?? 0;
     expect(slot).toBeCloseTo((runTube({ diameter: 0.3e-3 }).outputs.rise ?? 0) / 2, 15);
     expect(slot).toBeCloseTo(

@@ -5,7 +5,6 @@ import {
   DAMP_CAUTION,
   ESTIMATE_CAUTION,
   LIQUID_TABLE_REFERENCES,
-  MERCURY_CAUTION,
   MM,
   quantityInput,
   WATER_REFERENCES,
@@ -30,7 +29,6 @@ export const calculator: CalculatorDefinition = {
     },
     CLEAN_SURFACES_CAUTION,
     DAMP_CAUTION,
-    MERCURY_CAUTION,
   ],
   references: [
     {

@@ -11,11 +11,12 @@ import {
   q,
   quantityInput,
   warning,
+  solved,
 } from './shared.js';
 import type { CalculatorDefinition, InputValues, Outputs, Warning, WorkingStep } from './types.js';
 
 const HAZEN_SOURCE =
-  'Terzaghi & Peck (1948): C = 0.1–0.5 cm² (10–50 mm²), as given by Smith, Elements of Soil Mechanics';
+  'Terzaghi & Peck (1948): C = 0.1–0.5 cm² (10–50 mm²), as given by Smith, Elements of Soil Mechanics (from memory)';
 /** IRC R506.2.2: a 4-inch-thick (102 mm) base course under a slab below grade. */
 const CODE_MIN_LAYER_M = 4 * 0.0254;
 /** ASTM E11 opening of the No. 4 sieve; ≤ 10 % passing it means D10 ≥ 4.75 mm. */
@@ -25,14 +26,15 @@ const NO200_SIEVE_M = 0.075e-3;
 
 const withLayer = [{ input: 'breakLayer', values: ['granular'] }] as const;
 
-function riseStep(label: string, c: number, e: number, d10: number, value: number): WorkingStep {
+function riseStep(id: string, label: string, c: number, e: number, d10: number, value: number): WorkingStep {
   return {
+    id,
     label,
     formula: 'h_c = C / (e·D10)',
     substituted: `${q(c, 'm2')} / (${fmt(e)} × ${q(d10, 'm')})`,
     value,
     unit: 'm',
-    source: 'Hazen, as given by Terzaghi & Peck (1948)',
+    source: 'Hazen, as given by Terzaghi & Peck (1948) (from memory)',
   };
 }
 
@@ -46,6 +48,9 @@ function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
   const layerD10 = layered ? num(inputs, 'layerD10') : 0;
   const layerE = layered ? num(inputs, 'layerVoidRatio') : 0;
 
+  // Hazen's relation was drawn from sands: finer than the No. 200 sieve it is no longer the method,
+  // so no rise (and no clearance built on it) is given.
+  const fine = d10 < NO200_SIEVE_M;
   const evaluate = (cValue: number): Outputs => {
     const soilRise = hazenCapillaryRise({ d10, voidRatio: e, c: cValue });
     const layerRise = layered ? hazenCapillaryRise({ d10: layerD10, voidRatio: layerE, c: cValue }) : null;
@@ -54,31 +59,75 @@ function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
       soilRise,
       ...(layerRise !== null ? { layer: { thickness: t, rise: layerRise } } : {}),
     });
-    return { capillaryRise: soilRise, layerCapillaryRise: layerRise, slabClearance: check.clearance };
+    return {
+      capillaryRise: fine ? null : soilRise,
+      layerCapillaryRise: layerRise,
+      slabClearance: fine ? null : check.clearance,
+    };
   };
   const outputs = evaluate(c);
-  const soilRise = outputs.capillaryRise ?? 0;
-  const clearance = outputs.slabClearance ?? 0;
+  const soilRise = hazenCapillaryRise({ d10, voidRatio: e, c });
+  const layerRise = layered ? hazenCapillaryRise({ d10: layerD10, voidRatio: layerE, c }) : null;
+  const check = capillaryBreakCheck({
+    waterTableDepth: depth,
+    soilRise,
+    ...(layerRise !== null ? { layer: { thickness: t, rise: layerRise } } : {}),
+  });
+  const clearance = check.clearance;
 
-  const working: WorkingStep[] = [riseStep('Capillary rise in the soil', c, e, d10, soilRise)];
-  if (layered && outputs.layerCapillaryRise !== null && outputs.layerCapillaryRise !== undefined) {
+  const working: WorkingStep[] = [];
+  if (!fine) working.push(riseStep('soil-rise', 'Capillary rise in the soil', c, e, d10, soilRise));
+  const fringe =
+    'equilibrium suction ρ·g·z: each material holds water up to its own capillary height (common practice)';
+  if (layerRise !== null) {
     working.push(
-      riseStep('Capillary rise in the granular layer', c, layerE, layerD10, outputs.layerCapillaryRise),
+      riseStep('layer-rise', 'Capillary rise in the granular layer', c, layerE, layerD10, layerRise),
     );
+  }
+  if (!fine && layerRise !== null) {
+    const base = Math.max(depth - t, 0);
+    working.push(
+      {
+        id: 'layer-base',
+        label: 'Height of the base of the layer above the water table',
+        formula: 'z_b = max(D_w − t, 0)',
+        substituted: `max(${q(depth, 'm')} − ${q(t, 'm')}, 0)`,
+        value: base,
+        unit: 'm',
+        source: 'geometry of the profile',
+      },
+      {
+        id: 'wet-top',
+        label: check.soilReachesLayer
+          ? 'Top of the wet zone: the soil fringe reaches the layer, which takes it to its own height'
+          : 'Top of the wet zone: the soil fringe stops below the layer, which stays dry',
+        formula: 'z_w = h_soil if h_soil < z_b, else max(z_b, h_layer)',
+        substituted: check.soilReachesLayer
+          ? `${q(soilRise, 'm')} ≥ ${q(base, 'm')}: max(${q(base, 'm')}, ${q(layerRise, 'm')})`
+          : `${q(soilRise, 'm')} < ${q(base, 'm')}`,
+        value: check.wetZoneTop,
+        unit: 'm',
+        source: fringe,
+      },
+      {
+        id: 'clearance',
+        label: 'Clearance between the capillary zone and the slab',
+        formula: 'D_w − z_w',
+        substituted: `${q(depth, 'm')} − ${q(check.wetZoneTop, 'm')}`,
+        value: clearance,
+        unit: 'm',
+        source: fringe,
+      },
+    );
+  } else if (!fine) {
     working.push({
-      label: 'Clearance between the capillary zone and the slab',
-      formula: 'D_w − max(min(h_soil, max(D_w − t, 0)), h_layer)',
-      substituted: `${q(depth, 'm')} − max(min(${q(soilRise, 'm')}, ${q(Math.max(depth - t, 0), 'm')}), ${q(outputs.layerCapillaryRise, 'm')})`,
-      value: clearance,
-      unit: 'm',
-    });
-  } else {
-    working.push({
+      id: 'clearance',
       label: 'Clearance between the capillary zone and the slab',
       formula: 'D_w − h_soil',
       substituted: `${q(depth, 'm')} − ${q(soilRise, 'm')}`,
       value: clearance,
       unit: 'm',
+      source: fringe,
     });
   }
 
@@ -87,25 +136,45 @@ function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
     outputs,
     (v) => evaluate(v.hazenC ?? c),
   );
+  if (band !== null) {
+    const lo = evaluate(HAZEN_C_RANGE_M2.min);
+    const hi = evaluate(HAZEN_C_RANGE_M2.max);
+    const corner = (o: Outputs): string =>
+      Object.entries(o)
+        .filter(([, v]) => v !== null)
+        .map(([k, v]) => `${k} ${q(v ?? 0, 'm')}`)
+        .join(', ');
+    working.push({
+      id: 'band',
+      label: "Band over the published range of Hazen's constant: the lowest clearance",
+      formula: 'the same steps at C = 0.1 cm² and C = 0.5 cm²',
+      substituted: `C = 0.1 cm²: ${corner(lo)}; C = 0.5 cm²: ${corner(hi)}`,
+      value: band.outputs.slabClearance?.low ?? band.outputs.layerCapillaryRise?.high ?? 0,
+      unit: 'm',
+      source: HAZEN_SOURCE,
+    });
+  }
   const worst = band?.outputs.slabClearance?.low ?? clearance;
 
   const warnings: Warning[] = [];
-  if (clearance <= 0) {
+  if (!fine && clearance <= 0) {
     warnings.push(
       warning(
         'CAPILLARY_RISE_REACHES_SLAB',
         layered
-          ? `The granular layer itself draws capillary water up to the slab (its rise of ${q(outputs.layerCapillaryRise ?? 0, 'm')} against a water table ${q(depth, 'm')} below the slab): it does not work as a capillary break.`
+          ? `The granular layer itself draws capillary water up to the slab (its rise of ${q(layerRise ?? 0, 'm')} against a water table ${q(depth, 'm')} below the slab): it does not work as a capillary break.`
           : `Capillary rise from the water table (${q(soilRise, 'm')}) reaches the underside of the slab ${q(depth, 'm')} above it.`,
         ['waterTableDepth'],
+        { step: 'clearance' },
       ),
     );
-  } else if (worst <= 0) {
+  } else if (!fine && worst <= 0) {
     warnings.push(
       warning(
         'CAPILLARY_RISE_MAY_REACH_SLAB',
         `With Hazen's constant at the top of its published range (0.5 cm²) the capillary zone reaches the slab; the margin of ${q(clearance, 'm')} is not secure.`,
         ['waterTableDepth', 'hazenC'],
+        { step: 'band' },
       ),
     );
   }
@@ -124,6 +193,7 @@ function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
         'LAYER_NOT_CLEAN_GRAVEL',
         `A layer D10 of ${q(layerD10, 'm')} means more than 10 % passes the No. 4 (4.75 mm) sieve; the IBC floor base course asks for gravel or crushed stone with no more than 10 % passing it.`,
         ['layerD10'],
+        { step: 'layer-rise' },
       ),
     );
   }
@@ -136,16 +206,31 @@ function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
       ),
     );
   }
-  if (d10 < NO200_SIEVE_M) {
+  if (fine) {
     warnings.push(
       warning(
         'FINE_GRAINED_SOIL',
-        `D10 of ${q(d10, 'm')} is finer than the No. 200 sieve (0.075 mm): Hazen's relation was drawn from sands, and in silts and clays the rise is slow and poorly predicted by it.`,
+        `D10 of ${q(d10, 'm')} is finer than the No. 200 sieve (0.075 mm): Hazen's relation was drawn from sands and does not hold in silts and clays, so no rise or clearance is given. Have the capillary rise measured, or use a soil-water retention curve.`,
         ['d10'],
+        { withholds: ['capillaryRise', 'slabClearance'] },
       ),
     );
   }
-  return { outputs, working, warnings, band };
+  return solved({
+    outputs,
+    working,
+    warnings,
+    band,
+    assumptions: [
+      'Hydrostatic equilibrium above a static water table: no evaporation, infiltration or flow.',
+      "Each material is uniform; its capillary height is Hazen's empirical estimate, a sharp top to the capillary fringe.",
+      "Hazen's constant C within its published range of 0.1–0.5 cm² (the band spans all of it).",
+      'Clean water at ordinary ground temperature.',
+      ...(layered
+        ? ['The granular layer lies directly under the slab, over the soil, with no membrane between.']
+        : []),
+    ],
+  });
 }
 
 export const calculator: CalculatorDefinition = {
@@ -168,7 +253,7 @@ export const calculator: CalculatorDefinition = {
       {
         spread: { low: HAZEN_C_RANGE_M2.min, high: HAZEN_C_RANGE_M2.max, source: HAZEN_SOURCE },
         help: 'Depends on grain shape and surface impurities; published range 0.1–0.5 cm². The default is the middle of the range; the band always spans all of it.',
-        display: { si: 'cm2', us: 'in2' },
+        display: { si: 'cm2', us: 'cm2' },
       },
     ),
     quantityInput(
@@ -267,8 +352,8 @@ export const calculator: CalculatorDefinition = {
       id: 'terzaghi-peck-1948',
       citation: 'Terzaghi K., Peck R. B. (1948) Soil Mechanics in Engineering Practice, Wiley',
       usedFor:
-        "Hazen's formula h_c = C/(e·D10) and the range of C, 0.1–0.5 cm² (as given by Smith, Elements of Soil Mechanics, and Holtz & Kovacs)",
-      basis: 'printed',
+        "Hazen's formula h_c = C/(e·D10) and the range of C, 0.1–0.5 cm² (as given by Smith, Elements of Soil Mechanics, and Holtz & Kovacs; recalled, not seen printed here)",
+      basis: 'from memory',
     },
     {
       id: 'heath-1982',

@@ -5,7 +5,6 @@ import {
   DAMP_CAUTION,
   ESTIMATE_CAUTION,
   LIQUID_TABLE_REFERENCES,
-  MERCURY_CAUTION,
   MM,
   quantityInput,
   WATER_REFERENCES,
@@ -22,7 +21,7 @@ export const calculator: CalculatorDefinition = {
   ),
   outputs: riseOutputs(TUBE, "Rise (Jurin's law)", 'Bore radius / capillary length'),
   warnings: riseWarnings(TUBE),
-  cautions: [ESTIMATE_CAUTION, CLEAN_SURFACES_CAUTION, DAMP_CAUTION, MERCURY_CAUTION],
+  cautions: [ESTIMATE_CAUTION, CLEAN_SURFACES_CAUTION, DAMP_CAUTION],
   references: [
     {
       id: 'jurin-1718',

@@ -72,6 +72,8 @@ export interface WarningDefinition {
 export interface Caution {
   readonly code: string;
   readonly text: string;
+  /** Where the caution's facts come from (a hazard's GHS classes, a diagnosis standard). */
+  readonly source?: string;
 }
 
 export interface Reference {
@@ -93,6 +95,8 @@ export interface WorkingStep {
   readonly value: number;
   readonly unit: UnitId;
   readonly source?: string;
+  /** Stable key of the step within its calculator, for a warning to point at (`Warning.step`). */
+  readonly id?: string;
 }
 
 export interface Warning {
@@ -100,6 +104,13 @@ export interface Warning {
   readonly message: string;
   /** Input ids the warning is about, for a form to highlight. */
   readonly fields: readonly string[];
+  /** The `id` of the working step whose method the warning qualifies. */
+  readonly step?: string;
+  /**
+   * Output ids this warning withholds: the method does not hold there, so the output is `null`
+   * and is shown as "not defined here" with this warning's message as the reason.
+   */
+  readonly withholds?: readonly string[];
 }
 
 export interface BandBasis {
@@ -115,7 +126,10 @@ export interface Band {
   readonly outputs: Readonly<Record<string, { readonly low: number; readonly high: number }>>;
 }
 
-/** Output values in canonical units; null where an output does not apply to the chosen mode. */
+/**
+ * Output values in canonical units; null where an output does not apply to the chosen mode, or where
+ * a warning withholds it (`Warning.withholds`) because its method does not hold for these inputs.
+ */
 export type Outputs = Readonly<Record<string, number | null>>;
 
 export interface Solution {
@@ -123,6 +137,10 @@ export interface Solution {
   readonly working: readonly WorkingStep[];
   readonly warnings: readonly Warning[];
   readonly band: Band | null;
+  /** What the result takes for granted (static equilibrium, clean surfaces, …), in plain sentences. */
+  readonly assumptions: readonly string[];
+  /** Cautions that belong to these inputs (the chosen liquid's hazard); shown before the calculator's own. */
+  readonly hazards?: readonly Caution[];
 }
 
 export interface CalculatorDefinition {
@@ -147,6 +165,10 @@ export interface CalculationResult {
   readonly warnings: readonly Warning[];
   readonly working: readonly WorkingStep[];
   readonly band: Band | null;
+  /** What the result takes for granted. */
+  readonly assumptions: readonly string[];
+  /** Cautions for this result: the liquid's hazard first, then the calculator's own. */
+  readonly cautions: readonly Caution[];
   readonly version: string;
   /** SHA-256 (hex) of the canonical JSON of `{ calculator, inputs }`. */
   readonly inputHash: string;

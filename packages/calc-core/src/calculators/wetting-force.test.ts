@@ -40,25 +40,36 @@ describe('wetting-force calculator', () => {
       correctionFactor: direct.correctionFactor,
       force: null,
     });
-    expect(r.working.find((w) => w.label.startsWith('Zuidema'))?.source).toMatch(/ASTM D971/);
+    expect(r.working.find((w) => w.id === 'ring-factor')?.source).toMatch(/ASTM D971/);
   });
 
-  it('warns for an assumed angle, an angle near 90° and a ring below ASTM size; refuses θ ≥ 90° and an out-of-range ring', () => {
+  it('warns for an assumed angle, an angle near 90° and a ring below ASTM size; refuses θ ≥ 90° and a wire as thick as the ring, withholds an out-of-range ring', () => {
     expect(run({ method: 'plate-tension', contactAngleDeg: 20 }).warnings.map((w) => w.code)).toEqual([
       'CONTACT_ANGLE_NOT_ZERO',
     ]);
     expect(run({ method: 'plate-force', contactAngleDeg: 85 }).warnings.map((w) => w.code)).toEqual([
       'CONTACT_ANGLE_NEAR_90',
     ]);
-    expect(run({ method: 'ring', ringRadius: 6e-3 }).warnings.map((w) => w.code)).toEqual([
+    // R = 6.5 mm with a 0.2 mm wire: R/r = 32.5 and R³/V = 0.30, inside the tables (from memory).
+    expect(run({ method: 'ring', ringRadius: 6.5e-3, ringForce: 6e-3 }).warnings).toEqual([]);
+    expect(run({ method: 'ring', ringRadius: 6.2e-3, ringForce: 5e-3 }).warnings.map((w) => w.code)).toEqual([
       'RING_BELOW_ASTM_SIZE',
     ]);
-    expect(run({ method: 'ring', ringRadius: 6.5e-3 }).warnings).toEqual([]);
     expect(() => calculate('wetting-force', { method: 'plate-tension', contactAngleDeg: 95 })).toThrow(
       expect.objectContaining({ field: 'contactAngleDeg', code: 'ANGLE_NOT_WETTING' }),
     );
-    expect(() =>
-      calculate('wetting-force', { method: 'ring', ringRadius: 2e-3, wireRadius: 1e-3, ringForce: 1e-6 }),
-    ).toThrow(expect.objectContaining({ field: 'wireRadius' }));
+    const thick = calculate('wetting-force', {
+      method: 'ring',
+      ringRadius: 2e-3,
+      wireRadius: 1e-3,
+      ringForce: 1e-6,
+    });
+    expect(thick.outputs.correctionFactor).toBeNull();
+    expect(thick.warnings.find((w) => w.code === 'RING_OUTSIDE_CORRECTION_RANGE')?.step).toBe(
+      'ring-radicand',
+    );
+    expect(() => calculate('wetting-force', { method: 'ring', ringRadius: 1e-3, wireRadius: 1e-3 })).toThrow(
+      expect.objectContaining({ field: 'wireRadius' }),
+    );
   });
 });

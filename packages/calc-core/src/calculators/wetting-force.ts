@@ -1,23 +1,25 @@
 import {
-  duNouySurfaceTension,
   platePerimeter,
+  RING_TABLE_RANGE,
+  ringCorrection,
+  ZUIDEMA_WATERS,
   wilhelmyForce,
   wilhelmyRodForce,
   wilhelmyRodSurfaceTension,
   wilhelmySurfaceTension,
 } from '../formulas/tensiometry.js';
-import { CalcInputError } from '../errors.js';
 import { runner } from './engine.js';
 import {
   choice,
   CLEAN_SURFACES_CAUTION,
+  coef,
   CONTACT_ANGLE_NEAR_90,
   ESTIMATE_CAUTION,
   fmt,
+  gravityAssumption,
   gravityInput,
   LIQUID_TABLE_REFERENCES,
   liquidInputs,
-  MERCURY_CAUTION,
   MM,
   nearNinety,
   num,
@@ -28,7 +30,9 @@ import {
   WATER_REFERENCES,
   withFieldNames,
 } from './shared.js';
+import { STANDARD_GRAVITY } from '../units.js';
 import type {
+  Caution,
   CalculatorDefinition,
   Condition,
   InputValues,
@@ -59,75 +63,157 @@ function solve(inputs: InputValues): Solution {
   const method = choice(inputs, 'method') as Method;
   const working: WorkingStep[] = [];
   const warnings: Warning[] = [];
+  let liquidAssumption: string | null = null;
   let force: number | null = null;
   let sigma: number | null = null;
   let apparent: number | null = null;
   let factor: number | null = null;
   let perimeter: number;
 
+  let assumptions: string[];
+  let hazards: Caution[] = [];
   if (method === 'ring') {
     const F = num(inputs, 'ringForce');
     const R = num(inputs, 'ringRadius');
     const r = num(inputs, 'wireRadius');
     const drho = num(inputs, 'densityDifference');
     const g = num(inputs, 'gravity');
-    const result = withFieldNames({ force: 'ringForce' }, () => {
-      try {
-        return duNouySurfaceTension({
-          force: F,
-          ringRadius: R,
-          wireRadius: r,
-          densityDifference: drho,
-          gravity: g,
-        });
-      } catch (err) {
-        // The square root goes negative for thick wires on small rings: r/R is what takes it out of range.
-        if (err instanceof RangeError) {
-          throw new CalcInputError({
-            field: 'wireRadius',
-            code: 'OUTSIDE_RING_CORRECTION',
-            message: err.message,
-          });
-        }
-        throw err;
-      }
-    });
+    const x = withFieldNames({ force: 'ringForce' }, () =>
+      ringCorrection({ force: F, ringRadius: R, wireRadius: r, densityDifference: drho, gravity: g }),
+    );
     perimeter = 4 * Math.PI * R;
-    ({ surfaceTension: sigma, apparentSurfaceTension: apparent, correctionFactor: factor } = result);
+    apparent = x.apparent;
+    const t = RING_TABLE_RANGE;
+    const { base, k, c, m } = ZUIDEMA_WATERS;
+    const applies = x.inTableRange && x.factor !== null;
+    factor = applies ? x.factor : null;
+    sigma = applies && x.factor !== null ? x.factor * x.apparent : null;
     working.push(
       {
+        id: 'apparent',
         label: 'Apparent surface tension (uncorrected)',
         formula: 'σ* = F / (4π·R)',
         substituted: `${q(F, 'N')} / (4π × ${q(R, 'm')})`,
-        value: apparent,
+        value: x.apparent,
         unit: 'N/m',
+        source: 'du Noüy 1925',
       },
       {
-        label: 'Zuidema–Waters correction factor',
-        formula:
-          'f = 0.7250 + √(0.01452·P / (C²·(D − d)) + 0.04534 − 1.679·r/R), P in dyn/cm, C in cm, D − d in g/mL',
-        substituted: `P = ${fmt(apparent * 1000)} dyn/cm, C = ${fmt(2 * Math.PI * R * 100)} cm, D − d = ${fmt(drho / 1000)} g/mL, r/R = ${fmt(r / R)}`,
-        value: factor,
+        id: 'ring-ratio',
+        label: 'Ring to wire radius',
+        formula: 'R / r',
+        substituted: `${q(R, 'm')} / ${q(r, 'm')}`,
+        value: x.ringToWire,
         unit: '1',
-        source: 'ASTM D971 (Zuidema & Waters 1941)',
+        source: `Harkins & Jordan 1930: tables span R/r ${t.ringToWire.min}–${t.ringToWire.max} (from memory)`,
       },
       {
-        label: 'Surface tension, corrected',
-        formula: 'σ = f·σ*',
-        substituted: `${fmt(factor)} × ${q(apparent, 'N/m')}`,
-        value: sigma,
-        unit: 'N/m',
+        id: 'lifted-volume',
+        label: 'Volume of liquid lifted',
+        formula: 'V = F / (Δρ·g)',
+        substituted: `${q(F, 'N')} / (${q(drho, 'kg/m3')} × ${q(g, 'm/s2')})`,
+        value: x.liftedVolume,
+        unit: 'm3',
+        source: 'Harkins & Jordan 1930',
+      },
+      {
+        id: 'ring-range',
+        label: 'Ring size against the lifted volume',
+        formula: 'R³ / V',
+        substituted: `(${q(R, 'm')})³ / ${q(x.liftedVolume, 'm3')}`,
+        value: x.r3OverV,
+        unit: '1',
+        source: `Harkins & Jordan 1930: tables span R³/V ${t.r3OverV.min}–${t.r3OverV.max} (from memory)`,
+      },
+      {
+        id: 'ring-radicand',
+        label: 'Zuidema–Waters radicand',
+        formula: `k·P·(gₙ/g) / (C²·(D − d)) + c − m·r/R; k = ${coef(k)}, c = ${coef(c)}, m = ${coef(m)}; P in dyn/cm, C in cm, D − d in g/mL`,
+        substituted: `P = ${fmt(x.apparent * 1000)} dyn/cm, C = ${fmt(2 * Math.PI * R * 100)} cm, D − d = ${fmt(drho / 1000)} g/mL, gₙ/g = ${fmt(STANDARD_GRAVITY / g, 6)}, r/R = ${fmt(r / R)}`,
+        value: x.radicand,
+        unit: '1',
+        source: 'Zuidema & Waters 1941 in the form of ASTM D971 (from memory)',
       },
     );
+    if (applies && x.root !== null && x.factor !== null) {
+      working.push(
+        {
+          id: 'ring-factor',
+          label: 'Zuidema–Waters correction factor',
+          formula: `f = ${coef(base)} + √radicand`,
+          substituted: `${coef(base)} + √${fmt(x.radicand)} = ${coef(base)} + ${fmt(x.root)}`,
+          value: x.factor,
+          unit: '1',
+          source: 'Zuidema & Waters 1941 in the form of ASTM D971 (from memory)',
+        },
+        {
+          id: 'ring-corrected',
+          label: 'Surface tension, corrected',
+          formula: 'σ = f·σ*',
+          substituted: `${fmt(x.factor)} × ${q(x.apparent, 'N/m')}`,
+          value: x.factor * x.apparent,
+          unit: 'N/m',
+          source: 'Harkins & Jordan 1930',
+        },
+      );
+    }
+    if (!applies) {
+      const why: string[] = [];
+      if (x.ringToWire < t.ringToWire.min || x.ringToWire > t.ringToWire.max) {
+        why.push(`R/r = ${fmt(x.ringToWire)} is outside ${t.ringToWire.min}–${t.ringToWire.max}`);
+      }
+      if (x.r3OverV < t.r3OverV.min || x.r3OverV > t.r3OverV.max) {
+        why.push(`R³/V = ${fmt(x.r3OverV)} is outside ${t.r3OverV.min}–${t.r3OverV.max}`);
+      }
+      if (x.factor === null) why.push(`the radicand is negative (${fmt(x.radicand)})`);
+      warnings.push(
+        warning(
+          'RING_OUTSIDE_CORRECTION_RANGE',
+          `The ring correction does not hold here: ${why.join('; ')}. The Zuidema–Waters fit reproduces the Harkins & Jordan tables only over their range (from memory), so no corrected value is given; the uncorrected F/(4πR) stands alone.`,
+          ['ringRadius', 'wireRadius', 'ringForce', 'densityDifference'],
+          {
+            step: x.factor === null ? 'ring-radicand' : 'ring-range',
+            withholds: ['surfaceTension', 'correctionFactor'],
+          },
+        ),
+      );
+    } else if (x.factor !== null && (x.factor < t.factor.min || x.factor > t.factor.max)) {
+      warnings.push(
+        warning(
+          'RING_FACTOR_OUTSIDE_TABLES',
+          `A factor of ${fmt(x.factor)} is outside the ${t.factor.min}–${t.factor.max} that the Harkins & Jordan tables give (from memory): check the ring dimensions and the density difference.`,
+          ['ringRadius', 'wireRadius', 'densityDifference'],
+          { step: 'ring-factor' },
+        ),
+      );
+    }
+    if (drho < 100) {
+      warnings.push(
+        warning(
+          'DENSITY_DIFFERENCE_IMPLAUSIBLE',
+          `A density difference of ${q(drho, 'kg/m3')} (${fmt(drho / 1000)} g/mL) is below 100 kg/m³. Against air it is the liquid's own density (about 1000 kg/m³ for water): a value in g/mL typed as kg/m³ gives this. Only two liquids of near-equal density come this close.`,
+          ['densityDifference'],
+          { step: 'lifted-volume' },
+        ),
+      );
+    }
     if (2 * Math.PI * R < ASTM_MIN_RING_CIRCUMFERENCE_M) {
       warnings.push(
         warning(
           'RING_BELOW_ASTM_SIZE',
           `The ring's circumference is ${q(2 * Math.PI * R, 'm')}; ASTM D971 specifies at least 40 mm, and the Zuidema–Waters fit was made for such rings.`,
           ['ringRadius'],
+          { step: 'apparent' },
         ),
       );
     }
+    assumptions = [
+      'The maximum pull, net of the weight of the ring, read as the ring is drawn slowly through the surface.',
+      'The ring is horizontal, round and fully wetted by the liquid (contact angle 0° on clean platinum).',
+      'Clean liquid and a fresh surface: no surfactant, oil or dust.',
+      'Against air the density difference is the liquid density; air density neglected.',
+      gravityAssumption(g),
+    ];
   } else {
     const theta = num(inputs, 'contactAngleDeg');
     const isPlate = method === 'plate-force' || method === 'plate-tension';
@@ -136,6 +222,8 @@ function solve(inputs: InputValues): Solution {
     const d = isPlate ? 0 : num(inputs, 'rodDiameter');
     perimeter = isPlate ? platePerimeter(w, t) : Math.PI * d;
     working.push({
+      id: 'perimeter',
+      source: 'geometry of the probe',
       label: 'Wetted length',
       formula: isPlate ? 'P = 2·(w + t)' : 'P = π·d',
       substituted: isPlate ? `2 × (${q(w, 'm')} + ${q(t, 'm')})` : `π × ${q(d, 'm')}`,
@@ -145,11 +233,15 @@ function solve(inputs: InputValues): Solution {
     if (method === 'plate-force' || method === 'rod-force') {
       const liquid = resolveLiquid(inputs, {});
       working.unshift(...liquid.working);
+      if (liquid.hazard !== undefined) hazards = [liquid.hazard];
+      liquidAssumption = liquid.assumption;
       const s = liquid.surfaceTension;
       force = isPlate
         ? wilhelmyForce({ surfaceTension: s, contactAngleDeg: theta, width: w, thickness: t })
         : wilhelmyRodForce({ surfaceTension: s, contactAngleDeg: theta, diameter: d });
       working.push({
+        id: 'method',
+        source: 'Wilhelmy 1863',
         label: 'Wetting force',
         formula: 'F = σ·P·cos θ',
         substituted: `${q(s, 'N/m')} × ${q(perimeter, 'm')} × cos ${q(theta, 'deg')}`,
@@ -166,6 +258,8 @@ function solve(inputs: InputValues): Solution {
             wilhelmyRodSurfaceTension({ force: F, contactAngleDeg: theta, diameter: d }),
           );
       working.push({
+        id: 'method',
+        source: 'Wilhelmy 1863',
         label: 'Surface tension',
         formula: 'σ = F / (P·cos θ)',
         substituted: `${q(F, 'N')} / (${q(perimeter, 'm')} × cos ${q(theta, 'deg')})`,
@@ -178,12 +272,22 @@ function solve(inputs: InputValues): Solution {
             'CONTACT_ANGLE_NOT_ZERO',
             `A contact angle of ${q(theta, 'deg')} is assumed. The plate method is normally run fully wetted (θ = 0, e.g. roughened platinum); any other angle must be known independently.`,
             ['contactAngleDeg'],
+            { step: 'method' },
           ),
         );
       }
     }
     const near = nearNinety(theta, ['contactAngleDeg']);
-    if (near !== null) warnings.push(near);
+    if (near !== null) warnings.push({ ...near, step: 'method' });
+    assumptions = [
+      'The force is read at zero immersion depth, net of the weight of the probe: buoyancy is not included.',
+      `A contact angle of ${q(theta, 'deg')} on the probe, known independently (0° for a clean roughened platinum plate, common practice).`,
+      'Clean liquid and a fresh surface: no surfactant, oil or dust.',
+      isPlate
+        ? 'A thin rectangular plate wetted along its whole perimeter 2·(w + t).'
+        : 'A round rod or fibre wetted around its circumference π·d.',
+      ...(liquidAssumption !== null ? [liquidAssumption] : []),
+    ];
   }
   return {
     outputs: {
@@ -196,6 +300,8 @@ function solve(inputs: InputValues): Solution {
     working,
     warnings,
     band: null,
+    assumptions,
+    ...(hazards.length > 0 ? { hazards } : {}),
   };
 }
 
@@ -203,7 +309,8 @@ function forceInput(id: string, label: string, defaultN: number, when: readonly 
   return quantityInput('force', id, label, defaultN, [1e-7, 1], {
     help: 'Net of the probe weight, at zero immersion depth.',
     appliesWhen: when,
-    display: { si: 'mN', us: 'lbf' },
+    // Laboratories report force in mN in both unit systems.
+    display: { si: 'mN', us: 'mN' },
   });
 }
 
@@ -259,13 +366,14 @@ export const calculator: CalculatorDefinition = {
     },
     lengthInput('wireRadius', 'Wire radius r', 0.2e-3, [1e-5, 1e-3], ring),
     quantityInput('density', 'densityDifference', 'Density difference of the two phases', 998, [1, 25000], {
-      help: 'Lower phase minus upper; against air, the liquid density.',
+      help: 'Lower phase minus upper; against air, the liquid density. ASTM D971 states it in g/mL.',
       appliesWhen: ring,
+      display: { si: 'g/mL', us: 'g/mL' },
     }),
     gravityInput(ring),
   ],
   outputs: [
-    { id: 'force', label: 'Wetting force', kind: 'force', display: { si: 'mN', us: 'lbf' } },
+    { id: 'force', label: 'Wetting force', kind: 'force', display: { si: 'mN', us: 'mN' } },
     {
       id: 'surfaceTension',
       label: 'Surface tension',
@@ -286,6 +394,19 @@ export const calculator: CalculatorDefinition = {
       code: 'RING_BELOW_ASTM_SIZE',
       summary: 'The ring is smaller than the 40 mm circumference of ASTM D971.',
     },
+    {
+      code: 'RING_OUTSIDE_CORRECTION_RANGE',
+      summary:
+        'R/r or R³/V is outside the range of the Harkins & Jordan tables (from memory: R/r 30–80, R³/V 0.3–4.5), or the radicand is negative: no corrected value is given.',
+    },
+    {
+      code: 'RING_FACTOR_OUTSIDE_TABLES',
+      summary: 'The correction factor is outside the 0.75–1.05 band of the tables (from memory).',
+    },
+    {
+      code: 'DENSITY_DIFFERENCE_IMPLAUSIBLE',
+      summary: 'A density difference below 100 kg/m³: against air, likely a g/mL value typed as kg/m³.',
+    },
   ],
   cautions: [
     ESTIMATE_CAUTION,
@@ -298,7 +419,6 @@ export const calculator: CalculatorDefinition = {
       text: 'The plate and rod forms take the force at zero immersion depth; any immersion adds a buoyancy term that is not included.',
     },
     CLEAN_SURFACES_CAUTION,
-    MERCURY_CAUTION,
   ],
   references: [
     {
@@ -320,8 +440,15 @@ export const calculator: CalculatorDefinition = {
       id: 'zuidema-waters-1941',
       citation:
         'Zuidema H. H., Waters G. W. (1941) Ring method for the determination of interfacial tension, Ind. Eng. Chem. Anal. Ed. 13, 312–313',
-      usedFor: 'the ring correction factor',
-      basis: 'printed',
+      usedFor: 'the ring correction factor (the form of the fit recalled, not seen printed here)',
+      basis: 'from memory',
+    },
+    {
+      id: 'harkins-jordan-1930',
+      citation:
+        'Harkins W. D., Jordan H. F. (1930) A method for the determination of surface and interfacial tension from the maximum pull on a ring, J. Am. Chem. Soc. 52, 1751–1772',
+      usedFor: 'the variables R/r and R³/V and the range of the correction tables (range from memory)',
+      basis: 'from memory',
     },
     {
       id: 'du-nouy-1925',

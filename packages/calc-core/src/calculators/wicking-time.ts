@@ -1,5 +1,5 @@
-import { jurinRise } from '../formulas/capillary.js';
-import { gravityRestrainedRiseTime, washburnTime } from '../formulas/wicking.js';
+import { capillaryLength, jurinRise } from '../formulas/capillary.js';
+import { bosanquetTime, gravityRestrainedRiseTime, gravityShape, washburnTime } from '../formulas/wicking.js';
 import { bandOver, runner } from './engine.js';
 import {
   choice,
@@ -7,11 +7,13 @@ import {
   contactAngleInputs,
   DAMP_CAUTION,
   ESTIMATE_CAUTION,
+  CONTACT_ANGLE_NEAR_90,
   fmt,
+  gravityAssumption,
   gravityInput,
+  nearNinety,
   LIQUID_TABLE_REFERENCES,
   liquidInputs,
-  MERCURY_CAUTION,
   MM,
   num,
   q,
@@ -21,11 +23,22 @@ import {
   VISCOSITY_REFERENCE,
   warning,
   WATER_REFERENCES,
+  capillaryLengthStep,
+  solved,
 } from './shared.js';
 import type { CalculatorDefinition, InputValues, Outputs, Solution, Warning, WorkingStep } from './types.js';
 
 /** Gravity-restrained time over Lucas–Washburn time above which gravity is called not negligible. */
 const GRAVITY_RATIO_LIMIT = 1.05;
+/**
+ * Bosanquet time over Lucas–Washburn time above which inertia is called not negligible (our
+ * threshold, the same 5 % as for gravity). Since t_B/t_LW − 1 ≈ 1/(b·t_LW) for long times, this is
+ * about t_LW < 20·ρr²/(8μ): the wicking time is less than twenty inertial time scales.
+ */
+const INERTIA_RATIO_LIMIT = 1.05;
+
+const WASHBURN = 'Lucas 1918; Washburn 1921';
+const BOSANQUET = 'Bosanquet 1923';
 
 function solve(inputs: InputValues): Solution {
   const vertical = choice(inputs, 'direction') === 'vertical';
@@ -36,10 +49,17 @@ function solve(inputs: InputValues): Solution {
   const g = num(inputs, 'gravity');
   const { surfaceTension: sigma, density: rho, viscosity: mu } = liquid;
 
-  const evaluate = (theta: number): Outputs => {
+  interface Raw {
+    readonly time: number;
+    readonly inertial: ReturnType<typeof bosanquetTime>;
+    readonly limit: number | null;
+    readonly withGravity: number | null;
+  }
+  const compute = (theta: number): Raw => {
     const args = { poreRadius: r, surfaceTension: sigma, contactAngleDeg: theta, viscosity: mu };
     const time = washburnTime({ ...args, length: L });
-    if (!vertical) return { time, jurinLimit: null, timeWithGravity: null };
+    const inertial = bosanquetTime({ ...args, length: L, density: rho });
+    if (!vertical) return { time, inertial, limit: null, withGravity: null };
     const limit = jurinRise({
       surfaceTension: sigma,
       contactAngleDeg: theta,
@@ -49,62 +69,179 @@ function solve(inputs: InputValues): Solution {
     });
     const withGravity =
       L < limit ? gravityRestrainedRiseTime({ ...args, height: L, density: rho, gravity: g }) : null;
-    return { time, jurinLimit: limit, timeWithGravity: withGravity };
+    return { time, inertial, limit, withGravity };
+  };
+  // What holds: above the Jurin limit no time at all; where inertia matters the viscous-only times
+  // are withheld (horizontally Bosanquet's time stands in; upward, gravity and inertia together
+  // are not solved here, so no time is given).
+  // A pore as wide as the capillary length has a meniscus flattened by gravity: the capillary
+  // pressure 2σ·cos θ/r behind every formula here does not hold, so nothing is given.
+  const lc = capillaryLength({ surfaceTension: sigma, density: rho, gravity: g });
+  const tooWide = r >= lc;
+  const evaluate = (theta: number): Outputs => {
+    if (tooWide) return { time: null, timeWithInertia: null, jurinLimit: null, timeWithGravity: null };
+    const x = compute(theta);
+    const inertiaMatters = x.inertial.time / x.time > INERTIA_RATIO_LIMIT;
+    if (!vertical) {
+      return {
+        time: inertiaMatters ? null : x.time,
+        timeWithInertia: x.inertial.time,
+        jurinLimit: null,
+        timeWithGravity: null,
+      };
+    }
+    const reached = x.withGravity !== null;
+    return {
+      time: reached && !inertiaMatters ? x.time : null,
+      timeWithInertia: null,
+      jurinLimit: x.limit,
+      timeWithGravity: reached && !inertiaMatters ? x.withGravity : null,
+    };
   };
   const outputs = evaluate(angle.angleDeg);
-  const time = outputs.time ?? 0;
+
   const working: WorkingStep[] = [
     ...liquid.working,
     ...angle.working,
-    {
-      label: 'Time, Lucas–Washburn (gravity neglected)',
-      formula: 't = 2·μ·L² / (σ·r·cos θ)',
-      substituted: `2 × ${q(mu, 'Pa*s')} × (${q(L, 'm')})² / (${q(sigma, 'N/m')} × ${q(r, 'm')} × cos ${q(angle.angleDeg, 'deg')})`,
-      value: time,
-      unit: 's',
-    },
+    capillaryLengthStep(sigma, rho, g, lc, 'Capillary length (the pore must be well below it)'),
   ];
   const warnings: Warning[] = [];
-  if (vertical && outputs.jurinLimit !== null && outputs.jurinLimit !== undefined) {
-    const limit = outputs.jurinLimit;
+  if (tooWide) {
+    warnings.push(
+      warning(
+        'PORE_TOO_WIDE',
+        `A radius of ${q(r, 'm')} is at least the capillary length (${q(lc, 'm')}): the meniscus is flattened by gravity and the capillary pressure behind every time here does not hold, so none is given.`,
+        ['poreRadius'],
+        { step: 'capillary-length', withholds: ['time', 'timeWithInertia', 'jurinLimit', 'timeWithGravity'] },
+      ),
+    );
+    const assumptions = [
+      'Laminar flow of a Newtonian liquid in a uniform cylindrical capillary of the effective radius given.',
+      liquid.assumption,
+      angle.assumption,
+      gravityAssumption(g),
+    ];
+    return solved({ outputs, working, warnings, band: null, assumptions }, liquid);
+  }
+  const raw = compute(angle.angleDeg);
+  const inertiaRatio = raw.inertial.time / raw.time;
+  const inertiaMatters = inertiaRatio > INERTIA_RATIO_LIMIT;
+  working.push(
+    {
+      id: 'washburn',
+      label: 'Time, Lucas–Washburn (gravity and inertia neglected)',
+      formula: 't = 2·μ·L² / (σ·r·cos θ)',
+      substituted: `2 × ${q(mu, 'Pa*s')} × (${q(L, 'm')})² / (${q(sigma, 'N/m')} × ${q(r, 'm')} × cos ${q(angle.angleDeg, 'deg')})`,
+      value: raw.time,
+      unit: 's',
+      source: WASHBURN,
+    },
+    {
+      id: 'inertia-scale',
+      label: 'Inertial time scale',
+      formula: '1/b = ρ·r² / (8·μ)',
+      substituted: `${q(rho, 'kg/m3')} × (${q(r, 'm')})² / (8 × ${q(mu, 'Pa*s')})`,
+      value: 1 / raw.inertial.b,
+      unit: 's',
+      source: BOSANQUET,
+    },
+    {
+      id: 'bosanquet',
+      label: vertical
+        ? 'Time with inertia, horizontal (the size of the inertia effect)'
+        : 'Time with inertia, Bosanquet',
+      formula: 'L² = (a / b²)·(b·t − 1 + e^(−b·t)), a = 4·σ·cos θ / (ρ·r), b = 8·μ / (ρ·r²); solved for t',
+      substituted: `a = ${fmt(raw.inertial.a)} m²/s², b = ${fmt(raw.inertial.b)} 1/s, b·t = ${fmt(raw.inertial.tau)}; against Lucas–Washburn × ${fmt(inertiaRatio)}`,
+      value: raw.inertial.time,
+      unit: 's',
+      source: BOSANQUET,
+    },
+  );
+  const withheldByInertia = vertical ? ['time', 'timeWithGravity'] : ['time'];
+  if (vertical && raw.limit !== null) {
+    const limit = raw.limit;
     working.push({
+      id: 'jurin-limit',
       label: 'Jurin limit of the rise',
       formula: 'h_J = 2·σ·cos θ / (ρ·g·r)',
       substituted: `2 × ${q(sigma, 'N/m')} × cos ${q(angle.angleDeg, 'deg')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(r, 'm')})`,
       value: limit,
       unit: 'm',
+      source: "Jurin 1718 (Jurin's law)",
     });
-    const tg = outputs.timeWithGravity;
-    if (tg === null || tg === undefined) {
+    const tg = raw.withGravity;
+    if (tg === null) {
       warnings.push(
         warning(
           'BEYOND_JURIN_LIMIT',
-          `A height of ${q(L, 'm')} is at or above the Jurin limit of ${q(limit, 'm')}: the liquid never gets there, and the Lucas–Washburn time is meaningless for it.`,
+          `A height of ${q(L, 'm')} is at or above the Jurin limit of ${q(limit, 'm')}: the liquid never gets there, so there is no time to give.`,
           ['length', 'poreRadius'],
+          { step: 'jurin-limit', withholds: ['time', 'timeWithGravity'] },
         ),
       );
-    } else {
+    } else if (!inertiaMatters) {
       const x = L / limit;
-      working.push({
-        label: 'Time with gravity',
-        formula: 't = (2·h_J² / K)·(−x − ln(1 − x)), x = h / h_J, K = σ·r·cos θ / (2μ)',
-        substituted: `h_J = ${q(limit, 'm')}, x = ${fmt(x)}`,
-        value: tg,
-        unit: 's',
-      });
-      if (tg / time > GRAVITY_RATIO_LIMIT) {
+      const shape = gravityShape(x);
+      working.push(
+        {
+          id: 'gravity-shape',
+          label: 'Height against the Jurin limit, and the shape term',
+          formula: 'x = h / h_J; −x − ln(1 − x)',
+          substituted: `x = ${q(L, 'm')} / ${q(limit, 'm')} = ${fmt(x)}`,
+          value: shape,
+          unit: '1',
+          source: WASHBURN,
+        },
+        {
+          id: 'gravity-time',
+          label: 'Time with gravity',
+          formula: 't = (2·h_J² / K)·(−x − ln(1 − x)), K = σ·r·cos θ / (2μ)',
+          substituted: `K = ${fmt((sigma * r * Math.cos((angle.angleDeg * Math.PI) / 180)) / (2 * mu))} m²/s, 2 × (${q(limit, 'm')})² / K × ${fmt(shape)}`,
+          value: tg,
+          unit: 's',
+          source: WASHBURN,
+        },
+      );
+      if (tg / raw.time > GRAVITY_RATIO_LIMIT) {
         warnings.push(
           warning(
             'GRAVITY_NOT_NEGLIGIBLE',
-            `The height is ${fmt(x)} of the Jurin limit: gravity slows the rise and the time with gravity (${fmt(tg / time)} × the Lucas–Washburn time) is the one to use.`,
+            `The height is ${fmt(x)} of the Jurin limit: gravity slows the rise and the time with gravity (${fmt(tg / raw.time)} × the Lucas–Washburn time) is the one to use.`,
             ['length'],
+            { step: 'gravity-time' },
           ),
         );
       }
     }
   }
+  if (inertiaMatters && !(vertical && raw.withGravity === null)) {
+    warnings.push(
+      warning(
+        'INERTIA_NOT_NEGLIGIBLE',
+        vertical
+          ? `Inertia lengthens the time by ${fmt((inertiaRatio - 1) * 100, 3)} % (more than 5 %: the time is under twenty inertial time scales ρr²/(8μ)). The Lucas–Washburn times neglect it, and a rise with both gravity and inertia is not solved here, so no time is given.`
+          : `Inertia lengthens the time by ${fmt((inertiaRatio - 1) * 100, 3)} % (more than 5 %: the time is under twenty inertial time scales ρr²/(8μ)): the Lucas–Washburn time is withheld; use the time with inertia.`,
+        ['poreRadius', 'length'],
+        { step: 'bosanquet', withholds: withheldByInertia },
+      ),
+    );
+  }
+  const near = nearNinety(angle.angleDeg);
+  if (near !== null) warnings.push({ ...near, step: 'washburn' });
   const band = bandOver(angle.basis, outputs, (v) => evaluate(v.contactAngleDeg ?? angle.angleDeg));
-  return { outputs, working, warnings, band };
+  const assumptions = [
+    'Laminar flow of a Newtonian liquid in a uniform cylindrical capillary of the effective radius given.',
+    'The static contact angle holds while the liquid moves (no dynamic angle).',
+    'Clean liquid and clean surfaces: no surfactant, oil or dirt.',
+    'Entrance losses and the air displaced ahead of the liquid are neglected.',
+    vertical
+      ? 'Upward: gravity is included in the time with gravity only; inertia is judged from the horizontal solution.'
+      : 'Horizontal: gravity plays no part.',
+    liquid.assumption,
+    angle.assumption,
+    gravityAssumption(g),
+  ];
+  return solved({ outputs, working, warnings, band, assumptions }, liquid);
 }
 
 export const calculator: CalculatorDefinition = {
@@ -139,6 +276,12 @@ export const calculator: CalculatorDefinition = {
   outputs: [
     { id: 'time', label: 'Time, Lucas–Washburn', kind: 'time', help: 'Gravity and inertia neglected.' },
     {
+      id: 'timeWithInertia',
+      label: 'Time with inertia (Bosanquet)',
+      kind: 'time',
+      help: 'Horizontal only: viscous drag and the inertia of the liquid.',
+    },
+    {
       id: 'jurinLimit',
       label: 'Jurin limit (highest possible rise)',
       kind: 'length',
@@ -155,6 +298,16 @@ export const calculator: CalculatorDefinition = {
   warnings: [
     { code: 'BEYOND_JURIN_LIMIT', summary: 'An upward height at or above the Jurin limit is never reached.' },
     {
+      code: 'INERTIA_NOT_NEGLIGIBLE',
+      summary:
+        'Inertia lengthens the time by more than 5 % (our threshold: the time is under twenty inertial time scales ρr²/(8μ)); the viscous-only times are withheld.',
+    },
+    CONTACT_ANGLE_NEAR_90,
+    {
+      code: 'PORE_TOO_WIDE',
+      summary: 'The pore radius is at least the capillary length: no time is given.',
+    },
+    {
       code: 'GRAVITY_NOT_NEGLIGIBLE',
       summary: 'Gravity lengthens the time by more than 5 % (our threshold); use the time with gravity.',
     },
@@ -167,7 +320,6 @@ export const calculator: CalculatorDefinition = {
     },
     DAMP_CAUTION,
     CLEAN_SURFACES_CAUTION,
-    MERCURY_CAUTION,
   ],
   references: [
     {
@@ -176,6 +328,13 @@ export const calculator: CalculatorDefinition = {
       usedFor:
         'L² = σ r t cos θ/(2μ), and the equation of motion with gravity that gives the time with gravity',
       basis: 'printed',
+    },
+    {
+      id: 'bosanquet-1923',
+      citation: 'Bosanquet C. H. (1923) On the flow of liquids into capillary tubes, Phil. Mag. 45, 525–531',
+      usedFor:
+        'the time with inertia, d/dt(ρ·x·dx/dt) = 2σ·cos θ/r − 8μ·x·(dx/dt)/r² (citation details from memory)',
+      basis: 'from memory',
     },
     {
       id: 'lucas-1918',

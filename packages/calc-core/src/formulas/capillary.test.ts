@@ -6,7 +6,9 @@ import {
   capillaryLength,
   jurinRise,
   meniscusCorrection,
+  meniscusGeometry,
   slotMeniscusCorrection,
+  slotMeniscusGeometry,
   slotRise,
 } from './capillary.js';
 
@@ -169,5 +171,48 @@ describe('meniscus-weight correction', () => {
     expect(() => meniscusCorrection({ diameter: 1e-3, contactAngleDeg: 140 })).toThrow(
       expect.objectContaining({ code: 'MENISCUS_NOT_CONCAVE' }),
     );
+  });
+});
+
+describe('meniscus geometry, the intermediate values of the correction', () => {
+  it('at θ = 0 is a hemisphere: sag r, liquid held πr³/3, correction r/3 (Rayleigh 1915)', () => {
+    const m = meniscusGeometry({ diameter: 2e-3, contactAngleDeg: 0 });
+    expect(m.radius).toBeCloseTo(1e-3, 15);
+    expect(m.sag).toBeCloseTo(1e-3, 15);
+    expect(m.held).toBeCloseTo((Math.PI * 1e-9) / 3, 20);
+    expect(m.correction).toBeCloseTo(1e-3 / 3, 15);
+  });
+
+  it('at θ = 60° is a cap of radius 2r: sag and held volume from the cap by hand', () => {
+    const r = 1e-3;
+    const m = meniscusGeometry({ diameter: 2 * r, contactAngleDeg: 60 });
+    const R = 2 * r;
+    const s = R * (1 - Math.sqrt(3) / 2);
+    const cap = (Math.PI * s * s * (3 * R - s)) / 3;
+    expect(m.radius).toBeCloseTo(R, 15);
+    expect(m.sag).toBeCloseTo(s, 15);
+    expect(m.held).toBeCloseTo(Math.PI * r * r * s - cap, 20);
+    expect(m.correction).toBeCloseTo(m.held / (Math.PI * r * r), 15);
+  });
+
+  it('in a slot at θ = 0 is a half-cylinder: correction (1/2 − π/8)·w, held w²/2 − πw²/8', () => {
+    const w = 1e-3;
+    const m = slotMeniscusGeometry({ gap: w, contactAngleDeg: 0 });
+    expect(m.sag).toBeCloseTo(w / 2, 15);
+    expect(m.held).toBeCloseTo((w * w) / 2 - (Math.PI * w * w) / 8, 20);
+    expect(m.correction).toBeCloseTo((0.5 - Math.PI / 8) * w, 15);
+  });
+
+  it('at θ = 90° is flat: nothing held, no correction', () => {
+    expect(meniscusGeometry({ diameter: 1e-3, contactAngleDeg: 90 })).toMatchObject({
+      sag: 0,
+      held: 0,
+      correction: 0,
+    });
+    expect(slotMeniscusGeometry({ gap: 1e-3, contactAngleDeg: 90 })).toMatchObject({
+      sag: 0,
+      held: 0,
+      correction: 0,
+    });
   });
 });

@@ -93,13 +93,35 @@ export function meniscusCorrection(args: {
   readonly diameter: number;
   readonly contactAngleDeg: number;
 }): number {
+  return meniscusGeometry(args).correction;
+}
+
+/** The pieces of a meniscus correction, for the working: all lengths in m, volume in m³ (area in m² for a slot). */
+export interface MeniscusGeometry {
+  /** Radius of the meniscus surface, m (r/cos θ or (w/2)/cos θ). */
+  readonly radius: number;
+  /** Sag: height of the meniscus from its lowest point to where it meets the wall, m. */
+  readonly sag: number;
+  /** Liquid above the lowest point of the meniscus: a volume (tube, m³) or an area per unit length (slot, m²). */
+  readonly held: number;
+  /** The correction δ = sag − held / (π·r²) or sag − held / w, m. */
+  readonly correction: number;
+}
+
+/** The tube's meniscus correction with its intermediate values (see `meniscusCorrection`). */
+export function meniscusGeometry(args: {
+  readonly diameter: number;
+  readonly contactAngleDeg: number;
+}): MeniscusGeometry {
   const r = positive('diameter', args.diameter) / 2;
   const angle = wettingAngle(args.contactAngleDeg);
-  if (angle === 90) return 0;
+  if (angle === 90) return { radius: Infinity, sag: 0, held: 0, correction: 0 };
   const R = r / cosDeg(angle);
   const sag = R * (1 - Math.sin((angle * Math.PI) / 180));
   const capVolume = (Math.PI * sag * sag * (3 * R - sag)) / 3;
-  return sag - capVolume / (Math.PI * r * r);
+  // Liquid above the lowest point = cylinder of height sag minus the spherical cap.
+  const held = Math.PI * r * r * sag - capVolume;
+  return { radius: R, sag, held, correction: sag - capVolume / (Math.PI * r * r) };
 }
 
 /**
@@ -114,12 +136,20 @@ export function slotMeniscusCorrection(args: {
   readonly gap: number;
   readonly contactAngleDeg: number;
 }): number {
+  return slotMeniscusGeometry(args).correction;
+}
+
+/** The slot's meniscus correction with its intermediate values (see `slotMeniscusCorrection`). */
+export function slotMeniscusGeometry(args: {
+  readonly gap: number;
+  readonly contactAngleDeg: number;
+}): MeniscusGeometry {
   const w = positive('gap', args.gap);
   const angle = wettingAngle(args.contactAngleDeg);
-  if (angle === 90) return 0;
+  if (angle === 90) return { radius: Infinity, sag: 0, held: 0, correction: 0 };
   const R = w / 2 / cosDeg(angle);
   const sag = R * (1 - Math.sin((angle * Math.PI) / 180));
   const half = Math.PI / 2 - (angle * Math.PI) / 180;
   const segment = R * R * (half - Math.sin(half) * Math.cos(half));
-  return sag - segment / w;
+  return { radius: R, sag, held: w * sag - segment, correction: sag - segment / w };
 }

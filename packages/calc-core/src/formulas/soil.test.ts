@@ -129,4 +129,46 @@ describe('capillary-break check', () => {
       ),
     );
   });
+
+  it('agrees with a march up a layered profile (independent route, fast-check)', () => {
+    // Independent route: step up from the water table in 0.1 mm steps; a point is wet while its
+    // height is below the capillary height of the material there and every point below it is wet
+    // (water arrives only through the material beneath). The top of the wet run is the wet zone.
+    const march = (depth: number, soilRise: number, t: number, layerRise: number): number => {
+      const base = Math.max(depth - t, 0);
+      const dz = 1e-4;
+      let z = 0;
+      for (;;) {
+        const next = z + dz;
+        const h = next <= base ? soilRise : layerRise;
+        if (next > h || next > depth + 1) return z;
+        z = next;
+      }
+    };
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 2, noNaN: true }),
+        fc.double({ min: 0, max: 2, noNaN: true }),
+        fc.double({ min: 0.05, max: 0.5, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (depth, soilRise, t, layerRise) => {
+          const r = capillaryBreakCheck({
+            waterTableDepth: depth,
+            soilRise,
+            layer: { thickness: t, rise: layerRise },
+          });
+          const top = Math.min(march(depth, soilRise, t, layerRise), depth);
+          expect(Math.min(r.wetZoneTop, depth)).toBeCloseTo(top, 3);
+        },
+      ),
+      { numRuns: 60 },
+    );
+    // The case of issue 10 by hand: the soil fringe (0.05 m) stops 0.80 m below a layer whose own
+    // rise (0.25 m) would end below its base (0.85 m): the layer stays dry, clearance 0.95 m.
+    expect(march(1, 0.05, 0.15, 0.25)).toBeCloseTo(0.05, 3);
+    expect(
+      capillaryBreakCheck({ waterTableDepth: 1, soilRise: 0.05, layer: { thickness: 0.15, rise: 0.25 } })
+        .clearance,
+    ).toBeCloseTo(0.95, 12);
+  });
 });

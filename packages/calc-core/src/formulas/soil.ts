@@ -43,10 +43,13 @@ export interface CapillaryBreakResult {
 }
 
 /**
- * Capillary-break check for a granular layer directly under a slab. At equilibrium the suction at a
- * height z above the water table is ρ·g·z, and a material holds water only to its own capillary
- * height above the water table; so the soil below the layer is wet up to min(h_soil, base of the
- * layer) and the layer itself up to h_layer. Water reaches the slab only if one of them reaches it.
+ * Capillary-break check for a granular layer directly under a slab, through the layered profile.
+ * At equilibrium the suction at a height z above the water table is ρ·g·z, and a material holds
+ * water only up to its own capillary height above the water table. Water climbs from the water
+ * table through the soil, up to min(h_soil, base of the layer); only if it reaches the base of the
+ * layer can the layer take it further, up to the layer's own h_layer. A layer whose own rise would
+ * end below its base stays dry and adds nothing, and a soil fringe that stops below the layer never
+ * wets the layer at all.
  * @param args.waterTableDepth depth of the water table below the underside of the slab, m (≥ 0)
  * @param args.soilRise capillary height of the soil under the layer, m
  * @param args.layer the granular layer, thickness and capillary height in m; absent for a slab on soil
@@ -70,8 +73,9 @@ export function capillaryBreakCheck(args: {
   const thickness = positive('layer.thickness', args.layer.thickness);
   const layerRise = nonNegative('layer.rise', args.layer.rise);
   const layerBase = Math.max(depth - thickness, 0);
+  const soilReachesLayer = soilRise >= layerBase;
   // The layer's own rise is left uncapped so that a negative clearance says by how much it overshoots.
-  const wetZoneTop = Math.max(Math.min(soilRise, layerBase), layerRise);
+  const wetZoneTop = soilReachesLayer ? Math.max(layerBase, layerRise) : soilRise;
   const clearance = depth - wetZoneTop;
-  return { wetZoneTop, clearance, reachesSlab: clearance <= 0, soilReachesLayer: soilRise >= layerBase };
+  return { wetZoneTop, clearance, reachesSlab: clearance <= 0, soilReachesLayer };
 }

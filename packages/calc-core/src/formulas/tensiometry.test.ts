@@ -1,8 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { waterSurfaceTension } from '../properties/water.js';
+import { STANDARD_GRAVITY } from '../units.js';
 import {
   duNouySurfaceTension,
+  RING_TABLE_RANGE,
+  ringCorrection,
+  ZUIDEMA_WATERS,
   wilhelmyForce,
   wilhelmyRodForce,
   wilhelmyRodSurfaceTension,
@@ -105,5 +109,71 @@ describe('du Noüy ring, Zuidema–Waters as in ASTM D971', () => {
     );
     expect(() => duNouySurfaceTension({ ...ring, force: 1e-5, wireRadius: 1e-3 })).toThrow(RangeError);
     expect(() => duNouySurfaceTension({ ...ring, force: 1e-5, wireRadius: 1e-3 })).toThrow(/Zuidema–Waters/);
+  });
+});
+
+describe('the ring correction with its pieces', () => {
+  const base = { force: 9e-3, ringRadius: 9.55e-3, wireRadius: 0.2e-3, densityDifference: 998 };
+
+  it('gives R/r, V = F/(Δρ g), R³/V and the radicand, the last against ASTM D971 written out by hand', () => {
+    const x = ringCorrection(base);
+    expect(x.ringToWire).toBeCloseTo(47.75, 12);
+    expect(x.liftedVolume).toBeCloseTo(9e-3 / (998 * STANDARD_GRAVITY), 15);
+    expect(x.r3OverV).toBeCloseTo(9.55e-3 ** 3 / x.liftedVolume, 12);
+    // ASTM D971 form in its own units: P dyn/cm, C cm, D − d g/mL.
+    const P = (9e-3 * 1e5) / (4 * Math.PI * 0.955);
+    const C = 2 * Math.PI * 0.955;
+    const rad = (0.01452 * P) / (C * C * 0.998) + 0.04534 - 1.679 * (0.2 / 9.55);
+    expect(x.radicand).toBeCloseTo(rad, 12);
+    expect(x.root).toBeCloseTo(Math.sqrt(rad), 12);
+    expect(x.factor).toBeCloseTo(0.725 + Math.sqrt(rad), 12);
+    expect(x.inTableRange).toBe(true);
+  });
+
+  it('scales the gravity term by gₙ/g: the same lifted volume at another g gives the same factor', () => {
+    const g = 9.78;
+    const x = ringCorrection({ ...base, force: (base.force * g) / STANDARD_GRAVITY, gravity: g });
+    expect(x.liftedVolume).toBeCloseTo(ringCorrection(base).liftedVolume, 15);
+    expect(x.factor).toBeCloseTo(ringCorrection(base).factor ?? 0, 12);
+  });
+
+  it('holds the constants ASTM D971 prints (recalled) and the table range (from memory)', () => {
+    expect(ZUIDEMA_WATERS).toEqual({ base: 0.725, k: 0.01452, c: 0.04534, m: 1.679 });
+    expect(RING_TABLE_RANGE).toEqual({
+      ringToWire: { min: 30, max: 80 },
+      r3OverV: { min: 0.3, max: 4.5 },
+      factor: { min: 0.75, max: 1.05 },
+    });
+  });
+
+  it('is in the table range exactly at its edges and out just beyond them', () => {
+    const R = 9.55e-3;
+    const at = (ratio: number, r3v: number) =>
+      ringCorrection({
+        ringRadius: R,
+        wireRadius: R / ratio,
+        densityDifference: 1000,
+        force: (R ** 3 / r3v) * 1000 * STANDARD_GRAVITY,
+      }).inTableRange;
+    expect(at(30 * (1 + 1e-9), 1)).toBe(true);
+    expect(at(80 * (1 - 1e-9), 1)).toBe(true);
+    expect(at(29.9, 1)).toBe(false);
+    expect(at(80.1, 1)).toBe(false);
+    expect(at(47, 0.3 * 1.0001)).toBe(true);
+    expect(at(47, 4.5 * 0.9999)).toBe(true);
+    expect(at(47, 0.299)).toBe(false);
+    expect(at(47, 4.51)).toBe(false);
+  });
+
+  it('gives no root and no factor where the radicand is negative, and the refusal names it', () => {
+    const thick = { force: 1e-6, ringRadius: 2e-3, wireRadius: 1e-3, densityDifference: 998 };
+    const x = ringCorrection(thick);
+    expect(x.radicand).toBeLessThan(0);
+    expect(x.root).toBeNull();
+    expect(x.factor).toBeNull();
+    expect(() => duNouySurfaceTension(thick)).toThrow(RangeError);
+    expect(() => ringCorrection({ ...thick, wireRadius: 2e-3 })).toThrow(
+      expect.objectContaining({ code: 'WIRE_NOT_THINNER_THAN_RING' }),
+    );
   });
 });

@@ -2,7 +2,13 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { waterDensity, waterSurfaceTension, waterViscosity } from '../properties/water.js';
 import { jurinRise } from './capillary.js';
-import { gravityRestrainedRiseTime, washburnLength, washburnTime } from './wicking.js';
+import {
+  bosanquetTime,
+  gravityRestrainedRiseTime,
+  gravityShape,
+  washburnLength,
+  washburnTime,
+} from './wicking.js';
 
 const water = { surfaceTension: waterSurfaceTension(20), viscosity: waterViscosity(20) };
 const rho = waterDensity(20).value;
@@ -85,5 +91,63 @@ describe('rise with gravity', () => {
   it('never reaches the Jurin limit', () => {
     expect(() => gravityRestrainedRiseTime({ ...base, height: limit })).toThrow(/Jurin limit/);
     expect(() => gravityRestrainedRiseTime({ ...base, height: 2 * limit })).toThrow(RangeError);
+  });
+});
+
+describe('Bosanquet (1923), with inertia', () => {
+  const args = { ...water, poreRadius: 1e-3, contactAngleDeg: 0, density: rho };
+
+  it('reports a = 4σ cos θ/(ρ r) and b = 8μ/(ρ r²) and solves x² = (a/b²)(bt − 1 + e^(−bt)) exactly', () => {
+    const r = bosanquetTime({ ...args, length: 0.05 });
+    expect(r.a).toBeCloseTo((4 * water.surfaceTension) / (rho * 1e-3), 12);
+    expect(r.b).toBeCloseTo((8 * water.viscosity) / (rho * 1e-6), 12);
+    expect(r.tau).toBeCloseTo(r.b * r.time, 12);
+    // Put the time back into the closed form (a different evaluation from the solver's).
+    const x2 = (r.a / r.b ** 2) * (r.b * r.time - 1 + Math.exp(-r.b * r.time));
+    expect(Math.sqrt(x2)).toBeCloseTo(0.05, 12);
+  });
+
+  it('starts at the inertial speed √(a/2) (Bosanquet’s short-time limit) and ends on Lucas–Washburn', () => {
+    const short = bosanquetTime({ ...args, length: 1e-8 });
+    expect((short.time * Math.sqrt(short.a / 2)) / 1e-8).toBeCloseTo(1, 6);
+    const long = bosanquetTime({ ...args, length: 10 });
+    const lw = washburnTime({ ...args, length: 10 });
+    // t_B − t_LW → 1/b for long times: the inertial delay.
+    expect(long.time - lw).toBeCloseTo(1 / long.b, 6);
+  });
+
+  it('is never shorter than Lucas–Washburn and grows with the distance (fast-check)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-7, max: 1e-2, noNaN: true }),
+        fc.double({ min: 1e-6, max: 1, noNaN: true }),
+        fc.double({ min: 0, max: 80, noNaN: true }),
+        (r, L, theta) => {
+          const a = { ...water, poreRadius: r, contactAngleDeg: theta, density: rho };
+          const t = bosanquetTime({ ...a, length: L }).time;
+          expect(t).toBeGreaterThanOrEqual(washburnTime({ ...a, length: L }) * (1 - 1e-12));
+          expect(bosanquetTime({ ...a, length: L * 1.5 }).time).toBeGreaterThan(t);
+        },
+      ),
+      { numRuns: 200 },
+    );
+  });
+
+  it('refuses a wetting angle of 90° or more, like Lucas–Washburn', () => {
+    expect(() => bosanquetTime({ ...args, contactAngleDeg: 90, length: 0.01 })).toThrow(
+      expect.objectContaining({ code: 'NO_SPONTANEOUS_WICKING' }),
+    );
+  });
+});
+
+describe('the shape term of the rise with gravity', () => {
+  it('joins its series and the closed form smoothly at x = 1e-4 and matches −x − ln(1 − x)', () => {
+    for (const x of [1e-6, 5e-5, 0.99e-4, 1.01e-4, 0.01, 0.5, 0.9]) {
+      // ln(1 − x) by its series Σ xⁿ/n, an independent route for small x.
+      let series = 0;
+      for (let n = 2; n < 3000; n++) series += x ** n / n;
+      expect(gravityShape(x) / series).toBeCloseTo(1, 9);
+    }
+    expect(gravityShape(0)).toBe(0);
   });
 });

@@ -60,7 +60,8 @@ describe('liquid table', () => {
   });
 
   it('carries the mercury hazard', () => {
-    expect(getLiquid('mercury')?.hazard).toMatch(/toxic/);
+    expect(getLiquid('mercury')?.hazard?.text).toMatch(/toxic/);
+    expect(getLiquid('mercury')?.hazard?.code).toBe('HAZARD_MERCURY');
     expect(getLiquid('water')).toBeUndefined();
   });
 });

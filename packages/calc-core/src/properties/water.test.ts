@@ -54,13 +54,13 @@ describe('water surface tension, IAPWS R1-76(2014)', () => {
 describe('water density, Tanaka 2001 and Kell 1975', () => {
   // [t °C, ρ kg/m³, tolerance, source]
   const tanaka: [number, number, number, string][] = [
-    [0, 999.8428, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [4, 999.9749, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [10, 999.7027, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [20, 998.2067, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [25, 997.047, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [30, 995.6488, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
-    [40, 992.2152, 5e-5, 'computed from Tanaka 2001 eq. (1), REFERENCES.md'],
+    [0, 999.8428, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [4, 999.9749, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [10, 999.7027, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [20, 998.2067, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [25, 997.047, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [30, 995.6488, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
+    [40, 992.2152, 5e-5, 'Tanaka 2001 eq. (1) evaluated by hand with its printed coefficients'],
   ];
   it.each(tanaka)('Tanaka: %s °C → %s kg/m³ ±%s (%s)', (t, expected, tol) => {
     const d = waterDensity(t);
@@ -85,7 +85,7 @@ describe('water density, Tanaka 2001 and Kell 1975', () => {
     expect(at(3.983035)).toBeGreaterThan(at(4.07));
   });
 
-  it('switches formulation at 40 °C with a step under 0.001 kg/m³ (Kell within 0.0033 of Tanaka, REFERENCES.md computed)', () => {
+  it('switches formulation at 40 °C with a step under 0.001 kg/m³ (Kell within 0.0033 of Tanaka over 0–40 °C, computed from both printed formulas)', () => {
     const below = waterDensity(40).value;
     const above = waterDensity(40 + 1e-9).value;
     expect(waterDensity(40 + 1e-9).formulation).toBe('kell-1975');

@@ -14,8 +14,10 @@ function checkRange(what: string, tC: number, minC: number, maxC: number): void 
 }
 
 // IAPWS R1-76(2014), Revised Release on Surface Tension of Ordinary Water Substance:
-// σ = B·τ^μ·(1 + b·τ), τ = 1 − T/Tc, B = 235.8 mN/m, b = −0.625, μ = 1.256, Tc = 647.096 K.
-const IAPWS_TC_K = 647.096;
+// σ = B·τ^μ·(1 + b·τ), τ = 1 − T/Tc. The working shown to a visitor is built from these same numbers.
+/** IAPWS R1-76(2014) constants: B in N/m, b and μ dimensionless, Tc in K. */
+export const IAPWS_R1_76 = { B: 235.8e-3, b: -0.625, mu: 1.256, Tc: 647.096 } as const;
+const IAPWS_TC_K = IAPWS_R1_76.Tc;
 /** Triple point 273.16 K and critical point 647.096 K, in °C: the range IAPWS R1-76 states. */
 export const SURFACE_TENSION_RANGE_C = { min: 0.01, max: IAPWS_TC_K - KELVIN_OFFSET } as const;
 
@@ -35,7 +37,7 @@ export function waterSurfaceTension(tC: number): number {
   const tau = 1 - (tC + KELVIN_OFFSET) / IAPWS_TC_K;
   // tau can come out as -1e-16 at the critical point through rounding; σ is 0 there.
   if (tau <= 0) return 0;
-  return 235.8e-3 * tau ** 1.256 * (1 - 0.625 * tau);
+  return IAPWS_R1_76.B * tau ** IAPWS_R1_76.mu * (1 + IAPWS_R1_76.b * tau);
 }
 
 export type DensityFormulation = 'tanaka-2001' | 'kell-1975';
@@ -48,6 +50,28 @@ export interface WaterDensity {
 }
 
 export const DENSITY_RANGE_C = { min: 0, max: 150 } as const;
+
+/** Tanaka et al. 2001 eq. (1) coefficients: a1, a2, a4 in °C, a3 in °C², a5 in kg/m³. */
+export const TANAKA_2001 = {
+  a1: -3.983035,
+  a2: 301.797,
+  a3: 522528.9,
+  a4: 69.34881,
+  a5: 999.97495,
+} as const;
+
+/** Kell 1975: numerator coefficients of t⁰…t⁵ (kg/m³ per °Cⁿ) and the denominator's b (1/°C). */
+export const KELL_1975 = {
+  a: [999.83952, 16.945176, -7.9870401e-3, -46.170461e-6, 105.56302e-9, -280.54253e-12],
+  b: 16.87985e-3,
+} as const;
+
+/** IAPWS SR6-08 (2011) liquid water at 0.1 MPa: μ/(μPa·s) = Σ aᵢ·(T/T*)^bᵢ, T* = 300 K. */
+export const IAPWS_SR6_08 = {
+  a: [280.68, 511.45, 61.131, 0.45903],
+  b: [-1.9, -7.7, -19.6, -40],
+  Tstar: 300,
+} as const;
 
 export const TANAKA_SOURCE =
   'Tanaka M., Girard G., Davis R., Peuto A., Bignell N. (2001) Recommended table for the density of water between 0 °C and 40 °C based on recent experimental reports, Metrologia 38, 301–309';
@@ -66,25 +90,18 @@ export function waterDensity(tC: number): WaterDensity {
   checkRange('water density (Tanaka 2001 / Kell 1975)', tC, DENSITY_RANGE_C.min, DENSITY_RANGE_C.max);
   if (tC <= 40) {
     // Tanaka 2001 eq. (1), t in °C: ρ = a5·[1 − (t + a1)²(t + a2) / (a3·(t + a4))]
-    const a1 = -3.983035;
-    const a2 = 301.797;
-    const a3 = 522528.9;
-    const a4 = 69.34881;
-    const a5 = 999.97495;
+    const { a1, a2, a3, a4, a5 } = TANAKA_2001;
     const value = a5 * (1 - ((tC + a1) ** 2 * (tC + a2)) / (a3 * (tC + a4)));
     return { value, formulation: 'tanaka-2001', source: TANAKA_SOURCE };
   }
   // Kell 1975, t in °C as printed (IPTS-68). Its offset from ITS-90 is a few hundredths of a kelvin
   // here, under 0.03 kg/m³ even at 100 °C: well inside what a capillarity estimate can resolve.
   const t = tC;
-  const numerator =
-    999.83952 +
-    16.945176 * t -
-    7.9870401e-3 * t ** 2 -
-    46.170461e-6 * t ** 3 +
-    105.56302e-9 * t ** 4 -
-    280.54253e-12 * t ** 5;
-  return { value: numerator / (1 + 16.87985e-3 * t), formulation: 'kell-1975', source: KELL_SOURCE };
+  let numerator = 0;
+  KELL_1975.a.forEach((a, n) => {
+    numerator += a * t ** n;
+  });
+  return { value: numerator / (1 + KELL_1975.b * t), formulation: 'kell-1975', source: KELL_SOURCE };
 }
 
 /** 253.15–383.15 K in °C: the range of IAPWS SR6-08 for liquid water at 0.1 MPa (incl. metastable states). */
@@ -100,8 +117,11 @@ export const VISCOSITY_RANGE_C = { min: -20, max: 110 } as const;
  */
 export function waterViscosity(tC: number): number {
   checkRange('water viscosity (IAPWS SR6-08)', tC, VISCOSITY_RANGE_C.min, VISCOSITY_RANGE_C.max);
-  const tr = (tC + KELVIN_OFFSET) / 300;
-  const micro = 280.68 * tr ** -1.9 + 511.45 * tr ** -7.7 + 61.131 * tr ** -19.6 + 0.45903 * tr ** -40;
+  const tr = (tC + KELVIN_OFFSET) / IAPWS_SR6_08.Tstar;
+  let micro = 0;
+  IAPWS_SR6_08.a.forEach((a, i) => {
+    micro += a * tr ** (IAPWS_SR6_08.b[i] ?? 0);
+  });
   return micro * 1e-6;
 }
 

@@ -55,6 +55,11 @@ export function splitCautions(text: string): string[] {
     .filter((l) => l !== '');
 }
 
+/** The warning that withholds an output, if any: the output is then shown as not defined, with its reason. */
+function withholdingWarning(result: CalculationResult, outputId: string) {
+  return result.warnings.find((w) => (w.withholds ?? []).includes(outputId));
+}
+
 /** The result of the last calculation: figures, band, warnings, working, cautions and the standing disclaimer. */
 export function Result({
   calculator,
@@ -67,9 +72,20 @@ export function Result({
   Working,
 }: ResultProps) {
   const outputs = calculator.outputs.filter((o) => typeof result.outputs[o.id] === 'number');
+  // Outputs the method cannot give for these inputs: named, with the reason, never a figure.
+  const withheld = calculator.outputs.flatMap((o) => {
+    const w = result.outputs[o.id] === null ? withholdingWarning(result, o.id) : undefined;
+    return w ? [{ output: o, warning: w }] : [];
+  });
   const band = result.band;
   const inputLabel = (id: string): string => calculator.inputs.find((i) => i.id === id)?.label ?? id;
+  const stepLabel = (id: string): string | undefined => result.working.find((s) => s.id === id)?.label;
   const firm = splitCautions(firmCautions);
+  // The result's own cautions: the chosen liquid's hazard first, then the calculator's.
+  const cautions = result.cautions;
+  const hazards = cautions.filter((c) => c.code.startsWith('HAZARD_') || c.code === 'OTHER_LIQUID_HAZARD');
+  const general = cautions.filter((c) => !hazards.includes(c));
+  const assumptions = result.assumptions;
   return (
     <section
       class={stale ? 'result is-stale' : 'result'}
@@ -112,7 +128,32 @@ export function Result({
             </div>
           );
         })}
+        {withheld.map(({ output, warning }) => (
+          <div
+            class="readout is-withheld"
+            key={output.id}
+            data-output={output.id}
+            data-withheld={warning.code}
+          >
+            <dt>{output.label}</dt>
+            <dd>
+              <span class="figure withheld">Not defined here</span>
+              <span class="band">{warning.message}</span>
+            </dd>
+          </div>
+        ))}
       </dl>
+      {hazards.length > 0 && (
+        <div class="hazards" role="note" aria-label="Hazards of the liquid" data-wickstone="hazards">
+          {hazards.map((c) => (
+            <p class="hazard" key={c.code} data-caution={c.code} data-hazard={c.code}>
+              <strong>Hazard. </strong>
+              {c.text}
+              {c.source && <span class="note"> Source: {c.source}.</span>}
+            </p>
+          ))}
+        </div>
+      )}
       {band && band.basis.length > 0 && (
         <p class="band-basis" data-wickstone="band-basis">
           Likely ranges follow the published spread of{' '}
@@ -143,6 +184,12 @@ export function Result({
                 {w.fields.length > 0 && (
                   <span class="note"> Check: {w.fields.map(inputLabel).join(', ')}.</span>
                 )}
+                {w.step !== undefined && stepLabel(w.step) !== undefined && (
+                  <span class="note" data-warning-step={w.step}>
+                    {' '}
+                    Qualifies working step “{stepLabel(w.step)}”.
+                  </span>
+                )}
               </span>
             </div>
           ))}
@@ -151,12 +198,26 @@ export function Result({
 
       {Working && <Working calculator={calculator} result={result} system={system} />}
 
+      {assumptions.length > 0 && (
+        <div class="assumptions" data-wickstone="assumptions">
+          <h4 class="label">This result assumes</h4>
+          <ul>
+            {assumptions.map((a, i) => (
+              <li key={i} data-assumption={i}>
+                {a}
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
+
       <div class="cautions" data-wickstone="cautions">
         <h4 class="label">Before relying on this</h4>
         <ul>
-          {calculator.cautions.map((c) => (
+          {general.map((c) => (
             <li key={c.code} data-caution={c.code}>
               {c.text}
+              {c.source && <span class="note"> ({c.source})</span>}
             </li>
           ))}
           {firm.map((text, i) => (
@@ -169,6 +230,12 @@ export function Result({
           {DISCLAIMER}
         </p>
       </div>
+      <p class="provenance" data-wickstone="provenance">
+        Calculation engine <span data-wickstone="engine-version">{result.version}</span> · input hash{' '}
+        <code class="hash" data-wickstone="input-hash">
+          {result.inputHash}
+        </code>
+      </p>
     </section>
   );
 }

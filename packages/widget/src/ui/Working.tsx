@@ -29,6 +29,14 @@ export function Working({ calculator, result, system }: WorkingProps) {
                 )}
               </p>
               {step.source && <p class="step-source">{step.source}</p>}
+              {step.id !== undefined &&
+                result.warnings
+                  .filter((w) => w.step === step.id)
+                  .map((w) => (
+                    <p class="step-warning" key={w.code} data-step-warning={w.code}>
+                      See warning {w.code}.
+                    </p>
+                  ))}
             </li>
           );
         })}
