@@ -37,6 +37,8 @@ import { createWidgetService } from './widgets/service.js';
 import { widgetRoutes } from './widgets/router.js';
 import { createRunService } from './runs/service.js';
 import { runRoutes } from './runs/router.js';
+import { createSheetService } from './sheets/service.js';
+import { sheetRoutes } from './sheets/router.js';
 import { createUsageService } from './usage/service.js';
 import { usageRoutes } from './usage/router.js';
 import { createLeadService } from './leads/service.js';
@@ -102,6 +104,7 @@ export function createApp(deps: AppDeps): Express {
   const assets = createAssetService(config.publicUrl);
   const embed = createEmbedService({ sequelize, mailer, logger, publicUrl: config.publicUrl });
   const runs = createRunService({ sequelize });
+  const sheets = createSheetService({ publicUrl: config.publicUrl });
   const usage = createUsageService({ sequelize });
   const leads = createLeadService({ sequelize, runs });
   // The purge itself runs on a timer that index.ts starts; the app only serves the setting.
@@ -115,6 +118,7 @@ export function createApp(deps: AppDeps): Express {
   widgetRoutes(routes, widgets, audit);
   assetRoutes(routes, assets);
   runRoutes(routes, runs);
+  sheetRoutes(routes, sheets, config.embed);
   usageRoutes(routes, usage);
   leadRoutes(routes, leads, audit);
   retentionRoutes(routes, retention, audit);
@@ -124,7 +128,7 @@ export function createApp(deps: AppDeps): Express {
 
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
   app.use('/releases', releasesRouter(releasesDir));
-  app.use(`${API_BASE}/embed`, embedRouter(embed, config.embed));
+  app.use(`${API_BASE}/embed`, embedRouter(embed, sheets, config.embed));
 
   const api = express.Router();
   api.use(express.json({ limit: '64kb' }));

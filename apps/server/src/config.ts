@@ -65,6 +65,8 @@ const envSchema = z.object({
   DEMO_SITE_PORT: z.coerce.number().int().min(1).max(65535).default(5181),
   DEMO_SITE_FILE: z.string().optional(),
   LEAD_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(10),
+  /** Calculation sheets (PDFs) and verifications one address may ask for per rate-limit window. */
+  SHEET_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(30),
   LEAD_LIMIT_PER_WIDGET: z.coerce.number().int().min(1).max(1_000_000).default(200),
   /** How often the retention purge runs, and how long after start the first one does. */
   RETENTION_PURGE_INTERVAL_HOURS: z.coerce
@@ -110,7 +112,7 @@ export type Config = {
   dashboardDir: string | undefined;
   releasesDir: string | undefined;
   demo: { sitePort: number; snippetsFile: string | undefined };
-  embed: { leadsPerIp: number; leadsPerWidget: number; windowMs: number };
+  embed: { leadsPerIp: number; leadsPerWidget: number; sheetsPerIp: number; windowMs: number };
   retention: { purgeIntervalMs: number; firstPurgeDelayMs: number; chunkSize: number };
   trustProxy: boolean;
 };
@@ -172,6 +174,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     embed: {
       leadsPerIp: e.LEAD_LIMIT_PER_IP,
       leadsPerWidget: e.LEAD_LIMIT_PER_WIDGET,
+      sheetsPerIp: e.SHEET_LIMIT_PER_IP,
       windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
     },
     retention: {

@@ -6,3 +6,4 @@ export * from './color.js';
 export * from './widgets.js';
 export * from './usage.js';
 export * from './releases.js';
+export * from './sheets.js';

@@ -2,14 +2,23 @@ import compression from 'compression';
 import express, { type NextFunction, type Request, type Response, type Router } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import { z } from 'zod';
-import { embedLeadBodySchema, embedRunBodySchema, publicKeySchema } from '@wickstone/contracts';
+import {
+  embedLeadBodySchema,
+  embedRunBodySchema,
+  embedSheetParamsSchema,
+  embedSheetQuerySchema,
+  publicKeySchema,
+} from '@wickstone/contracts';
 import { AppError, parseRequest } from '../errors.js';
 import type { EmbedService } from './service.js';
+import type { SheetService } from '../sheets/service.js';
+import { sendSheet } from '../sheets/send.js';
 
 export interface EmbedLimits {
   windowMs: number;
   leadsPerIp: number;
   leadsPerWidget: number;
+  sheetsPerIp: number;
 }
 
 const keyParams = z.strictObject({ publicKey: publicKeySchema });
@@ -49,7 +58,7 @@ function jsonBody(req: Request, _res: Response, next: NextFunction): void {
  * may read an answer only when the page's origin is one a live widget allows (CORS), and each
  * call checks the origin against its own widget.
  */
-export function embedRouter(service: EmbedService, limits: EmbedLimits): Router {
+export function embedRouter(service: EmbedService, sheets: SheetService, limits: EmbedLimits): Router {
   const router = express.Router();
   const known = new Map<string, { ok: boolean; until: number }>();
 
@@ -131,6 +140,16 @@ export function embedRouter(service: EmbedService, limits: EmbedLimits): Router 
       res.status(201).json(await service.recordLead(res.locals.leadBody, res.req.get('origin')));
     },
   );
+
+  // The run id is the capability: made in the visitor's browser, unguessable, never listed.
+  const sheetsPerIp = limited('sheets-per-ip', limits.sheetsPerIp, (req) =>
+    ipKeyGenerator(req.ip ?? 'unknown'),
+  );
+  router.get('/runs/:runId/sheet', sheetsPerIp, async (req, res) => {
+    const { runId } = parseRequest(embedSheetParamsSchema, req.params, 'params');
+    const { publicKey, ...project } = parseRequest(embedSheetQuerySchema, req.query, 'query');
+    sendSheet(res, await sheets.forVisitor({ runId, publicKey, origin: req.get('origin'), project }));
+  });
 
   router.get('/assets/:assetId/:hash', async (req, res) => {
     const { assetId, hash } = parseRequest(assetParams, req.params, 'params');
