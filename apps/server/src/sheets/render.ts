@@ -84,8 +84,9 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
   const keep = (height: number) => {
     if (doc.y + height > bottom()) doc.addPage();
   };
-  const heading = (text: string) => {
-    keep(40);
+  /** A section title, moved to the next page with its section's first `room` points, never left alone. */
+  const heading = (text: string, room = 40) => {
+    keep(room);
     doc.moveDown(0.6).font('bold').fontSize(11).fillColor(data.firm.color).text(text, left, doc.y, { width });
     doc.moveDown(0.2).fillColor(INK);
   };
@@ -230,8 +231,7 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
   if (data.firmCautions) para(`• ${data.firm.name}: ${data.firmCautions}`, { indent: 4 });
   para(`• ${ESTIMATE_NOTE}`, { indent: 4 });
 
-  heading('Sign-off');
-  keep(70);
+  heading('Sign-off', 90);
   const col = width / 3;
   const signY = doc.y + 4;
   ['Prepared by', 'Checked by', 'Approved by'].forEach((label, i) => {
@@ -251,8 +251,7 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
   });
   doc.y = signY + 56;
 
-  heading('Verification');
-  keep(100);
+  heading('Verification', 120);
   const qr = await QRCode.toBuffer(data.verifyUrl, {
     type: 'png',
     margin: 1,
