@@ -102,9 +102,9 @@ export function createApp(deps: AppDeps): Express {
     widgetVersion: serverVersion,
   });
   const assets = createAssetService(config.publicUrl);
-  const embed = createEmbedService({ sequelize, mailer, logger, publicUrl: config.publicUrl });
   const runs = createRunService({ sequelize });
   const sheets = createSheetService({ publicUrl: config.publicUrl });
+  const embed = createEmbedService({ sequelize, mailer, logger, publicUrl: config.publicUrl, sheets });
   const usage = createUsageService({ sequelize });
   const leads = createLeadService({ sequelize, runs });
   // The purge itself runs on a timer that index.ts starts; the app only serves the setting.

@@ -16,6 +16,7 @@ import { AppError } from '../errors.js';
 import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { assetUrl } from '../widgets/service.js';
 import { leadNotificationMail, resultCopyMail } from './mail.js';
+import type { SheetService } from '../sheets/service.js';
 import { retryOnDeadlock, storeRuns, type RunRow } from '../runs/store.js';
 import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
 
@@ -79,8 +80,9 @@ export function createEmbedService(deps: {
   mailer: Mailer;
   logger: Logger;
   publicUrl: string;
+  sheets: SheetService;
 }): EmbedService {
-  const { sequelize, mailer, logger, publicUrl } = deps;
+  const { sequelize, mailer, logger, publicUrl, sheets } = deps;
 
   async function liveWidget(publicKey: string, origin: string | undefined): Promise<Widget> {
     const w = await Widget.findOne({ where: { publicKey } });
@@ -296,20 +298,25 @@ export function createEmbedService(deps: {
         );
       }
       if (body.sendCopy && lead.email && calc && result) {
-        await sendSafely(
-          mailer,
-          logger,
-          resultCopyMail({
-            to: lead.email,
-            orgName: org?.name ?? '',
-            widgetName: w.name,
-            calc,
-            result,
-            system: run.unitSystem,
-            firmCautions: w.settings.cautions,
-          }),
-          'result copy',
-        );
+        // The copy carries the calculation sheet; a sheet that cannot be made never stops the mail.
+        const sheet = await sheets.forRun(run, w).catch((err: unknown) => {
+          logger.error({ err, runId: run.id }, 'calculation sheet for the e-mailed copy could not be made');
+          return null;
+        });
+        const mail = resultCopyMail({
+          to: lead.email,
+          orgName: org?.name ?? '',
+          widgetName: w.name,
+          calc,
+          result,
+          system: run.unitSystem,
+          firmCautions: w.settings.cautions,
+        });
+        if (sheet)
+          mail.attachments = [
+            { filename: sheet.filename, content: sheet.pdf, contentType: 'application/pdf' },
+          ];
+        await sendSafely(mailer, logger, mail, 'result copy');
       }
       return { id: lead.id };
     },

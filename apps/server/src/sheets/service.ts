@@ -26,6 +26,8 @@ export interface SheetService {
   /** For the firm's analysts: any run of the organisation. */
   forOrg(orgId: number, runId: string, project: SheetProject): Promise<Sheet>;
   verify(runId: string): Promise<VerifyResponse>;
+  /** The sheet for a run already loaded, or null where the widget has sheets turned off. */
+  forRun(run: Run, w: Widget): Promise<Sheet | null>;
 }
 
 const DEFAULT_SHEET: WidgetSettings['sheet'] = { enabled: true, paper: 'a4' };
@@ -103,6 +105,8 @@ export function createSheetService(deps: { publicUrl: string }): SheetService {
       if (!w) throw noRun();
       return render(run, w, project);
     },
+
+    forRun: (run, w) => (sheetSettings(w).enabled ? render(run, w, {}) : Promise.resolve(null)),
 
     async verify(runId) {
       const run = await Run.findByPk(runId);

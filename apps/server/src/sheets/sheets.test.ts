@@ -9,8 +9,10 @@ import { calculate, getCalculator } from '@wickstone/calc-core';
 import { errorBodySchema, verifyResponseSchema } from '@wickstone/contracts';
 import {
   createTestApp,
+  mailbox,
   seedOrgWithTeam,
   TestClient,
+  uniqueEmail,
   type FixtureOrg,
   type TestApp,
 } from '../testing/index.js';
@@ -196,6 +198,28 @@ describe('calculation sheets and verification', () => {
     const res = await request(t.app).get(`/api/v1/verify/${id}`).expect(404);
     expect(errorBodySchema.parse(res.body).error.message).toMatch(/erased/);
     await request(t.app).get('/api/v1/verify/nope').expect(400);
+  });
+
+  it('attaches the sheet to the copy e-mailed to the visitor', async () => {
+    const { id, r } = await storedRun();
+    const email = uniqueEmail('visitor');
+    await request(t.app)
+      .post('/api/v1/embed/leads')
+      .set('Origin', SITE)
+      .send({
+        runId: id,
+        publicKey: widget.publicKey,
+        fields: { name: 'Ines Marlow', email },
+        consent: true,
+        sendCopy: true,
+      })
+      .expect(201);
+    const [copy] = await mailbox(t.db.config.mail.fakeApiUrl, email);
+    const pdf = copy?.attachments?.find((a) => a.contentType === 'application/pdf');
+    expect(pdf?.filename).toBe(`calculation-sheet-${id}.pdf`);
+    const text = pdfText(Buffer.from(pdf!.contentBase64, 'base64'));
+    expect(text).toContain(r.inputHash);
+    expect(text).toContain(`/verify/${id}`);
   });
 
   it('rate-limits sheet requests per address', async () => {
