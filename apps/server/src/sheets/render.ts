@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
@@ -17,10 +18,12 @@ import { shown } from '../embed/format.js';
 // maths signs the working uses; the brand font's npm files are split into script subsets, so a formula
 // such as "h = 2γ cos θ / (ρ g r)" would need several fonts per line.
 const require = createRequire(import.meta.url);
-const FONTS = {
-  regular: require.resolve('dejavu-fonts-ttf/ttf/DejaVuSans.ttf'),
-  bold: require.resolve('dejavu-fonts-ttf/ttf/DejaVuSans-Bold.ttf'),
-  mono: require.resolve('dejavu-fonts-ttf/ttf/DejaVuSansMono.ttf'),
+const font = (file: string) => readFileSync(require.resolve(`dejavu-fonts-ttf/ttf/${file}`));
+/** Read once per process, not once per sheet. */
+export const SHEET_FONTS = {
+  regular: font('DejaVuSans.ttf'),
+  bold: font('DejaVuSans-Bold.ttf'),
+  mono: font('DejaVuSansMono.ttf'),
 };
 
 /** Everything one sheet prints; the caller loads it, this module only lays it out. */
@@ -67,9 +70,9 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
       Creator: 'Wickstone',
     },
   });
-  doc.registerFont('regular', FONTS.regular);
-  doc.registerFont('bold', FONTS.bold);
-  doc.registerFont('mono', FONTS.mono);
+  doc.registerFont('regular', SHEET_FONTS.regular);
+  doc.registerFont('bold', SHEET_FONTS.bold);
+  doc.registerFont('mono', SHEET_FONTS.mono);
   const chunks: Buffer[] = [];
   doc.on('data', (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
