@@ -54,6 +54,13 @@ const smtp = new SMTPServer({
           text,
           html,
           links: [...new Set([...(text.match(linkPattern) ?? []), ...(html.match(linkPattern) ?? [])])],
+          // Kept whole (base64) so tests can read an attached calculation sheet.
+          attachments: mail.attachments.map((a) => ({
+            filename: a.filename ?? '',
+            contentType: a.contentType,
+            size: a.size,
+            contentBase64: a.content.toString('base64'),
+          })),
         });
         callback();
       })

@@ -5,7 +5,7 @@
 // set-up and skips the static checks, which only a full run makes.
 import { ensureMariaDBInstalled, stopMariaDB } from './lib/mariadb.mjs';
 import { log, runStatus, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
-import { build, ensureChromium, ensureNodeModules } from './lib/setup.mjs';
+import { build, ensureChromium, ensureNodeModules, ensurePdfTools } from './lib/setup.mjs';
 import { staticChecks } from './lib/checks.mjs';
 import { startTestDatabase, stopTestEnv, testDbInstance, testEnv, testPorts } from './lib/test-env.mjs';
 import { startFakePayments } from './lib/payments.mjs';
@@ -26,6 +26,7 @@ let code = 1;
 try {
   ensureNodeModules();
   ensureChromium();
+  ensurePdfTools();
   ensureMariaDBInstalled();
   if (vitestArgs.length === 0) staticChecks();
   build();

@@ -16,6 +16,15 @@ export function ensureChromium() {
   ensureDebianPackage('/usr/bin/chromium', ['chromium'], 'browser tests drive Debian Chromium');
 }
 
+/** The sheet tests read each PDF's text with poppler-utils' `pdftotext` (and look at pages with `pdftoppm`). */
+export function ensurePdfTools() {
+  ensureDebianPackage(
+    '/usr/bin/pdftotext',
+    ['poppler-utils'],
+    'calculation-sheet tests read PDFs with pdftotext',
+  );
+}
+
 export function build() {
   log('building every workspace (turbo run build)');
   run('npx', ['turbo', 'run', 'build', '--output-logs=errors-only']);

@@ -13,6 +13,7 @@ import { SignupPage } from './routes/signup';
 import { ForgotPasswordPage } from './routes/forgot-password';
 import { ResetPasswordPage } from './routes/reset-password';
 import { AcceptInvitationPage } from './routes/accept-invitation';
+import { VerifyPage } from './routes/verify';
 import { DevMailPage } from './routes/dev-mail';
 import { AppShell } from './routes/shell';
 import { OrgLayout } from './routes/org-layout';
@@ -47,6 +48,7 @@ export const router = createBrowserRouter([
           { path: 'forgot-password', element: <ForgotPasswordPage /> },
           { path: 'reset-password', element: <ResetPasswordPage /> },
           { path: 'invitations/:token', element: <AcceptInvitationPage /> },
+          { path: 'verify/:runId', element: <VerifyPage /> },
           { path: '*', element: <NotFoundPage /> },
         ],
       },

@@ -41,6 +41,8 @@ import { createWidgetService } from './widgets/service.js';
 import { widgetRoutes } from './widgets/router.js';
 import { createRunService } from './runs/service.js';
 import { runRoutes } from './runs/router.js';
+import { createSheetService } from './sheets/service.js';
+import { sheetRoutes } from './sheets/router.js';
 import { createUsageService } from './usage/service.js';
 import { usageRoutes } from './usage/router.js';
 import { createLeadService } from './leads/service.js';
@@ -122,6 +124,7 @@ export function createApp(deps: AppDeps): Express {
     afterStored: (runs) =>
       afterRunsStored(runs).catch((err: unknown) => logger.error({ err }, 'run allowance hook failed')),
   });
+  const sheets = createSheetService({ publicUrl: config.publicUrl });
   const embed = createEmbedService({
     sequelize,
     mailer,
@@ -130,6 +133,7 @@ export function createApp(deps: AppDeps): Express {
     ingest,
     counters,
     copyLimits: config.embed.copies,
+    sheets,
   });
   const billing = createBillingService({
     sequelize,
@@ -152,6 +156,7 @@ export function createApp(deps: AppDeps): Express {
   widgetRoutes(routes, widgets, audit);
   assetRoutes(routes, assets);
   runRoutes(routes, runs);
+  sheetRoutes(routes, sheets, config.embed, counters);
   usageRoutes(routes, usage);
   leadRoutes(routes, leads, audit);
   retentionRoutes(routes, retention, audit);
@@ -162,7 +167,7 @@ export function createApp(deps: AppDeps): Express {
 
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
   app.use('/releases', releasesRouter(releasesDir));
-  app.use(`${API_BASE}/embed`, embedRouter(embed, config.embed, counters));
+  app.use(`${API_BASE}/embed`, embedRouter(embed, sheets, config.embed, counters));
   // The payments provider's signed events: raw bytes for the signature check, no session, no CSRF.
   app.use(`${API_BASE}/billing/webhook`, billingWebhookRouter(billing));
 

@@ -89,6 +89,8 @@ const envSchema = z.object({
   /** Accepted lead requests from one client address to one widget, and to all widgets (the higher ceiling). */
   LEAD_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(10),
   LEAD_LIMIT_PER_IP_ALL_WIDGETS: z.coerce.number().int().min(1).max(100_000).default(40),
+  /** Calculation sheets (PDFs) and verifications one address may ask for per rate-limit window. */
+  SHEET_LIMIT_PER_IP: z.coerce.number().int().min(1).max(100_000).default(30),
   LEAD_LIMIT_PER_WIDGET: z.coerce.number().int().min(1).max(1_000_000).default(200),
   /** How often the retention purge runs, and how long after start the first one does. */
   RETENTION_PURGE_INTERVAL_HOURS: z.coerce
@@ -194,6 +196,7 @@ const configSchema = envSchema
         leadsPerIp: e.LEAD_LIMIT_PER_IP,
         leadsPerIpAllWidgets: e.LEAD_LIMIT_PER_IP_ALL_WIDGETS,
         leadsPerWidget: e.LEAD_LIMIT_PER_WIDGET,
+        sheetsPerIp: e.SHEET_LIMIT_PER_IP,
         windowMs: e.RATE_LIMIT_WINDOW_MINUTES * 60_000,
         copies: { perRecipientPerDay: e.COPY_LIMIT_PER_RECIPIENT, perWidgetPerHour: e.COPY_LIMIT_PER_WIDGET },
       },

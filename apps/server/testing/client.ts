@@ -119,6 +119,7 @@ export interface KeptMessage {
   text: string;
   html?: string;
   links: string[];
+  attachments?: { filename: string; contentType: string; size: number; contentBase64: string }[];
 }
 
 /**

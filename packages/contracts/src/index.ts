@@ -8,3 +8,4 @@ export * from './usage.js';
 export * from './releases.js';
 export * from './plans.js';
 export * from './text.js';
+export * from './sheets.js';

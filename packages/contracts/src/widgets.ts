@@ -83,6 +83,13 @@ export const leadFormSchema = z.strictObject({
   notify: z.array(emailSchema).max(10, 'At most 10 recipients'),
 });
 
+export const paperSizes = ['a4', 'letter'] as const;
+export type PaperSize = (typeof paperSizes)[number];
+export const sheetSettingsSchema = z.strictObject({
+  enabled: z.boolean(),
+  paper: z.enum(paperSizes),
+});
+
 export const widgetSettingsSchema = z.strictObject({
   inputs: z.record(z.string().regex(/^[a-zA-Z][a-zA-Z0-9]{0,39}$/), inputSettingSchema),
   units: z.strictObject({ system: z.enum(unitSystems), visitorMaySwitch: z.boolean() }),
@@ -95,6 +102,8 @@ export const widgetSettingsSchema = z.strictObject({
   /** The firm's own cautions, shown under every result beside the calculator's built-in ones. */
   cautions: z.string().trim().max(2000, 'At most 2000 characters'),
   leadForm: leadFormSchema,
+  /** The calculation sheet (a PDF of one run) visitors and analysts may download; on unless turned off. */
+  sheet: sheetSettingsSchema.default({ enabled: true, paper: 'a4' }),
 });
 export type WidgetSettings = z.infer<typeof widgetSettingsSchema>;
 
@@ -123,6 +132,7 @@ export function defaultWidgetSettings(): WidgetSettings {
         'I agree that the firm may contact me about this request and keep my details for that purpose.',
       notify: [],
     },
+    sheet: { enabled: true, paper: 'a4' },
   };
 }
 

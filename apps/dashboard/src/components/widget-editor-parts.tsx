@@ -19,6 +19,7 @@ const sections = [
   ['widget-look', 'Look'],
   ['widget-cautions', 'Cautions'],
   ['widget-lead-form', 'Request form'],
+  ['widget-sheet', 'Calculation sheet'],
   ['widget-sites', 'Sites'],
   ['widget-embed', 'Embed code'],
   ['widget-history', 'History'],
@@ -32,6 +33,7 @@ function sectionOf(key: string): string {
   if (key.startsWith('settings.look')) return 'widget-look';
   if (key.startsWith('settings.cautions')) return 'widget-cautions';
   if (key.startsWith('settings.leadForm')) return 'widget-lead-form';
+  if (key.startsWith('settings.sheet')) return 'widget-sheet';
   return 'widget-status';
 }
 

@@ -117,3 +117,37 @@ export function CautionsSection({ draft, onChange, errors, readOnly, calc }: Sec
     </EditorSection>
   );
 }
+
+export function SheetSection({ draft, onChange, errors, readOnly }: SectionProps) {
+  const sheet = draft.settings.sheet;
+  const setSheet = (change: Partial<typeof sheet>) =>
+    onChange((d) => ({ ...d, settings: { ...d.settings, sheet: { ...d.settings.sheet, ...change } } }));
+  return (
+    <EditorSection
+      id="widget-sheet"
+      title="Calculation sheet"
+      lead="A PDF of one result with its working, sources, cautions and a link anyone can use to verify it."
+    >
+      <CheckField
+        label="Visitors may download the sheet"
+        detail="Also attached to the copy of a result e-mailed to a visitor. Your team can always download it from the run."
+        checked={sheet.enabled}
+        disabled={readOnly}
+        onChange={(enabled) => setSheet({ enabled })}
+      />
+      <ChoiceCards
+        legend="Paper"
+        name="widget-sheet-paper"
+        value={sheet.paper}
+        disabled={readOnly}
+        columns="@md:grid-cols-2"
+        error={errors['settings.sheet.paper']}
+        onChange={(paper) => setSheet({ paper })}
+        options={[
+          { value: 'a4', label: 'A4', detail: '210 × 297 mm' },
+          { value: 'letter', label: 'US Letter', detail: '8.5 × 11 in' },
+        ]}
+      />
+    </EditorSection>
+  );
+}

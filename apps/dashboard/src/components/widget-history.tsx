@@ -34,6 +34,8 @@ const fixedLabels: Record<string, string> = {
   'settings.look.logoAssetId': 'Logo',
   'settings.cautions': "Firm's cautions",
   'settings.leadForm.enabled': 'Request form offered',
+  'settings.sheet.enabled': 'Calculation sheet offered',
+  'settings.sheet.paper': 'Calculation sheet paper',
   'settings.leadForm.consentText': 'Consent wording',
   'settings.leadForm.notify': 'Told of requests',
 };

@@ -8,7 +8,7 @@ import { orgPath } from '../nav';
 import { runQuery } from '../queries/usage';
 import { RunRecord } from '../components/run-record';
 import { ErrorState, LoadingState } from '../components/states';
-import { Card, PageHeader, TextLink } from '../components/ui';
+import { buttonClass, Card, PageHeader, TextLink } from '../components/ui';
 import { leadStatusLabel } from '../lib/lead-labels';
 
 export function RunPage() {
@@ -58,6 +58,22 @@ export function RunPage() {
       <PageHeader
         title={run.data ? `Run of ${run.data.widget.name}` : 'Run'}
         lead="What the visitor entered and saw, and the server's check of it."
+        actions={
+          run.data ? (
+            <>
+              <a
+                href={`/api/v1/orgs/${orgId}/runs/${encodeURIComponent(runId)}/sheet`}
+                download
+                className={buttonClass()}
+              >
+                Download calculation sheet
+              </a>
+              <a href={`/verify/${encodeURIComponent(runId)}`} className={buttonClass()}>
+                Verification page
+              </a>
+            </>
+          ) : null
+        }
       />
       {body}
     </section>

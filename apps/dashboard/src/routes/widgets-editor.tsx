@@ -12,7 +12,12 @@ import { widgetQuery } from '../queries/widgets';
 import { ErrorState, LoadingState } from '../components/states';
 import { Notice, TextLink } from '../components/ui';
 import { EditorNav, ErrorSummary, PreviewPanel, SaveBar } from '../components/widget-editor-parts';
-import { CautionsSection, StatusSection, UnitsSection } from '../components/widget-editor-sections';
+import {
+  CautionsSection,
+  SheetSection,
+  StatusSection,
+  UnitsSection,
+} from '../components/widget-editor-sections';
 import type { SectionProps } from '../components/widget-fields';
 import { EmbedCodeSection } from '../components/widget-embed';
 import { HistorySection } from '../components/widget-history';
@@ -87,6 +92,7 @@ export function Editor({
             <LookSection {...props} fallbackColors={editor.fallbackColors} />
             <CautionsSection {...props} />
             <LeadFormSection {...props} />
+            <SheetSection {...props} />
             <SitesSection {...props} />
             <EmbedCodeSection widget={widget} dirty={editor.dirty} />
             <HistorySection

@@ -10,7 +10,7 @@ import {
 } from '@wickstone/calc-core';
 
 /** A canonical value in the unit the widget shows it in, with its symbol spaced as everywhere else. */
-function shown(value: number, item: Displayable, system: UnitSystemId): string {
+export function shown(value: number, item: Displayable, system: UnitSystemId): string {
   const unit = displayUnitOf(item, system);
   return withUnit(formatNumber(fromCanonical(value, unit)), unit);
 }

@@ -1,11 +1,19 @@
 import compression from 'compression';
 import express, { type NextFunction, type Request, type Response, type Router } from 'express';
 import { z } from 'zod';
-import { embedLeadBodySchema, embedRunBodySchema, publicKeySchema } from '@wickstone/contracts';
+import {
+  embedLeadBodySchema,
+  embedRunBodySchema,
+  embedSheetParamsSchema,
+  embedSheetQuerySchema,
+  publicKeySchema,
+} from '@wickstone/contracts';
 import { AppError, isDatabaseUnavailable, parseRequest } from '../errors.js';
 import type { Counters } from '../http/counters.js';
 import { byIp, sharedRateLimit } from '../http/rate-limit.js';
 import type { EmbedService } from './service.js';
+import type { SheetService } from '../sheets/service.js';
+import { sendSheet } from '../sheets/send.js';
 
 export interface EmbedLimits {
   windowMs: number;
@@ -15,6 +23,7 @@ export interface EmbedLimits {
   leadsPerIpAllWidgets: number;
   /** Accepted requests to one widget from everyone. */
   leadsPerWidget: number;
+  sheetsPerIp: number;
 }
 
 const keyParams = z.strictObject({ publicKey: publicKeySchema });
@@ -60,7 +69,12 @@ function allowOrigin(res: Response, origin: string): void {
  * may read an answer only when the page's origin is one a live widget allows (CORS), and each
  * call checks the origin against its own widget.
  */
-export function embedRouter(service: EmbedService, limits: EmbedLimits, counters: Counters): Router {
+export function embedRouter(
+  service: EmbedService,
+  sheets: SheetService,
+  limits: EmbedLimits,
+  counters: Counters,
+): Router {
   const router = express.Router();
   const known = new Map<string, { ok: boolean; until: number }>();
 
@@ -152,6 +166,19 @@ export function embedRouter(service: EmbedService, limits: EmbedLimits, counters
       res.status(201).json(await service.recordLead(res.locals.leadBody, res.req.get('origin')));
     },
   );
+
+  // The run id is the capability: made in the visitor's browser, unguessable, never listed.
+  const sheetsPerIp = sharedRateLimit(counters, 'sheets-per-ip', {
+    limit: limits.sheetsPerIp,
+    windowMs: limits.windowMs,
+    keyGenerator: byIp,
+    message: 'Too many requests from here: wait a while and try again',
+  });
+  router.get('/runs/:runId/sheet', sheetsPerIp, async (req, res) => {
+    const { runId } = parseRequest(embedSheetParamsSchema, req.params, 'params');
+    const { publicKey, ...project } = parseRequest(embedSheetQuerySchema, req.query, 'query');
+    sendSheet(res, await sheets.forVisitor({ runId, publicKey, origin: req.get('origin'), project }));
+  });
 
   router.get('/assets/:assetId/:hash', async (req, res) => {
     const { assetId, hash } = parseRequest(assetParams, req.params, 'params');

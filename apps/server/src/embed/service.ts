@@ -10,6 +10,7 @@ import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { assetUrl } from '../widgets/service.js';
 import { leadNotificationMail, resultCopyMail } from './mail.js';
 import { checkWidget, createRunIngest, type RunIngest, type RunReceipt } from './ingest.js';
+import type { SheetService } from '../sheets/service.js';
 import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
 
 export interface EmbedService {
@@ -37,8 +38,9 @@ export function createEmbedService(deps: {
   copyLimits: { perRecipientPerDay: number; perWidgetPerHour: number };
   /** The group-commit ingest of run reports; one per process. */
   ingest?: RunIngest;
+  sheets: SheetService;
 }): EmbedService {
-  const { sequelize, mailer, logger, publicUrl, counters, copyLimits } = deps;
+  const { sequelize, mailer, logger, publicUrl, counters, copyLimits, sheets } = deps;
   const afterStored = deps.afterRunsStored;
   const ingest =
     deps.ingest ??
@@ -195,22 +197,27 @@ export function createEmbedService(deps: {
       }
       if (body.sendCopy && lead.email && calc && result) {
         if (await copyAllowed(lead.email, w.id)) {
-          await sendSafely(
-            mailer,
-            logger,
-            resultCopyMail({
-              to: lead.email,
-              visitorName: lead.name,
-              orgName: org?.name ?? '',
-              widgetName: w.name,
-              origin: lead.origin,
-              calc,
-              result,
-              system: run.unitSystem,
-              firmCautions: w.settings.cautions,
-            }),
-            'result copy',
-          );
+          // The copy carries the calculation sheet; a sheet that cannot be made never stops the mail.
+          const sheet = await sheets.forRun(run, w).catch((err: unknown) => {
+            logger.error({ err, runId: run.id }, 'calculation sheet for the e-mailed copy could not be made');
+            return null;
+          });
+          const mail = resultCopyMail({
+            to: lead.email,
+            visitorName: lead.name,
+            orgName: org?.name ?? '',
+            widgetName: w.name,
+            origin: lead.origin,
+            calc,
+            result,
+            system: run.unitSystem,
+            firmCautions: w.settings.cautions,
+          });
+          if (sheet)
+            mail.attachments = [
+              { filename: sheet.filename, content: sheet.pdf, contentType: 'application/pdf' },
+            ];
+          await sendSafely(mailer, logger, mail, 'result copy');
         } else {
           logger.warn({ widgetId: w.id, leadId: lead.id }, 'result copy not sent: copy limit reached');
         }

@@ -61,6 +61,9 @@ describe('the route table', () => {
       'GET /api/v1/orgs/:orgId/runs': 'usage:read',
       'GET /api/v1/orgs/:orgId/runs/export': 'usage:read',
       'GET /api/v1/orgs/:orgId/runs/:runId': 'usage:read',
+      // issue 12: analysts download a run's calculation sheet; anyone verifies a run by its id
+      'GET /api/v1/orgs/:orgId/runs/:runId/sheet': 'usage:read',
+      'GET /api/v1/verify/:runId': 'public',
       'GET /api/v1/orgs/:orgId/usage/summary': 'usage:read',
       'GET /api/v1/orgs/:orgId/leads': 'leads:read',
       'GET /api/v1/orgs/:orgId/leads/export': 'leads:read',

@@ -7,6 +7,7 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 }
 
 export interface Mailer {
@@ -28,7 +29,14 @@ export function createSmtpMailer(mail: Config['mail']): Mailer {
   });
   return {
     async send(m) {
-      await transport.sendMail({ from: mail.from, to: m.to, subject: m.subject, text: m.text, html: m.html });
+      await transport.sendMail({
+        from: mail.from,
+        to: m.to,
+        subject: m.subject,
+        text: m.text,
+        html: m.html,
+        attachments: m.attachments,
+      });
     },
     close() {
       transport.close();
