@@ -118,7 +118,9 @@ export async function startTestEnv(ports = testPorts()) {
       .map(([k, v]) => `${k}=${v}`)
       .join('\n')}\n`,
   );
-  log(`test MariaDB on 127.0.0.1:${ports.db}, fake SMTP on ${ports.smtp} (pid ${smtpPid}), fake payments on ${ports.payments}`);
+  log(
+    `test MariaDB on 127.0.0.1:${ports.db}, fake SMTP on ${ports.smtp} (pid ${smtpPid}), fake payments on ${ports.payments}`,
+  );
   log(`environment written to ${path.relative(root, testEnvFile)}: now run  npx vitest run <file>`);
 }
 
