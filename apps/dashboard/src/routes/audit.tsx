@@ -39,14 +39,17 @@ function detailText(entry: AuditEntry): string {
           ? 'none'
           : typeof x === 'string' && x in roleLabel
             ? roleLabel[x as keyof typeof roleLabel]
-            : String(x);
+            : typeof x === 'object'
+              ? // A small record (a plan and its standing): its fields in words, not JSON.
+                Object.entries(x)
+                  .map(([k, y]) => `${k} ${String(y)}`)
+                  .join(', ')
+              : String(x);
       const value = Array.isArray(v)
         ? v.map(word).join(', ')
         : typeof v === 'object' && v !== null && 'from' in v && 'to' in v
           ? `${word(v.from)} → ${word(v.to)}`
-          : typeof v === 'object'
-            ? JSON.stringify(v)
-            : word(v);
+          : word(v);
       return `${key}: ${value}`;
     })
     .join(' · ');
@@ -140,7 +143,7 @@ export function AuditPage() {
     <section className="space-y-6">
       <PageHeader
         title="Audit log"
-        lead="Sign-ins, refused sign-ins, invitations, role changes and removals, newest first."
+        lead="Sign-ins and refused sign-ins, the team, widgets, enquiries, retention and the plan: who changed what, newest first."
       />
       {body}
     </section>
