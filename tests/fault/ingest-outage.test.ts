@@ -2,8 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { calculate } from '@wickstone/calc-core';
-import { rollupsFromRaw, storedRollups } from '@wickstone/server/testing';
+import { rollupsFromRaw, runReportBody, storedRollups } from '@wickstone/server/testing';
 import { defaultWidgetSettings, errorBodySchema } from '@wickstone/contracts';
 import { startMariaDB } from '../../scripts/lib/mariadb.mjs';
 import { startFaultServer, type FaultServer } from './fault-server.js';
@@ -47,19 +46,9 @@ describe('ingest under load while MariaDB is killed and restarted', () => {
 
     /** One visitor's report, sent until it is acknowledged, waiting as long as Retry-After says. */
     async function deliver(i: number): Promise<void> {
-      const r = calculate('tube-rise', { diameter: 0.0002 + (i % 50) * 0.0001 });
-      const body = JSON.stringify({
-        id: randomUUID(),
-        publicKey: PUBLIC_KEY,
-        inputs: r.inputs,
-        unitSystem: 'si',
-        result: {
-          outputs: r.outputs,
-          warnings: r.warnings.map((w) => w.code),
-          inputHash: r.inputHash,
-          version: r.version,
-        },
-      });
+      const body = JSON.stringify(
+        runReportBody(PUBLIC_KEY, { id: randomUUID(), inputs: { diameter: 0.0002 + (i % 50) * 0.0001 } }),
+      );
       const until = Date.now() + 90_000;
       while (Date.now() < until) {
         let res: Response;

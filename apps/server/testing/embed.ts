@@ -1,5 +1,6 @@
 import { calculate } from '@wickstone/calc-core';
 import { widgetSchema, type Widget, type WidgetSettings } from '@wickstone/contracts';
+import { reportOf } from '../src/runs/invent.js';
 import type { TestClient } from './client.js';
 
 /**
@@ -11,19 +12,12 @@ export function runReportBody(
   p: { id: string; calculatorId?: string; inputs?: Record<string, number | string>; pageUrl?: string },
 ) {
   const r = calculate(p.calculatorId ?? 'tube-rise', p.inputs ?? { diameter: 0.0008 });
-  return {
+  return reportOf(r, {
     id: p.id,
     publicKey,
-    inputs: r.inputs,
     unitSystem: 'si',
-    result: {
-      outputs: r.outputs,
-      warnings: r.warnings.map((w) => w.code),
-      inputHash: r.inputHash,
-      version: r.version,
-    },
     ...(p.pageUrl === undefined ? {} : { pageUrl: p.pageUrl }),
-  };
+  });
 }
 
 /** A tube-rise widget made live by `owner` for `origins`, its settings first changed by `change`. */

@@ -86,7 +86,7 @@ export function inventRun(w: RunWidget, inputs: Record<string, number | string>,
 /** The report a widget sends for a calculation, as `POST /api/v1/embed/runs` takes it (tests, benchmarks). */
 export function reportOf(
   r: CalculationResult,
-  report: { id: string; publicKey: string; unitSystem: 'si' | 'us'; pageUrl: string },
+  report: { id: string; publicKey: string; unitSystem: 'si' | 'us'; pageUrl?: string },
 ) {
   return {
     ...report,
