@@ -23,6 +23,9 @@ export type SheetProject = z.infer<typeof sheetProjectSchema>;
 
 export const embedSheetParamsSchema = z.strictObject({ runId: z.uuid('Not a run id') });
 export const embedSheetQuerySchema = sheetProjectSchema.extend({ publicKey: publicKeySchema });
+/** The visitor's download from the widget: the project block given here is stored with the run. */
+export const embedSheetBodySchema = sheetProjectSchema.extend({ publicKey: publicKeySchema });
+export type EmbedSheetBody = z.infer<typeof embedSheetBodySchema>;
 export const orgSheetQuerySchema = sheetProjectSchema;
 
 export const verifyParamsSchema = z.strictObject({ runId: z.uuid('Not a run id') });

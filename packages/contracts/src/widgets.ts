@@ -227,6 +227,8 @@ export const embedWidgetSchema = z.object({
       fields: leadFormSchema.shape.fields,
       consentText: z.string(),
     }),
+    /** Whether the widget offers its calculation sheet after a result (the paper stays the server's). */
+    sheet: z.object({ enabled: z.boolean() }),
   }),
 });
 export type EmbedWidget = z.infer<typeof embedWidgetSchema>;

@@ -42,7 +42,7 @@ const CALCULATOR_MODULE =
 const src = path.join(widgetDir, 'src') + path.sep;
 /** Widget modules only the extras chunk uses: left out of the runtime. */
 const EXTRAS_ONLY = new Set(
-  ['extras.ts', 'ui/LeadForm.tsx', 'ui/Working.tsx', 'lib/lead.ts', 'lib/fonts.ts'].map((f) =>
+  ['extras.ts', 'ui/LeadForm.tsx', 'ui/SheetBlock.tsx', 'ui/Working.tsx', 'lib/lead.ts', 'lib/fonts.ts'].map((f) =>
     path.join(src, f),
   ),
 );

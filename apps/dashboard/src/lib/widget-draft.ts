@@ -234,6 +234,7 @@ export function previewWidget(widget: Widget, draft: WidgetDraft, colors: Widget
         fields: s.leadForm.fields,
         consentText: s.leadForm.consentText,
       },
+      sheet: { enabled: s.sheet.enabled },
     },
   };
 }

@@ -4,6 +4,7 @@ import { z } from 'zod';
 import {
   embedLeadBodySchema,
   embedRunBodySchema,
+  embedSheetBodySchema,
   embedSheetParamsSchema,
   embedSheetQuerySchema,
   publicKeySchema,
@@ -178,6 +179,15 @@ export function embedRouter(
     const { runId } = parseRequest(embedSheetParamsSchema, req.params, 'params');
     const { publicKey, ...project } = parseRequest(embedSheetQuerySchema, req.query, 'query');
     sendSheet(res, await sheets.forVisitor({ runId, publicKey, origin: req.get('origin'), project }));
+  });
+  // The widget's "Download calculation sheet": the project block typed there is kept with the run.
+  router.post('/runs/:runId/sheet', sheetsPerIp, async (req, res) => {
+    const { runId } = parseRequest(embedSheetParamsSchema, req.params, 'params');
+    const { publicKey, ...project } = parseRequest(embedSheetBodySchema, req.body, 'body');
+    sendSheet(
+      res,
+      await sheets.forVisitor({ runId, publicKey, origin: req.get('origin'), project, store: true }),
+    );
   });
 
   router.get('/assets/:assetId/:hash', async (req, res) => {

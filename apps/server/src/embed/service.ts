@@ -102,6 +102,8 @@ export function createEmbedService(deps: {
           look: { colors: look.colors, font: look.font, corner: look.corner, logoUrl },
           cautions,
           leadForm: { enabled: leadForm.enabled, fields: leadForm.fields, consentText: leadForm.consentText },
+          // Widgets saved before sheets existed have no setting: sheets are on by default.
+          sheet: { enabled: (w.settings as Partial<typeof w.settings>).sheet?.enabled ?? true },
         },
       };
     },

@@ -9,7 +9,7 @@ import type {
   LeadListResponse,
   UpdateLeadBody,
 } from '@wickstone/contracts';
-import { Lead, LeadNote, Membership, User, Widget } from '../db/models/index.js';
+import { Lead, LeadNote, Membership, Run, User, Widget } from '../db/models/index.js';
 import { AppError, fieldError, notFound } from '../errors.js';
 import { keysetCsv } from '../export/csv.js';
 import type { AuditTrail } from '../audit/service.js';
@@ -230,6 +230,12 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
           );
           // The firm's notes are about the person: they go too.
           await LeadNote.destroy({ where: { leadId: lead.id, organizationId: orgId }, transaction });
+          // So does the project block the visitor typed for the run's sheet ("prepared for" names someone).
+          if (lead.runId !== null)
+            await Run.update(
+              { sheetProject: null },
+              { where: { id: lead.runId, organizationId: orgId }, transaction },
+            );
           if (first)
             await trail?.(
               { type: 'lead.erased', subject: `enquiry ${lead.id}`, details: { leadId: lead.id } },

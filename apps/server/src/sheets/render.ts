@@ -229,10 +229,11 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
   for (const r of calc.references) para(`[${r.id}] ${r.citation}. Used for: ${r.usedFor}.`, { indent: 4 });
 
   heading('Cautions');
-  // The result's own (the liquid's hazard first), then the firm's, then the estimate statement.
+  // The result's own (the liquid's hazard first, the estimate statement among them), then the firm's.
   for (const c of result.cautions) para(`• ${c.text}${c.source ? ` (${c.source})` : ''}`, { indent: 4 });
   if (data.firmCautions) para(`• ${data.firm.name}: ${data.firmCautions}`, { indent: 4 });
-  para(`• ${ESTIMATE_NOTE}`, { indent: 4 });
+  // Said once: the calculator's own estimate caution already makes the statement.
+  if (!result.cautions.some((c) => c.code === 'ESTIMATE_ONLY')) para(`• ${ESTIMATE_NOTE}`, { indent: 4 });
 
   heading('Sign-off', 90);
   const col = width / 3;

@@ -16,14 +16,19 @@ export interface Sheet {
 }
 
 export interface SheetService {
-  /** For the visitor: only a run of this live widget, asked for from one of its origins. */
+  /**
+   * For the visitor: only a run of this live widget, asked for from one of its origins. With
+   * `store`, a project block that says anything is kept with the run (later copies print it);
+   * a block that says nothing prints the one stored.
+   */
   forVisitor(p: {
     runId: string;
     publicKey: string;
     origin: string | undefined;
     project: SheetProject;
+    store?: boolean;
   }): Promise<Sheet>;
-  /** For the firm's analysts: any run of the organisation. */
+  /** For the firm's analysts: any run of the organisation, with the stored block unless one is given. */
   forOrg(orgId: number, runId: string, project: SheetProject): Promise<Sheet>;
   verify(runId: string): Promise<VerifyResponse>;
   /** The sheet for a run already loaded, or null where the widget has sheets turned off. */
@@ -38,6 +43,15 @@ const noRun = () =>
     'No run has this id here: it never existed, or it was erased under the retention policy',
   );
 const RELATIVE_TOLERANCE = 1e-9;
+
+/** Whether a project block says anything: three empty fields are no block. */
+const saysSomething = (p: SheetProject): boolean => Boolean(p.project || p.preparedFor || p.note);
+/** The fields that say something, so a stored block never holds empty strings. */
+const filled = (p: SheetProject): SheetProject =>
+  Object.fromEntries(Object.entries(p).filter(([, v]) => Boolean(v))) as SheetProject;
+/** The block to print: the one given, else the one stored with the run. */
+const projectFor = (run: Run, given: SheetProject): SheetProject =>
+  saysSomething(given) ? filled(given) : (run.sheetProject ?? {});
 
 const sheetSettings = (w: Widget): WidgetSettings['sheet'] =>
   // Widgets saved before sheets existed have no setting: the default (on, A4) holds for them.
@@ -83,7 +97,7 @@ export function createSheetService(deps: { publicUrl: string }): SheetService {
   }
 
   return {
-    async forVisitor({ runId, publicKey, origin, project }) {
+    async forVisitor({ runId, publicKey, origin, project, store = false }) {
       const w = await Widget.findOne({ where: { publicKey } });
       if (!w || w.status !== 'live') throw noRun();
       if (!origin || !w.allowedOrigins.includes(origin.toLowerCase())) {
@@ -91,11 +105,18 @@ export function createSheetService(deps: { publicUrl: string }): SheetService {
           origin: origin ?? null,
         });
       }
-      const run = await Run.findOne({ where: { id: runId, widgetId: w.id } });
-      if (!run) throw noRun();
+      // Before the run is looked up: a widget without sheets says so for every id alike, so the
+      // answer never tells whether a run exists.
       if (!sheetSettings(w).enabled)
         throw new AppError('forbidden', 'This widget does not offer calculation sheets');
-      return render(run, w, project);
+      const run = await Run.findOne({ where: { id: runId, widgetId: w.id } });
+      if (!run) throw noRun();
+      if (store && saysSomething(project)) {
+        const kept = filled(project);
+        await Run.update({ sheetProject: kept }, { where: { id: run.id, widgetId: w.id } });
+        run.sheetProject = kept;
+      }
+      return render(run, w, projectFor(run, project));
     },
 
     async forOrg(orgId, runId, project) {
@@ -103,10 +124,11 @@ export function createSheetService(deps: { publicUrl: string }): SheetService {
       if (!run) throw noRun();
       const w = await Widget.findByPk(run.widgetId);
       if (!w) throw noRun();
-      return render(run, w, project);
+      return render(run, w, projectFor(run, project));
     },
 
-    forRun: (run, w) => (sheetSettings(w).enabled ? render(run, w, {}) : Promise.resolve(null)),
+    forRun: (run, w) =>
+      sheetSettings(w).enabled ? render(run, w, projectFor(run, {})) : Promise.resolve(null),
 
     async verify(runId) {
       const run = await Run.findByPk(runId);

@@ -148,15 +148,22 @@ describe('calculation sheets and verification', () => {
     }
   });
 
-  it('stops visitor sheets when the firm turns them off', async () => {
-    const { id } = await storedRun();
+  /** Runs `body` with the widget's sheets turned off, and turns them back on whatever happens. */
+  async function withSheetsOff(body: () => Promise<void>): Promise<void> {
     const settings = { ...widget.settings, sheet: { enabled: false, paper: 'letter' as const } };
     await owner.patch(`/orgs/${org.id}/widgets/${widget.id}`, { settings }).expect(200);
     try {
-      await visitorSheet(id).expect(403);
+      await body();
     } finally {
       await owner.patch(`/orgs/${org.id}/widgets/${widget.id}`, { settings: widget.settings }).expect(200);
     }
+  }
+
+  it('stops visitor sheets when the firm turns them off', async () => {
+    const { id } = await storedRun();
+    await withSheetsOff(async () => {
+      await visitorSheet(id).expect(403);
+    });
   });
 
   it('verifies a stored run: agrees, with its hash and outputs, and no personal data', async () => {
@@ -220,6 +227,96 @@ describe('calculation sheets and verification', () => {
     const text = pdfText(Buffer.from(pdf!.contentBase64, 'base64'));
     expect(text).toContain(r.inputHash);
     expect(text).toContain(`/verify/${id}`);
+  });
+
+  const widgetSheet = (runId: string, body: Record<string, string>, origin = SITE) =>
+    request(t.app)
+      .post(`/api/v1/embed/runs/${runId}/sheet`)
+      .set('Origin', origin)
+      .set('Content-Type', 'text/plain;charset=UTF-8')
+      .send(JSON.stringify({ publicKey: widget.publicKey, ...body }))
+      .buffer(true)
+      .parse(binary);
+
+  it("keeps the project block typed in the widget with the run: the visitor's, the analyst's and the e-mailed copies print it; erasing the enquiry takes it", async () => {
+    const { id } = await storedRun();
+    const block = {
+      project: 'Mill Lane cottages, gable wall',
+      preparedFor: 'Hesketh Lettings',
+      note: 'Ground floor only',
+    };
+    const first = await widgetSheet(id, block).expect(200);
+    expect(first.headers['content-type']).toBe('application/pdf');
+    expect(pdfText(first.body as Buffer)).toContain('Mill Lane cottages, gable wall');
+    expect((await Run.findByPk(id))!.sheetProject).toEqual(block);
+    // A later copy that types nothing prints the stored block; one that types a block prints that one.
+    const again = pdfText((await visitorSheet(id).expect(200)).body as Buffer);
+    for (const v of Object.values(block)) expect(again).toContain(v);
+    const other = pdfText((await visitorSheet(id, { project: 'Elsewhere' }).expect(200)).body as Buffer);
+    expect(other).toContain('Elsewhere');
+    expect(other).not.toContain('Mill Lane');
+    const analyst = await owner.agent
+      .get(`/api/v1/orgs/${org.id}/runs/${id}/sheet`)
+      .buffer(true)
+      .parse(binary)
+      .expect(200);
+    expect(pdfText(analyst.body as Buffer)).toContain('Hesketh Lettings');
+    const email = uniqueEmail('visitor');
+    const lead = await request(t.app)
+      .post('/api/v1/embed/leads')
+      .set('Origin', SITE)
+      .send({
+        runId: id,
+        publicKey: widget.publicKey,
+        fields: { name: 'Ines Marlow', email },
+        consent: true,
+        sendCopy: true,
+      })
+      .expect(201);
+    const [copy] = await mailbox(t.db.config.mail.fakeApiUrl, email);
+    const attached = copy?.attachments?.find((a) => a.contentType === 'application/pdf');
+    expect(pdfText(Buffer.from(attached!.contentBase64, 'base64'))).toContain('Mill Lane cottages');
+    // "Prepared for" may name a person: erasing the enquiry's personal data takes the block too.
+    await owner.delete(`/orgs/${org.id}/leads/${(lead.body as { id: number }).id}/personal-data`).expect(200);
+    expect((await Run.findByPk(id))!.sheetProject).toBeNull();
+  });
+
+  it('refuses a bad project block from the widget naming the field, and stores nothing', async () => {
+    const { id } = await storedRun();
+    const long = await widgetSheet(id, { preparedFor: 'y'.repeat(121) }).expect(400);
+    expect(fieldsOf(long.body)).toEqual(['body.preparedFor']);
+    const ctl = await widgetSheet(id, { project: 'a\u0007b' }).expect(400);
+    expect(fieldsOf(ctl.body)).toEqual(['body.project']);
+    expect((await Run.findByPk(id))!.sheetProject).toBeNull();
+    // Nothing typed: a sheet, and no empty block stored.
+    await widgetSheet(id, { project: '  ' }).expect(200);
+    expect((await Run.findByPk(id))!.sheetProject).toBeNull();
+  });
+
+  it('prints the statement that results are estimates once', async () => {
+    const { id } = await storedRun();
+    const text = pdfText((await visitorSheet(id).expect(200)).body as Buffer);
+    expect(text.match(/do not replace a site investigation/g)).toHaveLength(1);
+  });
+
+  it('tells the widget whether it offers sheets, and a widget without them answers every run id alike', async () => {
+    const settingsOf = async () =>
+      (
+        (
+          await request(t.app)
+            .get(`/api/v1/embed/widgets/${widget.publicKey}`)
+            .set('Origin', SITE)
+            .expect(200)
+        ).body as { settings: { sheet: { enabled: boolean } } }
+      ).settings.sheet;
+    expect(await settingsOf()).toEqual({ enabled: true });
+    const { id } = await storedRun();
+    await withSheetsOff(async () => {
+      expect(await settingsOf()).toEqual({ enabled: false });
+      const known = await widgetSheet(id, {}).expect(403);
+      const unknown = await widgetSheet(randomUUID(), {}).expect(403);
+      expect(unknown.body).toEqual(known.body);
+    });
   });
 
   it('rate-limits sheet requests per address', async () => {

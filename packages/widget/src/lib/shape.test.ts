@@ -15,6 +15,7 @@ function sample() {
       look: { colors: s.look.colors, font: s.look.font, corner: s.look.corner, logoUrl: null },
       cautions: '',
       leadForm: { enabled: true, fields: s.leadForm.fields, consentText: s.leadForm.consentText },
+      sheet: { enabled: true },
     },
   };
 }
@@ -46,6 +47,10 @@ describe('isEmbedWidget', () => {
     [
       'a lead form without consent text',
       () => ({ ...sample(), settings: { ...sample().settings, leadForm: { enabled: true, fields: {} } } }),
+    ],
+    [
+      'no word on the calculation sheet',
+      () => ({ ...sample(), settings: { ...sample().settings, sheet: undefined } }),
     ],
     [
       'an input setting without a mode',

@@ -39,5 +39,6 @@ export function isEmbedWidget(v: unknown): v is EmbedWidget {
     !isString(leadForm.consentText)
   )
     return false;
+  if (!isObject(s.sheet) || typeof s.sheet.enabled !== 'boolean') return false;
   return Object.values(s.inputs).every((i) => isObject(i) && isString(i.mode));
 }

@@ -277,6 +277,9 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
           Working={extras?.Working ?? null}
         />
       )}
+      {extras && (outcome !== null || preview) && settings.sheet.enabled && (
+        <extras.SheetBlock publicKey={widget.publicKey} apiBase={preview ? null : apiBase} target={leadTarget} />
+      )}
       {/* In preview the form shows from the start, so an admin sees the fields as they set them. */}
       {extras && (outcome !== null || preview) && settings.leadForm.enabled && (
         <extras.LeadForm

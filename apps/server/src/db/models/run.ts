@@ -6,7 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
-import { unitSystems, type UnitSystem } from '@wickstone/contracts';
+import { unitSystems, type SheetProject, type UnitSystem } from '@wickstone/contracts';
 
 /** What calc-core gave, kept as JSON: outputs, warning codes, working, band, version, input hash. */
 export type StoredResult = Record<string, unknown>;
@@ -30,6 +30,8 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
   declare mismatch: Record<string, unknown> | null;
   declare inputHash: string;
   declare bodyHash: string;
+  /** The project block the visitor filled before downloading the sheet (reprinted on later copies). */
+  declare sheetProject: CreationOptional<SheetProject | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
@@ -53,6 +55,7 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
         mismatch: { type: DataTypes.JSON, allowNull: true },
         inputHash: { type: DataTypes.STRING(128), allowNull: false },
         bodyHash: { type: DataTypes.CHAR(64), allowNull: false },
+        sheetProject: { type: DataTypes.JSON, allowNull: true },
         createdAt: DataTypes.DATE(3),
       },
       { sequelize, tableName: 'runs', underscored: true, updatedAt: false },
