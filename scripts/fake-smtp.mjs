@@ -49,6 +49,7 @@ const smtp = new SMTPServer({
           id: randomUUID(),
           receivedAt: new Date().toISOString(),
           from: mail.from?.text ?? session.envelope.mailFrom?.address ?? '',
+          replyTo: mail.replyTo?.text ?? '',
           to: session.envelope.rcptTo.map((r) => r.address),
           subject: mail.subject ?? '',
           text,

@@ -114,6 +114,10 @@ export class TestClient {
 
 export interface KeptMessage {
   id: string;
+  /** The sender as the header says it (`"Name" <address>`). */
+  from: string;
+  /** The Reply-To header as text ('' when there is none). */
+  replyTo?: string;
   to: string[];
   subject: string;
   text: string;

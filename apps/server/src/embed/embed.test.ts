@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
+import { getCalculator } from '@wickstone/calc-core';
 import { embedWidgetSchema, errorBodySchema, widgetSchema, type Widget } from '@wickstone/contracts';
 import {
   createTestApp,
@@ -305,6 +306,44 @@ describe('public embed API', () => {
         consent: true,
       }).expect(409);
       expect(fieldsOf(twice.body)).toEqual(['body.runId']);
+    });
+
+    it("mails in the firm's name and colours with Reply-To both ways, the estimate statement once and no input the firm hid", async () => {
+      const settings = structuredClone(widget.settings);
+      settings.inputs = { gravity: { mode: 'hidden', default: 9.80665 } };
+      settings.look.colors.primary = '#7a3b12';
+      await owner.patch(`/orgs/${org.id}/widgets/${widget.id}`, { settings }).expect(200);
+      try {
+        const run = runBody();
+        await report(run).expect(201);
+        const visitor = uniqueEmail('visitor');
+        await sendLead({
+          runId: run.id,
+          publicKey: widget.publicKey,
+          fields: { name: 'Tamsin Rowe', email: visitor },
+          consent: true,
+          sendCopy: true,
+        }).expect(201);
+        const [firmMail] = await mailbox(t.db.config.mail.fakeApiUrl, notify, 2);
+        expect(firmMail?.subject).toContain('Tamsin Rowe');
+        expect(firmMail?.from).toContain(`${org.name} via Wickstone`);
+        expect(firmMail?.replyTo).toContain(visitor);
+        const [copy] = await mailbox(t.db.config.mail.fakeApiUrl, visitor);
+        expect(copy?.from).toContain(`${org.name} via Wickstone`);
+        expect(copy?.replyTo).toContain(notify);
+        // A real HTML part in the firm's colour beside the plain-text one.
+        expect(copy?.html).toContain('#7a3b12');
+        expect(copy?.html).toMatch(/<table role="presentation"/);
+        expect(copy?.text).toMatch(/Rise/);
+        expect(copy?.text.match(/licensed professional/g)).toHaveLength(1);
+        expect(copy?.html?.match(/licensed professional/g)).toHaveLength(1);
+        const gravity = getCalculator('tube-rise')!.inputs.find((i) => i.id === 'gravity')!;
+        expect(copy?.text).not.toContain(`  ${gravity.label}: `);
+        // Warning codes are the firm's vocabulary, not the visitor's.
+        expect(copy?.text).not.toMatch(/\[[A-Z_]+\]/);
+      } finally {
+        await owner.patch(`/orgs/${org.id}/widgets/${widget.id}`, { settings: widget.settings }).expect(200);
+      }
     });
 
     it('needs consent and the required fields, and refuses fields the form does not ask for', async () => {

@@ -23,11 +23,14 @@ export function resultLines(
   calc: CalculatorDefinition,
   result: CalculationResult,
   system: UnitSystemId,
+  /** `hide`: inputs left out (the firm hid them from visitors); `codes: false`: warnings without their codes. */
+  options: { hide?: ReadonlySet<string>; codes?: boolean } = {},
 ): string[] {
+  const codes = options.codes ?? true;
   const lines: string[] = [`${calc.title}`, '', 'Inputs'];
   for (const input of calc.inputs) {
     const v = result.inputs[input.id];
-    if (v === undefined) continue;
+    if (v === undefined || options.hide?.has(input.id)) continue;
     if (input.kind === 'choice') {
       lines.push(`  ${input.label}: ${input.options.find((o) => o.value === v)?.label ?? String(v)}`);
     } else if (typeof v === 'number') {
@@ -40,7 +43,7 @@ export function resultLines(
     // A withheld output is named with the reason, never given a figure.
     const withheldBy = result.warnings.find((w) => (w.withholds ?? []).includes(out.id));
     if (v === null && withheldBy) {
-      lines.push(`  ${out.label}: not defined here (${withheldBy.code})`);
+      lines.push(`  ${out.label}: not defined here (${codes ? withheldBy.code : withheldBy.message})`);
       continue;
     }
     if (v === undefined || v === null) continue;
@@ -50,7 +53,7 @@ export function resultLines(
   }
   if (result.warnings.length) {
     lines.push('', 'Validity warnings');
-    for (const w of result.warnings) lines.push(`  [${w.code}] ${w.message}`);
+    for (const w of result.warnings) lines.push(codes ? `  [${w.code}] ${w.message}` : `  - ${w.message}`);
   }
   if (result.assumptions.length) {
     lines.push('', 'Assumptions');

@@ -8,7 +8,7 @@ import { AppError } from '../errors.js';
 import type { Counters } from '../http/counters.js';
 import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { assetUrl } from '../widgets/service.js';
-import { leadNotificationMail, resultCopyMail } from './mail.js';
+import { leadNotificationMail, resultCopyMail, type FirmBrand } from './mail.js';
 import { checkWidget, createRunIngest, type RunIngest, type RunReceipt } from './ingest.js';
 import type { SheetService } from '../sheets/service.js';
 import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
@@ -79,17 +79,26 @@ export function createEmbedService(deps: {
     return members.map((m) => m.user?.email).filter((e): e is string => Boolean(e));
   }
 
+  /** The widget's logo as a URL anyone may load (the embed API's asset route), or null. */
+  async function logoUrlOf(w: Widget): Promise<string | null> {
+    if (w.settings.look.logoAssetId === null) return null;
+    const a = await Asset.findOne({
+      where: { id: w.settings.look.logoAssetId, organizationId: w.organizationId },
+      attributes: ['id', 'sha256'],
+    });
+    return a ? assetUrl(publicUrl, a) : null;
+  }
+
+  /** The firm as its e-mails show it: the widget's colours and logo under the organisation's name. */
+  async function brandOf(w: Widget, name: string): Promise<FirmBrand> {
+    const { primary, primaryText } = w.settings.look.colors;
+    return { name, colors: { primary, primaryText }, logoUrl: await logoUrlOf(w) };
+  }
+
   return {
     async widgetFor(publicKey, origin) {
       const w = await liveWidget(publicKey, origin);
-      let logoUrl: string | null = null;
-      if (w.settings.look.logoAssetId !== null) {
-        const a = await Asset.findOne({
-          where: { id: w.settings.look.logoAssetId, organizationId: w.organizationId },
-          attributes: ['id', 'sha256'],
-        });
-        logoUrl = a ? assetUrl(publicUrl, a) : null;
-      }
+      const logoUrl = await logoUrlOf(w);
       const { inputs, units, look, cautions, leadForm } = w.settings;
       return {
         publicKey: w.publicKey,
@@ -177,16 +186,18 @@ export function createEmbedService(deps: {
 
       // The lead is stored; mail failures are logged, never lose it.
       const org = await Organization.findByPk(w.organizationId, { attributes: ['id', 'name'] });
+      const brand = await brandOf(w, org?.name ?? '');
+      const notify = await recipientsFor(w);
       const calc = getCalculator(w.calculatorId);
       const result = run.serverResult as unknown as CalculationResult | null;
       const link = `${publicUrl.replace(/\/$/, '')}/orgs/${w.organizationId}/leads/${lead.id}`;
-      for (const to of await recipientsFor(w)) {
+      for (const to of notify) {
         await sendSafely(
           mailer,
           logger,
           leadNotificationMail({
             to,
-            orgName: org?.name ?? '',
+            brand,
             widgetName: w.name,
             lead,
             link,
@@ -207,13 +218,17 @@ export function createEmbedService(deps: {
           const mail = resultCopyMail({
             to: lead.email,
             visitorName: lead.name,
-            orgName: org?.name ?? '',
+            brand,
+            replyTo: notify,
             widgetName: w.name,
             origin: lead.origin,
             calc,
             result,
             system: run.unitSystem,
             firmCautions: w.settings.cautions,
+            hiddenInputs: Object.entries(w.settings.inputs)
+              .filter(([, i]) => i.mode === 'hidden')
+              .map(([id]) => id),
           });
           if (sheet)
             mail.attachments = [

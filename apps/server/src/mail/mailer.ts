@@ -2,8 +2,15 @@ import nodemailer from 'nodemailer';
 import type { Logger } from 'pino';
 import type { Config } from '../config.js';
 
+/** An address, or an address with the name mail programs show for it. */
+export type MailAddress = string | { name: string; address: string };
+
 export interface OutgoingMail {
   to: string;
+  /** The name shown as the sender (the address stays the platform's own, `MAIL_FROM`). */
+  fromName?: string;
+  /** Where an answer goes: the firm for a visitor's copy, the visitor for the firm's notification. */
+  replyTo?: MailAddress | MailAddress[];
   subject: string;
   text: string;
   html: string;
@@ -27,10 +34,13 @@ export function createSmtpMailer(mail: Config['mail']): Mailer {
     greetingTimeout: 5_000,
     socketTimeout: 10_000,
   });
+  // The sending address alone ("Wickstone <mail@…>" → "mail@…"): a firm's name goes in front of it.
+  const fromAddress = /<([^>]+)>\s*$/.exec(mail.from)?.[1] ?? mail.from;
   return {
     async send(m) {
       await transport.sendMail({
-        from: mail.from,
+        from: m.fromName ? { name: m.fromName, address: fromAddress } : mail.from,
+        ...(m.replyTo ? { replyTo: m.replyTo } : {}),
         to: m.to,
         subject: m.subject,
         text: m.text,
