@@ -8,7 +8,17 @@ import {
   startMariaDB,
   stopMariaDB,
 } from './lib/mariadb.mjs';
-import { isAlive, log, readPid, root, run, startChild, stopPid, waitForHttp } from './lib/proc.mjs';
+import {
+  isAlive,
+  log,
+  readPid,
+  root,
+  run,
+  runCapture,
+  startChild,
+  stopPid,
+  waitForHttp,
+} from './lib/proc.mjs';
 import { build, ensureNodeModules } from './lib/setup.mjs';
 import { startFakePayments } from './lib/payments.mjs';
 import { ensureSessionSecret } from './lib/secrets.mjs';
@@ -61,6 +71,8 @@ try {
     FAKE_MAIL_API_URL: `http://127.0.0.1:${mailHttpPort}`,
     DEMO_SITE_PORT: String(demoPort),
     DEMO_SITE_FILE: demoSnippets,
+    // Calm by default: no line per request (errors are still logged). REQUEST_LOG=line or json to see them.
+    REQUEST_LOG: process.env.REQUEST_LOG ?? 'off',
   };
   const payments = await startFakePayments({
     port: Number(process.env.FAKE_PAYMENTS_PORT ?? 12110),
@@ -70,7 +82,8 @@ try {
   children.push(payments.child);
   Object.assign(env, payments.env);
   run('node', ['apps/server/dist/cli/migrate.js'], { env });
-  run('node', ['apps/server/dist/cli/seed.js'], { env });
+  // The seed's account of the demo (sign-ins, widgets) is printed again in the last block.
+  const seeded = runCapture('node', ['apps/server/dist/cli/seed.js'], { env });
 
   children.push(
     startChild('mail', 'node', ['scripts/fake-smtp.mjs'], {
@@ -97,9 +110,24 @@ try {
     }),
   );
   await waitForHttp(`http://127.0.0.1:${demoPort}/`);
-  log(`the demo consultancy's website, with two embedded widgets: http://localhost:${demoPort}`);
-  log(`Wickstone is running at http://127.0.0.1:${port}  (Ctrl-C stops it)`);
-  log(`fake mailbox: http://127.0.0.1:${port}/dev/mail`);
+  const rule = '─'.repeat(72);
+  console.log(
+    [
+      '',
+      rule,
+      'Wickstone is running (Ctrl-C stops everything started here)',
+      `  dashboard                 http://127.0.0.1:${port}`,
+      `  the demo firm's website   http://localhost:${demoPort}   (its widgets, embedded)`,
+      `  fake mailbox              http://127.0.0.1:${port}/dev/mail`,
+      '',
+      seeded.trim(),
+      '',
+      env.REQUEST_LOG === 'off'
+        ? 'Request logs are off; REQUEST_LOG=line npm start shows one line per request.'
+        : `Request logs: ${env.REQUEST_LOG}.`,
+      rule,
+    ].join('\n'),
+  );
 } catch (err) {
   console.error(`[wickstone] start failed: ${err instanceof Error ? err.message : err}`);
   await shutdown(1);

@@ -20,6 +20,24 @@ export function run(cmd, args, opts = {}) {
   }
 }
 
+/** Run a command, its errors shown as they come, and return what it printed (throws as `run`). */
+export function runCapture(cmd, args, opts = {}) {
+  const r = spawnSync(cmd, args, {
+    stdio: ['ignore', 'pipe', 'inherit'],
+    cwd: root,
+    encoding: 'utf8',
+    ...opts,
+  });
+  if (r.error) throw r.error;
+  if (r.status !== 0) {
+    process.stdout.write(r.stdout ?? '');
+    const err = new Error(`${cmd} ${args.join(' ')} exited with ${r.status ?? r.signal}`);
+    err.exitCode = r.status ?? 1;
+    throw err;
+  }
+  return r.stdout ?? '';
+}
+
 /** Run a command and return its exit code (for the test runner, whose code we pass on). */
 export function runStatus(cmd, args, opts = {}) {
   const r = spawnSync(cmd, args, { stdio: 'inherit', cwd: root, ...opts });

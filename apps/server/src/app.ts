@@ -84,12 +84,23 @@ export function createApp(deps: AppDeps): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
 
+  // Every request gets `req.log` (errors are logged through it in every mode); what is written per
+  // request follows REQUEST_LOG: the whole record, one short line, or nothing (`npm start`'s default).
+  const line = config.requestLog === 'line';
   app.use(
     pinoHttp({
       logger,
       customLogLevel: (_req, res, err) =>
         err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
-      autoLogging: { ignore: (req) => req.url === '/api/v1/health' },
+      autoLogging: config.requestLog === 'off' ? false : { ignore: (req) => req.url === '/api/v1/health' },
+      ...(line
+        ? {
+            quietReqLogger: true,
+            serializers: { req: () => undefined, res: () => undefined },
+            customSuccessMessage: (req, res, ms) => `${req.method} ${req.url} ${res.statusCode} ${ms} ms`,
+            customErrorMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
+          }
+        : {}),
     }),
   );
 

@@ -16,6 +16,8 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(5180),
   PUBLIC_URL: z.url().optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /** Per-request logs: the full record (`json`), one short line (`line`), or none (`off`; errors still logged). */
+  REQUEST_LOG: z.enum(['json', 'line', 'off']).default('json'),
   DB_HOST: z.string().default('127.0.0.1'),
   DB_PORT: z.coerce.number().int().min(1).max(65535).default(3307),
   DB_NAME: z
@@ -149,6 +151,7 @@ const configSchema = envSchema
       port: e.PORT,
       publicUrl,
       logLevel: e.LOG_LEVEL,
+      requestLog: e.REQUEST_LOG,
       db: {
         host: e.DB_HOST,
         port: e.DB_PORT,
