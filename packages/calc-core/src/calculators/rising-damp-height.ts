@@ -130,7 +130,7 @@ function solve(inputs: InputValues): Solution {
     warnings,
     band: null,
     assumptions: [
-      'A sharp wet front: the wall below it is at the wet water content θ_w, above it dry (Hall & Hoff sharp-front model).',
+      'A sharp wet front: the wall below it is at the wet water content θw, above it dry (Hall & Hoff sharp-front model).',
       'A uniform wall of one material standing in a permanent water supply at its base; no damp-proof course.',
       `Evaporation at a steady rate e per unit area from ${both ? 'both faces' : 'one face'} over the whole wet height, none above it.`,
       'Gravity neglected against capillary suction, and the sorptivity that of the masonry as built (mortar joints included).',
@@ -168,7 +168,7 @@ export const calculator: CalculatorDefinition = {
         help: 'Volume of water leaving per unit area of wall face, as a depth of water per day.',
       },
     ),
-    quantityInput('dimensionless', 'wetWaterContent', 'Wet water content θ_w', 0.2, [0.01, 0.6], {
+    quantityInput('dimensionless', 'wetWaterContent', 'Wet water content θw', 0.2, [0.01, 0.6], {
       help: 'Volume fraction of the masonry filled with water in the wet zone (the capillary-saturated content, below the porosity).',
     }),
     {

@@ -1,7 +1,6 @@
 import { meniscusCorrection } from '../formulas/capillary.js';
 import { ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-reading.js';
 import { runner } from './engine.js';
-import { RAYLEIGH_REFERENCE, TUBE } from './rise-common.js';
 import {
   capillaryLengthStep,
   choice,
@@ -21,6 +20,12 @@ import {
   warning,
 } from './shared.js';
 import type { CalculatorDefinition, InputValues, Solution, Warning, WorkingStep } from './types.js';
+
+/**
+ * r/ℓc above which Rayleigh's r/3 is more than 2 % of the rise (r²/(6ℓc²) = 0.02), the tube-rise
+ * calculator's threshold too; written here so this calculator's bundle does not carry the rise module.
+ */
+const NOT_SMALL_RATIO = Math.sqrt(0.12);
 
 const forTension = [{ input: 'solveFor', values: ['surfaceTension'] }] as const;
 const forAngle = [{ input: 'solveFor', values: ['contactAngle'] }] as const;
@@ -73,7 +78,7 @@ function solve(inputs: InputValues): Solution {
       {
         id: 'meniscus',
         label: 'Meniscus-weight correction',
-        formula: TUBE.correctionFormula,
+        formula: 'δ = V_held / (π·r²); δ = r/3 at θ = 0',
         substituted: `r = ${q(r, 'm')}, θ = ${q(angleIn, 'deg')}`,
         value: m,
         unit: 'm',
@@ -162,7 +167,7 @@ function solve(inputs: InputValues): Solution {
     );
     if (mode === 'surfaceTension') sigmaOut = null;
     else angleOut = null;
-  } else if (ratio > TUBE.notSmallRatio) {
+  } else if (ratio > NOT_SMALL_RATIO) {
     warnings.push(
       warning(
         'BORE_NOT_SMALL',
@@ -239,7 +244,7 @@ export const calculator: CalculatorDefinition = {
     },
     {
       code: 'BORE_NOT_SMALL',
-      summary: `The bore radius exceeds ${fmt(TUBE.notSmallRatio)} of the capillary length, where the meniscus term is over 2 % of the rise.`,
+      summary: `The bore radius exceeds ${fmt(NOT_SMALL_RATIO)} of the capillary length, where the meniscus term is over 2 % of the rise.`,
     },
     {
       code: 'NO_ANGLE_FOR_RISE',
@@ -262,7 +267,13 @@ export const calculator: CalculatorDefinition = {
     CLEAN_SURFACES_CAUTION,
   ],
   references: [
-    RAYLEIGH_REFERENCE,
+    {
+      id: 'rayleigh-1915',
+      citation: 'Lord Rayleigh (1915) On the theory of the capillary tube, Proc. R. Soc. Lond. A 92, 184–195',
+      usedFor:
+        'surface tension from a rise in a narrow tube with the meniscus correction r/3, valid for r ≪ ℓc (the same geometry for θ > 0 derived here)',
+      basis: 'printed',
+    },
     {
       id: 'jurin-1718',
       citation:
