@@ -97,7 +97,7 @@ try {
     }),
   );
   await waitForHttp(`http://127.0.0.1:${demoPort}/`);
-  log(`the demo consultancy's website, with two embedded widgets: http://localhost:${demoPort}`);
+  log(`the demo consultancy's website, with its embedded widgets: http://localhost:${demoPort}`);
   log(`Wickstone is running at http://127.0.0.1:${port}  (Ctrl-C stops it)`);
   log(`fake mailbox: http://127.0.0.1:${port}/dev/mail`);
 } catch (err) {
