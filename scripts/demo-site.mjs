@@ -1,4 +1,4 @@
-// The demo consultancy's own website, on its own origin (default http://localhost:5181), with two
+// The demo consultancy's own website, on its own origin (default http://localhost:5181), with its
 // widgets placed by their embed snippets exactly as a firm would paste them. The snippets come from
 // the file the demo seed writes (var/demo-site.json).
 import { createServer } from 'node:http';
@@ -12,9 +12,8 @@ const snippetsFile = process.env.DEMO_SITE_SNIPPETS ?? path.join(root, 'var', 'd
 
 function page() {
   const { widgets } = JSON.parse(readFileSync(snippetsFile, 'utf8'));
-  return template
-    .replace('{{WIDGET_1}}', widgets[0]?.snippet ?? '')
-    .replace('{{WIDGET_2}}', widgets[1]?.snippet ?? '');
+  // {{WIDGET_n}} is the n-th widget the seed wrote.
+  return template.replace(/\{\{WIDGET_(\d+)\}\}/g, (_, n) => widgets[Number(n) - 1]?.snippet ?? '');
 }
 
 const server = createServer((req, res) => {

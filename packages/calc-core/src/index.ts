@@ -90,6 +90,10 @@ export { calculator as soilCapillaryRiseCalculator } from './calculators/soil-ca
 export { calculator as interfacePressureCalculator } from './calculators/interface-pressure.js';
 export { calculator as wettingForceCalculator } from './calculators/wetting-force.js';
 export { calculator as wickingTimeCalculator } from './calculators/wicking-time.js';
+export { calculator as contactAngleFromForceCalculator } from './calculators/contact-angle-from-force.js';
+export { calculator as tensionFromRiseCalculator } from './calculators/tension-from-rise.js';
+export { calculator as risingDampHeightCalculator } from './calculators/rising-damp-height.js';
+export { calculator as frostScreeningCalculator } from './calculators/frost-screening.js';
 export type {
   Band,
   BandBasis,

@@ -1,8 +1,12 @@
 import { CalcInputError } from './errors.js';
 import { runCalculation } from './calculators/engine.js';
+import { calculator as contactAngleFromForce } from './calculators/contact-angle-from-force.js';
+import { calculator as frostScreening } from './calculators/frost-screening.js';
 import { calculator as interfacePressure } from './calculators/interface-pressure.js';
+import { calculator as risingDampHeight } from './calculators/rising-damp-height.js';
 import { calculator as slotRise } from './calculators/slot-rise.js';
 import { calculator as soilCapillaryRise } from './calculators/soil-capillary-rise.js';
+import { calculator as tensionFromRise } from './calculators/tension-from-rise.js';
 import { calculator as tubeRise } from './calculators/tube-rise.js';
 import type { CalculationResult, CalculatorDefinition } from './calculators/types.js';
 import { calculator as wettingForce } from './calculators/wetting-force.js';
@@ -16,10 +20,23 @@ export const calculators: readonly CalculatorDefinition[] = [
   interfacePressure,
   wettingForce,
   wickingTime,
+  contactAngleFromForce,
+  tensionFromRise,
+  risingDampHeight,
+  frostScreening,
 ];
 
 export type CalculatorId =
-  'tube-rise' | 'slot-rise' | 'soil-capillary-rise' | 'interface-pressure' | 'wetting-force' | 'wicking-time';
+  | 'tube-rise'
+  | 'slot-rise'
+  | 'soil-capillary-rise'
+  | 'interface-pressure'
+  | 'wetting-force'
+  | 'wicking-time'
+  | 'contact-angle-from-force'
+  | 'tension-from-rise'
+  | 'rising-damp-height'
+  | 'frost-screening';
 
 export const calculatorIds: readonly CalculatorId[] = calculators.map((c) => c.id as CalculatorId);
 

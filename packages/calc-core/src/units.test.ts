@@ -68,6 +68,20 @@ const mathjsName: Readonly<Record<UnitId, string | null>> = {
   day: 'day',
   'm/s2': 'm/s^2',
   'ft/s2': 'ft/s^2',
+  'm/s^0.5': 'm/s^0.5',
+  'mm/s^0.5': 'mm/s^0.5',
+  'mm/min^0.5': 'mm/min^0.5',
+  'in/h^0.5': 'inch/h^0.5',
+  'm/s': 'm/s',
+  'mm/day': 'mm/day',
+  'in/day': 'inch/day',
+  'm3/m': 'm^3/m',
+  'L/m': 'L/m',
+  // mathjs's gal is the US liquid gallon, 231 in³.
+  'gal/ft': 'gal/ft',
+  'm3/(m*s)': 'm^3/(m s)',
+  'L/(m*day)': 'L/(m day)',
+  'gal/(ft*day)': 'gal/(ft day)',
   '1': null,
 };
 
@@ -107,6 +121,12 @@ describe('unit factors against NIST SP 811', () => {
     ['lb/ft3', 16.01846, 1e-5, 'NIST SP 811 B.8: 1.601 846 E+01, from memory'],
     ['cP', 1e-3, 0, 'NIST SP 811 B.8, exact'],
     ['day', 86400, 0, 'NIST SP 811 B.8, exact'],
+    [
+      'gal/ft',
+      3.785411784e-3 / 0.3048,
+      1e-17,
+      'NIST SP 811 B.8: US liquid gallon = 231 in³ = 3.785 411 784 E−03 m³, exact (from memory)',
+    ],
   ];
   it.each(nist)('1 %s = %s canonical ±%s (%s)', (id, expected, tol) => {
     expect(Math.abs(toCanonical(1, id) - expected)).toBeLessThanOrEqual(tol);

@@ -15,6 +15,10 @@ export type QuantityKind =
   | 'viscosity'
   | 'time'
   | 'acceleration'
+  | 'sorptivity'
+  | 'evaporationRate'
+  | 'volumePerLength'
+  | 'flowPerLength'
   | 'dimensionless';
 
 export const quantityKinds: readonly QuantityKind[] = [
@@ -30,6 +34,10 @@ export const quantityKinds: readonly QuantityKind[] = [
   'viscosity',
   'time',
   'acceleration',
+  'sorptivity',
+  'evaporationRate',
+  'volumePerLength',
+  'flowPerLength',
   'dimensionless',
 ];
 
@@ -56,6 +64,9 @@ const POUND_FORCE_N = POUND_KG * STANDARD_GRAVITY;
 const SQUARE_INCH_M2 = 0.00064516;
 const SQUARE_FOOT_M2 = 0.09290304;
 const CUBIC_FOOT_M3 = 0.028316846592;
+/** US liquid gallon, 231 in³ exactly (NIST SP 811 B.8). */
+const GALLON_M3 = 231 * INCH_M ** 3;
+const DAY_S = 86400;
 
 function unit(kind: QuantityKind, symbol: string, name: string, factor: number, offset = 0): UnitDefinition {
   return { kind, symbol, name, factor, offset };
@@ -129,6 +140,23 @@ export const units = {
   // acceleration, canonical m/s²
   'm/s2': unit('acceleration', 'm/s²', 'metre per second squared', 1),
   'ft/s2': unit('acceleration', 'ft/s²', 'foot per second squared', FOOT_M),
+  // sorptivity (volume absorbed per unit area against √time), canonical m/s½; Hall & Hoff quote mm/min½
+  'm/s^0.5': unit('sorptivity', 'm/s½', 'metre per root second', 1),
+  'mm/s^0.5': unit('sorptivity', 'mm/s½', 'millimetre per root second', 0.001),
+  'mm/min^0.5': unit('sorptivity', 'mm/min½', 'millimetre per root minute', 0.001 / Math.sqrt(60)),
+  'in/h^0.5': unit('sorptivity', 'in/h½', 'inch per root hour', INCH_M / Math.sqrt(3600)),
+  // evaporation rate (volume of water per unit area of surface and time), canonical m/s
+  'm/s': unit('evaporationRate', 'm/s', 'metre per second', 1),
+  'mm/day': unit('evaporationRate', 'mm/day', 'millimetre per day', 0.001 / DAY_S),
+  'in/day': unit('evaporationRate', 'in/day', 'inch per day', INCH_M / DAY_S),
+  // water held per unit length of wall, canonical m³/m
+  'm3/m': unit('volumePerLength', 'm³/m', 'cubic metre per metre', 1),
+  'L/m': unit('volumePerLength', 'L/m', 'litre per metre', 0.001),
+  'gal/ft': unit('volumePerLength', 'gal/ft', 'US gallon per foot', GALLON_M3 / FOOT_M),
+  // flow per unit length of wall, canonical m³/(m·s)
+  'm3/(m*s)': unit('flowPerLength', 'm³/(m·s)', 'cubic metre per metre second', 1),
+  'L/(m*day)': unit('flowPerLength', 'L/(m·day)', 'litre per metre day', 0.001 / DAY_S),
+  'gal/(ft*day)': unit('flowPerLength', 'gal/(ft·day)', 'US gallon per foot day', GALLON_M3 / FOOT_M / DAY_S),
   // pure numbers
   '1': unit('dimensionless', '', 'dimensionless', 1),
 } as const satisfies Record<string, UnitDefinition>;
@@ -161,6 +189,10 @@ export const canonicalUnits: Readonly<Record<QuantityKind, UnitId>> = {
   viscosity: 'Pa*s',
   time: 's',
   acceleration: 'm/s2',
+  sorptivity: 'm/s^0.5',
+  evaporationRate: 'm/s',
+  volumePerLength: 'm3/m',
+  flowPerLength: 'm3/(m*s)',
   dimensionless: '1',
 };
 
@@ -185,6 +217,10 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     viscosity: 'mPa*s',
     time: 's',
     acceleration: 'm/s2',
+    sorptivity: 'mm/min^0.5',
+    evaporationRate: 'mm/day',
+    volumePerLength: 'L/m',
+    flowPerLength: 'L/(m*day)',
     dimensionless: '1',
   },
   us: {
@@ -200,6 +236,10 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     viscosity: 'cP',
     time: 's',
     acceleration: 'ft/s2',
+    sorptivity: 'in/h^0.5',
+    evaporationRate: 'in/day',
+    volumePerLength: 'gal/ft',
+    flowPerLength: 'gal/(ft*day)',
     dimensionless: '1',
   },
 };

@@ -114,6 +114,71 @@ export const samples = [
       leadForm: { enabled: true, fields: fields(), consentText: consent },
     },
   },
+  {
+    publicKey: 'wk_angleforce00000000a',
+    name: 'Coating lab · contact angle',
+    calculatorId: 'contact-angle-from-force',
+    release: '0.1.0',
+    settings: {
+      inputs: { readings: { mode: 'editable', default: 'cycle' }, gravity: { mode: 'hidden' } },
+      units: { system: 'si', visitorMaySwitch: false },
+      look: look(teal, 'manrope', 'soft'),
+      cautions: '',
+      leadForm: { enabled: true, fields: fields(), consentText: consent },
+    },
+  },
+  {
+    publicKey: 'wk_tensionrise0000000a',
+    name: 'Surface tension from a rise',
+    calculatorId: 'tension-from-rise',
+    release: '0.1.0',
+    settings: {
+      inputs: { gravity: { mode: 'hidden' } },
+      units: { system: 'us', visitorMaySwitch: true },
+      look: look(
+        { background: '#f7f7fb', text: '#1c1d2b', primary: '#3b3f8a', primaryText: '#ffffff' },
+        'manrope',
+        'round',
+      ),
+      cautions: '',
+      leadForm: { enabled: false, fields: fields(), consentText: consent },
+    },
+  },
+  {
+    publicKey: 'wk_risingdamp00000000a',
+    name: 'Rising damp in a solid wall',
+    calculatorId: 'rising-damp-height',
+    release: '0.1.0',
+    settings: {
+      inputs: { dryingFaces: { mode: 'locked', default: 'both' } },
+      units: { system: 'si', visitorMaySwitch: true },
+      look: look(
+        { background: '#fbf8f4', text: '#2b2118', primary: '#7a4a24', primaryText: '#ffffff' },
+        'manrope',
+        'soft',
+        'LOGO',
+      ),
+      cautions: 'We measure sorptivity and evaporation on drilled cores before advising on any treatment.',
+      leadForm: { enabled: true, fields: fields(), consentText: consent },
+    },
+  },
+  {
+    publicKey: 'wk_frostscreen0000000a',
+    name: 'Frost screening under a slab',
+    calculatorId: 'frost-screening',
+    release: '0.1.0',
+    settings: {
+      inputs: { frostDepth: { mode: 'editable', default: 1.2 } },
+      units: { system: 'us', visitorMaySwitch: true },
+      look: look(
+        { background: '#f4f8f7', text: '#14232b', primary: '#1d4e5f', primaryText: '#ffffff' },
+        'manrope',
+        'round',
+      ),
+      cautions: 'Frost depths for the county are set by the local building department.',
+      leadForm: { enabled: true, fields: fields(), consentText: consent },
+    },
+  },
 ];
 
 /** A small logo drawn on a canvas, as a blob URL (no image file needed for the preview). */

@@ -1,4 +1,5 @@
-// Dev-only: opens the preview pages in Debian's Chromium and saves screenshots under /tmp/shots/.
+// Dev-only: opens the preview pages in Debian's Chromium and saves screenshots under /tmp/shots/
+// (or SHOTS_DIR).
 // Files are served from this package through Playwright's request routing (no server process).
 // Usage: node dev/shoot.mjs [calculatorId]
 import { mkdirSync, readFileSync, existsSync } from 'node:fs';
@@ -16,7 +17,8 @@ const TYPES = {
   '.css': 'text/css',
 };
 const only = process.argv[2] ?? null;
-mkdirSync('/tmp/shots', { recursive: true });
+const OUT = process.env.SHOTS_DIR ?? '/tmp/shots';
+mkdirSync(OUT, { recursive: true });
 
 const browser = await chromium.launch({
   executablePath: '/usr/bin/chromium',
@@ -61,32 +63,43 @@ async function calculateAll(page) {
 
 const ids = only
   ? [only]
-  : ['tube-rise', 'slot-rise', 'soil-capillary-rise', 'interface-pressure', 'wetting-force', 'wicking-time'];
+  : [
+      'tube-rise',
+      'slot-rise',
+      'soil-capillary-rise',
+      'interface-pressure',
+      'wetting-force',
+      'wicking-time',
+      'contact-angle-from-force',
+      'tension-from-rise',
+      'rising-damp-height',
+      'frost-screening',
+    ];
 for (const [width, tag] of [
-  [1200, 'desktop'],
-  [380, 'phone'],
+  [1280, 'desktop'],
+  [390, 'phone'],
 ]) {
   for (const id of ids) {
     const { context, page, problems } = await open(width, `only=${id}`);
     await calculateAll(page);
-    if (id === 'tube-rise' || id === 'soil-capillary-rise')
+    if (['tube-rise', 'soil-capillary-rise', 'rising-damp-height', 'frost-screening'].includes(id))
       await page.locator('[data-wickstone="working"] summary').first().click();
-    await page.screenshot({ path: `/tmp/shots/widget-${id}-${tag}.png`, fullPage: true });
+    await page.screenshot({ path: `${OUT}/widget-${id}-${tag}.png`, fullPage: true });
     // Parts at full resolution, to check type and spacing closely.
     const top = await page.evaluate(
       () => document.querySelector('wickstone-widget').getBoundingClientRect().top + window.scrollY,
     );
     await page.screenshot({
-      path: `/tmp/shots/widget-${id}-${tag}-top.png`,
+      path: `${OUT}/widget-${id}-${tag}-top.png`,
       fullPage: true,
       clip: { x: 0, y: top, width, height: 900 },
     });
     await page
       .locator('[data-wickstone="result"]')
       .first()
-      .screenshot({ path: `/tmp/shots/widget-${id}-${tag}-result.png` });
+      .screenshot({ path: `${OUT}/widget-${id}-${tag}-result.png` });
     const lead = page.locator('[data-wickstone="lead-form"]').first();
-    if (await lead.count()) await lead.screenshot({ path: `/tmp/shots/widget-${id}-${tag}-lead.png` });
+    if (await lead.count()) await lead.screenshot({ path: `${OUT}/widget-${id}-${tag}-lead.png` });
     if (problems.length) console.log(id, tag, problems);
     await context.close();
   }
@@ -110,9 +123,9 @@ for (const [width, tag] of [
       }),
     );
     if (order.at(-1) === 'diameter')
-      await page.locator('wickstone-widget').screenshot({ path: '/tmp/shots/widget-focus-input.png' });
+      await page.locator('wickstone-widget').screenshot({ path: `${OUT}/widget-focus-input.png` });
     if (order.at(-1) === 'calculate')
-      await page.locator('wickstone-widget').screenshot({ path: '/tmp/shots/widget-focus-button.png' });
+      await page.locator('wickstone-widget').screenshot({ path: `${OUT}/widget-focus-button.png` });
   }
   await page.keyboard.press('Enter');
   await page.locator('[data-result]').waitFor();
@@ -143,7 +156,7 @@ for (const hostile of ['0', '1']) {
   await page
     .locator('wickstone-widget')
     .first()
-    .screenshot({ path: `/tmp/shots/widget-hostile-${hostile}.png` });
+    .screenshot({ path: `${OUT}/widget-hostile-${hostile}.png` });
   looks.push(
     await page.evaluate((props) => {
       const root = document.querySelector('wickstone-widget').shadowRoot;
@@ -173,4 +186,4 @@ console.log(
   diffs.map((k) => `${k}\n  ${looks[0][k]}\n  ${looks[1][k]}`).join('\n'),
 );
 await browser.close();
-console.log('screenshots in /tmp/shots');
+console.log(`screenshots in ${OUT}`);

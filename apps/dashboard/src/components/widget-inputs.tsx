@@ -31,6 +31,10 @@ const kindLabel: Record<string, string> = {
   viscosity: 'viscosity',
   time: 'time',
   acceleration: 'acceleration',
+  sorptivity: 'sorptivity',
+  evaporationRate: 'evaporation rate',
+  volumePerLength: 'volume per length',
+  flowPerLength: 'flow per length',
   dimensionless: 'number',
 };
 

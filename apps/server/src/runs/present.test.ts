@@ -35,3 +35,22 @@ describe('values shown by the server', () => {
     expect(lines.filter((l) => l.startsWith('    = ')).every((l) => !l.endsWith(' '))).toBe(true);
   });
 });
+
+describe('the trade calculators through the same runs table and e-mailed copy', () => {
+  it.each([
+    ['rising-damp-height', 'si', 'steadyHeight', '0.7937 m'],
+    ['rising-damp-height', 'si', 'waterHeld', '55.56 L/m'],
+    ['rising-damp-height', 'us', 'dailyFlow', '0.1278 gal/(ft·day)'],
+    ['contact-angle-from-force', 'si', 'contactAngleDeg', '59.83°'],
+    ['tension-from-rise', 'us', 'surfaceTension', '61.59 dyn/cm'],
+    ['frost-screening', 'si', 'frostGroup', '2'],
+  ] as const)('%s (%s): %s shows as %s', (id, system, output, text) => {
+    const result = calculate(id, {});
+    const shown = showRun(id, { inputs: {} }, result.inputs, result.outputs, system);
+    expect(shown.outputs.find((o) => o.id === output)?.text).toBe(text);
+    const calc = getCalculator(id);
+    if (calc === undefined) throw new Error(`no ${id}`);
+    const lines = resultLines(calc, result, system).join('\n');
+    expect(lines).toContain(text);
+  });
+});

@@ -1,8 +1,4 @@
-import { execFileSync } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { calculate, getCalculator } from '@wickstone/calc-core';
@@ -18,26 +14,10 @@ import {
 } from '../../testing/index.js';
 import { Run } from '../db/models/index.js';
 import { shown } from '../embed/format.js';
+import { binary, pdfText } from '../../testing/pdf.js';
 import { fieldsOf, liveWidget, reportRun, SITE, type FixtureWidget } from '../../testing/usage.js';
 
-const dir = mkdtempSync(path.join(tmpdir(), 'wst-sheets-'));
-/** The PDF's text as Debian's poppler-utils reads it, whitespace collapsed so wrapped lines still match. */
-function pdfText(pdf: Buffer): string {
-  const file = path.join(dir, `${randomUUID()}.pdf`);
-  writeFileSync(file, pdf);
-  return execFileSync('pdftotext', ['-enc', 'UTF-8', file, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
-}
 const collapse = (s: string) => s.replace(/\s+/g, ' ');
-
-/** Keeps a PDF as bytes; an error answer (JSON) is parsed as usual. */
-function binary(res: request.Response, cb: (err: Error | null, body: unknown) => void): void {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => {
-    const all = Buffer.concat(chunks);
-    cb(null, /json/.test(String(res.headers['content-type'])) ? JSON.parse(all.toString('utf8')) : all);
-  });
-}
 
 describe('calculation sheets and verification', () => {
   let t: TestApp;
@@ -56,7 +36,6 @@ describe('calculation sheets and verification', () => {
     }));
   });
   afterAll(async () => {
-    rmSync(dir, { recursive: true, force: true });
     await t.close();
   });
 

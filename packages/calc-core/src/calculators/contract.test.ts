@@ -6,17 +6,32 @@ import { calculate, calculatorIds, calculators, getCalculator } from '../registr
 import { units } from '../units.js';
 import { VERSION } from '../version.js';
 import { resolveInputs, resultsAgree } from './engine.js';
+import * as contactAngleFromForce from './contact-angle-from-force.js';
+import * as frostScreening from './frost-screening.js';
 import * as interfacePressure from './interface-pressure.js';
+import * as risingDampHeight from './rising-damp-height.js';
 import * as slotRise from './slot-rise.js';
 import * as soilCapillaryRise from './soil-capillary-rise.js';
+import * as tensionFromRise from './tension-from-rise.js';
 import * as tubeRise from './tube-rise.js';
 import type { CalculatorDefinition, InputDefinition } from './types.js';
 import * as wettingForce from './wetting-force.js';
 import * as wickingTime from './wicking-time.js';
 
-// What every calculator promises the widget, the dashboard and the server, checked for all six.
+// What every calculator promises the widget, the dashboard and the server, checked for all ten.
 
-const modules = { tubeRise, slotRise, soilCapillaryRise, interfacePressure, wettingForce, wickingTime };
+const modules = {
+  tubeRise,
+  slotRise,
+  soilCapillaryRise,
+  interfacePressure,
+  wettingForce,
+  wickingTime,
+  contactAngleFromForce,
+  tensionFromRise,
+  risingDampHeight,
+  frostScreening,
+};
 
 /** Any inputs a form could send: every choice from its options, every number within its range. */
 function arbitraryInputs(def: CalculatorDefinition): fc.Arbitrary<Record<string, number | string>> {
@@ -165,7 +180,7 @@ describe.each(calculators.map((c) => [c.id, c] as const))('%s', (_id, def) => {
 });
 
 describe('registry and engine', () => {
-  it('registers the six calculators of the design, in order, by stable id', () => {
+  it('registers the ten calculators of the design, in order, by stable id', () => {
     expect(calculatorIds).toEqual([
       'tube-rise',
       'slot-rise',
@@ -173,6 +188,10 @@ describe('registry and engine', () => {
       'interface-pressure',
       'wetting-force',
       'wicking-time',
+      'contact-angle-from-force',
+      'tension-from-rise',
+      'rising-damp-height',
+      'frost-screening',
     ]);
     expect(getCalculator('nope')).toBeUndefined();
     expect(() => calculate('nope', {})).toThrow(expect.objectContaining({ code: 'UNKNOWN_CALCULATOR' }));

@@ -1,9 +1,9 @@
 import { capillaryBreakCheck, HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../formulas/soil.js';
 import { bandOver, runner } from './engine.js';
+import { HAZEN_BASIS, HAZEN_SOURCE, hazenCInput, hazenRiseStep } from './hazen.js';
 import {
   choice,
   ESTIMATE_CAUTION,
-  fmt,
   FOUNDATIONS_CAUTION,
   FROST_CAUTION,
   MM,
@@ -15,8 +15,6 @@ import {
 } from './shared.js';
 import type { CalculatorDefinition, InputValues, Outputs, Warning, WorkingStep } from './types.js';
 
-const HAZEN_SOURCE =
-  'Terzaghi & Peck (1948): C = 0.1–0.5 cm² (10–50 mm²), as given by Smith, Elements of Soil Mechanics (from memory)';
 /** IRC R506.2.2: a 4-inch-thick (102 mm) base course under a slab below grade. */
 const CODE_MIN_LAYER_M = 4 * 0.0254;
 /** ASTM E11 opening of the No. 4 sieve; ≤ 10 % passing it means D10 ≥ 4.75 mm. */
@@ -25,18 +23,6 @@ const NO4_SIEVE_M = 4.75e-3;
 const NO200_SIEVE_M = 0.075e-3;
 
 const withLayer = [{ input: 'breakLayer', values: ['granular'] }] as const;
-
-function riseStep(id: string, label: string, c: number, e: number, d10: number, value: number): WorkingStep {
-  return {
-    id,
-    label,
-    formula: 'h_c = C / (e·D10)',
-    substituted: `${q(c, 'm2')} / (${fmt(e)} × ${q(d10, 'm')})`,
-    value,
-    unit: 'm',
-    source: 'Hazen, as given by Terzaghi & Peck (1948) (from memory)',
-  };
-}
 
 function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
   const d10 = num(inputs, 'd10');
@@ -76,12 +62,12 @@ function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
   const clearance = check.clearance;
 
   const working: WorkingStep[] = [];
-  if (!fine) working.push(riseStep('soil-rise', 'Capillary rise in the soil', c, e, d10, soilRise));
+  if (!fine) working.push(hazenRiseStep('soil-rise', 'Capillary rise in the soil', c, e, d10, soilRise));
   const fringe =
     'equilibrium suction ρ·g·z: each material holds water up to its own capillary height (common practice)';
   if (layerRise !== null) {
     working.push(
-      riseStep('layer-rise', 'Capillary rise in the granular layer', c, layerE, layerD10, layerRise),
+      hazenRiseStep('layer-rise', 'Capillary rise in the granular layer', c, layerE, layerD10, layerRise),
     );
   }
   if (!fine && layerRise !== null) {
@@ -131,11 +117,7 @@ function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
     });
   }
 
-  const band = bandOver(
-    [{ input: 'hazenC', low: HAZEN_C_RANGE_M2.min, high: HAZEN_C_RANGE_M2.max, source: HAZEN_SOURCE }],
-    outputs,
-    (v) => evaluate(v.hazenC ?? c),
-  );
+  const band = bandOver([HAZEN_BASIS], outputs, (v) => evaluate(v.hazenC ?? c));
   if (band !== null) {
     const lo = evaluate(HAZEN_C_RANGE_M2.min);
     const hi = evaluate(HAZEN_C_RANGE_M2.max);
@@ -244,17 +226,8 @@ export const calculator: CalculatorDefinition = {
       display: MM,
     }),
     quantityInput('dimensionless', 'voidRatio', 'Void ratio e of the soil', 0.6, [0.1, 3]),
-    quantityInput(
-      'area',
-      'hazenC',
-      "Hazen's constant C",
-      3e-5,
-      [HAZEN_C_RANGE_M2.min, HAZEN_C_RANGE_M2.max],
-      {
-        spread: { low: HAZEN_C_RANGE_M2.min, high: HAZEN_C_RANGE_M2.max, source: HAZEN_SOURCE },
-        help: 'Depends on grain shape and surface impurities; published range 0.1–0.5 cm². The default is the middle of the range; the band always spans all of it.',
-        display: { si: 'cm2', us: 'cm2' },
-      },
+    hazenCInput(
+      'Depends on grain shape and surface impurities; published range 0.1–0.5 cm². The default is the middle of the range; the band always spans all of it.',
     ),
     quantityInput(
       'length',

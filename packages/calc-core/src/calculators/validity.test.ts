@@ -185,6 +185,20 @@ describe('hazards belong to the result', () => {
       'interface-pressure': ['ESTIMATE_ONLY', 'REAL_PORES', 'CLEAN_SURFACES'],
       'wetting-force': ['ESTIMATE_ONLY', 'PROBE_CLEANING', 'BUOYANCY_NEGLECTED', 'CLEAN_SURFACES'],
       'wicking-time': ['ESTIMATE_ONLY', 'REAL_POROUS_MEDIA', 'DAMP_DIAGNOSIS', 'CLEAN_SURFACES'],
+      'contact-angle-from-force': [
+        'ESTIMATE_ONLY',
+        'OTHER_LIQUID_HAZARD',
+        'PLATE_PREPARATION',
+        'CLEAN_SURFACES',
+      ],
+      'tension-from-rise': ['ESTIMATE_ONLY', 'OTHER_LIQUID_HAZARD', 'TUBE_CLEANING', 'CLEAN_SURFACES'],
+      'rising-damp-height': [
+        'ESTIMATE_ONLY',
+        'RISING_DAMP_DIAGNOSIS',
+        'FINISHES_RAISE_DAMP',
+        'STRUCTURE_AND_HEALTH',
+      ],
+      'frost-screening': ['ESTIMATE_ONLY', 'FROST_HEAVE', 'FOUNDATIONS', 'FROST_TESTING_AND_DESIGN'],
     };
     for (const def of calculators) {
       expect(calculate(def.id, {}).cautions.map((c) => c.code)).toEqual(own[def.id]);
@@ -249,6 +263,25 @@ const triggers: readonly (readonly [string, Record<string, unknown>, string])[] 
   ['wicking-time', { direction: 'horizontal', poreRadius: 1e-3 }, 'INERTIA_NOT_NEGLIGIBLE'],
   ['wicking-time', { contactAnglePreset: 'custom', contactAngleDeg: 85 }, 'CONTACT_ANGLE_NEAR_90'],
   ['wicking-time', { poreRadius: 5e-3 }, 'PORE_TOO_WIDE'],
+  ['contact-angle-from-force', { force: 0.01 }, 'NO_ANGLE_FOR_FORCE'],
+  ['contact-angle-from-force', { readings: 'cycle', recedingForce: -0.01 }, 'NO_ANGLE_FOR_RECEDING_FORCE'],
+  ['contact-angle-from-force', { readings: 'cycle', recedingForce: 1e-3 }, 'RECEDING_ABOVE_ADVANCING'],
+  ['contact-angle-from-force', { force: 2.8e-3 }, 'ANGLE_POORLY_DETERMINED'],
+  ['tension-from-rise', { diameter: 0.01, rise: 2e-3 }, 'BORE_TOO_WIDE'],
+  ['tension-from-rise', { diameter: 2e-3, rise: 0.012 }, 'BORE_NOT_SMALL'],
+  ['tension-from-rise', { solveFor: 'contactAngle', rise: 0.035 }, 'NO_ANGLE_FOR_RISE'],
+  ['tension-from-rise', { contactAngleDeg: 30 }, 'CONTACT_ANGLE_NOT_ZERO'],
+  ['tension-from-rise', { contactAngleDeg: 85, rise: 2e-3 }, 'CONTACT_ANGLE_NEAR_90'],
+  ['tension-from-rise', { solveFor: 'contactAngle', rise: 0.0294 }, 'ANGLE_POORLY_DETERMINED'],
+  ['rising-damp-height', { wallThickness: 1.5, sorptivity: 2e-5 }, 'WET_ZONE_NOT_TALL'],
+  ['rising-damp-height', { evaporationRate: 1e-9 }, 'HEIGHT_ABOVE_OBSERVED'],
+  ['rising-damp-height', { evaporationRate: 1e-10, wallThickness: 1 }, 'SLOW_APPROACH'],
+  ['frost-screening', { d10: 0.03e-3 }, 'FINE_GRAINED_SOIL'],
+  ['frost-screening', { waterTableDepth: 0.8 }, 'WATER_TABLE_WITHIN_FROST_DEPTH'],
+  ['frost-screening', { waterTableDepth: 2 }, 'FRINGE_MAY_REACH_FROST_LINE'],
+  ['frost-screening', { uniformity: 10 }, 'INTERMEDIATE_GRADATION'],
+  ['frost-screening', { finesShare: 0.035 }, 'NEAR_THRESHOLD'],
+  ['frost-screening', { uniformity: 3, finesShare: 0.06 }, 'SCREENS_DISAGREE'],
 ];
 
 describe('every warning code', () => {
@@ -304,6 +337,35 @@ const signs: Readonly<Record<string, Readonly<Record<string, 'positive' | 'nonNe
     jurinLimit: 'positive',
     timeWithGravity: 'positive',
   },
+  'contact-angle-from-force': {
+    contactAngleDeg: 'nonNegative',
+    recedingAngleDeg: 'nonNegative',
+    hysteresisDeg: 'nonNegative',
+    cosTheta: 'any',
+    buoyancy: 'nonNegative',
+    wettedLength: 'positive',
+  },
+  'tension-from-rise': {
+    surfaceTension: 'positive',
+    contactAngleDeg: 'nonNegative',
+    capillaryLength: 'positive',
+    radiusToCapillaryLength: 'positive',
+  },
+  'rising-damp-height': {
+    steadyHeight: 'positive',
+    waterHeld: 'positive',
+    dailyFlow: 'positive',
+    timeToSteady: 'positive',
+    timeConstant: 'positive',
+    residenceTime: 'positive',
+  },
+  'frost-screening': {
+    frostSusceptible: 'nonNegative',
+    frostGroup: 'nonNegative',
+    capillaryRise: 'nonNegative',
+    fringeGap: 'any',
+    fringeReachesFrostLine: 'nonNegative',
+  },
 };
 
 /** Every choice from its options, every number over its whole range (log-uniform where it spans decades). */
@@ -350,8 +412,19 @@ describe('property sweep over every calculator (fast-check)', () => {
           // The validity conditions checked again from the result's own figures, not the code's flags.
           const ratio = r.outputs.radiusToCapillaryLength ?? r.outputs.halfGapToCapillaryLength;
           if (typeof ratio === 'number' && ratio >= 1) {
-            expect(r.outputs.rise).toBeNull();
-            expect(r.outputs.riseCorrected).toBeNull();
+            if (id === 'tension-from-rise') {
+              expect(r.outputs.surfaceTension).toBeNull();
+              expect(r.outputs.contactAngleDeg).toBeNull();
+            } else {
+              expect(r.outputs.rise).toBeNull();
+              expect(r.outputs.riseCorrected).toBeNull();
+            }
+          }
+          if (id === 'contact-angle-from-force' && Math.abs(Number(r.outputs.cosTheta)) > 1 + 1e-12) {
+            expect(r.outputs.contactAngleDeg).toBeNull();
+          }
+          if (id === 'frost-screening' && Number(r.inputs.waterTableDepth) <= Number(r.inputs.frostDepth)) {
+            expect(r.outputs.fringeReachesFrostLine).toBe(1);
           }
           if (id === 'wicking-time' && r.inputs.direction === 'vertical') {
             const limit = r.outputs.jurinLimit;

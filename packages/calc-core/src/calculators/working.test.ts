@@ -96,6 +96,12 @@ describe('working built from the constants the code computes with', () => {
       ['wetting-force', { method: 'ring' }],
       ['wetting-force', { method: 'plate-force' }],
       ['wicking-time', {}],
+      ['contact-angle-from-force', { readings: 'cycle' }],
+      ['tension-from-rise', {}],
+      ['tension-from-rise', { solveFor: 'contactAngle' }],
+      ['rising-damp-height', {}],
+      ['frost-screening', {}],
+      ['frost-screening', { riseFrom: 'measured' }],
     ] as const) {
       const r = calculate(id, inputs);
       const methodSteps = r.working.filter((s) => s.id !== undefined);

@@ -52,6 +52,23 @@ export function plateForceTerms(args: PlateForceArgs): PlateForceTerms {
   return { perimeter, buoyancy, cosTheta: finiteResult('cos θ', (force + buoyancy) / (sigma * perimeter)) };
 }
 
+/** Degrees, 0–180, from a cosine inside [−1, 1]. */
+export function acosDeg(cos: number): number {
+  return (Math.acos(cos) * 180) / Math.PI;
+}
+
+/**
+ * Below this angle a 1 % error in the force, rise or surface tension moves a contact angle read from
+ * its cosine by about 2° or more (arccos(0.99·cos 15°) − 15° = 2.0°): our threshold for saying the
+ * angle is poorly determined.
+ */
+export const ILL_CONDITIONED_BELOW_DEG = 15;
+
+/** How far an angle below 90° moves, in degrees, when its cosine is 1 % lower. */
+export function onePercentShift(angleDeg: number): number {
+  return acosDeg(0.99 * Math.cos((angleDeg * Math.PI) / 180)) - angleDeg;
+}
+
 /**
  * The contact angle whose cosine is `cos`, in degrees, 0–180.
  * @throws CalcInputError with code COS_OUT_OF_RANGE when |cos| > 1 (no such angle)

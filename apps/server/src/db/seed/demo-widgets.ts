@@ -47,6 +47,22 @@ const demoWidgets: DemoWidget[] = [
       leadForm: { ...s.leadForm, notify: ['surveys@brackenridge-ground.example'] },
     }),
   },
+  {
+    name: 'Rising damp: height in a solid wall',
+    calculatorId: 'rising-damp-height',
+    settings: (s) => ({
+      ...s,
+      units: { system: 'si', visitorMaySwitch: true },
+      look: {
+        ...s.look,
+        colors: { background: '#fbf8f4', text: '#2b2118', primary: '#7a4a24', primaryText: '#ffffff' },
+        corner: 'soft',
+      },
+      cautions:
+        'The sorptivity and evaporation rate of an old wall vary from course to course: we measure both on drilled cores before advising on any treatment.',
+      leadForm: { ...s.leadForm, notify: ['surveys@brackenridge-ground.example'] },
+    }),
+  },
 ];
 
 const visitors = [
@@ -74,10 +90,15 @@ async function seedRuns(w: Widget, origin: string, seed: number): Promise<number
             diameter: [0.0002, 0.0005, 0.001, 0.002, 0.004][Math.floor(rnd() * 5)] as number,
             temperatureC: 5 + Math.round(rnd() * 20),
           }
-        : {
-            d10: [0.00002, 0.00008, 0.0002, 0.0006][Math.floor(rnd() * 4)] as number,
-            waterTableDepth: 0.5 + Math.round(rnd() * 30) / 10,
-          };
+        : w.calculatorId === 'rising-damp-height'
+          ? {
+              wallThickness: [0.225, 0.35, 0.45, 0.6][Math.floor(rnd() * 4)] as number,
+              evaporationRate: ((0.3 + Math.round(rnd() * 15) / 10) * 1e-3) / 86_400,
+            }
+          : {
+              d10: [0.00002, 0.00008, 0.0002, 0.0006][Math.floor(rnd() * 4)] as number,
+              waterTableDepth: 0.5 + Math.round(rnd() * 30) / 10,
+            };
     rows.push(
       inventRun(w, inputs, {
         id: seededUuid(`demo-run-${seed}-${i}`),
@@ -119,7 +140,7 @@ async function seedRuns(w: Widget, origin: string, seed: number): Promise<number
 }
 
 /**
- * The demo's two live widgets, allowed on the demo site's origins, with invented usage.
+ * The demo's live widgets, allowed on the demo site's origins, with invented usage.
  * Idempotent: a widget that exists (by name) is left as it is.
  */
 export async function seedDemoWidgets(

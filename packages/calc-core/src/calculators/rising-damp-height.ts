@@ -1,0 +1,269 @@
+import { risingDampSteadyState, STEADY_FRACTION, timeToFraction } from '../formulas/rising-damp.js';
+import { runner } from './engine.js';
+import { choice, ESTIMATE_CAUTION, fmt, num, q, quantityInput, solved, warning } from './shared.js';
+import type { CalculatorDefinition, InputValues, Solution, Warning, WorkingStep } from './types.js';
+
+const HALL_HOFF = 'Hall & Hoff 2007, Proc. R. Soc. A 463, 1871–1884 (form from memory)';
+const DERIVED = 'sharp-front water balance of Hall & Hoff 2007, derived here';
+/** Our threshold: below one wall thickness the wet zone is not tall against the wall, see the warning. */
+const SHALLOW_RATIO = 1;
+/** Heights above this are rarely seen in walls (common practice); the model then points at its inputs. */
+const TALL_HEIGHT_M = 2;
+const DAY_S = 86400;
+
+function solve(inputs: InputValues): Solution {
+  const S = num(inputs, 'sorptivity');
+  const b = num(inputs, 'wallThickness');
+  const e = num(inputs, 'evaporationRate');
+  const theta = num(inputs, 'wetWaterContent');
+  const both = choice(inputs, 'dryingFaces') === 'both';
+  const n = both ? 2 : 1;
+  const r = risingDampSteadyState({
+    sorptivity: S,
+    wallThickness: b,
+    evaporationRate: e,
+    wetWaterContent: theta,
+    dryingFaces: n,
+  });
+  const tSteady = timeToFraction(STEADY_FRACTION, r.timeConstant);
+  const pct = fmt(STEADY_FRACTION * 100);
+
+  const working: WorkingStep[] = [
+    {
+      id: 'steady-height',
+      label: 'Steady-state height of the wet front',
+      formula: 'h_ss = S·√(b / (2·n·e·θ_w))',
+      substituted: `${q(S, 'm/s^0.5')} × √(${q(b, 'm')} / (2 × ${n} × ${q(e, 'm/s')} × ${fmt(theta)}))`,
+      value: r.steadyHeight,
+      unit: 'm',
+      source: `${HALL_HOFF}; n drying faces, derived here`,
+    },
+    {
+      id: 'water-held',
+      label: 'Water held in the wet zone, per metre of wall',
+      formula: 'W = θ_w·b·h_ss',
+      substituted: `${fmt(theta)} × ${q(b, 'm')} × ${q(r.steadyHeight, 'm')}`,
+      value: r.waterHeld,
+      unit: 'm3/m',
+      source: DERIVED,
+    },
+    {
+      id: 'flow',
+      label: 'Flow through the wall at steady state, per metre of wall',
+      formula: 'Q = n·e·h_ss = b·S² / (2·θ_w·h_ss)',
+      substituted: `${n} × ${q(e, 'm/s')} × ${q(r.steadyHeight, 'm')}`,
+      value: r.flow,
+      unit: 'm3/(m*s)',
+      source: DERIVED,
+    },
+    {
+      id: 'time-constant',
+      label: 'Time constant of the approach to steady state',
+      formula: 'τ = b·θ_w / (2·n·e); h(t) = h_ss·√(1 − exp(−t/τ))',
+      substituted: `${q(b, 'm')} × ${fmt(theta)} / (2 × ${n} × ${q(e, 'm/s')})`,
+      value: r.timeConstant,
+      unit: 's',
+      source: DERIVED,
+    },
+    {
+      id: 'time-to-steady',
+      label: `Time for a dry wall to wet to ${pct} % of the steady height`,
+      formula: `t = −τ·ln(1 − f²), f = ${fmt(STEADY_FRACTION)}`,
+      substituted: `−${q(r.timeConstant, 's')} × ln(1 − ${fmt(STEADY_FRACTION)}²)`,
+      value: tSteady,
+      unit: 's',
+      source: DERIVED,
+    },
+    {
+      id: 'residence',
+      label: 'Mean time water spends in the wall',
+      formula: 't_r = W / Q = 2·τ',
+      substituted: `${q(r.waterHeld, 'm3/m')} / ${q(r.flow, 'm3/(m*s)')}`,
+      value: r.residenceTime,
+      unit: 's',
+      source: DERIVED,
+    },
+  ];
+
+  const warnings: Warning[] = [];
+  if (r.steadyHeight < SHALLOW_RATIO * b) {
+    warnings.push(
+      warning(
+        'WET_ZONE_NOT_TALL',
+        `The steady height (${q(r.steadyHeight, 'm')}) is less than the wall thickness (${q(b, 'm')}): the model treats the water content as even across the wall, which needs a wet zone tall against the thickness. Read the height as an order of magnitude.`,
+        ['wallThickness', 'evaporationRate'],
+        { step: 'steady-height' },
+      ),
+    );
+  }
+  if (r.steadyHeight > TALL_HEIGHT_M) {
+    warnings.push(
+      warning(
+        'HEIGHT_ABOVE_OBSERVED',
+        `A steady height of ${q(r.steadyHeight, 'm')} is above the ${q(TALL_HEIGHT_M, 'm')} that rising damp rarely exceeds in practice (common practice). Such heights come from a very low evaporation rate (impermeable finishes, buried or sheltered faces) or a high sorptivity: check both, and look for other sources of water.`,
+        ['evaporationRate', 'sorptivity'],
+        { step: 'steady-height' },
+      ),
+    );
+  }
+  if (tSteady > 10 * 365.25 * DAY_S) {
+    warnings.push(
+      warning(
+        'SLOW_APPROACH',
+        `The wall takes ${fmt(tSteady / (365.25 * DAY_S))} years to approach steady state: seasons change the evaporation rate long before then, so the wall is never at the steady height; the steady figures are a limit, not a state to expect.`,
+        ['evaporationRate', 'wallThickness', 'wetWaterContent'],
+        { step: 'time-to-steady' },
+      ),
+    );
+  }
+
+  return solved({
+    outputs: {
+      steadyHeight: r.steadyHeight,
+      waterHeld: r.waterHeld,
+      dailyFlow: r.flow,
+      timeToSteady: tSteady,
+      timeConstant: r.timeConstant,
+      residenceTime: r.residenceTime,
+    },
+    working,
+    warnings,
+    band: null,
+    assumptions: [
+      'A sharp wet front: the wall below it is at the wet water content θw, above it dry (Hall & Hoff sharp-front model).',
+      'A uniform wall of one material standing in a permanent water supply at its base; no damp-proof course.',
+      `Evaporation at a steady rate e per unit area from ${both ? 'both faces' : 'one face'} over the whole wet height, none above it.`,
+      'Gravity neglected against capillary suction, and the sorptivity that of the masonry as built (mortar joints included).',
+      'No salts: salts crystallising near the faces change the evaporation and the sorptivity.',
+    ],
+  });
+}
+
+export const calculator: CalculatorDefinition = {
+  id: 'rising-damp-height',
+  title: 'Height of rising damp in a wall',
+  summary:
+    'The evaporation-limited height that water rises to in a wall standing in wet ground, by the sharp-front model of Hall & Hoff (2007), with the water the wall holds, the daily flow through it and how long it takes to get there.',
+  inputs: [
+    quantityInput(
+      'sorptivity',
+      'sorptivity',
+      'Sorptivity of the masonry',
+      1e-3 / Math.sqrt(60),
+      [1e-6, 2e-3],
+      {
+        help: 'Water absorbed per unit area against the square root of time, from a partial-immersion test of the masonry.',
+      },
+    ),
+    quantityInput('length', 'wallThickness', 'Wall thickness', 0.35, [0.05, 3], {
+      display: { si: 'mm', us: 'in' },
+    }),
+    quantityInput(
+      'evaporationRate',
+      'evaporationRate',
+      'Evaporation rate from each drying face',
+      1e-3 / DAY_S,
+      [1e-10, 1e-6],
+      {
+        help: 'Volume of water leaving per unit area of wall face, as a depth of water per day.',
+      },
+    ),
+    quantityInput('dimensionless', 'wetWaterContent', 'Wet water content θw', 0.2, [0.01, 0.6], {
+      help: 'Volume fraction of the masonry filled with water in the wet zone (the capillary-saturated content, below the porosity).',
+    }),
+    {
+      id: 'dryingFaces',
+      label: 'The wall dries from',
+      kind: 'choice',
+      default: 'both',
+      options: [
+        { value: 'both', label: 'Both faces' },
+        { value: 'one', label: 'One face (the other sealed, rendered hard or buried)' },
+      ],
+    },
+  ],
+  outputs: [
+    {
+      id: 'steadyHeight',
+      label: 'Steady-state height of rising damp',
+      kind: 'length',
+      display: { si: 'm', us: 'ft' },
+    },
+    { id: 'waterHeld', label: 'Water held per metre of wall', kind: 'volumePerLength' },
+    { id: 'dailyFlow', label: 'Flow through the wall per metre', kind: 'flowPerLength' },
+    {
+      id: 'timeToSteady',
+      label: `Time to reach ${STEADY_FRACTION * 100} % of the steady height`,
+      kind: 'time',
+      help: 'From a dry wall under a steady evaporation rate.',
+      display: { si: 'day', us: 'day' },
+    },
+    { id: 'timeConstant', label: 'Time constant τ', kind: 'time', display: { si: 'day', us: 'day' } },
+    {
+      id: 'residenceTime',
+      label: 'Mean time water spends in the wall',
+      kind: 'time',
+      display: { si: 'day', us: 'day' },
+    },
+  ],
+  warnings: [
+    {
+      code: 'WET_ZONE_NOT_TALL',
+      summary:
+        'The steady height is below the wall thickness, where an even water content across the wall is a poor approximation.',
+    },
+    {
+      code: 'HEIGHT_ABOVE_OBSERVED',
+      summary:
+        'The steady height is above 2 m, which rising damp rarely reaches in practice (common practice).',
+    },
+    {
+      code: 'SLOW_APPROACH',
+      summary:
+        'More than ten years to approach steady state: the steady figures are a limit the wall does not reach.',
+    },
+  ],
+  cautions: [
+    ESTIMATE_CAUTION,
+    {
+      code: 'RISING_DAMP_DIAGNOSIS',
+      text: 'A calculated height is not a diagnosis. Leaks, rain penetration, condensation and hygroscopic salts wet walls more often than rising damp does: establish the source from gravimetric moisture profiles of drilled samples (BS 6576, BRE Digest 245) before specifying a damp-proof course, injection or any remedial work.',
+      source: 'BS 6576 and BRE Digest 245 (from memory)',
+    },
+    {
+      code: 'FINISHES_RAISE_DAMP',
+      text: 'Anything that lowers evaporation from the faces (cement renders, impermeable paints, tanking, raised ground or floor levels) raises the height water climbs to; removing breathable finishes can make rising damp worse, not better.',
+    },
+    {
+      code: 'STRUCTURE_AND_HEALTH',
+      text: 'Persistently wet masonry loses strength and frost resistance and can rot embedded timber; mould from damp walls is a health risk. Have a surveyor or structural engineer assess the wall under local building regulations.',
+    },
+  ],
+  references: [
+    {
+      id: 'hall-hoff-2007',
+      citation:
+        'Hall C., Hoff W. D. (2007) Rising damp: capillary rise dynamics in walls, Proc. R. Soc. A 463, 1871–1884',
+      usedFor:
+        'the sharp-front model of rising damp and its steady height h_ss = S·(b/(2eθ_w))^½ (the form recalled, the paper not seen printed here); the water held, flow, time constant and time to steady state are derived here from the same balance',
+      basis: 'from memory',
+    },
+    {
+      id: 'hall-hoff-book',
+      citation: 'Hall C., Hoff W. D., Water Transport in Brick, Stone and Concrete, Taylor & Francis',
+      usedFor: 'sorptivity and the sharp-front description of capillary absorption',
+      basis: 'from memory',
+    },
+    {
+      id: 'bs-6576-bre-245',
+      citation:
+        'BS 6576, Code of practice for diagnosis of rising damp in walls of buildings; BRE Digest 245',
+      usedFor: 'diagnosis by gravimetric moisture profiles',
+      basis: 'from memory',
+    },
+  ],
+  solve,
+};
+
+/** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
+export const run = runner(calculator);
