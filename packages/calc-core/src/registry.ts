@@ -1,12 +1,41 @@
 import { CalcInputError } from './errors.js';
 import { runCalculation } from './calculators/engine.js';
-import { calculator as interfacePressure } from './calculators/interface-pressure.js';
-import { calculator as slotRise } from './calculators/slot-rise.js';
-import { calculator as soilCapillaryRise } from './calculators/soil-capillary-rise.js';
-import { calculator as tubeRise } from './calculators/tube-rise.js';
-import type { CalculationResult, CalculatorDefinition } from './calculators/types.js';
-import { calculator as wettingForce } from './calculators/wetting-force.js';
-import { calculator as wickingTime } from './calculators/wicking-time.js';
+import { calculator as interfacePressureCore } from './calculators/interface-pressure.js';
+import { texts as interfacePressureTexts } from './calculators/interface-pressure.texts.js';
+import { calculator as slotRiseCore } from './calculators/slot-rise.js';
+import { texts as slotRiseTexts } from './calculators/slot-rise.texts.js';
+import { calculator as soilCapillaryRiseCore } from './calculators/soil-capillary-rise.js';
+import { texts as soilCapillaryRiseTexts } from './calculators/soil-capillary-rise.texts.js';
+import { calculator as tubeRiseCore } from './calculators/tube-rise.js';
+import { texts as tubeRiseTexts } from './calculators/tube-rise.texts.js';
+import type {
+  CalculationResult,
+  CalculatorCore,
+  CalculatorDefinition,
+  CalculatorTexts,
+} from './calculators/types.js';
+import { calculator as wettingForceCore } from './calculators/wetting-force.js';
+import { texts as wettingForceTexts } from './calculators/wetting-force.texts.js';
+import { calculator as wickingTimeCore } from './calculators/wicking-time.js';
+import { texts as wickingTimeTexts } from './calculators/wicking-time.texts.js';
+
+/** A calculator whole: its core (what computes) and its texts (cautions, references). */
+export function withTexts(core: CalculatorCore, texts: CalculatorTexts): CalculatorDefinition {
+  return { ...core, ...texts };
+}
+
+export const tubeRise: CalculatorDefinition = withTexts(tubeRiseCore, tubeRiseTexts);
+export const slotRise: CalculatorDefinition = withTexts(slotRiseCore, slotRiseTexts);
+export const soilCapillaryRise: CalculatorDefinition = withTexts(
+  soilCapillaryRiseCore,
+  soilCapillaryRiseTexts,
+);
+export const interfacePressure: CalculatorDefinition = withTexts(
+  interfacePressureCore,
+  interfacePressureTexts,
+);
+export const wettingForce: CalculatorDefinition = withTexts(wettingForceCore, wettingForceTexts);
+export const wickingTime: CalculatorDefinition = withTexts(wickingTimeCore, wickingTimeTexts);
 
 /** Every calculator, in the order a picker shows them. Registered by hand: nothing registers itself on import. */
 export const calculators: readonly CalculatorDefinition[] = [
