@@ -62,9 +62,20 @@ interface Figures {
  */
 const pageProbe = (expected: number) => `
   window.__cls = 0;
+  window.__shifts = [];
   window.__usableAt = null;
+  const describe = (n) => !n ? '?' : n.nodeType === 1
+    ? n.localName + (n.getAttribute('data-wickstone') ? '[data-wickstone=' + n.getAttribute('data-wickstone') + ']' : n.className ? '.' + String(n.className).split(' ')[0] : '')
+    : '#text';
   new PerformanceObserver((list) => {
-    for (const e of list.getEntries()) if (!e.hadRecentInput) window.__cls += e.value;
+    for (const e of list.getEntries()) {
+      if (e.hadRecentInput) continue;
+      window.__cls += e.value;
+      // What moved, for BENCH_DEBUG: each shifted node, where it was and where it went (y, height).
+      window.__shifts.push(e.value.toFixed(4) + ' ' + (e.sources || []).map((s) =>
+        describe(s.node) + ' y ' + Math.round(s.previousRect.y) + '→' + Math.round(s.currentRect.y) +
+        ' h ' + Math.round(s.previousRect.height) + '→' + Math.round(s.currentRect.height)).join(', '));
+    }
   }).observe({ type: 'layout-shift', buffered: true });
   const usable = () => {
     const hosts = [...document.querySelectorAll('wickstone-widget')];
@@ -169,6 +180,8 @@ async function measure(browser: Browser, path: string, expected: number, typing:
     typingMs = (await page.evaluate(typeAndWait)) as number;
   }
   const cls = await page.evaluate(() => (window as unknown as { __cls: number }).__cls);
+  for (const shift of await page.evaluate(() => (window as unknown as { __shifts: string[] }).__shifts))
+    log(`layout shift ${shift}`);
   const heights = await page.evaluate(() =>
     ((window as unknown as { __heights?: string[] }).__heights ?? []).join(' '),
   );
