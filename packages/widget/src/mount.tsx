@@ -116,9 +116,10 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
     }
     reporterKey = key;
     const releaseBase = bundle.releaseBase;
-    // A shipped font is fetched with the extras, after first paint; until then the fallback stack shows.
+    // A shipped font is fetched with the extras, after first paint, and used from a still moment
+    // on (the visitor's Calculate, or the widget out of view); until then the fallback stack shows.
     if (widget.settings.look.font === 'manrope' && releaseBase !== null)
-      withExtras((extras) => extras.registerManrope(document.fonts, releaseBase));
+      withExtras((extras) => extras.registerManrope(document.fonts, releaseBase, host, shadow));
     host.setAttribute('data-mode', preview ? 'preview' : 'live');
     host.setAttribute('data-state', 'ready');
     render(
