@@ -2,7 +2,8 @@
 // with the CPU slowed four times: for one widget of each calculator and for the demo firm's page
 // with two widgets, the requests and compressed bytes the app sent before the calculator could be
 // used, the bytes after the page went quiet, the time to usable, the cumulative layout shift and
-// the time from typing a value to seeing its result. The baseline, measured in the same run under
+// the time from typing a value to seeing its result, how many runtimes the page fetched and whether
+// the shipped font came before or after the calculator was usable. The baseline, measured in the same run under
 // the same profile, is the firm's page with no widget on it.
 //
 // A benchmark, not a test: it prints figures and asserts nothing. Needs the built tree
@@ -53,6 +54,8 @@ interface Figures {
   cls: number;
   typingMs: number | null;
   runtimeLoads: number;
+  /** The shipped font: not fetched, or fetched before or after the calculator was usable. */
+  font: 'none' | 'before' | 'after';
   heights: string;
 }
 
@@ -199,6 +202,11 @@ async function measure(browser: Browser, path: string, expected: number, typing:
     cls,
     typingMs,
     runtimeLoads: total.filter(([u]) => /runtime/.test(u)).length,
+    font: atUsable.some(([u]) => u.endsWith('.woff2'))
+      ? 'before'
+      : total.some(([u]) => u.endsWith('.woff2'))
+        ? 'after'
+        : 'none',
     heights,
   };
 }
@@ -267,11 +275,11 @@ try {
   );
   console.log(`baseline: the firm's page with no widget, loaded in ${ms(base.usableMs)}`);
   console.log(
-    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'CLS'.padStart(8)}${'type→result'.padStart(13)}${'runtimes'.padStart(10)}   shown/held px`,
+    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'CLS'.padStart(8)}${'type→result'.padStart(13)}${'runtimes'.padStart(10)}${'font'.padStart(8)}   shown/held px`,
   );
   const row = (name: string, f: Figures) =>
     console.log(
-      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${f.cls.toFixed(3).padStart(8)}${ms(f.typingMs).padStart(13)}${String(f.runtimeLoads).padStart(10)}   ${f.heights}`,
+      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${f.cls.toFixed(3).padStart(8)}${ms(f.typingMs).padStart(13)}${String(f.runtimeLoads).padStart(10)}${f.font.padStart(8)}   ${f.heights}`,
     );
   for (const name of snippets.keys())
     row(name, await measure(browser, `/one/${encodeURIComponent(name)}`, 1, true));
