@@ -1,8 +1,9 @@
 // Builds the widget release dist/releases/<version>/: a small loader per calculator (what snippets
-// point at), the shared runtime, an engine per calculator, the extras that follow first paint, the
-// Manrope variable font, a brotli and a gzip copy of every script, and manifest.json (file names,
-// SRI hashes, sizes). Fails when any calculator's first flight (its loader, the runtime and its
-// engine, compressed) is over 14 KB, printing every figure. Only this version's folder is ever
+// point at), the shared runtime, an engine per calculator, each calculator's texts and the extras
+// that follow first paint, the Manrope variable font, a brotli and a gzip copy of every script, and
+// manifest.json (file names, SRI hashes, sizes). Fails when any calculator's first flight (its
+// loader, the runtime and its engine, compressed) is over FLIGHT_LIMIT, or carries texts, printing
+// every figure. Only this version's folder is ever
 // written: earlier releases stay byte-for-byte as published (embed snippets pin them by SRI hash).
 import {
   copyFileSync,
@@ -63,7 +64,7 @@ const files = {};
 const chunkFigures = {};
 console.log(`Wickstone widget ${widgetVersion} (calc-core ${calcCoreVersion})`);
 try {
-  const { files: chunks, engines, extras } = await buildChunks(calculators.map((c) => c.id));
+  const { files: chunks, engines, texts, extras } = await buildChunks(calculators.map((c) => c.id));
   for (const [name, chunk] of chunks) {
     const m = emit(name, chunk.code);
     chunkFigures[name] = {
@@ -90,8 +91,15 @@ try {
     const engine = engines[calc.id];
     if (!engine) throw new Error(`no engine chunk for ${calc.id}`);
     const file = `wickstone-${calc.id}.js`;
-    const loader = emit(file, await buildLoader(calc.id, calcCoreVersion, chunks, engine, extras));
+    const loader = emit(
+      file,
+      await buildLoader(calc.id, calcCoreVersion, chunks, engine, texts[calc.id], extras),
+    );
     const flight = [...closure(chunks, engine)];
+    for (const f of flight.filter((x) => chunks.get(x).hasTexts))
+      failures.push(
+        `${f}, in ${calc.id}'s first flight, carries a calculator's texts: import them only from <id>.texts.ts`,
+      );
     const gzip = loader.gzipBytes + flight.reduce((s, f) => s + chunkFigures[f].gzipBytes, 0);
     const brotli = loader.brotliBytes + flight.reduce((s, f) => s + chunkFigures[f].brotliBytes, 0);
     files[calc.id] = {
@@ -101,6 +109,7 @@ try {
       gzipBytes: loader.gzipBytes,
       brotliBytes: loader.brotliBytes,
       engine,
+      texts: texts[calc.id],
       firstFlight: { files: [file, ...flight], gzipBytes: gzip, brotliBytes: brotli },
     };
     // Judged on brotli, what browsers get over HTTPS; gzip is printed beside it.

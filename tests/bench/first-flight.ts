@@ -2,7 +2,8 @@
 // with the CPU slowed four times: for one widget of each calculator and for the demo firm's page
 // with two widgets, the requests and compressed bytes the app sent before the calculator could be
 // used, the bytes after the page went quiet, the time to usable, the cumulative layout shift and
-// the time from typing a value to seeing its result. The baseline, measured in the same run under
+// the time from typing a value to seeing its result, how many runtimes the page fetched and whether
+// the shipped font came before or after the calculator was usable. The baseline, measured in the same run under
 // the same profile, is the firm's page with no widget on it.
 //
 // A benchmark, not a test: it prints figures and asserts nothing. Needs the built tree
@@ -53,6 +54,8 @@ interface Figures {
   cls: number;
   typingMs: number | null;
   runtimeLoads: number;
+  /** The shipped font: not fetched, or fetched before or after the calculator was usable. */
+  font: 'none' | 'before' | 'after';
   heights: string;
 }
 
@@ -62,9 +65,20 @@ interface Figures {
  */
 const pageProbe = (expected: number) => `
   window.__cls = 0;
+  window.__shifts = [];
   window.__usableAt = null;
+  const describe = (n) => !n ? '?' : n.nodeType === 1
+    ? n.localName + (n.getAttribute('data-wickstone') ? '[data-wickstone=' + n.getAttribute('data-wickstone') + ']' : n.className ? '.' + String(n.className).split(' ')[0] : '')
+    : '#text';
   new PerformanceObserver((list) => {
-    for (const e of list.getEntries()) if (!e.hadRecentInput) window.__cls += e.value;
+    for (const e of list.getEntries()) {
+      if (e.hadRecentInput) continue;
+      window.__cls += e.value;
+      // What moved, for BENCH_DEBUG: each shifted node, where it was and where it went (y, height).
+      window.__shifts.push(e.value.toFixed(4) + ' at ' + Math.round(e.startTime) + ' ms: ' + (e.sources || []).map((s) =>
+        describe(s.node) + ' y ' + Math.round(s.previousRect.y) + '→' + Math.round(s.currentRect.y) +
+        ' h ' + Math.round(s.previousRect.height) + '→' + Math.round(s.currentRect.height)).join(', '));
+    }
   }).observe({ type: 'layout-shift', buffered: true });
   const usable = () => {
     const hosts = [...document.querySelectorAll('wickstone-widget')];
@@ -164,11 +178,15 @@ async function measure(browser: Browser, path: string, expected: number, typing:
   // Quiet: nothing started or finished for a while.
   while (Date.now() - last < QUIET_MS) await new Promise((r) => setTimeout(r, 200));
 
+  // Layout shift while the widget appears and settles, before the visitor does anything (the
+  // typing below is scripted, not trusted input, so what it moves would count as if unprompted).
+  const cls = await page.evaluate(() => (window as unknown as { __cls: number }).__cls);
+  for (const shift of await page.evaluate(() => (window as unknown as { __shifts: string[] }).__shifts))
+    log(`layout shift ${shift}`);
   let typingMs: number | null = null;
   if (typing) {
     typingMs = (await page.evaluate(typeAndWait)) as number;
   }
-  const cls = await page.evaluate(() => (window as unknown as { __cls: number }).__cls);
   const heights = await page.evaluate(() =>
     ((window as unknown as { __heights?: string[] }).__heights ?? []).join(' '),
   );
@@ -184,6 +202,11 @@ async function measure(browser: Browser, path: string, expected: number, typing:
     cls,
     typingMs,
     runtimeLoads: total.filter(([u]) => /runtime/.test(u)).length,
+    font: atUsable.some(([u]) => u.endsWith('.woff2'))
+      ? 'before'
+      : total.some(([u]) => u.endsWith('.woff2'))
+        ? 'after'
+        : 'none',
     heights,
   };
 }
@@ -204,7 +227,8 @@ const site = createServer((req, res) => {
   if (url.pathname === '/')
     html = sitePage(snippets.get('tube-rise') ?? '', snippets.get('soil-capillary-rise') ?? '');
   else if (url.pathname === '/plain') html = sitePage('', '');
-  else if (url.pathname.startsWith('/one/')) html = sitePage(snippets.get(url.pathname.slice(5)) ?? '', '');
+  else if (url.pathname.startsWith('/one/'))
+    html = sitePage(snippets.get(decodeURIComponent(url.pathname.slice(5))) ?? '', '');
   if (html === null) return void res.writeHead(404).end();
   res.writeHead(200, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' }).end(html);
 });
@@ -216,7 +240,13 @@ try {
   console.log('seeded');
   const owner = new TestClient(app);
   await owner.login(org.users.owner.email, org.users.owner.password);
-  for (const calc of calculators) {
+  // Every calculator with the default look (the shipped Manrope), and the first again with the
+  // visitor's system fonts: the font arrives after first paint, and its swap can move text.
+  const systemFont = `${calculators[0]!.id}, system font`;
+  for (const [name, calc, font] of [
+    ...calculators.map((c) => [c.id, c, null] as const),
+    [systemFont, calculators[0]!, 'system-sans'] as const,
+  ]) {
     const created = await owner
       .post(`/orgs/${org.id}/widgets`, {
         name: calc.title,
@@ -224,11 +254,13 @@ try {
         allowedOrigins: [siteOrigin],
       })
       .expect(201);
-    const settings: WidgetSettings = defaultWidgetSettings();
+    const defaults: WidgetSettings = defaultWidgetSettings();
+    const settings: WidgetSettings =
+      font === null ? defaults : { ...defaults, look: { ...defaults.look, font } };
     const live = await owner
       .patch(`/orgs/${org.id}/widgets/${(created.body as { id: number }).id}`, { status: 'live', settings })
       .expect(200);
-    snippets.set(calc.id, (live.body as { embed: { snippet: string } }).embed.snippet);
+    snippets.set(name, (live.body as { embed: { snippet: string } }).embed.snippet);
   }
   console.log(`${snippets.size} widgets live; launching Chromium`);
   browser = await launchBrowser();
@@ -243,13 +275,14 @@ try {
   );
   console.log(`baseline: the firm's page with no widget, loaded in ${ms(base.usableMs)}`);
   console.log(
-    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'CLS'.padStart(8)}${'type→result'.padStart(13)}${'runtimes'.padStart(10)}   shown/held px`,
+    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'CLS'.padStart(8)}${'type→result'.padStart(13)}${'runtimes'.padStart(10)}${'font'.padStart(8)}   shown/held px`,
   );
   const row = (name: string, f: Figures) =>
     console.log(
-      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${f.cls.toFixed(3).padStart(8)}${ms(f.typingMs).padStart(13)}${String(f.runtimeLoads).padStart(10)}   ${f.heights}`,
+      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${f.cls.toFixed(3).padStart(8)}${ms(f.typingMs).padStart(13)}${String(f.runtimeLoads).padStart(10)}${f.font.padStart(8)}   ${f.heights}`,
     );
-  for (const calc of calculators) row(calc.id, await measure(browser, `/one/${calc.id}`, 1, true));
+  for (const name of snippets.keys())
+    row(name, await measure(browser, `/one/${encodeURIComponent(name)}`, 1, true));
   row('two widgets (demo page)', await measure(browser, '/', 2, true));
 
   // BENCH_SHOTS=<dir>: the demo page at desktop and phone widths, unthrottled, once settled.

@@ -6,7 +6,7 @@ import { QueryTypes } from 'sequelize';
 import type { Browser, BrowserContext, Locator, Page, Request } from 'playwright-core';
 import { contrastRatio } from '@wickstone/contracts';
 import { makePng, seedOrgWithTeam, type FixtureOrg } from '@wickstone/server/testing';
-import { launchBrowser } from '../support/browser.js';
+import { launchBrowser, screenshot } from '../support/browser.js';
 import { startApp, type RunningApp } from '../support/server.js';
 
 /*
@@ -382,6 +382,14 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     const jurin = (4 * 0.07274) / (998.2 * 9.80665 * 0.001016);
     expect(Number(await rise.getAttribute('data-value'))).toBeCloseTo(jurin, 4);
     expect(await widget.locator('[data-caution="firm"]').textContent()).toContain(firmCaution);
+    // The calculator's own cautions come with its texts chunk, after first paint, and are listed too.
+    for (const code of ['ESTIMATE_ONLY', 'CLEAN_SURFACES', 'DAMP_DIAGNOSIS'])
+      await widget.locator(`[data-caution="${code}"]`).waitFor({ timeout: 20_000 });
+    // For looking at (E2E_SCREENSHOTS): the result with its cautions, at desktop and phone widths.
+    await screenshot(page, 'widget-result-1280');
+    await page.setViewportSize({ width: 390, height: 800 });
+    await screenshot(page, 'widget-result-390');
+    await page.setViewportSize({ width: 1280, height: 800 });
     expect(await widget.locator('[data-warning="BORE_NOT_SMALL"]').count()).toBe(0);
     // What the visitor can file: the assumptions, the engine version and the input hash; no hazard for water.
     expect(await widget.locator('[data-wickstone="assumptions"] li').count()).toBeGreaterThan(3);

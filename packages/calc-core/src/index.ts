@@ -1,5 +1,6 @@
 // Public API of @wickstone/calc-core. Each calculator is also its own subpath
-// (`@wickstone/calc-core/calculators/<id>`) so a widget bundles only the one it shows.
+// (`@wickstone/calc-core/calculators/<id>`: its core, what computes) so a widget bundles only the
+// one it shows; its texts (`calculators/<id>.texts`) follow after first paint.
 
 export { VERSION } from './version.js';
 export { formatValue, formatInput, parseNumber } from './format.js';
@@ -83,22 +84,31 @@ export {
 
 export { canonicalJson, sha256Hex, type JsonValue } from './hash.js';
 export { runCalculation, resolveInputs, hashInputs, resultsAgree } from './calculators/engine.js';
-export { calculators, calculatorIds, getCalculator, calculate, type CalculatorId } from './registry.js';
-export { calculator as tubeRiseCalculator } from './calculators/tube-rise.js';
-export { calculator as slotRiseCalculator } from './calculators/slot-rise.js';
-export { calculator as soilCapillaryRiseCalculator } from './calculators/soil-capillary-rise.js';
-export { calculator as interfacePressureCalculator } from './calculators/interface-pressure.js';
-export { calculator as wettingForceCalculator } from './calculators/wetting-force.js';
-export { calculator as wickingTimeCalculator } from './calculators/wicking-time.js';
-export { calculator as contactAngleFromForceCalculator } from './calculators/contact-angle-from-force.js';
-export { calculator as tensionFromRiseCalculator } from './calculators/tension-from-rise.js';
-export { calculator as risingDampHeightCalculator } from './calculators/rising-damp-height.js';
-export { calculator as frostScreeningCalculator } from './calculators/frost-screening.js';
+export {
+  calculators,
+  calculatorIds,
+  getCalculator,
+  calculate,
+  withTexts,
+  tubeRise as tubeRiseCalculator,
+  slotRise as slotRiseCalculator,
+  soilCapillaryRise as soilCapillaryRiseCalculator,
+  interfacePressure as interfacePressureCalculator,
+  wettingForce as wettingForceCalculator,
+  wickingTime as wickingTimeCalculator,
+  contactAngleFromForce as contactAngleFromForceCalculator,
+  tensionFromRise as tensionFromRiseCalculator,
+  risingDampHeight as risingDampHeightCalculator,
+  frostScreening as frostScreeningCalculator,
+  type CalculatorId,
+} from './registry.js';
 export type {
   Band,
   BandBasis,
   CalculationResult,
+  CalculatorCore,
   CalculatorDefinition,
+  CalculatorTexts,
   Caution,
   ChoiceInput,
   ChoiceOption,

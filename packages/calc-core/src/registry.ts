@@ -1,16 +1,56 @@
 import { CalcInputError } from './errors.js';
 import { runCalculation } from './calculators/engine.js';
-import { calculator as contactAngleFromForce } from './calculators/contact-angle-from-force.js';
-import { calculator as frostScreening } from './calculators/frost-screening.js';
-import { calculator as interfacePressure } from './calculators/interface-pressure.js';
-import { calculator as risingDampHeight } from './calculators/rising-damp-height.js';
-import { calculator as slotRise } from './calculators/slot-rise.js';
-import { calculator as soilCapillaryRise } from './calculators/soil-capillary-rise.js';
-import { calculator as tensionFromRise } from './calculators/tension-from-rise.js';
-import { calculator as tubeRise } from './calculators/tube-rise.js';
-import type { CalculationResult, CalculatorDefinition } from './calculators/types.js';
-import { calculator as wettingForce } from './calculators/wetting-force.js';
-import { calculator as wickingTime } from './calculators/wicking-time.js';
+import { calculator as contactAngleFromForceCore } from './calculators/contact-angle-from-force.js';
+import { texts as contactAngleFromForceTexts } from './calculators/contact-angle-from-force.texts.js';
+import { calculator as frostScreeningCore } from './calculators/frost-screening.js';
+import { texts as frostScreeningTexts } from './calculators/frost-screening.texts.js';
+import { calculator as interfacePressureCore } from './calculators/interface-pressure.js';
+import { texts as interfacePressureTexts } from './calculators/interface-pressure.texts.js';
+import { calculator as risingDampHeightCore } from './calculators/rising-damp-height.js';
+import { texts as risingDampHeightTexts } from './calculators/rising-damp-height.texts.js';
+import { calculator as slotRiseCore } from './calculators/slot-rise.js';
+import { texts as slotRiseTexts } from './calculators/slot-rise.texts.js';
+import { calculator as soilCapillaryRiseCore } from './calculators/soil-capillary-rise.js';
+import { texts as soilCapillaryRiseTexts } from './calculators/soil-capillary-rise.texts.js';
+import { calculator as tensionFromRiseCore } from './calculators/tension-from-rise.js';
+import { texts as tensionFromRiseTexts } from './calculators/tension-from-rise.texts.js';
+import { calculator as tubeRiseCore } from './calculators/tube-rise.js';
+import { texts as tubeRiseTexts } from './calculators/tube-rise.texts.js';
+import type {
+  CalculationResult,
+  CalculatorCore,
+  CalculatorDefinition,
+  CalculatorTexts,
+} from './calculators/types.js';
+import { calculator as wettingForceCore } from './calculators/wetting-force.js';
+import { texts as wettingForceTexts } from './calculators/wetting-force.texts.js';
+import { calculator as wickingTimeCore } from './calculators/wicking-time.js';
+import { texts as wickingTimeTexts } from './calculators/wicking-time.texts.js';
+
+/** A calculator whole: its core (what computes) and its texts (cautions, references). */
+export function withTexts(core: CalculatorCore, texts: CalculatorTexts): CalculatorDefinition {
+  return { ...core, ...texts };
+}
+
+export const tubeRise: CalculatorDefinition = withTexts(tubeRiseCore, tubeRiseTexts);
+export const slotRise: CalculatorDefinition = withTexts(slotRiseCore, slotRiseTexts);
+export const soilCapillaryRise: CalculatorDefinition = withTexts(
+  soilCapillaryRiseCore,
+  soilCapillaryRiseTexts,
+);
+export const interfacePressure: CalculatorDefinition = withTexts(
+  interfacePressureCore,
+  interfacePressureTexts,
+);
+export const wettingForce: CalculatorDefinition = withTexts(wettingForceCore, wettingForceTexts);
+export const wickingTime: CalculatorDefinition = withTexts(wickingTimeCore, wickingTimeTexts);
+export const contactAngleFromForce: CalculatorDefinition = withTexts(
+  contactAngleFromForceCore,
+  contactAngleFromForceTexts,
+);
+export const tensionFromRise: CalculatorDefinition = withTexts(tensionFromRiseCore, tensionFromRiseTexts);
+export const risingDampHeight: CalculatorDefinition = withTexts(risingDampHeightCore, risingDampHeightTexts);
+export const frostScreening: CalculatorDefinition = withTexts(frostScreeningCore, frostScreeningTexts);
 
 /** Every calculator, in the order a picker shows them. Registered by hand: nothing registers itself on import. */
 export const calculators: readonly CalculatorDefinition[] = [

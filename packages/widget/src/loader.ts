@@ -2,13 +2,13 @@
 // the shared `window.Wickstone`, reserves the widget's place right after its tag, asks for the
 // widget's settings while it fetches the runtime (shared by every widget of the release on the
 // page) and this calculator's engine, each checked against the SRI hash this file carries, then
-// renders. Everything else (working, sources, the lead form, fonts) is fetched after first paint.
+// renders. Everything else (the calculator's cautions and references, working, the lead form, the
+// run reporter, fonts) is fetched after first paint.
 // It exports nothing, so the IIFE defines no global of its own.
 import { chunkLoader, installRegistry, type ChunkRegistry, type ChunkTable } from './chunks.js';
 import { installGlobal, type MountHandle, type MountOptions } from './global.js';
 import { isEmbedWidget } from './lib/shape.js';
-import { request } from './lib/transport.js';
-import type { Engine } from './engine.js';
+import type { Engine, TextsChunk } from './engine.js';
 import type { ExtrasModule } from './lazy.js';
 import {
   apiBaseFor,
@@ -23,6 +23,8 @@ declare const __WICKSTONE_CALCULATOR__: string;
 declare const __WICKSTONE_CALC_CORE_VERSION__: string;
 /** The engine chunk of this calculator. */
 declare const __WICKSTONE_ENGINE__: string;
+/** This calculator's texts chunk (cautions, references): follows first paint. */
+declare const __WICKSTONE_TEXTS__: string;
 /** The extras chunk: what follows first paint. */
 declare const __WICKSTONE_EXTRAS__: string;
 /** Every chunk this loader may fetch, with its SRI hash and static imports. */
@@ -63,6 +65,7 @@ function mount(element: Element, first: MountOptions): MountHandle {
           run: e.run,
           releaseBase,
           defaultApiBase: script ? apiBaseFor(script.src, null) : null,
+          texts: load && (() => load(__WICKSTONE_TEXTS__) as Promise<TextsChunk>),
           extras: load && (() => load(__WICKSTONE_EXTRAS__) as Promise<ExtrasModule>),
         },
         element,
@@ -86,6 +89,29 @@ function mount(element: Element, first: MountOptions): MountHandle {
   };
 }
 
+/**
+ * The widget's settings: a plain GET, asked again after 1 s and 3 s when the network fails or the
+ * server answers 5xx. Fewer retries than a run report (the reporter's transport follows with the
+ * extras): a page the widget may not be embedded on sees a refused CORS read, which looks exactly
+ * like a network failure, and asking again will not change it. Status 0: no answer at all.
+ */
+async function getSettings(url: string): Promise<{ status: number; body: unknown }> {
+  for (const wait of [1000, 3000, -1]) {
+    let status = 0;
+    let body: unknown = null;
+    try {
+      const res = await fetch(url, { credentials: 'omit', mode: 'cors' });
+      status = res.status;
+      body = await res.json().catch(() => null);
+    } catch {
+      // no answer: asked again below
+    }
+    if ((status > 0 && status < 500) || wait < 0) return { status, body };
+    await new Promise((r) => setTimeout(r, wait));
+  }
+  return { status: 0, body: null };
+}
+
 async function place(tag: HTMLScriptElement, key: string): Promise<void> {
   tag.setAttribute(PLACED_ATTR, '');
   const host = insertHost(tag, calculatorId);
@@ -102,9 +128,7 @@ async function place(tag: HTMLScriptElement, key: string): Promise<void> {
   // The code and the settings travel at the same time.
   const code = engine();
   code.catch(() => undefined);
-  // Fewer retries than a run report: a page the widget may not be embedded on sees a refused
-  // CORS read, which looks exactly like a network failure, and asking again will not change it.
-  const reply = await request(`${apiBase}/api/v1/embed/widgets/${key}`, undefined, { delays: [1000, 3000] });
+  const reply = await getSettings(`${apiBase}/api/v1/embed/widgets/${key}`);
   if (reply.status === 403) return unavailable('this site is not one the widget may be embedded on');
   if (reply.status === 404) return unavailable('the widget is not live (draft, paused or unknown key)');
   if (reply.status !== 200 || !isEmbedWidget(reply.body))

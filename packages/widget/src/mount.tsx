@@ -1,9 +1,11 @@
-import type { CalculationResult, CalculatorDefinition } from '@wickstone/calc-core';
+import type { CalculationResult, CalculatorCore, CalculatorDefinition } from '@wickstone/calc-core';
+import type { TextsChunk } from './engine.js';
 import { render } from 'preact';
 import type { MountHandle, MountOptions } from './global.js';
-import { createReporter, type Reporter } from './lib/reporter.js';
+import type { Reporter } from './lib/reporter.js';
+import { newRunId } from './lib/run-id.js';
 import { App } from './ui/App.js';
-import { loadExtras, withExtras, type ExtrasModule } from './lazy.js';
+import { deferredReporter, loadExtras, withExtras, type ExtrasModule } from './lazy.js';
 import { HOST_TAG } from './placement.js';
 import css from './ui/styles.css?inline';
 
@@ -57,13 +59,16 @@ function hostIn(element: Element, calculatorId: string): { host: HTMLElement; ma
 }
 
 export interface Bundle {
-  readonly calculator: CalculatorDefinition;
+  /** The calculator's core; its texts follow (`texts`). A whole definition is taken as it is. */
+  readonly calculator: CalculatorCore | CalculatorDefinition;
   readonly run: (inputs: unknown) => CalculationResult;
   /** The release folder this bundle was loaded from (fonts), or null when unknown. */
   readonly releaseBase: string | null;
   /** The server the bundle came from: the default for runs and leads. */
   readonly defaultApiBase: string | null;
-  /** Fetches the extras chunk (working, lead form, font); null where there is none to fetch. */
+  /** Fetches the calculator's texts (cautions, references); null where there is none to fetch. */
+  readonly texts?: (() => Promise<TextsChunk>) | null;
+  /** Fetches the extras chunk (working, lead form, run reporter, font); null where there is none to fetch. */
   readonly extras: (() => Promise<ExtrasModule>) | null;
 }
 
@@ -72,7 +77,8 @@ export interface Bundle {
  * into the same element updates it in place, keeping what the visitor typed.
  */
 export function mountWidget(bundle: Bundle, element: Element, first: MountOptions): MountHandle {
-  const { calculator } = bundle;
+  // Until the texts arrive the calculator has no cautions or references of its own to show.
+  let calculator: CalculatorDefinition = { cautions: [], references: [], ...bundle.calculator };
   const { host, made } = hostIn(element, calculator.id);
   host.setAttribute('data-wickstone', 'host');
   host.setAttribute('data-calculator', calculator.id);
@@ -89,7 +95,10 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
 
   let reporter: Reporter | null = null;
   let reporterKey = '';
+  let latest = first;
+  let gone = false;
   const draw = (options: MountOptions): void => {
+    latest = options;
     const { widget } = options;
     if (widget.calculatorId !== calculator.id) {
       throw new Error(`Wickstone: this bundle renders "${calculator.id}", not "${widget.calculatorId}"`);
@@ -102,13 +111,15 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
     const key = `${apiBase ?? ''} ${widget.publicKey}`;
     if (apiBase === null) reporter = null;
     else if (reporter === null || key !== reporterKey) {
-      reporter = createReporter({ apiBase, publicKey: widget.publicKey, href: () => location.href });
+      const args = { apiBase, publicKey: widget.publicKey, href: () => location.href };
+      reporter = deferredReporter((extras) => extras.createReporter(args), newRunId);
     }
     reporterKey = key;
     const releaseBase = bundle.releaseBase;
-    // A shipped font is fetched with the extras, after first paint; until then the fallback stack shows.
+    // A shipped font is fetched with the extras, after first paint, and used from a still moment
+    // on (the visitor's Calculate, or the widget out of view); until then the fallback stack shows.
     if (widget.settings.look.font === 'manrope' && releaseBase !== null)
-      withExtras((extras) => extras.registerManrope(document.fonts, releaseBase));
+      withExtras((extras) => extras.registerManrope(document.fonts, releaseBase, host, shadow));
     host.setAttribute('data-mode', preview ? 'preview' : 'live');
     host.setAttribute('data-state', 'ready');
     render(
@@ -117,7 +128,19 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
     );
   };
   draw(first);
-  // The working, the lead form and the font follow first paint; extras already here were used above.
+  // The calculator's texts, the working, the lead form, the reporter and the font follow first
+  // paint; extras already here were used above.
+  const fetchTexts = bundle.texts;
+  if (fetchTexts)
+    afterFirstPaint(() => {
+      fetchTexts().then(
+        ({ texts }) => {
+          calculator = { ...calculator, ...texts };
+          if (!gone) draw(latest);
+        },
+        (err: unknown) => console.warn('Wickstone: the cautions and references could not be loaded', err),
+      );
+    });
   const fetchExtras = bundle.extras;
   if (fetchExtras)
     afterFirstPaint(() => {
@@ -128,6 +151,7 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
   return {
     update: draw,
     unmount() {
+      gone = true;
       stopWaiting();
       render(null, target);
       if (made) host.remove();

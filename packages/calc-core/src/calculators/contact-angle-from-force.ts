@@ -3,20 +3,17 @@ import { angleOf, ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-read
 import { runner } from './engine.js';
 import {
   choice,
-  CLEAN_SURFACES_CAUTION,
-  ESTIMATE_CAUTION,
   fmt,
   gravityAssumption,
   gravityInput,
   MM,
   num,
-  OTHER_LIQUID_CAUTION,
   q,
   quantityInput,
   solved,
   warning,
 } from './shared.js';
-import type { CalculatorDefinition, InputValues, Solution, Warning, WorkingStep } from './types.js';
+import type { CalculatorCore, InputValues, Solution, Warning, WorkingStep } from './types.js';
 
 const cycle = [{ input: 'readings', values: ['cycle'] }] as const;
 const WILHELMY = 'Wilhelmy 1863, with the buoyancy of the immersed plate';
@@ -201,7 +198,7 @@ function forceInput(
   defaultN: number,
   help: string,
   when?: typeof cycle,
-): CalculatorDefinition['inputs'][number] {
+): CalculatorCore['inputs'][number] {
   return quantityInput('force', id, label, defaultN, [-0.1, 0.1], {
     help,
     display: { si: 'mN', us: 'mN' },
@@ -209,7 +206,7 @@ function forceInput(
   });
 }
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'contact-angle-from-force',
   title: 'Contact angle from a Wilhelmy plate force',
   summary:
@@ -283,40 +280,6 @@ export const calculator: CalculatorDefinition = {
         'The withdrawal force is below the immersion force: the readings look swapped, no hysteresis is given.',
     },
     ANGLE_POORLY_DETERMINED,
-  ],
-  cautions: [
-    ESTIMATE_CAUTION,
-    OTHER_LIQUID_CAUTION,
-    {
-      code: 'PLATE_PREPARATION',
-      text: 'The angle belongs to the plate as tested: its surface must be clean, uniform on every side and free of swelling or dissolution in the liquid; a trace of contamination on the plate or the liquid changes the angle more than any correction.',
-    },
-    CLEAN_SURFACES_CAUTION,
-  ],
-  references: [
-    {
-      id: 'wilhelmy-1863',
-      citation:
-        'Wilhelmy L. (1863) Ueber die Abhängigkeit der Capillaritäts-Constanten des Alkohols von Substanz und Gestalt des benetzten festen Körpers, Ann. Phys. 195, 177–217',
-      usedFor: 'the plate force balance F = σ·P·cos θ − B',
-      basis: 'printed',
-    },
-    {
-      id: 'astm-d1331',
-      citation:
-        'ASTM D1331-20, Standard Test Methods for Surface and Interfacial Tension of Solutions of Paints, Solvents, Solutions of Surface-Active Agents, and Related Materials',
-      usedFor:
-        'Method C, surface tension by the Wilhelmy plate read at zero depth with no buoyancy correction (scope as published); this calculator runs the same balance backwards for the angle, with buoyancy',
-      basis: 'printed',
-    },
-    {
-      id: 'iso-19403',
-      citation:
-        'ISO 19403 series, Paints and varnishes — Wettability (ISO 19403-1:2017 general principles; ISO 19403-6:2024 dynamic advancing and receding angles by changing the volume of a drop)',
-      usedFor:
-        'the optical contact-angle methods (as its published scope says) that a force-derived angle is compared with; the force method itself is not in the series',
-      basis: 'printed',
-    },
   ],
   solve,
 };

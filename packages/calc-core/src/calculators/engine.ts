@@ -8,7 +8,8 @@ import type {
   Band,
   BandBasis,
   CalculationResult,
-  CalculatorDefinition,
+  CalculatorCore,
+  CalculatorTexts,
   InputDefinition,
   InputValues,
   Outputs,
@@ -33,7 +34,7 @@ function rangeText(input: QuantityInput): string {
  * @returns the resolved inputs, in the definition's order, only those that apply
  * @throws CalcInputError listing every bad field at once
  */
-export function resolveInputs(def: CalculatorDefinition, raw: unknown): InputValues {
+export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
   if (!isPlainObject(raw)) {
     throw new CalcInputError({
       field: 'inputs',
@@ -92,7 +93,7 @@ export function resolveInputs(def: CalculatorDefinition, raw: unknown): InputVal
   return resolved;
 }
 
-function checkSolution(def: CalculatorDefinition, solution: Solution): void {
+function checkSolution(def: CalculatorCore, solution: Solution): void {
   // A definition that breaks its own contract is a bug in calc-core, not a bad input: plain Error.
   const { outputs, warnings, working } = solution;
   for (const out of def.outputs) {
@@ -122,11 +123,15 @@ export function hashInputs(calculatorId: string, inputs: InputValues): string {
 
 /**
  * Runs one calculator: validates, solves, stamps the version and the input hash. Deterministic
- * and JSON-serialisable, so the server can re-run a visitor's inputs and compare.
+ * and JSON-serialisable, so the server can re-run a visitor's inputs and compare. A core without
+ * its texts gives a result whose cautions are the liquid's hazards only.
  * @param raw inputs keyed by input id, canonical units (SI, angles in degrees, temperatures in °C)
  * @throws CalcInputError listing every bad field
  */
-export function runCalculation(def: CalculatorDefinition, raw: unknown): CalculationResult {
+export function runCalculation(
+  def: CalculatorCore & Partial<CalculatorTexts>,
+  raw: unknown,
+): CalculationResult {
   const inputs = resolveInputs(def, raw);
   let solution;
   try {
@@ -146,14 +151,16 @@ export function runCalculation(def: CalculatorDefinition, raw: unknown): Calcula
     working: solution.working,
     band: solution.band,
     assumptions: solution.assumptions,
-    cautions: [...(solution.hazards ?? []), ...def.cautions],
+    cautions: [...(solution.hazards ?? []), ...(def.cautions ?? [])],
     version: VERSION,
     inputHash: hashInputs(def.id, inputs),
   };
 }
 
 /** `runCalculation` bound to one definition: the `run` each calculator subpath exports. */
-export function runner(def: CalculatorDefinition): (inputs: unknown) => CalculationResult {
+export function runner(
+  def: CalculatorCore & Partial<CalculatorTexts>,
+): (inputs: unknown) => CalculationResult {
   return (inputs) => runCalculation(def, inputs);
 }
 

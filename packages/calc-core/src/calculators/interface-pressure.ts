@@ -4,15 +4,12 @@ import { bandOver, runner } from './engine.js';
 import {
   ANGLE_FIELDS,
   choice,
-  CLEAN_SURFACES_CAUTION,
   CONTACT_ANGLE_NEAR_90,
   contactAngleInputs,
-  ESTIMATE_CAUTION,
   fmt,
   gravityAssumption,
   gravityInput,
   STATIC_ASSUMPTIONS,
-  LIQUID_TABLE_REFERENCES,
   liquidInputs,
   nearNinety,
   MM,
@@ -22,12 +19,11 @@ import {
   resolveContactAngle,
   resolveLiquid,
   warning,
-  WATER_REFERENCES,
   capillaryLengthStep,
   solved,
 } from './shared.js';
 import type {
-  CalculatorDefinition,
+  CalculatorCore,
   InputValues,
   Outputs,
   QuantityInput,
@@ -194,7 +190,7 @@ function solve(inputs: InputValues): Solution {
   return solved({ outputs, working, warnings, band, assumptions }, liquid);
 }
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'interface-pressure',
   title: 'Pressure across a curved interface',
   summary:
@@ -252,27 +248,12 @@ export const calculator: CalculatorDefinition = {
     { code: 'PORE_NON_WETTING', summary: 'θ > 90°: the liquid must be pushed into the pore.' },
     CONTACT_ANGLE_NEAR_90,
   ],
-  cautions: [
-    ESTIMATE_CAUTION,
-    {
-      code: 'REAL_PORES',
-      text: 'A soil or building material has a distribution of pore sizes and shapes; its air-entry value comes from a measured water-retention curve, and the single-pore figure is a guide to the order of magnitude.',
-    },
-    CLEAN_SURFACES_CAUTION,
-  ],
-  references: [
-    {
-      id: 'young-laplace',
-      citation:
-        'Young T. (1805) Phil. Trans. R. Soc. 95, 65–87; Laplace P. S. (1806) Traité de mécanique céleste, suppl. au livre X',
-      usedFor: 'Δp = σ(1/R₁ + 1/R₂) and its drop, bubble, jet and pore forms',
-      basis: 'printed',
-    },
-    ...WATER_REFERENCES,
-    ...LIQUID_TABLE_REFERENCES,
-  ],
   solve,
 };
 
-/** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
+/**
+ * Runs this calculator alone, from its core (what the widget's engine calls); inputs in SI keyed by
+ * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
+ * its texts: `calculate` (the registry) gives them.
+ */
 export const run = runner(calculator);

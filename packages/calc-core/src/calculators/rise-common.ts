@@ -31,7 +31,6 @@ import type {
   InputValues,
   OutputDefinition,
   Outputs,
-  Reference,
   Solution,
   Warning,
   WorkingStep,
@@ -128,14 +127,6 @@ export function riseOutputs(
     { id: geometry.ratioId, label: ratioLabel, kind: 'dimensionless' },
   ];
 }
-
-export const RAYLEIGH_REFERENCE: Reference = {
-  id: 'rayleigh-1915',
-  citation: 'Lord Rayleigh (1915) On the theory of the capillary tube, Proc. R. Soc. Lond. A 92, 184–195',
-  usedFor:
-    'the meniscus-weight correction r/3 and the small-bore condition (the slot form is derived from the same geometry)',
-  basis: 'printed',
-};
 
 export function riseInputs(sizeInput: InputDefinition): InputDefinition[] {
   return [

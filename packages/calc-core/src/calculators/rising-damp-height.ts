@@ -1,7 +1,7 @@
 import { risingDampSteadyState, STEADY_FRACTION, timeToFraction } from '../formulas/rising-damp.js';
 import { runner } from './engine.js';
-import { choice, ESTIMATE_CAUTION, fmt, num, q, quantityInput, solved, warning } from './shared.js';
-import type { CalculatorDefinition, InputValues, Solution, Warning, WorkingStep } from './types.js';
+import { choice, fmt, num, q, quantityInput, solved, warning } from './shared.js';
+import type { CalculatorCore, InputValues, Solution, Warning, WorkingStep } from './types.js';
 
 const HALL_HOFF = 'Hall & Hoff 2007, Proc. R. Soc. A 463, 1871–1884 (form from memory)';
 const DERIVED = 'sharp-front water balance of Hall & Hoff 2007, derived here';
@@ -139,7 +139,7 @@ function solve(inputs: InputValues): Solution {
   });
 }
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'rising-damp-height',
   title: 'Height of rising damp in a wall',
   summary:
@@ -221,45 +221,6 @@ export const calculator: CalculatorDefinition = {
       code: 'SLOW_APPROACH',
       summary:
         'More than ten years to approach steady state: the steady figures are a limit the wall does not reach.',
-    },
-  ],
-  cautions: [
-    ESTIMATE_CAUTION,
-    {
-      code: 'RISING_DAMP_DIAGNOSIS',
-      text: 'A calculated height is not a diagnosis. Leaks, rain penetration, condensation and hygroscopic salts wet walls more often than rising damp does: establish the source from gravimetric moisture profiles of drilled samples (BS 6576, BRE Digest 245) before specifying a damp-proof course, injection or any remedial work.',
-      source: 'BS 6576 and BRE Digest 245 (from memory)',
-    },
-    {
-      code: 'FINISHES_RAISE_DAMP',
-      text: 'Anything that lowers evaporation from the faces (cement renders, impermeable paints, tanking, raised ground or floor levels) raises the height water climbs to; removing breathable finishes can make rising damp worse, not better.',
-    },
-    {
-      code: 'STRUCTURE_AND_HEALTH',
-      text: 'Persistently wet masonry loses strength and frost resistance and can rot embedded timber; mould from damp walls is a health risk. Have a surveyor or structural engineer assess the wall under local building regulations.',
-    },
-  ],
-  references: [
-    {
-      id: 'hall-hoff-2007',
-      citation:
-        'Hall C., Hoff W. D. (2007) Rising damp: capillary rise dynamics in walls, Proc. R. Soc. A 463, 1871–1884',
-      usedFor:
-        'the sharp-front model of rising damp and its steady height h_ss = S·(b/(2eθ_w))^½ (the form recalled, the paper not seen printed here); the water held, flow, time constant and time to steady state are derived here from the same balance',
-      basis: 'from memory',
-    },
-    {
-      id: 'hall-hoff-book',
-      citation: 'Hall C., Hoff W. D., Water Transport in Brick, Stone and Concrete, Taylor & Francis',
-      usedFor: 'sorptivity and the sharp-front description of capillary absorption',
-      basis: 'from memory',
-    },
-    {
-      id: 'bs-6576-bre-245',
-      citation:
-        'BS 6576, Code of practice for diagnosis of rising damp in walls of buildings; BRE Digest 245',
-      usedFor: 'diagnosis by gravimetric moisture profiles',
-      basis: 'from memory',
     },
   ],
   solve,

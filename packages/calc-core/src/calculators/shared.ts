@@ -5,9 +5,7 @@ import {
   IAPWS_R1_76,
   IAPWS_SR6_08,
   KELL_1975,
-  KELL_SOURCE,
   TANAKA_2001,
-  TANAKA_SOURCE,
   waterDensity,
   waterSurfaceTension,
   waterViscosity,
@@ -23,7 +21,6 @@ import type {
   InputDefinition,
   InputValues,
   QuantityInput,
-  Reference,
   Solution,
   Warning,
   WorkingStep,
@@ -498,26 +495,10 @@ export function nearNinety(angleDeg: number, fields: readonly string[] = ANGLE_F
   );
 }
 
-export const ESTIMATE_CAUTION: Caution = {
-  code: 'ESTIMATE_ONLY',
-  text: 'Results are estimates from idealised published formulas. They do not replace a site investigation or the judgement of a licensed professional working under local codes.',
-};
-
-export const CLEAN_SURFACES_CAUTION: Caution = {
-  code: 'CLEAN_SURFACES',
-  text: 'Surface tension falls sharply with contamination (detergents, oils, organic matter) and contact angles depend on the cleanliness of the surface; the values assume clean liquids and surfaces.',
-};
-
 /** Attached to a result whose liquid was entered by hand: its hazards are unknown to the table. */
 export const OTHER_LIQUID_CAUTION: Caution = {
   code: 'OTHER_LIQUID_HAZARD',
   text: "The liquid's hazards are not known to this calculator: read its safety data sheet before handling it.",
-};
-
-export const DAMP_CAUTION: Caution = {
-  code: 'DAMP_DIAGNOSIS',
-  text: 'A rise in a tube, slot or crack is not the height of rising damp in a wall: in a wall, evaporation from its faces limits how high water climbs, and salts, the pore structure and the history of the masonry change it. Diagnose damp from gravimetric moisture profiles of drilled samples (BS 6576, BRE Digest 245) before specifying damp-proofing or remedial work.',
-  source: 'BS 6576 and BRE Digest 245 (from memory)',
 };
 
 /** The assumptions every capillary result shares. */
@@ -560,67 +541,6 @@ export function gravityAssumption(g: number): string {
     ? `Standard gravity, ${coef(STANDARD_GRAVITY)} m/s².`
     : `Local gravity of ${q(g, 'm/s2')} as entered.`;
 }
-
-export const FROST_CAUTION: Caution = {
-  code: 'FROST_HEAVE',
-  text: 'Water drawn up by capillarity feeds ice lenses in frost-susceptible soils (silts, fine sands, some clays); where the capillary zone reaches the frost depth, frost heave of slabs, pavements and shallow foundations is possible.',
-};
-
-export const FOUNDATIONS_CAUTION: Caution = {
-  code: 'FOUNDATIONS',
-  text: 'Capillary water changes the moisture and effective stress of the soil under foundations and slabs; foundation design needs a geotechnical investigation.',
-};
-
-export const WATER_REFERENCES: readonly Reference[] = [
-  {
-    id: 'iapws-r1-76',
-    citation: 'IAPWS R1-76(2014), Revised Release on Surface Tension of Ordinary Water Substance',
-    usedFor: 'surface tension of water from 0.01 °C to the critical point',
-    basis: 'printed',
-  },
-  {
-    id: 'tanaka-2001',
-    citation: TANAKA_SOURCE,
-    usedFor: 'density of air-free water at 101 325 Pa, 0–40 °C',
-    basis: 'printed',
-  },
-  {
-    id: 'kell-1975',
-    citation: KELL_SOURCE,
-    usedFor: 'density of water at 1 atm above 40 °C (above 100 °C a liquid held at 1 atm)',
-    basis: 'printed',
-  },
-];
-
-export const VISCOSITY_REFERENCE: Reference = {
-  id: 'iapws-sr6-08',
-  citation: 'IAPWS SR6-08 (2011), Supplementary Release on Properties of Liquid Water at 0.1 MPa',
-  usedFor: 'viscosity of water',
-  basis: 'printed',
-};
-
-export const LIQUID_TABLE_REFERENCES: readonly Reference[] = [
-  {
-    id: 'jasper-1972',
-    citation:
-      'Jasper J. J. (1972) The surface tension of pure liquid compounds, J. Phys. Chem. Ref. Data 1, 841–1009',
-    usedFor: 'surface tension of the organic liquids in the table',
-    basis: 'printed',
-  },
-  {
-    id: 'adamson-gast-1997',
-    citation: 'Adamson A. W., Gast A. P. (1997) Physical Chemistry of Surfaces, 6th ed., Wiley',
-    usedFor: 'surface tension of mercury',
-    basis: 'printed',
-  },
-  {
-    id: 'crc-handbook',
-    citation: 'CRC Handbook of Chemistry and Physics',
-    usedFor:
-      'densities and viscosities of the liquids in the table (values from memory, to be checked against the printed edition)',
-    basis: 'from memory',
-  },
-];
 
 /**
  * Runs a formula whose argument names differ from the calculator's input ids, renaming the field of

@@ -1,17 +1,9 @@
 import { runner } from './engine.js';
-import { RAYLEIGH_REFERENCE, riseInputs, riseOutputs, riseWarnings, SLOT, solveRise } from './rise-common.js';
-import {
-  CLEAN_SURFACES_CAUTION,
-  DAMP_CAUTION,
-  ESTIMATE_CAUTION,
-  LIQUID_TABLE_REFERENCES,
-  MM,
-  quantityInput,
-  WATER_REFERENCES,
-} from './shared.js';
-import type { CalculatorDefinition } from './types.js';
+import { riseInputs, riseOutputs, riseWarnings, SLOT, solveRise } from './rise-common.js';
+import { MM, quantityInput } from './shared.js';
+import type { CalculatorCore } from './types.js';
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'slot-rise',
   title: 'Rise in a slot or crack',
   summary:
@@ -21,29 +13,12 @@ export const calculator: CalculatorDefinition = {
   ),
   outputs: riseOutputs(SLOT, 'Rise', 'Half the gap / capillary length'),
   warnings: riseWarnings(SLOT),
-  cautions: [
-    ESTIMATE_CAUTION,
-    {
-      code: 'REAL_CRACKS',
-      text: 'Real cracks taper, branch and are rough; the parallel-wall result is an upper-bound style estimate for the narrowest sustained width, not a measurement.',
-    },
-    CLEAN_SURFACES_CAUTION,
-    DAMP_CAUTION,
-  ],
-  references: [
-    {
-      id: 'jurin-slot',
-      citation:
-        "Force balance of Jurin's law per unit length of two parallel plates, as in standard capillarity texts",
-      usedFor: 'h = 2σ cos θ/(ρ g w)',
-      basis: 'common practice',
-    },
-    RAYLEIGH_REFERENCE,
-    ...WATER_REFERENCES,
-    ...LIQUID_TABLE_REFERENCES,
-  ],
   solve: (inputs) => solveRise(SLOT, inputs),
 };
 
-/** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
+/**
+ * Runs this calculator alone, from its core (what the widget's engine calls); inputs in SI keyed by
+ * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
+ * its texts: `calculate` (the registry) gives them.
+ */
 export const run = runner(calculator);

@@ -1,19 +1,8 @@
 import { capillaryBreakCheck, HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../formulas/soil.js';
 import { bandOver, runner } from './engine.js';
 import { HAZEN_BASIS, HAZEN_SOURCE, hazenCInput, hazenRiseStep } from './hazen.js';
-import {
-  choice,
-  ESTIMATE_CAUTION,
-  FOUNDATIONS_CAUTION,
-  FROST_CAUTION,
-  MM,
-  num,
-  q,
-  quantityInput,
-  warning,
-  solved,
-} from './shared.js';
-import type { CalculatorDefinition, InputValues, Outputs, Warning, WorkingStep } from './types.js';
+import { choice, MM, num, q, quantityInput, warning, solved } from './shared.js';
+import type { CalculatorCore, InputValues, Outputs, Warning, WorkingStep } from './types.js';
 
 /** IRC R506.2.2: a 4-inch-thick (102 mm) base course under a slab below grade. */
 const CODE_MIN_LAYER_M = 4 * 0.0254;
@@ -24,7 +13,7 @@ const NO200_SIEVE_M = 0.075e-3;
 
 const withLayer = [{ input: 'breakLayer', values: ['granular'] }] as const;
 
-function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
+function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
   const d10 = num(inputs, 'd10');
   const e = num(inputs, 'voidRatio');
   const c = num(inputs, 'hazenC');
@@ -215,7 +204,7 @@ function solve(inputs: InputValues): ReturnType<CalculatorDefinition['solve']> {
   });
 }
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'soil-capillary-rise',
   title: 'Capillary rise in soil and capillary-break check',
   summary:
@@ -307,48 +296,12 @@ export const calculator: CalculatorDefinition = {
       summary: "D10 is finer than 0.075 mm, outside the sands Hazen's relation was drawn from.",
     },
   ],
-  cautions: [
-    ESTIMATE_CAUTION,
-    FROST_CAUTION,
-    FOUNDATIONS_CAUTION,
-    {
-      code: 'DAMP_SLABS',
-      text: 'A capillary break does not stop vapour: moisture-sensitive floor finishes also need a vapour retarder and a dry slab, checked by measurement.',
-    },
-    {
-      code: 'LOCAL_CODES',
-      text: 'The code checks quoted (IRC R506.2.2, the IBC floor base course) are US model-code provisions; the code that applies at the site governs the layer.',
-    },
-  ],
-  references: [
-    {
-      id: 'terzaghi-peck-1948',
-      citation: 'Terzaghi K., Peck R. B. (1948) Soil Mechanics in Engineering Practice, Wiley',
-      usedFor:
-        "Hazen's formula h_c = C/(e·D10) and the range of C, 0.1–0.5 cm² (as given by Smith, Elements of Soil Mechanics, and Holtz & Kovacs; recalled, not seen printed here)",
-      basis: 'from memory',
-    },
-    {
-      id: 'heath-1982',
-      citation: 'Heath R. C. (1982, rev. 1983) Basic Ground-Water Hydrology, USGS Water-Supply Paper 2220',
-      usedFor: 'typical capillary rise: coarse sand 12.5 cm, medium sand 25 cm, fine sand 40 cm, silt 100 cm',
-      basis: 'printed',
-    },
-    {
-      id: 'irc-r506-2-2',
-      citation: 'International Residential Code, R506.2.2 Base',
-      usedFor: '4 in (102 mm) base course under a slab below grade',
-      basis: 'printed',
-    },
-    {
-      id: 'ibc-floor-base-course',
-      citation: 'International Building Code, floor base course (section 1807.4.1 in early editions)',
-      usedFor: 'at least 4 in of gravel or crushed stone with no more than 10 % passing the No. 4 sieve',
-      basis: 'printed',
-    },
-  ],
   solve,
 };
 
-/** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
+/**
+ * Runs this calculator alone, from its core (what the widget's engine calls); inputs in SI keyed by
+ * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
+ * its texts: `calculate` (the registry) gives them.
+ */
 export const run = runner(calculator);

@@ -4,22 +4,19 @@ import { runner } from './engine.js';
 import {
   capillaryLengthStep,
   choice,
-  CLEAN_SURFACES_CAUTION,
   CONTACT_ANGLE_NEAR_90,
-  ESTIMATE_CAUTION,
   fmt,
   gravityAssumption,
   gravityInput,
   MM,
   nearNinety,
   num,
-  OTHER_LIQUID_CAUTION,
   q,
   quantityInput,
   solved,
   warning,
 } from './shared.js';
-import type { CalculatorDefinition, InputValues, Solution, Warning, WorkingStep } from './types.js';
+import type { CalculatorCore, InputValues, Solution, Warning, WorkingStep } from './types.js';
 
 /**
  * r/ℓc above which Rayleigh's r/3 is more than 2 % of the rise (r²/(6ℓc²) = 0.02), the tube-rise
@@ -201,7 +198,7 @@ function solve(inputs: InputValues): Solution {
   });
 }
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'tension-from-rise',
   title: 'Surface tension or contact angle from a rise in a tube',
   summary:
@@ -256,38 +253,6 @@ export const calculator: CalculatorDefinition = {
     },
     CONTACT_ANGLE_NEAR_90,
     ANGLE_POORLY_DETERMINED,
-  ],
-  cautions: [
-    ESTIMATE_CAUTION,
-    OTHER_LIQUID_CAUTION,
-    {
-      code: 'TUBE_CLEANING',
-      text: 'The tube must be scrupulously clean and wetted before the reading; grease or detergent residue changes the contact angle and the result more than any correction.',
-    },
-    CLEAN_SURFACES_CAUTION,
-  ],
-  references: [
-    {
-      id: 'rayleigh-1915',
-      citation: 'Lord Rayleigh (1915) On the theory of the capillary tube, Proc. R. Soc. Lond. A 92, 184–195',
-      usedFor:
-        'surface tension from a rise in a narrow tube with the meniscus correction r/3, valid for r ≪ ℓc (the same geometry for θ > 0 derived here)',
-      basis: 'printed',
-    },
-    {
-      id: 'jurin-1718',
-      citation:
-        'Jurin J. (1718) An account of some experiments shown before the Royal Society, Phil. Trans. 30, 739–747',
-      usedFor: 'the force balance of a rise in a tube',
-      basis: 'printed',
-    },
-    {
-      id: 'de-gennes-2004',
-      citation:
-        'de Gennes P.-G., Brochard-Wyart F., Quéré D. (2004) Capillarity and Wetting Phenomena, Springer',
-      usedFor: 'the capillary length ℓc = √(σ/(ρ·g))',
-      basis: 'printed',
-    },
   ],
   solve,
 };

@@ -1,17 +1,9 @@
 import { runner } from './engine.js';
-import { RAYLEIGH_REFERENCE, riseInputs, riseOutputs, riseWarnings, solveRise, TUBE } from './rise-common.js';
-import {
-  CLEAN_SURFACES_CAUTION,
-  DAMP_CAUTION,
-  ESTIMATE_CAUTION,
-  LIQUID_TABLE_REFERENCES,
-  MM,
-  quantityInput,
-  WATER_REFERENCES,
-} from './shared.js';
-import type { CalculatorDefinition } from './types.js';
+import { riseInputs, riseOutputs, riseWarnings, solveRise, TUBE } from './rise-common.js';
+import { MM, quantityInput } from './shared.js';
+import type { CalculatorCore } from './types.js';
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'tube-rise',
   title: 'Capillary rise or depression in a tube',
   summary:
@@ -21,21 +13,12 @@ export const calculator: CalculatorDefinition = {
   ),
   outputs: riseOutputs(TUBE, "Rise (Jurin's law)", 'Bore radius / capillary length'),
   warnings: riseWarnings(TUBE),
-  cautions: [ESTIMATE_CAUTION, CLEAN_SURFACES_CAUTION, DAMP_CAUTION],
-  references: [
-    {
-      id: 'jurin-1718',
-      citation:
-        'Jurin J. (1718) An account of some experiments shown before the Royal Society, Phil. Trans. 30, 739–747',
-      usedFor: "Jurin's law, h = 4σ cos θ/(ρ g d)",
-      basis: 'printed',
-    },
-    RAYLEIGH_REFERENCE,
-    ...WATER_REFERENCES,
-    ...LIQUID_TABLE_REFERENCES,
-  ],
   solve: (inputs) => solveRise(TUBE, inputs),
 };
 
-/** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
+/**
+ * Runs this calculator alone, from its core (what the widget's engine calls); inputs in SI keyed by
+ * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
+ * its texts: `calculate` (the registry) gives them.
+ */
 export const run = runner(calculator);

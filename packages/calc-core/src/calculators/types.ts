@@ -143,7 +143,11 @@ export interface Solution {
   readonly hazards?: readonly Caution[];
 }
 
-export interface CalculatorDefinition {
+/**
+ * What computes and what a form shows: the calculation itself, in `calculators/<id>.ts`. The
+ * widget's first flight carries this alone; its texts follow after first paint.
+ */
+export interface CalculatorCore {
   /** kebab-case, stable: used in subpath exports, stored runs and embed configuration. */
   readonly id: string;
   readonly title: string;
@@ -151,11 +155,18 @@ export interface CalculatorDefinition {
   readonly inputs: readonly InputDefinition[];
   readonly outputs: readonly OutputDefinition[];
   readonly warnings: readonly WarningDefinition[];
-  readonly cautions: readonly Caution[];
-  readonly references: readonly Reference[];
   /** Pure: resolved inputs in, solution out. Throws CalcInputError for combinations no single field shows. */
   readonly solve: (inputs: InputValues) => Solution;
 }
+
+/** What a calculator says beside its figures, in `calculators/<id>.texts.ts`: imported by nothing that computes. */
+export interface CalculatorTexts {
+  readonly cautions: readonly Caution[];
+  readonly references: readonly Reference[];
+}
+
+/** A whole calculator: its core and its texts, as calc-core's registry joins them. */
+export interface CalculatorDefinition extends CalculatorCore, CalculatorTexts {}
 
 export interface CalculationResult {
   readonly calculator: string;
@@ -167,7 +178,10 @@ export interface CalculationResult {
   readonly band: Band | null;
   /** What the result takes for granted. */
   readonly assumptions: readonly string[];
-  /** Cautions for this result: the liquid's hazard first, then the calculator's own. */
+  /**
+   * Cautions for this result: the liquid's hazard first, then the calculator's own (none when run
+   * from a core without its texts, as the widget's engine does: it shows the texts' when they arrive).
+   */
   readonly cautions: readonly Caution[];
   readonly version: string;
   /** SHA-256 (hex) of the canonical JSON of `{ calculator, inputs }`. */

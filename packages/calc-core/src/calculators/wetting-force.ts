@@ -11,14 +11,11 @@ import {
 import { runner } from './engine.js';
 import {
   choice,
-  CLEAN_SURFACES_CAUTION,
   coef,
   CONTACT_ANGLE_NEAR_90,
-  ESTIMATE_CAUTION,
   fmt,
   gravityAssumption,
   gravityInput,
-  LIQUID_TABLE_REFERENCES,
   liquidInputs,
   MM,
   nearNinety,
@@ -27,13 +24,12 @@ import {
   quantityInput,
   resolveLiquid,
   warning,
-  WATER_REFERENCES,
   withFieldNames,
 } from './shared.js';
 import { STANDARD_GRAVITY } from '../units.js';
 import type {
   Caution,
-  CalculatorDefinition,
+  CalculatorCore,
   Condition,
   InputValues,
   QuantityInput,
@@ -324,7 +320,7 @@ function lengthInput(
   return quantityInput('length', id, label, defaultM, range, { appliesWhen: when, display: MM });
 }
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'wetting-force',
   title: 'Wetting force (tensiometry)',
   summary:
@@ -408,60 +404,12 @@ export const calculator: CalculatorDefinition = {
       summary: 'A density difference below 100 kg/m³: against air, likely a g/mL value typed as kg/m³.',
     },
   ],
-  cautions: [
-    ESTIMATE_CAUTION,
-    {
-      code: 'PROBE_CLEANING',
-      text: 'Plates and rings must be cleaned (e.g. flamed platinum) and the liquid surface fresh; a trace of contamination lowers the reading more than any correction changes it.',
-    },
-    {
-      code: 'BUOYANCY_NEGLECTED',
-      text: 'The plate and rod forms take the force at zero immersion depth; any immersion adds a buoyancy term that is not included.',
-    },
-    CLEAN_SURFACES_CAUTION,
-  ],
-  references: [
-    {
-      id: 'wilhelmy-1863',
-      citation:
-        'Wilhelmy L. (1863) Ueber die Abhängigkeit der Capillaritäts-Constanten des Alkohols von Substanz und Gestalt des benetzten festen Körpers, Ann. Phys. 195, 177–217',
-      usedFor: 'F = σ·P·cos θ',
-      basis: 'printed',
-    },
-    {
-      id: 'astm-d971',
-      citation:
-        'ASTM D971, Standard Test Method for Interfacial Tension of Insulating Liquids Against Water by the Ring Method',
-      usedFor:
-        'the Zuidema–Waters factor as ASTM writes it (recalled, to be checked against the current edition), ring of at least 40 mm circumference',
-      basis: 'from memory',
-    },
-    {
-      id: 'zuidema-waters-1941',
-      citation:
-        'Zuidema H. H., Waters G. W. (1941) Ring method for the determination of interfacial tension, Ind. Eng. Chem. Anal. Ed. 13, 312–313',
-      usedFor: 'the ring correction factor (the form of the fit recalled, not seen printed here)',
-      basis: 'from memory',
-    },
-    {
-      id: 'harkins-jordan-1930',
-      citation:
-        'Harkins W. D., Jordan H. F. (1930) A method for the determination of surface and interfacial tension from the maximum pull on a ring, J. Am. Chem. Soc. 52, 1751–1772',
-      usedFor: 'the variables R/r and R³/V and the range of the correction tables (range from memory)',
-      basis: 'from memory',
-    },
-    {
-      id: 'du-nouy-1925',
-      citation:
-        'du Noüy P. L. (1925) An interfacial tensiometer for universal use, J. Gen. Physiol. 7, 625–631',
-      usedFor: 'the ring method, σ* = F/(4πR)',
-      basis: 'printed',
-    },
-    ...WATER_REFERENCES,
-    ...LIQUID_TABLE_REFERENCES,
-  ],
   solve,
 };
 
-/** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
+/**
+ * Runs this calculator alone, from its core (what the widget's engine calls); inputs in SI keyed by
+ * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
+ * its texts: `calculate` (the registry) gives them.
+ */
 export const run = runner(calculator);

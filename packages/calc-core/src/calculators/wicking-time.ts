@@ -3,16 +3,12 @@ import { bosanquetTime, gravityRestrainedRiseTime, gravityShape, washburnTime } 
 import { bandOver, runner } from './engine.js';
 import {
   choice,
-  CLEAN_SURFACES_CAUTION,
   contactAngleInputs,
-  DAMP_CAUTION,
-  ESTIMATE_CAUTION,
   CONTACT_ANGLE_NEAR_90,
   fmt,
   gravityAssumption,
   gravityInput,
   nearNinety,
-  LIQUID_TABLE_REFERENCES,
   liquidInputs,
   MM,
   num,
@@ -20,13 +16,11 @@ import {
   quantityInput,
   resolveContactAngle,
   resolveLiquid,
-  VISCOSITY_REFERENCE,
   warning,
-  WATER_REFERENCES,
   capillaryLengthStep,
   solved,
 } from './shared.js';
-import type { CalculatorDefinition, InputValues, Outputs, Solution, Warning, WorkingStep } from './types.js';
+import type { CalculatorCore, InputValues, Outputs, Solution, Warning, WorkingStep } from './types.js';
 
 /** Gravity-restrained time over Lucas–Washburn time above which gravity is called not negligible. */
 const GRAVITY_RATIO_LIMIT = 1.05;
@@ -244,7 +238,7 @@ function solve(inputs: InputValues): Solution {
   return solved({ outputs, working, warnings, band, assumptions }, liquid);
 }
 
-export const calculator: CalculatorDefinition = {
+export const calculator: CalculatorCore = {
   id: 'wicking-time',
   title: 'Wicking time',
   summary:
@@ -312,43 +306,12 @@ export const calculator: CalculatorDefinition = {
       summary: 'Gravity lengthens the time by more than 5 % (our threshold); use the time with gravity.',
     },
   ],
-  cautions: [
-    ESTIMATE_CAUTION,
-    {
-      code: 'REAL_POROUS_MEDIA',
-      text: 'Real materials have a range of pore sizes, tortuous paths and swelling or dissolving walls; the effective radius has to be fitted to a sorption test on the material itself.',
-    },
-    DAMP_CAUTION,
-    CLEAN_SURFACES_CAUTION,
-  ],
-  references: [
-    {
-      id: 'washburn-1921',
-      citation: 'Washburn E. W. (1921) The dynamics of capillary flow, Phys. Rev. 17, 273–283',
-      usedFor:
-        'L² = σ r t cos θ/(2μ), and the equation of motion with gravity that gives the time with gravity',
-      basis: 'printed',
-    },
-    {
-      id: 'bosanquet-1923',
-      citation: 'Bosanquet C. H. (1923) On the flow of liquids into capillary tubes, Phil. Mag. 45, 525–531',
-      usedFor:
-        'the time with inertia, d/dt(ρ·x·dx/dt) = 2σ·cos θ/r − 8μ·x·(dx/dt)/r² (citation details from memory)',
-      basis: 'from memory',
-    },
-    {
-      id: 'lucas-1918',
-      citation:
-        'Lucas R. (1918) Ueber das Zeitgesetz des kapillaren Aufstiegs von Flüssigkeiten, Kolloid-Z. 23, 15–22',
-      usedFor: 'the same law, found independently',
-      basis: 'printed',
-    },
-    ...WATER_REFERENCES,
-    VISCOSITY_REFERENCE,
-    ...LIQUID_TABLE_REFERENCES,
-  ],
   solve,
 };
 
-/** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
+/**
+ * Runs this calculator alone, from its core (what the widget's engine calls); inputs in SI keyed by
+ * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
+ * its texts: `calculate` (the registry) gives them.
+ */
 export const run = runner(calculator);

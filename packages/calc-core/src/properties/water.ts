@@ -46,6 +46,7 @@ export interface WaterDensity {
   /** kg/m³ */
   readonly value: number;
   readonly formulation: DensityFormulation;
+  /** The formulation's short name; its full citation is among the calculators' references (`shared-texts.ts`). */
   readonly source: string;
 }
 
@@ -73,11 +74,6 @@ export const IAPWS_SR6_08 = {
   Tstar: 300,
 } as const;
 
-export const TANAKA_SOURCE =
-  'Tanaka M., Girard G., Davis R., Peuto A., Bignell N. (2001) Recommended table for the density of water between 0 °C and 40 °C based on recent experimental reports, Metrologia 38, 301–309';
-export const KELL_SOURCE =
-  'Kell G. S. (1975) Density, thermal expansivity, and compressibility of liquid water from 0° to 150 °C, J. Chem. Eng. Data 20, 97–105';
-
 /**
  * Density of air-free water at atmospheric pressure: Tanaka et al. 2001 from 0 to 40 °C (the
  * metrology standard), Kell 1975 above 40 °C up to 150 °C. The two agree within 0.0033 kg/m³ where
@@ -92,7 +88,7 @@ export function waterDensity(tC: number): WaterDensity {
     // Tanaka 2001 eq. (1), t in °C: ρ = a5·[1 − (t + a1)²(t + a2) / (a3·(t + a4))]
     const { a1, a2, a3, a4, a5 } = TANAKA_2001;
     const value = a5 * (1 - ((tC + a1) ** 2 * (tC + a2)) / (a3 * (tC + a4)));
-    return { value, formulation: 'tanaka-2001', source: TANAKA_SOURCE };
+    return { value, formulation: 'tanaka-2001', source: 'Tanaka et al. 2001' };
   }
   // Kell 1975, t in °C as printed (IPTS-68). Its offset from ITS-90 is a few hundredths of a kelvin
   // here, under 0.03 kg/m³ even at 100 °C: well inside what a capillarity estimate can resolve.
@@ -101,7 +97,7 @@ export function waterDensity(tC: number): WaterDensity {
   KELL_1975.a.forEach((a, n) => {
     numerator += a * t ** n;
   });
-  return { value: numerator / (1 + KELL_1975.b * t), formulation: 'kell-1975', source: KELL_SOURCE };
+  return { value: numerator / (1 + KELL_1975.b * t), formulation: 'kell-1975', source: 'Kell 1975' };
 }
 
 /** 253.15–383.15 K in °C: the range of IAPWS SR6-08 for liquid water at 0.1 MPa (incl. metastable states). */

@@ -10,8 +10,11 @@ export interface RunReport {
 }
 
 export interface Reporter {
-  /** Reports a calculation; the same inputs in the same units twice running is one run, not two (unless the first report failed). */
-  report(result: CalculationResult, unitSystem: UnitSystemId): RunReport;
+  /**
+   * Reports a calculation; the same inputs in the same units twice running is one run, not two
+   * (unless the first report failed). `id`, when given, is the new report's id.
+   */
+  report(result: CalculationResult, unitSystem: UnitSystemId, id?: string): RunReport;
 }
 
 /**
@@ -30,10 +33,10 @@ export function createReporter(args: {
   const makeId = args.makeId ?? (() => newRunId());
   let last: { key: string; report: RunReport; failed: () => boolean } | null = null;
   return {
-    report(result, unitSystem) {
+    report(result, unitSystem, given) {
       const key = `${unitSystem}:${result.inputHash}`;
       if (last !== null && last.key === key && !last.failed()) return last.report;
-      const id = makeId();
+      const id = given ?? makeId();
       const body = buildRunBody({ id, publicKey: args.publicKey, result, unitSystem, href: args.href() });
       // A refused or lost report is not reused: calculating again sends a fresh one.
       let failed = false;

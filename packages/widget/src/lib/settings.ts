@@ -1,4 +1,4 @@
-import type { CalculatorDefinition, InputDefinition } from '@wickstone/calc-core';
+import type { CalculatorCore, InputDefinition } from '@wickstone/calc-core';
 import type { EmbedWidget, InputMode } from '@wickstone/contracts';
 
 type InputSettings = EmbedWidget['settings']['inputs'];
@@ -22,7 +22,7 @@ const MODES: readonly InputMode[] = ['editable', 'locked', 'hidden'];
  * A firm's numeric default is used as set, even outside the input's range: calc-core then names the
  * problem, which is better than silently using another number than the firm chose.
  */
-export function resolveInputSettings(def: CalculatorDefinition, settings: InputSettings): ResolvedInput[] {
+export function resolveInputSettings(def: CalculatorCore, settings: InputSettings): ResolvedInput[] {
   return def.inputs.map((input) => {
     const s = Object.hasOwn(settings, input.id) ? settings[input.id] : undefined;
     const mode: InputMode = s !== undefined && MODES.includes(s.mode) ? s.mode : 'editable';

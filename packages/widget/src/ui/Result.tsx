@@ -81,8 +81,12 @@ export function Result({
   const inputLabel = (id: string): string => calculator.inputs.find((i) => i.id === id)?.label ?? id;
   const stepLabel = (id: string): string | undefined => result.working.find((s) => s.id === id)?.label;
   const firm = splitCautions(firmCautions);
-  // The result's own cautions: the chosen liquid's hazard first, then the calculator's.
-  const cautions = result.cautions;
+  // The result's own cautions: the chosen liquid's hazard first, then the calculator's (from its
+  // texts, which follow first paint: the widget's engine computes without them).
+  const cautions = [
+    ...result.cautions,
+    ...calculator.cautions.filter((c) => !result.cautions.some((r) => r.code === c.code)),
+  ];
   const hazards = cautions.filter((c) => c.code.startsWith('HAZARD_') || c.code === 'OTHER_LIQUID_HAZARD');
   const general = cautions.filter((c) => !hazards.includes(c));
   const assumptions = result.assumptions;
