@@ -63,8 +63,8 @@ const ids = only
   ? [only]
   : ['tube-rise', 'slot-rise', 'soil-capillary-rise', 'interface-pressure', 'wetting-force', 'wicking-time'];
 for (const [width, tag] of [
-  [1200, 'desktop'],
-  [380, 'phone'],
+  [1280, 'desktop'],
+  [390, 'phone'],
 ]) {
   for (const id of ids) {
     const { context, page, problems } = await open(width, `only=${id}`);
@@ -155,7 +155,7 @@ for (const hostile of ['0', '1']) {
         '[data-input="liquid"]',
         '[data-wickstone="calculate"]',
         '.figure',
-        '.suffix',
+        '.label .unit',
         '.note',
       ]) {
         const cs = getComputedStyle(root.querySelector(sel));

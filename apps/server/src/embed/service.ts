@@ -1,7 +1,13 @@
 import { Op, QueryTypes, type Sequelize } from 'sequelize';
 import type { Logger } from 'pino';
 import { getCalculator, type CalculationResult } from '@wickstone/calc-core';
-import type { EmbedLeadBody, EmbedRunBody, EmbedWidget, LeadFieldId } from '@wickstone/contracts';
+import type {
+  EmbedLeadBody,
+  EmbedRunBody,
+  EmbedWidget,
+  LeadFieldId,
+  WidgetSettings,
+} from '@wickstone/contracts';
 import { leadFieldIds } from '@wickstone/contracts';
 import { Asset, Lead, Membership, Organization, Run, User, Widget } from '../db/models/index.js';
 import { AppError } from '../errors.js';
@@ -102,6 +108,8 @@ export function createEmbedService(deps: {
           look: { colors: look.colors, font: look.font, corner: look.corner, logoUrl },
           cautions,
           leadForm: { enabled: leadForm.enabled, fields: leadForm.fields, consentText: leadForm.consentText },
+          // Settings stored before the result settings existed have none: secondary outputs folded.
+          result: (w.settings as Partial<WidgetSettings>).result ?? { secondary: 'folded' },
         },
       };
     },

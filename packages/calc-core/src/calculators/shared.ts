@@ -372,6 +372,8 @@ export function contactAngleInputs(opts: {
         p.spreadDeg === undefined
           ? `${p.angleDeg}°`
           : `${p.angleDeg}° (${p.spreadDeg.low}–${p.spreadDeg.high}°)`,
+      // Offered only with its own liquid (or one entered by hand): any other pairing is refused below.
+      appliesWhen: [{ input: 'liquid', values: [p.liquid, CUSTOM] }],
     }));
   const preset: ChoiceInput = {
     id: 'contactAnglePreset',
@@ -571,24 +573,30 @@ export const FOUNDATIONS_CAUTION: Caution = {
   text: 'Capillary water changes the moisture and effective stress of the soil under foundations and slabs; foundation design needs a geotechnical investigation.',
 };
 
+/** References that bear on a result only with water chosen. */
+const WITH_WATER = [{ input: 'liquid', values: ['water'] }] as const;
+
 export const WATER_REFERENCES: readonly Reference[] = [
   {
     id: 'iapws-r1-76',
     citation: 'IAPWS R1-76(2014), Revised Release on Surface Tension of Ordinary Water Substance',
     usedFor: 'surface tension of water from 0.01 °C to the critical point',
     basis: 'printed',
+    appliesWhen: WITH_WATER,
   },
   {
     id: 'tanaka-2001',
     citation: TANAKA_SOURCE,
     usedFor: 'density of air-free water at 101 325 Pa, 0–40 °C',
     basis: 'printed',
+    appliesWhen: WITH_WATER,
   },
   {
     id: 'kell-1975',
     citation: KELL_SOURCE,
     usedFor: 'density of water at 1 atm above 40 °C (above 100 °C a liquid held at 1 atm)',
     basis: 'printed',
+    appliesWhen: WITH_WATER,
   },
 ];
 
@@ -597,6 +605,7 @@ export const VISCOSITY_REFERENCE: Reference = {
   citation: 'IAPWS SR6-08 (2011), Supplementary Release on Properties of Liquid Water at 0.1 MPa',
   usedFor: 'viscosity of water',
   basis: 'printed',
+  appliesWhen: WITH_WATER,
 };
 
 export const LIQUID_TABLE_REFERENCES: readonly Reference[] = [
@@ -606,19 +615,27 @@ export const LIQUID_TABLE_REFERENCES: readonly Reference[] = [
       'Jasper J. J. (1972) The surface tension of pure liquid compounds, J. Phys. Chem. Ref. Data 1, 841–1009',
     usedFor: 'surface tension of the organic liquids in the table',
     basis: 'printed',
+    appliesWhen: [
+      {
+        input: 'liquid',
+        values: liquids.filter((l) => l.surfaceTension.source.startsWith('Jasper')).map((l) => l.id),
+      },
+    ],
   },
   {
     id: 'adamson-gast-1997',
     citation: 'Adamson A. W., Gast A. P. (1997) Physical Chemistry of Surfaces, 6th ed., Wiley',
     usedFor: 'surface tension of mercury',
     basis: 'printed',
+    appliesWhen: [{ input: 'liquid', values: ['mercury'] }],
   },
   {
     id: 'crc-handbook',
     citation: 'CRC Handbook of Chemistry and Physics',
     usedFor:
-      'densities and viscosities of the liquids in the table (values from memory, to be checked against the printed edition)',
+      'densities and viscosities of the liquids in the table at 20 °C (recalled from the handbook, not read from a printed page here: from memory)',
     basis: 'from memory',
+    appliesWhen: [{ input: 'liquid', values: liquids.map((l) => l.id) }],
   },
 ];
 

@@ -1,5 +1,13 @@
 import { runner } from './engine.js';
-import { RAYLEIGH_REFERENCE, riseInputs, riseOutputs, riseWarnings, SLOT, solveRise } from './rise-common.js';
+import {
+  RAYLEIGH_REFERENCE,
+  riseHeadline,
+  riseInputs,
+  riseOutputs,
+  riseWarnings,
+  SLOT,
+  solveRise,
+} from './rise-common.js';
 import {
   CLEAN_SURFACES_CAUTION,
   DAMP_CAUTION,
@@ -21,6 +29,7 @@ export const calculator: CalculatorDefinition = {
   ),
   outputs: riseOutputs(SLOT, 'Rise', 'Half the gap / capillary length'),
   warnings: riseWarnings(SLOT),
+  headline: riseHeadline(SLOT, 'between walls {input.gap} apart'),
   cautions: [
     ESTIMATE_CAUTION,
     {

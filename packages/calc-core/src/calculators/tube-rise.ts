@@ -1,5 +1,13 @@
 import { runner } from './engine.js';
-import { RAYLEIGH_REFERENCE, riseInputs, riseOutputs, riseWarnings, solveRise, TUBE } from './rise-common.js';
+import {
+  RAYLEIGH_REFERENCE,
+  riseHeadline,
+  riseInputs,
+  riseOutputs,
+  riseWarnings,
+  solveRise,
+  TUBE,
+} from './rise-common.js';
 import {
   CLEAN_SURFACES_CAUTION,
   DAMP_CAUTION,
@@ -21,6 +29,7 @@ export const calculator: CalculatorDefinition = {
   ),
   outputs: riseOutputs(TUBE, "Rise (Jurin's law)", 'Bore radius / capillary length'),
   warnings: riseWarnings(TUBE),
+  headline: riseHeadline(TUBE, 'in a {input.diameter} bore'),
   cautions: [ESTIMATE_CAUTION, CLEAN_SURFACES_CAUTION, DAMP_CAUTION],
   references: [
     {

@@ -384,6 +384,22 @@ export const calculator: CalculatorDefinition = {
     { id: 'correctionFactor', label: 'Correction factor f', kind: 'dimensionless' },
     { id: 'wettedLength', label: 'Wetted length', kind: 'length', display: { si: 'mm', us: 'in' } },
   ],
+  headline: {
+    rules: [
+      {
+        when: [{ input: 'method', values: ['plate-force'] }],
+        output: 'force',
+        text: 'The liquid pulls on the plate with about {value}.',
+      },
+      {
+        when: [{ input: 'method', values: ['rod-force'] }],
+        output: 'force',
+        text: 'The liquid pulls on the rod with about {value}.',
+      },
+      { output: 'surfaceTension', text: 'The surface tension is about {value}.' },
+    ],
+    missing: 'corrected surface tension',
+  },
   warnings: [
     {
       code: 'CONTACT_ANGLE_NOT_ZERO',
@@ -433,7 +449,7 @@ export const calculator: CalculatorDefinition = {
       citation:
         'ASTM D971, Standard Test Method for Interfacial Tension of Insulating Liquids Against Water by the Ring Method',
       usedFor:
-        'the Zuidema–Waters factor as ASTM writes it (recalled, to be checked against the current edition), ring of at least 40 mm circumference',
+        'the Zuidema–Waters factor as ASTM writes it (recalled, from memory; the current edition governs), ring of at least 40 mm circumference',
       basis: 'from memory',
     },
     {
