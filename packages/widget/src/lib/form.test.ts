@@ -27,6 +27,9 @@ describe('form state', () => {
     expect(us.diameter?.value).toBeCloseTo(0.04 * 0.0254, 15);
     expect(us.temperatureC).toMatchObject({ text: '68', value: 20 });
     expect(collectInputs(inputs, us).diameter).toBeCloseTo(0.001016, 15);
+    // A default that is not round is not rounded, and is sent exactly: standard gravity stays standard.
+    const free = resolveInputSettings(tube, {});
+    expect(initialForm(free, 'us').gravity).toMatchObject({ text: '32.174', value: 9.80665 });
     // Metric shows the calculator's own default, exactly.
     expect(initialForm(inputs, 'si').diameter).toMatchObject({ text: '1', value: 0.001 });
     // A default still untouched follows a unit switch back to the exact metric value.

@@ -31,7 +31,10 @@ function atDefault(input: ResolvedInput, system: UnitSystemId): FieldState {
     return { text: shown(value, input, system), value };
   }
   const unit = displayUnitOf(input.def as QuantityInput, system);
-  const text = practicalDefault(toDisplay(value, unit), value);
+  const exact = toDisplay(value, unit);
+  const text = practicalDefault(exact, value);
+  // Not rounded (standard gravity keeps its figures): the exact default is sent, not the six-figure text.
+  if (text === formatInput(exact)) return { text, value, fromDefault: true };
   const n = parseNumber(text);
   return { text, value: n === null || Number.isNaN(n) ? value : fromDisplay(n, unit), fromDefault: true };
 }
