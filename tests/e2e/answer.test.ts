@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { QueryTypes } from 'sequelize';
 import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
 import { calculate, parseNumber } from '@wickstone/calc-core';
 import { formatResult } from '@wickstone/calc-core/answer';
@@ -30,6 +31,7 @@ describe('the visitor’s answer in Chromium: headline, warning titles and locks
   let server: Server;
   let origin = '';
   const snippets = new Map<string, string>();
+  const widgetIds = new Map<string, number>();
   const contexts: BrowserContext[] = [];
   const pageErrors: string[] = [];
 
@@ -52,6 +54,7 @@ describe('the visitor’s answer in Chromium: headline, warning titles and locks
     const settings = { ...created.settings, inputs, units: { system: 'us', visitorMaySwitch: true } };
     await owner.json('PATCH', `/orgs/${org.id}/widgets/${created.id}`, { status: 'live', settings }, 200);
     snippets.set(path, created.embed.snippet);
+    widgetIds.set(path, created.id);
   }
 
   async function open(path: string, width = 1280): Promise<{ page: Page; widget: Locator }> {
@@ -172,6 +175,63 @@ describe('the visitor’s answer in Chromium: headline, warning titles and locks
       expect(text).not.toMatch(/to be checked/i);
       await screenshot(page, `answer-tube-locked-${width === 390 ? 'phone' : 'desktop'}`);
     }
+    expect(pageErrors).toEqual([]);
+  });
+
+  it('lets an admin limit the presets offered and turn the supporting figures off in the editor', async () => {
+    for (const width of [390, 1280]) {
+      const context = await browser.newContext({ viewport: { width, height: 900 } });
+      contexts.push(context);
+      const page = await context.newPage();
+      page.on('pageerror', (err) => pageErrors.push(err.message));
+      await page.goto(`${app.url}/login`);
+      await page.getByLabel('E-mail address').fill(org.users.admin.email);
+      await page.getByLabel('Password', { exact: true }).fill(org.users.admin.password);
+      await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+      await page.waitForURL(/\/orgs\/\d+$/);
+      await page.goto(`${app.url}/orgs/${org.id}/widgets/${widgetIds.get('/tube')}`);
+      const offered = page.locator('[data-offered-options="contactAnglePreset"]');
+      await offered.waitFor();
+      await screenshot(page, `answer-editor-${width === 390 ? 'phone' : 'desktop'}`);
+      if (process.env.E2E_SCREENSHOTS) {
+        // The two new controls up close, to look at.
+        const dir = `${import.meta.dirname}/../../var/screenshots`;
+        await page
+          .locator('[data-input-row="contactAnglePreset"]')
+          .screenshot({ path: `${dir}/answer-editor-options-${width}.png` });
+        await page
+          .getByLabel('Show supporting figures')
+          .locator('xpath=ancestor::section[1]')
+          .screenshot({
+            path: `${dir}/answer-editor-units-${width}.png`,
+          });
+      }
+      if (width === 390) {
+        await context.close();
+        continue;
+      }
+      await offered.locator('[data-option="mercury-glass"]').uncheck();
+      await page.getByLabel('Show supporting figures').uncheck();
+      await page.getByRole('button', { name: 'Save changes' }).click();
+      await expect
+        .poll(async () => {
+          const [row] = await app.db.sequelize.query<{ settings: unknown }>(
+            'SELECT settings FROM widgets WHERE id = ?',
+            { replacements: [widgetIds.get('/tube')], type: QueryTypes.SELECT },
+          );
+          const settings = (typeof row?.settings === 'string' ? JSON.parse(row.settings) : row?.settings) as {
+            inputs: Record<string, { options?: string[] }>;
+            result?: { secondary: string };
+          };
+          return [settings.inputs.contactAnglePreset?.options, settings.result?.secondary];
+        })
+        .toEqual([['water-clean-glass', 'custom'], 'hidden']);
+    }
+    // On the firm's page the supporting figures are gone.
+    const { widget } = await open('/tube');
+    await widget.locator('[data-wickstone="calculate"]').click();
+    await widget.locator('[data-wickstone="working"]').waitFor();
+    expect(await widget.locator('[data-wickstone="secondary"]').count()).toBe(0);
     expect(pageErrors).toEqual([]);
   });
 
