@@ -1,11 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { calculator as soil } from './calculators/soil-capillary-rise.js';
-import { calculator as tube } from './calculators/tube-rise.js';
+import { soilCapillaryRise as soil, tubeRise as tube, wettingForce as wetting } from './registry.js';
 import type { InputDefinition } from './calculators/types.js';
-import { calculator as wetting } from './calculators/wetting-force.js';
 import { CalcInputError } from './errors.js';
 import { runCalculation } from './calculators/engine.js';
-import { displayUnitOf, inputApplies, unitGap, withUnit } from './display.js';
+import {
+  displayUnitOf,
+  inputApplies,
+  optionsFor,
+  outputHelp,
+  referencesFor,
+  unitGap,
+  withUnit,
+} from './display.js';
 import { units, type UnitId } from './units.js';
 
 describe('withUnit: one spacing rule for every number and unit symbol', () => {
@@ -88,7 +94,59 @@ describe('displayUnitOf', () => {
     expect(displayUnitOf(bore, 'us')).toBe('in');
     expect(displayUnitOf({ kind: 'length' }, 'si')).toBe('m');
     expect(displayUnitOf({ kind: 'temperature' }, 'us')).toBe('degF');
-    expect(displayUnitOf({ kind: 'surfaceTension', display: { si: 'N/m' } }, 'us')).toBe('dyn/cm');
+    // No US customary unit of surface tension is in use: the US system shows mN/m (dyn/cm is CGS).
+    expect(displayUnitOf({ kind: 'surfaceTension', display: { si: 'N/m' } }, 'us')).toBe('mN/m');
+  });
+});
+
+describe('locks: options and references follow the chosen liquid', () => {
+  const preset = tube.inputs.find((i) => i.id === 'contactAnglePreset');
+  if (preset?.kind !== 'choice') throw new Error('tube-rise has a preset choice');
+
+  it('with water, only water presets (and typing the angle) are offered', () => {
+    const offered = optionsFor(preset, { liquid: 'water' }).map((o) => o.value);
+    expect(offered).toEqual(['water-clean-glass', 'custom']);
+    expect(optionsFor(preset, { liquid: 'mercury' }).map((o) => o.value)).toEqual([
+      'mercury-glass',
+      'custom',
+    ]);
+    // A liquid entered by hand may take any preset: calc-core cannot know what it is.
+    expect(optionsFor(preset, { liquid: 'custom' })).toHaveLength(preset.options.length);
+  });
+
+  it('a firm list narrows the options further', () => {
+    expect(optionsFor(preset, { liquid: 'water' }, ['custom']).map((o) => o.value)).toEqual(['custom']);
+  });
+
+  it('with water no mercury or organic-liquid reference is shown; with mercury no water one', () => {
+    const water = referencesFor(tube.references, runCalculation(tube, {}).inputs).map((r) => r.id);
+    expect(water).toEqual(expect.arrayContaining(['jurin-1718', 'iapws-r1-76', 'tanaka-2001']));
+    expect(water).not.toContain('adamson-gast-1997');
+    expect(water).not.toContain('jasper-1972');
+    expect(water).not.toContain('crc-handbook');
+    const mercury = referencesFor(
+      tube.references,
+      runCalculation(tube, { liquid: 'mercury', contactAnglePreset: 'mercury-glass' }).inputs,
+    ).map((r) => r.id);
+    expect(mercury).toEqual(expect.arrayContaining(['adamson-gast-1997', 'crc-handbook']));
+    expect(mercury).not.toContain('iapws-r1-76');
+    expect(mercury).not.toContain('jasper-1972');
+  });
+
+  it('no reference of any calculator says it is still to be checked', () => {
+    for (const def of [tube, soil, wetting]) {
+      for (const r of def.references) expect(`${r.citation} ${r.usedFor}`).not.toMatch(/to be checked/i);
+    }
+  });
+});
+
+describe('outputHelp: help that follows the sign of the value', () => {
+  const clearance = soil.outputs.find((o) => o.id === 'slabClearance');
+  if (clearance === undefined) throw new Error('soil has a clearance');
+  it('a positive clearance does not say the water reaches the slab', () => {
+    expect(outputHelp(clearance, 0.5)).not.toMatch(/reaches/);
+    expect(outputHelp(clearance, 0)).toMatch(/reaches the underside of the slab/);
+    expect(outputHelp(clearance, -0.2)).toMatch(/reaches/);
   });
 });
 

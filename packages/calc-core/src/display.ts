@@ -2,7 +2,14 @@
 // dashboard and the server: which inputs take part, which unit a value is shown in, and how a
 // number and its unit symbol are joined. Pure and small: the widget bundles it.
 
-import type { InputDefinition } from './calculators/types.js';
+import type {
+  ChoiceInput,
+  ChoiceOption,
+  Condition,
+  InputDefinition,
+  OutputDefinition,
+  Reference,
+} from './calculators/types.js';
 import { displayUnit, units, type QuantityKind, type UnitId, type UnitSystemId } from './units.js';
 
 /** Anything with a kind and an optional per-system display unit: a quantity input or an output. */
@@ -64,4 +71,46 @@ export function inputApplies(
       inputApplies(parent, inputs, choices, depth + 1)
     );
   });
+}
+
+/** Whether every condition holds for these values (only strings match a condition). */
+export function conditionsHold(
+  conditions: readonly Condition[] | undefined,
+  values: Readonly<Record<string, unknown>>,
+): boolean {
+  return (conditions ?? []).every((cond) => {
+    const value = Object.hasOwn(values, cond.input) ? values[cond.input] : undefined;
+    return typeof value === 'string' && cond.values.includes(value);
+  });
+}
+
+/**
+ * The options of a choice offered for the current values: those whose conditions hold (a preset
+ * for another liquid is left out), then, when `allowed` is given (a firm's list), only those in it.
+ * @param values current values keyed by input id
+ */
+export function optionsFor(
+  input: ChoiceInput,
+  values: Readonly<Record<string, unknown>>,
+  allowed?: readonly string[],
+): ChoiceOption[] {
+  return input.options.filter(
+    (o) => conditionsHold(o.appliesWhen, values) && (allowed === undefined || allowed.includes(o.value)),
+  );
+}
+
+/** The references that bear on a result: those whose conditions hold for the inputs it used. */
+export function referencesFor(
+  references: readonly Reference[],
+  inputs: Readonly<Record<string, unknown>>,
+): Reference[] {
+  return references.filter((r) => conditionsHold(r.appliesWhen, inputs));
+}
+
+/** An output's help line for its value: the sign-dependent help when it has one, else its fixed help. */
+export function outputHelp(output: OutputDefinition, value: number | null): string | undefined {
+  if (output.helpBySign !== undefined && value !== null) {
+    return value > 0 ? output.helpBySign.above : output.helpBySign.atOrBelow;
+  }
+  return output.help;
 }

@@ -5,7 +5,28 @@
 export { VERSION } from './version.js';
 export { formatValue, formatInput, parseNumber } from './format.js';
 export { CalcInputError, type FieldIssue } from './errors.js';
-export { displayUnitOf, inputApplies, unitGap, unitSymbol, withUnit, type Displayable } from './display.js';
+export {
+  conditionsHold,
+  displayUnitOf,
+  inputApplies,
+  optionsFor,
+  outputHelp,
+  referencesFor,
+  unitGap,
+  unitSymbol,
+  withUnit,
+  type Displayable,
+} from './display.js';
+export {
+  formatResult,
+  headline,
+  isSecondaryOutput,
+  practicalDefault,
+  readable,
+  readableUnit,
+  type Headline,
+} from './answer.js';
+export { inReaderUnits, readWarning, warningTitle, type ReadWarning } from './wording.js';
 
 export {
   convert,
@@ -18,6 +39,7 @@ export {
   STANDARD_GRAVITY,
   units,
   unitSystems,
+  cgsUnits,
   type QuantityKind,
   type UnitDefinition,
   type UnitId,

@@ -199,9 +199,10 @@ export const canonicalUnits: Readonly<Record<QuantityKind, UnitId>> = {
 export type UnitSystemId = 'si' | 'us';
 
 /**
- * The unit each kind is shown in by default. US practice keeps dyn/cm for surface tension (it is
- * what US laboratory reports and ASTM D971 used before mN/m, and lbf/ft gives numbers like 0.005),
- * and cP for viscosity.
+ * The unit each kind is shown in by default. Surface tension has no US customary unit in use
+ * (lbf/ft gives numbers like 0.005): US laboratories report it in mN/m, so the US system does too.
+ * The dyne per centimetre, equal to it, is a CGS unit (see `cgsUnits`), not a US customary one.
+ * Viscosity stays in cP, equal to mPa·s, as US practice writes it.
  */
 export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<QuantityKind, UnitId>>>> = {
   si: {
@@ -229,7 +230,7 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     volume: 'in3',
     force: 'lbf',
     pressure: 'psi',
-    surfaceTension: 'dyn/cm',
+    surfaceTension: 'mN/m',
     density: 'lb/ft3',
     temperature: 'degF',
     angle: 'deg',
@@ -243,6 +244,13 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     dimensionless: '1',
   },
 };
+
+/**
+ * Units of the centimetre–gram–second system that calc-core knows. Each equals an SI unit with a
+ * power of ten (1 dyn/cm = 1 mN/m, 1 cP = 1 mPa·s, 1 g/cm³ = 1000 kg/m³; NIST SP 811 B.8); a
+ * definition may offer one where its trade writes it, but no unit system shows them by default.
+ */
+export const cgsUnits: readonly UnitId[] = ['dyn', 'dyn/cm', 'cP', 'g/cm3'];
 
 /** The definition of a unit id or alias; throws CalcInputError (`UNKNOWN_UNIT`) for anything else. */
 export function getUnit(id: string, field = 'unit'): UnitDefinition & { id: UnitId } {

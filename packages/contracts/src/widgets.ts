@@ -68,6 +68,23 @@ export const inputSettingSchema = z.strictObject({
   mode: z.enum(inputModes),
   /** SI default (or a choice value) overriding the calculator's own. */
   default: z.union([z.number().finite(), z.string().max(60)]).optional(),
+  /**
+   * For a choice: the options the firm offers, a subset of the calculator's (the server checks
+   * each is one of them and that the default is among them). Absent: every option.
+   */
+  options: z
+    .array(z.string().min(1).max(60))
+    .min(1, 'Offer at least one option')
+    .max(40, 'At most 40 options')
+    .refine((o) => new Set(o).size === o.length, 'An option is listed twice')
+    .optional(),
+});
+
+/** How secondary outputs (capillary length, dimensionless ratios) are shown: folded under the working, or not at all. */
+export const secondaryOutputModes = ['folded', 'hidden'] as const;
+export type SecondaryOutputMode = (typeof secondaryOutputModes)[number];
+export const resultSettingsSchema = z.strictObject({
+  secondary: z.enum(secondaryOutputModes),
 });
 
 export const leadFormSchema = z.strictObject({
@@ -104,6 +121,8 @@ export const widgetSettingsSchema = z.strictObject({
   leadForm: leadFormSchema,
   /** The calculation sheet (a PDF of one run) visitors and analysts may download; on unless turned off. */
   sheet: sheetSettingsSchema.default({ enabled: true, paper: 'a4' }),
+  /** How the result is shown to visitors; secondary outputs folded unless the firm hides them. */
+  result: resultSettingsSchema.default({ secondary: 'folded' }),
 });
 export type WidgetSettings = z.infer<typeof widgetSettingsSchema>;
 
@@ -133,6 +152,7 @@ export function defaultWidgetSettings(): WidgetSettings {
       notify: [],
     },
     sheet: { enabled: true, paper: 'a4' },
+    result: { secondary: 'folded' },
   };
 }
 
@@ -229,6 +249,8 @@ export const embedWidgetSchema = z.object({
     }),
     /** Whether the widget offers its calculation sheet after a result (the paper stays the server's). */
     sheet: z.object({ enabled: z.boolean() }),
+    /** Absent from an answer made before it existed: secondary outputs folded. */
+    result: resultSettingsSchema.optional(),
   }),
 });
 export type EmbedWidget = z.infer<typeof embedWidgetSchema>;

@@ -168,7 +168,7 @@ for (const hostile of ['0', '1']) {
         '[data-input="liquid"]',
         '[data-wickstone="calculate"]',
         '.figure',
-        '.suffix',
+        '.label .unit',
         '.note',
       ]) {
         const cs = getComputedStyle(root.querySelector(sel));

@@ -3,7 +3,7 @@
 // it lazily (`lazy.ts`), so it never counts against the first flight.
 export { LeadForm } from './ui/LeadForm.js';
 export { SheetBlock } from './ui/SheetBlock.js';
-export { Working } from './ui/Working.js';
+export { Notes, Picture, Working } from './ui/Working.js';
 export { createReporter } from './lib/reporter.js';
 export { registerManrope } from './lib/fonts.js';
 export { default as css } from './ui/extras.css?inline';

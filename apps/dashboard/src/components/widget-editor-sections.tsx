@@ -59,7 +59,7 @@ export function UnitsSection({ draft, onChange, errors, readOnly, calc }: Sectio
         onChange={(system) => onChange((d) => withUnitSystem(d, calc, system))}
         options={[
           { value: 'si', label: 'Metric (SI)', detail: 'mm, °C, mN/m, kPa' },
-          { value: 'us', label: 'US customary', detail: 'in, °F, dyn/cm, psi' },
+          { value: 'us', label: 'US customary', detail: 'in, ft, °F, psi' },
         ]}
       />
       <CheckField
@@ -71,6 +71,18 @@ export function UnitsSection({ draft, onChange, errors, readOnly, calc }: Sectio
           onChange((d) => ({
             ...d,
             settings: { ...d.settings, units: { ...d.settings.units, visitorMaySwitch } },
+          }))
+        }
+      />
+      <CheckField
+        label="Show supporting figures"
+        detail="The capillary length and the ratios behind a result, folded under the working. Off: not shown to visitors."
+        checked={(draft.settings.result?.secondary ?? 'folded') === 'folded'}
+        disabled={readOnly}
+        onChange={(shown) =>
+          onChange((d) => ({
+            ...d,
+            settings: { ...d.settings, result: { secondary: shown ? 'folded' : 'hidden' } },
           }))
         }
       />

@@ -7,6 +7,7 @@ import {
   setChoiceDefault,
   setDefaultText,
   setInputMode,
+  setOptionOffered,
   startingChoices,
 } from '../lib/widget-draft';
 import { FieldProblem } from './form';
@@ -157,6 +158,35 @@ function InputRow({ input, applies, ...props }: SectionProps & { input: InputDef
         ) : null}
         <FieldProblem id={`${base}-error`} message={error} />
       </div>
+      {input.kind === 'choice' && input.options.length > 1 ? (
+        <fieldset className="space-y-1 @md:col-span-2 @3xl:col-span-3" data-offered-options={input.id}>
+          <legend className="text-sm font-semibold">Options offered to visitors: {input.label}</legend>
+          <div className="flex flex-wrap gap-x-5 gap-y-1">
+            {input.options.map((o) => (
+              <label key={o.value} className="inline-flex items-center gap-2 text-sm">
+                <input
+                  type="checkbox"
+                  data-option={o.value}
+                  checked={(setting?.options ?? input.options.map((x) => x.value)).includes(o.value)}
+                  disabled={readOnly}
+                  onChange={(e) => {
+                    const offered = e.target.checked;
+                    onChange((d) => setOptionOffered(d, input, o.value, offered));
+                  }}
+                />
+                {o.label}
+              </label>
+            ))}
+          </div>
+          <FieldProblem
+            id={`${base}-options-error`}
+            message={
+              errors[`settings.inputs.${input.id}.options`] ??
+              Object.entries(errors).find(([k]) => k.startsWith(`settings.inputs.${input.id}.options.`))?.[1]
+            }
+          />
+        </fieldset>
+      ) : null}
     </li>
   );
 }

@@ -27,7 +27,7 @@ const colorLabel: Record<ColorKey, string> = {
 const colorHint: Record<ColorKey, string> = {
   background: 'Behind everything in the widget.',
   text: 'Labels, results and working.',
-  primary: 'The Calculate and Send buttons, the selected unit.',
+  primary: 'The Work it out and Send buttons, the selected unit.',
   primaryText: 'Words on the buttons.',
 };
 

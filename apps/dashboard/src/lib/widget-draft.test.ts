@@ -18,6 +18,7 @@ import {
   setChoiceDefault,
   setDefaultText,
   setInputMode,
+  setOptionOffered,
   startingChoices,
   usableColors,
   validateDraft,
@@ -174,5 +175,26 @@ describe('server errors, dirtiness and the preview', () => {
     expect(embed.settings.cautions).toBe('Ours.');
     expect(embed.settings.look.colors.text).toBe(defaultWidgetSettings().look.colors.text);
     expect(embed.settings).not.toHaveProperty('leadForm.notify');
+  });
+});
+
+describe('options a firm offers for a choice', () => {
+  const preset = calc.inputs.find((i) => i.id === 'contactAnglePreset');
+  if (preset?.kind !== 'choice') throw new Error('tube-rise has a preset choice');
+
+  it('stores the list only while something is withdrawn, in the calculator’s order', () => {
+    const start = draftFromWidget(sampleWidget(), calc);
+    const narrowed = setOptionOffered(start, preset, 'mercury-glass', false);
+    expect(narrowed.settings.inputs.contactAnglePreset?.options).toEqual(['water-clean-glass', 'custom']);
+    const back = setOptionOffered(narrowed, preset, 'mercury-glass', true);
+    expect(back.settings.inputs.contactAnglePreset).toBeUndefined();
+  });
+
+  it('passes the result setting to the preview', () => {
+    const start = draftFromWidget(sampleWidget(), calc);
+    const hidden = { ...start, settings: { ...start.settings, result: { secondary: 'hidden' as const } } };
+    expect(previewWidget(sampleWidget(), hidden, hidden.settings.look.colors).settings.result).toEqual({
+      secondary: 'hidden',
+    });
   });
 });

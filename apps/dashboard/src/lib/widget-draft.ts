@@ -1,5 +1,6 @@
 import { formatInput as formatNumber, parseNumber } from '@wickstone/calc-core/format';
 import {
+  type ChoiceInput,
   displayUnitOf,
   fromCanonical,
   toCanonical,
@@ -90,7 +91,9 @@ function defaultTextsFor(calc: CalculatorDefinition, settings: WidgetSettings): 
 /** An input setting that says nothing (editable, no default) is left out, as a new widget has it. */
 function tidyInputs(inputs: WidgetSettings['inputs']): WidgetSettings['inputs'] {
   return Object.fromEntries(
-    Object.entries(inputs).filter(([, s]) => s.mode !== 'editable' || s.default !== undefined),
+    Object.entries(inputs).filter(
+      ([, s]) => s.mode !== 'editable' || s.default !== undefined || s.options !== undefined,
+    ),
   );
 }
 
@@ -125,11 +128,12 @@ export function withUnitSystem(
 function withInput(
   draft: WidgetDraft,
   id: string,
-  change: { mode?: InputMode; default?: number | string | undefined },
+  change: { mode?: InputMode; default?: number | string | undefined; options?: string[] | undefined },
 ): WidgetDraft {
   const current = draft.settings.inputs[id] ?? { mode: 'editable' as InputMode };
   const next = { ...current, ...change };
   if (next.default === undefined) delete next.default;
+  if (next.options === undefined) delete next.options;
   const inputs = tidyInputs({ ...draft.settings.inputs, [id]: next });
   return { ...draft, settings: { ...draft.settings, inputs } };
 }
@@ -153,6 +157,22 @@ export function setDefaultText(draft: WidgetDraft, input: QuantityInput, text: s
 /** A chosen option; the calculator's own default is stored as no setting at all. */
 export function setChoiceDefault(draft: WidgetDraft, input: InputDefinition, value: string): WidgetDraft {
   return withInput(draft, input.id, { default: value === input.default ? undefined : value });
+}
+
+/**
+ * Offers or withdraws one option of a choice. Every option offered is stored as no list at all;
+ * withdrawing the default's option is left to the server to refuse, naming the field.
+ */
+export function setOptionOffered(
+  draft: WidgetDraft,
+  input: ChoiceInput,
+  value: string,
+  offered: boolean,
+): WidgetDraft {
+  const all = input.options.map((o) => o.value);
+  const now = draft.settings.inputs[input.id]?.options ?? all;
+  const next = all.filter((v) => (v === value ? offered : now.includes(v)));
+  return withInput(draft, input.id, { options: next.length === all.length ? undefined : next });
 }
 
 /** The choice values the widget starts from: the firm's default, else the calculator's. */
@@ -235,6 +255,7 @@ export function previewWidget(widget: Widget, draft: WidgetDraft, colors: Widget
         consentText: s.leadForm.consentText,
       },
       sheet: { enabled: s.sheet.enabled },
+      result: s.result,
     },
   };
 }

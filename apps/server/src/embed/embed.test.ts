@@ -75,6 +75,8 @@ describe('public embed API', () => {
       expect(res.headers['access-control-allow-origin']).toBe(SITE);
       const body = embedWidgetSchema.parse(res.body);
       expect(body.calculatorId).toBe('tube-rise');
+      // How the result is shown goes with it: secondary outputs folded unless the firm hides them.
+      expect(body.settings.result).toEqual({ secondary: 'folded' });
       expect(JSON.stringify(res.body)).not.toContain(notify);
       expect(JSON.stringify(res.body)).not.toContain('allowedOrigins');
     });

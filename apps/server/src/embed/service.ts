@@ -1,7 +1,13 @@
 import { Op, QueryTypes, type Sequelize } from 'sequelize';
 import type { Logger } from 'pino';
 import { getCalculator, type CalculationResult } from '@wickstone/calc-core';
-import type { EmbedLeadBody, EmbedRunBody, EmbedWidget, LeadFieldId } from '@wickstone/contracts';
+import type {
+  EmbedLeadBody,
+  EmbedRunBody,
+  EmbedWidget,
+  LeadFieldId,
+  WidgetSettings,
+} from '@wickstone/contracts';
 import { leadFieldIds } from '@wickstone/contracts';
 import { Asset, Lead, Membership, Organization, Run, User, Widget } from '../db/models/index.js';
 import { AppError } from '../errors.js';
@@ -113,6 +119,8 @@ export function createEmbedService(deps: {
           leadForm: { enabled: leadForm.enabled, fields: leadForm.fields, consentText: leadForm.consentText },
           // Widgets saved before sheets existed have no setting: sheets are on by default.
           sheet: { enabled: (w.settings as Partial<typeof w.settings>).sheet?.enabled ?? true },
+          // Settings stored before the result settings existed have none: secondary outputs folded.
+          result: (w.settings as Partial<WidgetSettings>).result ?? { secondary: 'folded' },
         },
       };
     },

@@ -60,6 +60,36 @@ export function assetUrl(publicUrl: string, asset: { id: number; sha256: string 
 }
 
 /**
+ * A firm's list of offered options: only for a choice input, each one of its options, and the
+ * default (the firm's or the calculator's) among them, so the form never starts on a value it
+ * does not offer.
+ */
+function checkOptions(
+  calc: CalculatorDefinition,
+  id: string,
+  s: WidgetSettings['inputs'][string],
+  at: string,
+  fields: { field: string; message: string }[],
+): void {
+  const input = calc.inputs.find((i) => i.id === id);
+  const offered = s.options ?? [];
+  if (input?.kind !== 'choice') {
+    fields.push({ field: `${at}.options`, message: `${input?.label ?? id} is not a choice` });
+    return;
+  }
+  offered.forEach((value, n) => {
+    if (!input.options.some((o) => o.value === value))
+      fields.push({ field: `${at}.options.${n}`, message: `${input.label} has no option "${value}"` });
+  });
+  const start = typeof s.default === 'string' ? s.default : input.default;
+  if (!offered.includes(start))
+    fields.push({
+      field: `${at}.options`,
+      message: `The default "${start}" must be one of the options offered`,
+    });
+}
+
+/**
  * Check a widget's input settings against its calculator: every key is one of its inputs, and
  * every default is a value the calculator accepts (calc-core decides, naming each bad field).
  */
@@ -71,6 +101,7 @@ function checkInputSettings(calc: CalculatorDefinition, settings: WidgetSettings
     if (!known.has(id))
       fields.push({ field: `${where}.inputs.${id}`, message: `${calc.title} has no input "${id}"` });
     else if (s.default !== undefined) defaults[id] = s.default;
+    if (s.options !== undefined && known.has(id)) checkOptions(calc, id, s, `${where}.inputs.${id}`, fields);
   }
   if (fields.length === 0) {
     try {

@@ -87,6 +87,41 @@ describe('widgets API', () => {
     expect(fieldsOf(r3.body).map((f) => f.field)).toEqual(['body.settings.inputs.diameter.default']);
   });
 
+  it('limits a choice to the options the firm offers, refusing ones the calculator lacks or a default left out', async () => {
+    const settings = defaultWidgetSettings();
+    settings.inputs = { contactAnglePreset: { mode: 'editable', options: ['water-clean-glass', 'no-such'] } };
+    const bad = await owner
+      .post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'tube-rise', settings })
+      .expect(400);
+    expect(fieldsOf(bad.body).map((f) => f.field)).toEqual([
+      'body.settings.inputs.contactAnglePreset.options.1',
+    ]);
+    settings.inputs = { contactAnglePreset: { mode: 'editable', options: ['custom'] } };
+    const left = await owner
+      .post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'tube-rise', settings })
+      .expect(400);
+    // The calculator's default preset (water on clean glass) is not offered: the form could not start.
+    expect(fieldsOf(left.body).map((f) => f.field)).toEqual([
+      'body.settings.inputs.contactAnglePreset.options',
+    ]);
+    settings.inputs = { diameter: { mode: 'editable', options: ['x'] } };
+    const notChoice = await owner
+      .post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'tube-rise', settings })
+      .expect(400);
+    expect(fieldsOf(notChoice.body).map((f) => f.field)).toEqual(['body.settings.inputs.diameter.options']);
+    settings.inputs = { contactAnglePreset: { mode: 'editable', default: 'custom', options: ['custom'] } };
+    settings.result = { secondary: 'hidden' };
+    const ok = widgetSchema.parse(
+      (
+        await owner
+          .post(`/orgs/${org.id}/widgets`, { name: 'x', calculatorId: 'tube-rise', settings })
+          .expect(201)
+      ).body,
+    );
+    expect(ok.settings.inputs.contactAnglePreset?.options).toEqual(['custom']);
+    expect(ok.settings.result).toEqual({ secondary: 'hidden' });
+  });
+
   it('refuses colours that fail WCAG AA with the ratio, and keeps what was stored', async () => {
     const w = await create('Contrast');
     const settings = structuredClone(w.settings);

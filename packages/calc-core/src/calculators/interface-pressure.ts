@@ -240,6 +240,18 @@ export const calculator: CalculatorCore = {
       help: 'Δp/(ρ g): for a pore, the equivalent capillary rise.',
     },
   ],
+  headline: {
+    rules: [
+      {
+        when: whenPore,
+        output: 'pressure',
+        text: 'Air needs about {value} to push into a pore {input.poreRadius} in radius.',
+        atOrBelow: 'The liquid needs about {value} to be pushed into a pore {input.poreRadius} in radius.',
+      },
+      { output: 'pressure', text: 'The pressure on the inner, concave side is about {value} higher.' },
+    ],
+    missing: 'pressure',
+  },
   warnings: [
     {
       code: 'SHAPE_NOT_SPHERICAL',

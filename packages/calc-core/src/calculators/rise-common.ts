@@ -27,6 +27,7 @@ import {
   solved,
 } from './shared.js';
 import type {
+  HeadlineDefinition,
   InputDefinition,
   InputValues,
   OutputDefinition,
@@ -113,7 +114,10 @@ export function riseOutputs(
       id: 'rise',
       label: riseLabel,
       kind: 'length',
-      help: 'Negative values are a depression below the free surface.',
+      helpBySign: {
+        above: 'Height above the free surface of the liquid outside.',
+        atOrBelow: 'Negative: the liquid is pushed down below the free surface outside.',
+      },
       display: MM,
     },
     {
@@ -257,7 +261,7 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
     warnings.push(
       warning(
         geometry.codes.tooWide,
-        `Half the ${geometry.noun} is ${fmt(ratio)} times the capillary length (${q(lc, 'm')}): the meniscus is flattened by gravity and neither ${geometry.sizeId === 'diameter' ? "Jurin's law" : 'the slot formula'} nor its correction holds, so no rise is given.`,
+        `Half the ${geometry.noun} is ${fmt(ratio, 2)} times the capillary length (${q(lc, 'm')}): the meniscus is flattened by gravity and neither ${geometry.sizeId === 'diameter' ? "Jurin's law" : 'the slot formula'} nor its correction holds, so no rise is given.`,
         fields,
         { step: 'size-ratio', withholds: ['rise', 'riseCorrected'] },
       ),
@@ -266,7 +270,7 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
     warnings.push(
       warning(
         geometry.codes.notSmall,
-        `Half the ${geometry.noun} is ${fmt(ratio)} of the capillary length (${q(lc, 'm')}), so the liquid in the meniscus changes the rise by more than 2 %: use the corrected rise.`,
+        `Half the ${geometry.noun} is ${fmt(ratio, 2)} of the capillary length (${q(lc, 'm')}), so the liquid in the meniscus changes the rise by more than 2 %: use the corrected rise.`,
         fields,
         { step: 'size-ratio' },
       ),
@@ -295,6 +299,21 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
     gravityAssumption(g),
   ];
   return solved({ outputs, working, warnings, band, assumptions }, liquid);
+}
+
+/**
+ * The headline of a rise: the corrected rise when the bore or gap is wide enough for the meniscus
+ * to matter (its warning asks for it), else the rise; pushed down when it is negative.
+ * @param where how the size reads in the sentence, `{input.diameter}` or `{input.gap}` in it
+ */
+export function riseHeadline(geometry: RiseGeometry, where: string): HeadlineDefinition {
+  const say = (output: string, warning?: string) => ({
+    output,
+    ...(warning !== undefined ? { warning } : {}),
+    text: `{liquid} can climb about {value} ${where}.`,
+    atOrBelow: `{liquid} is pushed down about {value} ${where}.`,
+  });
+  return { rules: [say('riseCorrected', geometry.codes.notSmall), say('rise')], missing: 'rise' };
 }
 
 /** The warning catalogue of a rise calculator. */

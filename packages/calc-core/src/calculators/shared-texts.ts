@@ -1,7 +1,11 @@
 // Cautions and references several calculators share. Texts, not code: a calculator's
 // `<id>.texts.ts` lists them, and nothing a calculation runs imports this file, so the widget
 // fetches them after first paint (see DEVELOPERS.md, "Adding a calculator").
+import { liquids } from '../properties/liquids.js';
 import type { Caution, Reference } from './types.js';
+
+/** References that bear on a result only with water chosen. */
+const WITH_WATER = [{ input: 'liquid', values: ['water'] }] as const;
 
 const TANAKA_SOURCE =
   'Tanaka M., Girard G., Davis R., Peuto A., Bignell N. (2001) Recommended table for the density of water between 0 °C and 40 °C based on recent experimental reports, Metrologia 38, 301–309';
@@ -40,18 +44,21 @@ export const WATER_REFERENCES: readonly Reference[] = [
     citation: 'IAPWS R1-76(2014), Revised Release on Surface Tension of Ordinary Water Substance',
     usedFor: 'surface tension of water from 0.01 °C to the critical point',
     basis: 'printed',
+    appliesWhen: WITH_WATER,
   },
   {
     id: 'tanaka-2001',
     citation: TANAKA_SOURCE,
     usedFor: 'density of air-free water at 101 325 Pa, 0–40 °C',
     basis: 'printed',
+    appliesWhen: WITH_WATER,
   },
   {
     id: 'kell-1975',
     citation: KELL_SOURCE,
     usedFor: 'density of water at 1 atm above 40 °C (above 100 °C a liquid held at 1 atm)',
     basis: 'printed',
+    appliesWhen: WITH_WATER,
   },
 ];
 
@@ -60,6 +67,7 @@ export const VISCOSITY_REFERENCE: Reference = {
   citation: 'IAPWS SR6-08 (2011), Supplementary Release on Properties of Liquid Water at 0.1 MPa',
   usedFor: 'viscosity of water',
   basis: 'printed',
+  appliesWhen: WITH_WATER,
 };
 
 export const LIQUID_TABLE_REFERENCES: readonly Reference[] = [
@@ -69,19 +77,27 @@ export const LIQUID_TABLE_REFERENCES: readonly Reference[] = [
       'Jasper J. J. (1972) The surface tension of pure liquid compounds, J. Phys. Chem. Ref. Data 1, 841–1009',
     usedFor: 'surface tension of the organic liquids in the table',
     basis: 'printed',
+    appliesWhen: [
+      {
+        input: 'liquid',
+        values: liquids.filter((l) => l.surfaceTension.source.startsWith('Jasper')).map((l) => l.id),
+      },
+    ],
   },
   {
     id: 'adamson-gast-1997',
     citation: 'Adamson A. W., Gast A. P. (1997) Physical Chemistry of Surfaces, 6th ed., Wiley',
     usedFor: 'surface tension of mercury',
     basis: 'printed',
+    appliesWhen: [{ input: 'liquid', values: ['mercury'] }],
   },
   {
     id: 'crc-handbook',
     citation: 'CRC Handbook of Chemistry and Physics',
     usedFor:
-      'densities and viscosities of the liquids in the table (values from memory, to be checked against the printed edition)',
+      'densities and viscosities of the liquids in the table at 20 °C (recalled from the handbook, not read from a printed page here: from memory)',
     basis: 'from memory',
+    appliesWhen: [{ input: 'liquid', values: liquids.map((l) => l.id) }],
   },
 ];
 

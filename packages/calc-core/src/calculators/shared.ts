@@ -369,6 +369,8 @@ export function contactAngleInputs(opts: {
         p.spreadDeg === undefined
           ? `${p.angleDeg}°`
           : `${p.angleDeg}° (${p.spreadDeg.low}–${p.spreadDeg.high}°)`,
+      // Offered only with its own liquid (or one entered by hand): any other pairing is refused below.
+      appliesWhen: [{ input: 'liquid', values: [p.liquid, CUSTOM] }],
     }));
   const preset: ChoiceInput = {
     id: 'contactAnglePreset',

@@ -1,5 +1,5 @@
 import { runner } from './engine.js';
-import { riseInputs, riseOutputs, riseWarnings, SLOT, solveRise } from './rise-common.js';
+import { riseHeadline, riseInputs, riseOutputs, riseWarnings, SLOT, solveRise } from './rise-common.js';
 import { MM, quantityInput } from './shared.js';
 import type { CalculatorCore } from './types.js';
 
@@ -13,6 +13,7 @@ export const calculator: CalculatorCore = {
   ),
   outputs: riseOutputs(SLOT, 'Rise', 'Half the gap / capillary length'),
   warnings: riseWarnings(SLOT),
+  headline: riseHeadline(SLOT, 'between walls {input.gap} apart'),
   solve: (inputs) => solveRise(SLOT, inputs),
 };
 

@@ -268,10 +268,23 @@ export const calculator: CalculatorCore = {
       id: 'slabClearance',
       label: 'Clearance between the capillary zone and the slab',
       kind: 'length',
-      help: 'Zero or negative: capillary water reaches the underside of the slab.',
+      helpBySign: {
+        above: 'How far below the underside of the slab the capillary water stops.',
+        atOrBelow: 'Zero or less: capillary water reaches the underside of the slab.',
+      },
       display: { si: 'm', us: 'ft' },
     },
   ],
+  headline: {
+    rules: [
+      {
+        output: 'slabClearance',
+        text: 'Capillary water stays about {value} below the slab.',
+        atOrBelow: 'Capillary water reaches the slab.',
+      },
+    ],
+    missing: 'clearance under the slab',
+  },
   warnings: [
     {
       code: 'CAPILLARY_RISE_REACHES_SLAB',

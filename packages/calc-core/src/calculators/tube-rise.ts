@@ -1,5 +1,5 @@
 import { runner } from './engine.js';
-import { riseInputs, riseOutputs, riseWarnings, solveRise, TUBE } from './rise-common.js';
+import { riseHeadline, riseInputs, riseOutputs, riseWarnings, solveRise, TUBE } from './rise-common.js';
 import { MM, quantityInput } from './shared.js';
 import type { CalculatorCore } from './types.js';
 
@@ -13,6 +13,7 @@ export const calculator: CalculatorCore = {
   ),
   outputs: riseOutputs(TUBE, "Rise (Jurin's law)", 'Bore radius / capillary length'),
   warnings: riseWarnings(TUBE),
+  headline: riseHeadline(TUBE, 'in a {input.diameter} bore'),
   solve: (inputs) => solveRise(TUBE, inputs),
 };
 

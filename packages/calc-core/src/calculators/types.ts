@@ -45,6 +45,11 @@ export interface ChoiceOption {
   readonly value: string;
   readonly label: string;
   readonly help?: string;
+  /**
+   * The option is offered only while every condition holds (a contact-angle preset only for its own
+   * liquid); a form leaves it out otherwise.
+   */
+  readonly appliesWhen?: readonly Condition[];
 }
 
 export interface ChoiceInput extends InputCommon {
@@ -60,6 +65,8 @@ export interface OutputDefinition {
   readonly label: string;
   readonly kind: QuantityKind;
   readonly help?: string;
+  /** Help that depends on the sign of the value: `above` for a value above zero, `atOrBelow` otherwise. */
+  readonly helpBySign?: { readonly above: string; readonly atOrBelow: string };
   readonly display?: Partial<Readonly<Record<UnitSystemId, UnitId>>>;
 }
 
@@ -81,6 +88,8 @@ export interface Reference {
   readonly citation: string;
   readonly usedFor: string;
   readonly basis: Basis;
+  /** The reference bears on a result only while every condition holds (a liquid's own table source). */
+  readonly appliesWhen?: readonly Condition[];
 }
 
 /** Resolved inputs: canonical numbers and choice values, keyed by input id. */
@@ -144,6 +153,31 @@ export interface Solution {
 }
 
 /**
+ * One way of saying a result in a sentence. Placeholders: `{value}` the output's magnitude in the
+ * unit the result shows it in (a time in words: `3.6 seconds`), `{input.<id>}` an input in its
+ * unit, `{liquid}` the liquid's name (`Water`, `The liquid` for one entered by hand).
+ */
+export interface HeadlineRule {
+  /** The rule applies only while every condition holds for the inputs used. */
+  readonly when?: readonly Condition[];
+  /** The rule applies only when the result carries this warning. */
+  readonly warning?: string;
+  /** The output the sentence states; a rule whose output has no figure is passed over. */
+  readonly output: string;
+  /** The sentence for a value above zero, and for any value when `atOrBelow` is absent. */
+  readonly text: string;
+  /** The sentence for a value of zero or less (`{value}` is then the magnitude). */
+  readonly atOrBelow?: string;
+}
+
+/** How a result is said in one sentence: the first rule that applies and has a figure. */
+export interface HeadlineDefinition {
+  readonly rules: readonly HeadlineRule[];
+  /** What the answer is, for the sentence when no rule has a figure: "No {missing} is given…". */
+  readonly missing: string;
+}
+
+/**
  * What computes and what a form shows: the calculation itself, in `calculators/<id>.ts`. The
  * widget's first flight carries this alone; its texts follow after first paint.
  */
@@ -155,6 +189,8 @@ export interface CalculatorCore {
   readonly inputs: readonly InputDefinition[];
   readonly outputs: readonly OutputDefinition[];
   readonly warnings: readonly WarningDefinition[];
+  /** The headline sentence of a result; without one, its first output with a figure is said plainly. */
+  readonly headline?: HeadlineDefinition;
   /** Pure: resolved inputs in, solution out. Throws CalcInputError for combinations no single field shows. */
   readonly solve: (inputs: InputValues) => Solution;
 }

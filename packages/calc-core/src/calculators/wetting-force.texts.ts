@@ -33,7 +33,7 @@ export const texts: CalculatorTexts = {
       citation:
         'ASTM D971, Standard Test Method for Interfacial Tension of Insulating Liquids Against Water by the Ring Method',
       usedFor:
-        'the Zuidema–Waters factor as ASTM writes it (recalled, to be checked against the current edition), ring of at least 40 mm circumference',
+        'the Zuidema–Waters factor as ASTM writes it (recalled, from memory; the current edition governs), ring of at least 40 mm circumference',
       basis: 'from memory',
     },
     {

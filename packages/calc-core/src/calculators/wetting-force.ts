@@ -380,6 +380,22 @@ export const calculator: CalculatorCore = {
     { id: 'correctionFactor', label: 'Correction factor f', kind: 'dimensionless' },
     { id: 'wettedLength', label: 'Wetted length', kind: 'length', display: { si: 'mm', us: 'in' } },
   ],
+  headline: {
+    rules: [
+      {
+        when: [{ input: 'method', values: ['plate-force'] }],
+        output: 'force',
+        text: 'The liquid pulls on the plate with about {value}.',
+      },
+      {
+        when: [{ input: 'method', values: ['rod-force'] }],
+        output: 'force',
+        text: 'The liquid pulls on the rod with about {value}.',
+      },
+      { output: 'surfaceTension', text: 'The surface tension is about {value}.' },
+    ],
+    missing: 'corrected surface tension',
+  },
   warnings: [
     {
       code: 'CONTACT_ANGLE_NOT_ZERO',

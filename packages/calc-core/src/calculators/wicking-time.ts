@@ -289,6 +289,32 @@ export const calculator: CalculatorCore = {
       help: 'Upward only, below the Jurin limit.',
     },
   ],
+  headline: {
+    rules: [
+      {
+        warning: 'BEYOND_JURIN_LIMIT',
+        output: 'jurinLimit',
+        text: '{liquid} never climbs {input.length}: it stops at about {value}.',
+      },
+      {
+        when: [{ input: 'direction', values: ['vertical'] }],
+        output: 'timeWithGravity',
+        text: '{liquid} takes about {value} to wick {input.length} upward.',
+      },
+      {
+        when: [{ input: 'direction', values: ['horizontal'] }],
+        output: 'timeWithInertia',
+        text: '{liquid} takes about {value} to wick {input.length} along the path.',
+      },
+      {
+        when: [{ input: 'direction', values: ['vertical'] }],
+        output: 'time',
+        text: '{liquid} takes about {value} to wick {input.length} upward.',
+      },
+      { output: 'time', text: '{liquid} takes about {value} to wick {input.length} along the path.' },
+    ],
+    missing: 'time',
+  },
   warnings: [
     { code: 'BEYOND_JURIN_LIMIT', summary: 'An upward height at or above the Jurin limit is never reached.' },
     {

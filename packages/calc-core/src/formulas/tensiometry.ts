@@ -109,8 +109,8 @@ export interface RingResult {
 }
 
 /**
- * The constants of the Zuidema–Waters (1941) fit as ASTM D971 writes it (recalled, to be checked
- * against the printed standard): f = base + √(k·P/(C²·(D − d)) + c − m·r/R), P in dyn/cm, C in cm,
+ * The constants of the Zuidema–Waters (1941) fit as ASTM D971 writes it (from memory, not read
+ * from the printed standard here): f = base + √(k·P/(C²·(D − d)) + c − m·r/R), P in dyn/cm, C in cm,
  * D − d in g/mL. The working is built from these same numbers.
  */
 export const ZUIDEMA_WATERS = { base: 0.725, k: 0.01452, c: 0.04534, m: 1.679 } as const;

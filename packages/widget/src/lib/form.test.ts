@@ -1,7 +1,16 @@
 import { run as runTube, calculator as tube } from '@wickstone/calc-core/calculators/tube-rise';
 import { CalcInputError } from '@wickstone/calc-core';
 import { describe, expect, it } from 'vitest';
-import { applicable, collectInputs, initialForm, issueMessage, reformat, typed } from './form.js';
+import {
+  applicable,
+  collectInputs,
+  initialForm,
+  issueMessage,
+  offeredOptions,
+  reformat,
+  settleChoices,
+  typed,
+} from './form.js';
 import { resolveInputSettings } from './settings.js';
 
 const inputs = resolveInputSettings(tube, {
@@ -11,11 +20,45 @@ const inputs = resolveInputSettings(tube, {
 const input = (id: string) => inputs.find((i) => i.def.id === id)!;
 
 describe('form state', () => {
-  it('shows defaults in the unit system but keeps the exact canonical value', () => {
+  it('shows a round default round in US units and sends what the box says', () => {
     const us = initialForm(inputs, 'us');
-    expect(us.diameter).toEqual({ text: '0.0393701', value: 0.001 });
-    expect(us.temperatureC).toEqual({ text: '68', value: 20 });
-    expect(collectInputs(inputs, us).diameter).toBe(0.001);
+    // 1 mm is 0.03937 in: an engineer writes 0.04 in (within our 2 % rule), and 0.04 in is sent.
+    expect(us.diameter).toMatchObject({ text: '0.04', fromDefault: true });
+    expect(us.diameter?.value).toBeCloseTo(0.04 * 0.0254, 15);
+    expect(us.temperatureC).toMatchObject({ text: '68', value: 20 });
+    expect(collectInputs(inputs, us).diameter).toBeCloseTo(0.001016, 15);
+    // A default that is not round is not rounded, and is sent exactly: standard gravity stays standard.
+    const free = resolveInputSettings(tube, {});
+    expect(initialForm(free, 'us').gravity).toMatchObject({ text: '32.174', value: 9.80665 });
+    // Metric shows the calculator's own default, exactly.
+    expect(initialForm(inputs, 'si').diameter).toMatchObject({ text: '1', value: 0.001 });
+    // A default still untouched follows a unit switch back to the exact metric value.
+    expect(reformat(us, inputs, 'si').diameter).toMatchObject({ text: '1', value: 0.001 });
+  });
+
+  it('keeps a locked default exact (the firm’s value), however it converts', () => {
+    const locked = resolveInputSettings(tube, { diameter: { mode: 'locked', default: 0.001 } });
+    expect(initialForm(locked, 'us').diameter).toEqual({ text: '0.0393701', value: 0.001 });
+  });
+
+  it('offers only the presets of the chosen liquid, and settles on one when the liquid changes', () => {
+    const free = resolveInputSettings(tube, {});
+    const preset = free.find((i) => i.def.id === 'contactAnglePreset')!;
+    let state = initialForm(free, 'si');
+    expect(offeredOptions(preset, free, state).map((o) => o.value)).toEqual(['water-clean-glass', 'custom']);
+    state = settleChoices(free, { ...state, liquid: { text: 'mercury', value: 'mercury' } });
+    expect(state.contactAnglePreset?.value).toBe('mercury-glass');
+    expect(() => runTube(collectInputs(free, state))).not.toThrow();
+  });
+
+  it('honours a firm’s list of options', () => {
+    const limited = resolveInputSettings(tube, {
+      contactAnglePreset: { mode: 'editable', options: ['custom'] },
+    });
+    const preset = limited.find((i) => i.def.id === 'contactAnglePreset')!;
+    const state = initialForm(limited, 'si');
+    expect(offeredOptions(preset, limited, state).map((o) => o.value)).toEqual(['custom']);
+    expect(state.contactAnglePreset?.value).toBe('custom');
   });
 
   it('reads typed text in the box’s unit', () => {

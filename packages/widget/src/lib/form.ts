@@ -1,16 +1,20 @@
-import type { FieldIssue, QuantityInput, UnitSystemId } from '@wickstone/calc-core';
-import { inputApplies } from '@wickstone/calc-core/display';
+import type { ChoiceInput, FieldIssue, QuantityInput, UnitSystemId } from '@wickstone/calc-core';
+import { practicalDefault } from '@wickstone/calc-core/answer';
+import { inputApplies, optionsFor } from '@wickstone/calc-core/display';
 import type { ResolvedInput } from './settings.js';
 import { displayUnitOf, formatInput, fromDisplay, parseNumber, toDisplay, withUnit } from './units.js';
 
 /**
- * One input as the form holds it. `value` is canonical and exact: a default shown as 0.0393701 in
- * still sends exactly 0.001 m, because the text is derived from the value, not the other way
- * round, until the visitor types. null = empty, NaN = unreadable text.
+ * One input as the form holds it. `value` is canonical and is what the text says: a round default
+ * converted into another unit is shown rounded as an engineer writes it (1 m → 3.3 ft) and that
+ * rounded value is what is sent, so the box, the headline and the stored run agree. A locked or
+ * hidden value is the firm's, exact. null = empty, NaN = unreadable text. `fromDefault` marks a
+ * value still at its default, re-derived from it on a unit switch.
  */
 export interface FieldState {
   readonly text: string;
   readonly value: number | string | null;
+  readonly fromDefault?: true;
 }
 
 export type FormState = Readonly<Record<string, FieldState>>;
@@ -20,12 +24,56 @@ function shown(value: number | string, input: ResolvedInput, system: UnitSystemI
   return formatInput(toDisplay(value, displayUnitOf(input.def as QuantityInput, system)));
 }
 
-/** Every input at its starting value, texts in the unit system's units. */
+/** An input at its starting value in `system`: rounded practically when the visitor can edit it. */
+function atDefault(input: ResolvedInput, system: UnitSystemId): FieldState {
+  const value = input.initial;
+  if (typeof value === 'string' || input.mode !== 'editable') {
+    return { text: shown(value, input, system), value };
+  }
+  const unit = displayUnitOf(input.def as QuantityInput, system);
+  const exact = toDisplay(value, unit);
+  const text = practicalDefault(exact, value);
+  // Not rounded (standard gravity keeps its figures): the exact default is sent, not the six-figure text.
+  if (text === formatInput(exact)) return { text, value, fromDefault: true };
+  const n = parseNumber(text);
+  return { text, value: n === null || Number.isNaN(n) ? value : fromDisplay(n, unit), fromDefault: true };
+}
+
+/** Every input at its starting value, texts in the unit system's units, choices settled on offered options. */
 export function initialForm(inputs: readonly ResolvedInput[], system: UnitSystemId): FormState {
   const state: Record<string, FieldState> = {};
-  for (const input of inputs)
-    state[input.def.id] = { text: shown(input.initial, input, system), value: input.initial };
-  return state;
+  for (const input of inputs) state[input.def.id] = atDefault(input, system);
+  return settleChoices(inputs, state);
+}
+
+/**
+ * The options a choice offers now: those that go with the other choices (a preset for the liquid
+ * chosen) and, when the firm limited them, only the firm's.
+ */
+export function offeredOptions(
+  input: ResolvedInput,
+  inputs: readonly ResolvedInput[],
+  state: FormState,
+): ChoiceInput['options'] {
+  if (input.def.kind !== 'choice') return [];
+  return optionsFor(input.def, effectiveValues(inputs, state), input.allowed);
+}
+
+/**
+ * The form with every editable choice on an option it offers: after the liquid changes, a preset
+ * for the old liquid gives way to the firm's default if offered, else to the first offered.
+ */
+export function settleChoices(inputs: readonly ResolvedInput[], state: FormState): FormState {
+  let next: Record<string, FieldState> = { ...state };
+  for (const input of inputs) {
+    if (input.def.kind !== 'choice' || input.mode !== 'editable') continue;
+    const offered = offeredOptions(input, inputs, next);
+    const current = next[input.def.id]?.value;
+    if (offered.length === 0 || offered.some((o) => o.value === current)) continue;
+    const pick = offered.find((o) => o.value === input.initial) ?? offered[0];
+    if (pick) next = { ...next, [input.def.id]: { text: pick.value, value: pick.value } };
+  }
+  return next;
 }
 
 /** What a visitor typed into a quantity box, read in the box's current unit. */
@@ -45,7 +93,10 @@ export function reformat(
   for (const input of inputs) {
     const f = state[input.def.id];
     if (f === undefined || typeof f.value !== 'number' || Number.isNaN(f.value)) continue;
-    next[input.def.id] = { text: shown(f.value, input, system), value: f.value };
+    next[input.def.id] =
+      f.fromDefault === true
+        ? atDefault(input, system)
+        : { text: shown(f.value, input, system), value: f.value };
   }
   return next;
 }

@@ -11,6 +11,8 @@ export interface ResolvedInput {
   readonly initial: number | string;
   /** The firm's default could not be used (wrong type or not an option) and the calculator's was taken. */
   readonly defaultRejected: boolean;
+  /** For a choice the firm limited: the options it offers. Absent: every option. */
+  readonly allowed?: readonly string[];
 }
 
 const MODES: readonly InputMode[] = ['editable', 'locked', 'hidden'];
@@ -37,6 +39,7 @@ export function resolveInputSettings(def: CalculatorCore, settings: InputSetting
       if (usable) initial = wanted;
       else defaultRejected = true;
     }
-    return { def: input, mode, initial, defaultRejected };
+    const allowed = input.kind === 'choice' ? s?.options : undefined;
+    return { def: input, mode, initial, defaultRejected, ...(allowed !== undefined ? { allowed } : {}) };
   });
 }

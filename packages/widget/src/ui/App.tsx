@@ -12,14 +12,16 @@ import {
   collectInputs,
   initialForm,
   issueMessage,
+  offeredOptions,
   reformat,
+  settleChoices,
   typed,
   type FormState,
 } from '../lib/form.js';
 import { lookVariables } from '../lib/look.js';
 import type { Reporter } from '../lib/reporter.js';
 import { resolveInputSettings, type ResolvedInput } from '../lib/settings.js';
-import { formatValue, outputUnitFor, toDisplay, withUnit } from '../lib/units.js';
+import { headline } from '@wickstone/calc-core/answer';
 import { controlId, Field } from './Field.js';
 import { useExtras } from '../lazy.js';
 import type { LeadTarget } from './LeadForm.js';
@@ -52,13 +54,28 @@ export function safeLogoUrl(url: string | null, base: string): string | null {
   }
 }
 
-function UnitSwitch({ system, onChange }: { system: UnitSystemId; onChange: (s: UnitSystemId) => void }) {
+/**
+ * The unit choice: a short line of two plain radio buttons in the header ("Figures in ◉ metric
+ * ○ US"), named after the widget so two widgets on a page have distinct groups.
+ */
+function UnitSwitch({
+  name,
+  system,
+  onChange,
+}: {
+  name: string;
+  system: UnitSystemId;
+  onChange: (s: UnitSystemId) => void;
+}) {
   const options: readonly [UnitSystemId, string, string][] = [
-    ['si', 'Metric', 'Metric (SI) units'],
+    ['si', 'metric', 'Metric (SI) units'],
     ['us', 'US', 'US customary units'],
   ];
   return (
-    <div class="units" role="radiogroup" aria-label="Units" data-wickstone="unit-switch">
+    <div class="units" role="radiogroup" aria-label={`${name}: units`} data-wickstone="unit-switch">
+      <span class="units-lead" aria-hidden="true">
+        Figures in
+      </span>
       {options.map(([value, text, title]) => (
         <label key={value} title={title}>
           <input
@@ -143,8 +160,9 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
   };
   const onText = (input: ResolvedInput, text: string): void =>
     edit({ ...form, [input.def.id]: typed(input, text, shownSystem) });
+  // A new liquid may leave the chosen preset unoffered: the form settles on one that goes with it.
   const onChoice = (input: ResolvedInput, value: string): void =>
-    edit({ ...form, [input.def.id]: { text: value, value } });
+    edit(settleChoices(inputs, { ...form, [input.def.id]: { text: value, value } }));
   const onSystem = (next: UnitSystemId): void => {
     setSystem(next);
     setForm(reformat(form, inputs, next));
@@ -179,16 +197,9 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
     }
     setIssues([]);
     setStale(false);
-    const figures = calculator.outputs
-      .filter((o) => typeof result.outputs[o.id] === 'number')
-      .map((o) => {
-        const v = result.outputs[o.id] as number;
-        const unit = outputUnitFor(o, shownSystem, v);
-        return `${o.label} ${withUnit(formatValue(toDisplay(v, unit)), unit)}`;
-      });
-    const w = result.warnings.length;
+    const w = result.warnings;
     setAnnouncement(
-      `Result: ${figures.join('; ')}.${w > 0 ? ` ${w === 1 ? 'One validity warning' : `${w} validity warnings`}.` : ''}`,
+      `${headline(calculator, result, shownSystem).text}${w.length > 0 ? ` ${w.length === 1 ? 'One warning' : `${w.length} warnings`} below.` : ''}`,
     );
     if (reporter === null) {
       setOutcome({ result, target: null });
@@ -222,7 +233,9 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
             <h2 class="title">{calculator.title}</h2>
           </div>
         </div>
-        {settings.units.visitorMaySwitch && <UnitSwitch system={shownSystem} onChange={onSystem} />}
+        {settings.units.visitorMaySwitch && (
+          <UnitSwitch name={widget.name} system={shownSystem} onChange={onSystem} />
+        )}
       </header>
       <p class="summary">{calculator.summary}</p>
       <form
@@ -230,7 +243,7 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
         data-wickstone="form"
         noValidate
         onSubmit={calculate}
-        aria-label={`${calculator.title}: inputs`}
+        aria-label={`${widget.name}: inputs`}
       >
         <div class="grid">
           {visible.map((input) => (
@@ -240,6 +253,7 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
               state={form[input.def.id] ?? { text: '', value: null }}
               system={shownSystem}
               error={fieldErrors.get(input.def.id)}
+              options={offeredOptions(input, inputs, form)}
               warningIds={warnedFields.get(input.def.id) ?? []}
               onText={onText}
               onChoice={onChoice}
@@ -257,7 +271,7 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
         )}
         <div class="actions">
           <button class="btn" type="submit" data-wickstone="calculate">
-            Calculate
+            Work it out
           </button>
           <span class="hint">Worked out in your browser, instantly.</span>
         </div>
@@ -274,7 +288,9 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
           firmCautions={settings.cautions}
           runId={leadTarget?.runId ?? null}
           report={report}
-          Working={extras?.Working ?? null}
+          name={widget.name}
+          secondary={settings.result?.secondary ?? 'folded'}
+          extras={extras}
         />
       )}
       {extras && (outcome !== null || preview) && settings.sheet.enabled && (

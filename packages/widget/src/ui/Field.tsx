@@ -1,4 +1,4 @@
-import type { ChoiceInput, QuantityInput, UnitSystemId } from '@wickstone/calc-core';
+import type { ChoiceInput, ChoiceOption, QuantityInput, UnitSystemId } from '@wickstone/calc-core';
 import type { FieldState } from '../lib/form.js';
 import type { ResolvedInput } from '../lib/settings.js';
 import { displayUnitOf, unitSymbol } from '../lib/units.js';
@@ -8,6 +8,8 @@ export interface FieldProps {
   readonly state: FieldState;
   readonly system: UnitSystemId;
   readonly error: string | undefined;
+  /** For a choice: the options offered now (the liquid's own presets, the firm's list). */
+  readonly options?: readonly ChoiceOption[];
   /** Ids of the warnings that name this input, so the field points at them. */
   readonly warningIds: readonly string[];
   readonly onText: (input: ResolvedInput, text: string) => void;
@@ -18,7 +20,7 @@ export interface FieldProps {
 export const controlId = (id: string): string => `wk-in-${id}`;
 
 /** One calculator input: label with its unit, the control, help, lock note and error tied to it. */
-export function Field({ input, state, system, error, warningIds, onText, onChoice }: FieldProps) {
+export function Field({ input, state, system, error, options, warningIds, onText, onChoice }: FieldProps) {
   const def = input.def;
   const id = controlId(def.id);
   const locked = input.mode === 'locked';
@@ -51,7 +53,7 @@ export function Field({ input, state, system, error, warningIds, onText, onChoic
         aria-invalid={error ? 'true' : undefined}
         onChange={(e) => onChoice(input, e.currentTarget.value)}
       >
-        {choice.options.map((o) => (
+        {(options ?? choice.options).map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}
           </option>
@@ -87,16 +89,10 @@ export function Field({ input, state, system, error, warningIds, onText, onChoic
     >
       <label class="label" for={id}>
         {def.label}
+        {/* The unit sits with the name it qualifies, so the accessible name reads "Bore (inside diameter), mm". */}
+        {symbol !== '' && <span class="unit">, {symbol}</span>}
       </label>
-      <div class="box">
-        {control}
-        {symbol !== '' && (
-          // A second label: the unit becomes part of the input's accessible name ("Bore (inside diameter) mm").
-          <label class="suffix" for={id}>
-            {symbol}
-          </label>
-        )}
-      </div>
+      <div class="box">{control}</div>
       {locked && (
         <p class="note lock-note" id={`${id}-lock`}>
           <svg viewBox="0 0 12 14" width="11" height="13" aria-hidden="true">

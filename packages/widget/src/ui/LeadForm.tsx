@@ -80,7 +80,7 @@ export function LeadForm({ form, publicKey, apiBase, target }: LeadFormProps) {
     if (!(await target.stored)) {
       setStatus('failed');
       setProblem(
-        'This result could not be recorded, so the request cannot refer to it. Calculate again, then send the request.',
+        'This result could not be recorded, so the request cannot refer to it. Work it out again, then send the request.',
       );
       return;
     }
