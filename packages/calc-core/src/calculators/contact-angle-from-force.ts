@@ -264,6 +264,12 @@ export const calculator: CalculatorCore = {
     { id: 'buoyancy', label: 'Buoyancy correction', kind: 'force', display: { si: 'mN', us: 'mN' } },
     { id: 'wettedLength', label: 'Wetted length', kind: 'length', display: MM },
   ],
+  headline: {
+    rules: [
+      { output: 'contactAngleDeg', text: 'The liquid meets the plate at a contact angle of about {value}.' },
+    ],
+    missing: 'contact angle',
+  },
   warnings: [
     {
       code: 'NO_ANGLE_FOR_FORCE',

@@ -289,6 +289,21 @@ export const calculator: CalculatorCore = {
       kind: 'dimensionless',
     },
   ],
+  headline: {
+    rules: [
+      {
+        output: 'fringeReachesFrostLine',
+        text: 'Capillary water can reach the frost line in this soil.',
+        atOrBelow: 'Capillary water stays below the frost line in this soil.',
+      },
+      {
+        output: 'frostSusceptible',
+        text: 'This soil screens as frost-susceptible.',
+        atOrBelow: 'This soil does not screen as frost-susceptible.',
+      },
+    ],
+    missing: 'frost screening answer',
+  },
   warnings: [
     {
       code: 'FINE_GRAINED_SOIL',

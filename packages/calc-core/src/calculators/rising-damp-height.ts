@@ -206,6 +206,15 @@ export const calculator: CalculatorCore = {
       display: { si: 'day', us: 'day' },
     },
   ],
+  headline: {
+    rules: [
+      {
+        output: 'steadyHeight',
+        text: 'Damp can rise to about {value} in this wall, where evaporation from its faces balances the water drawn up.',
+      },
+    ],
+    missing: 'steady height',
+  },
   warnings: [
     {
       code: 'WET_ZONE_NOT_TALL',

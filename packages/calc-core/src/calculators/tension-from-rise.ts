@@ -234,6 +234,21 @@ export const calculator: CalculatorCore = {
     { id: 'capillaryLength', label: 'Capillary length', kind: 'length', display: MM },
     { id: 'radiusToCapillaryLength', label: 'Bore radius / capillary length', kind: 'dimensionless' },
   ],
+  headline: {
+    rules: [
+      {
+        when: [{ input: 'solveFor', values: ['surfaceTension'] }],
+        output: 'surfaceTension',
+        text: 'The rise gives a surface tension of about {value}.',
+      },
+      {
+        when: [{ input: 'solveFor', values: ['contactAngle'] }],
+        output: 'contactAngleDeg',
+        text: 'The rise gives a contact angle of about {value} on the tube wall.',
+      },
+    ],
+    missing: 'figure from this rise',
+  },
   warnings: [
     {
       code: 'BORE_TOO_WIDE',
