@@ -90,6 +90,24 @@ export function createApp(deps: AppDeps): Express {
       customLogLevel: (_req, res, err) =>
         err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
       autoLogging: { ignore: (req) => req.url === '/api/v1/health' },
+      // A request's line says which request it was and how it ended, not every header both ways:
+      // a short line is cheap on the run-report hot path, and browser details stay out of the log.
+      serializers: {
+        req: (req: {
+          id: unknown;
+          method: string;
+          url: string;
+          remoteAddress?: string;
+          headers?: Record<string, unknown>;
+        }) => ({
+          id: req.id,
+          method: req.method,
+          url: req.url,
+          origin: req.headers?.origin,
+          remoteAddress: req.remoteAddress,
+        }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
     }),
   );
 
