@@ -139,8 +139,10 @@ export function createApp(deps: AppDeps): Express {
     maxBatch: config.ingest.maxBatch,
     maxInFlight: config.ingest.batchesInFlight,
     // Once per committed batch: runs past the plan's allowance are marked and the owner mailed.
-    afterStored: (runs) =>
-      afterRunsStored(runs).catch((err: unknown) => logger.error({ err }, 'run allowance hook failed')),
+    afterStored: (runs, runsThisMonth) =>
+      afterRunsStored(runs, runsThisMonth).catch((err: unknown) =>
+        logger.error({ err }, 'run allowance hook failed'),
+      ),
   });
   const sheets = createSheetService({ publicUrl: config.publicUrl });
   const embed = createEmbedService({

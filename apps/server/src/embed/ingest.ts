@@ -12,6 +12,7 @@ import type { EmbedRunBody, WidgetSettings } from '@wickstone/contracts';
 import { AppError } from '../errors.js';
 import { insertRunStatements, isDuplicateKey, retryOnDeadlock, type RunRow } from '../runs/store.js';
 import { addRunsStatements, jsonValue, type Statement } from '../usage/rollups.js';
+import { monthOf, runsInMonthOf, runsInMonthStatement, type RunsInMonthRow } from '../billing/allowance.js';
 
 /*
  * The ingest of visitors' run reports, the platform's hot path, by group commit: reports that
@@ -41,10 +42,15 @@ export interface IngestOptions {
   maxInFlight?: number;
   /**
    * Called once per committed batch with the runs it newly stored (the plan's run allowance marks
-   * and mails from here), before the batch's reports are answered. It must not throw: a report is
-   * stored whatever it does.
+   * and mails from here), before the batch's reports are answered, with each of their
+   * organisations' runs in the runs' month as the batch's transaction read them (after counting the
+   * batch): the hook needs no round trip for them. It must not throw: a report is stored whatever
+   * it does.
    */
-  afterStored?: (runs: { id: string; organizationId: number; createdAt: Date }[]) => Promise<void>;
+  afterStored?: (
+    runs: { id: string; organizationId: number; createdAt: Date }[],
+    runsThisMonth: ReadonlyMap<number, number>,
+  ) => Promise<void>;
 }
 
 /** What a report needs of its widget: read once per batch with plain SQL, no model instances. */
@@ -296,7 +302,10 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
    * statements queued behind it still land in a transaction, which is rolled back, never committed
    * on their own.
    */
-  async function store(rows: Prepared[], keys: string[]): Promise<{ known: Known; stale: string[] }> {
+  async function store(
+    rows: Prepared[],
+    keys: string[],
+  ): Promise<{ known: Known; stale: string[]; runsThisMonth: Map<number, number> }> {
     const known: Known = new Map();
     const pool = sequelize.connectionManager;
     const conn = (await pool.getConnection({ type: 'INSERT' } as never)) as unknown as RawConnection;
@@ -310,6 +319,17 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
           results: settled.map((r) => (r.status === 'fulfilled' ? r.value : null)),
         };
       };
+      // The batch's runs share one time (see prepare), so one month: its runs per organisation are
+      // read last, after the batch is counted, for the allowance hook.
+      const counting = (fresh: RunRow[]): Statement[] =>
+        fresh.length
+          ? [
+              runsInMonthStatement(
+                [...new Set(fresh.map((r) => r.organizationId))],
+                monthOf(fresh[0]!.createdAt),
+              ),
+            ]
+          : [];
       const attempt = (fresh: RunRow[]) =>
         send([
           { sql: 'SET autocommit = 0', values: [] },
@@ -319,6 +339,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
           },
           ...insertRunStatements(fresh),
           ...addRunsStatements(fresh.map((r) => ({ ...r, led: false }))),
+          ...counting(fresh),
         ]);
       let fresh = rows.map((p) => p.row);
       let sent = await attempt(fresh);
@@ -340,12 +361,15 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         (sent.results[1] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
       );
       const stale = keys.filter((k) => current.get(k) !== widgetCache.get(k)?.version);
+      const runsThisMonth = fresh.length
+        ? runsInMonthOf(sent.results[sent.results.length - 1] as RunsInMonthRow[])
+        : new Map<number, number>();
       await conn.query(stale.length ? 'ROLLBACK' : 'COMMIT');
       void conn.query('SET autocommit = 1').then(
         () => pool.releaseConnection(conn as never),
         () => pool.destroyConnection(conn as never).catch(() => undefined),
       );
-      return { known, stale };
+      return { known, stale, runsThisMonth };
     } catch (e) {
       // Nothing committed; a connection in an unknown state is not handed back to the pool.
       await conn.query('ROLLBACK').catch(() => undefined);
@@ -368,11 +392,13 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
       if (missing.length) await refresh(missing);
       let prepared: Batch;
       let known: Known;
+      let runsThisMonth: ReadonlyMap<number, number>;
       for (let attempt = 1; ; attempt++) {
         prepared = prepare(batch, widgetCache, new Date());
         const stored = await retryOnDeadlock(() => store(prepared.rows, keys));
         if (!stored.stale.length) {
           known = stored.known;
+          runsThisMonth = stored.runsThisMonth;
           break;
         }
         // A widget changed since its facts were cached: nothing was stored; sort the batch out again.
@@ -384,7 +410,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         const fresh = prepared.rows
           .filter(({ row }) => !known.has(row.id))
           .map(({ row }) => ({ id: row.id, organizationId: row.organizationId, createdAt: row.createdAt }));
-        if (fresh.length) await options.afterStored(fresh);
+        if (fresh.length) await options.afterStored(fresh, runsThisMonth);
       }
       for (const { item, error } of prepared.refused) item.reject(error);
       for (const { item, row } of prepared.rows) {

@@ -32,7 +32,10 @@ export function createEmbedService(deps: {
   logger: Logger;
   publicUrl: string;
   /** Called with runs once they are committed (the plan's run allowance); its failure never fails the report. */
-  afterRunsStored?: (runs: { id: string; organizationId: number; createdAt: Date }[]) => Promise<void>;
+  afterRunsStored?: (
+    runs: { id: string; organizationId: number; createdAt: Date }[],
+    runsThisMonth?: ReadonlyMap<number, number>,
+  ) => Promise<void>;
   counters: Counters;
   /** Result copies mailed per recipient address per day and per widget per hour. */
   copyLimits: { perRecipientPerDay: number; perWidgetPerHour: number };
@@ -47,8 +50,10 @@ export function createEmbedService(deps: {
     createRunIngest(sequelize, {
       ...(afterStored
         ? {
-            afterStored: (runs) =>
-              afterStored(runs).catch((err: unknown) => logger.error({ err }, 'run allowance hook failed')),
+            afterStored: (runs, runsThisMonth) =>
+              afterStored(runs, runsThisMonth).catch((err: unknown) =>
+                logger.error({ err }, 'run allowance hook failed'),
+              ),
           }
         : {}),
     });
