@@ -139,8 +139,8 @@ export function createApp(deps: AppDeps): Express {
     maxBatch: config.ingest.maxBatch,
     maxInFlight: config.ingest.batchesInFlight,
     // Once per committed batch: runs past the plan's allowance are marked and the owner mailed.
-    afterStored: (runs, runsThisMonth) =>
-      afterRunsStored(runs, runsThisMonth).catch((err: unknown) =>
+    afterStored: (runs, known) =>
+      afterRunsStored(runs, known).catch((err: unknown) =>
         logger.error({ err }, 'run allowance hook failed'),
       ),
   });

@@ -1,10 +1,10 @@
 import { Op, QueryTypes, type Sequelize } from 'sequelize';
 import type { Logger } from 'pino';
-import { allowanceNoticeLevels } from '@wickstone/contracts';
-import { Membership, Organization, User } from '../db/models/index.js';
+import { allowanceNoticeLevels, type PlanId } from '@wickstone/contracts';
+import { BillingAccount, Membership, Organization, User } from '../db/models/index.js';
 import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { allowanceMail } from './mail.js';
-import { standingFor } from './plan.js';
+import { standingFor, standingOf } from './plan.js';
 
 /** What the hook needs of a stored run. */
 export interface StoredRunRef {
@@ -48,6 +48,49 @@ export function runsInMonthStatement(
     sql: `SELECT organization_id, SUM(runs) AS n FROM run_daily WHERE organization_id IN (${orgIds.map(() => '?').join(',')}) AND day >= ? AND day < ? GROUP BY organization_id`,
     values: [...orgIds, from, to],
   };
+}
+
+export interface AccountRow {
+  organization_id: number | string;
+  plan: string;
+  status: string;
+  cancel_at_period_end: number | boolean | string;
+}
+
+/** Organisations' billing rows, read the same way by a caller that sends the statement itself. */
+export function accountsStatement(orgIds: readonly number[]): { sql: string; values: unknown[] } {
+  return {
+    sql: `SELECT organization_id, plan, status, cancel_at_period_end FROM billing_accounts WHERE organization_id IN (${orgIds.map(() => '?').join(',')})`,
+    values: [...orgIds],
+  };
+}
+
+/** Each organisation's monthly run allowance by `standingOf` (no billing row: the free plan). */
+export function allowancesOf(orgIds: readonly number[], rows: readonly AccountRow[]): Map<number, number> {
+  const byOrg = new Map(rows.map((r) => [Number(r.organization_id), r]));
+  return new Map(
+    orgIds.map((id) => {
+      const r = byOrg.get(id);
+      const account = r
+        ? BillingAccount.build(
+            {
+              organizationId: id,
+              plan: r.plan as PlanId,
+              status: r.status,
+              cancelAtPeriodEnd: Boolean(Number(r.cancel_at_period_end)),
+            },
+            { isNewRecord: false },
+          )
+        : null;
+      return [id, standingOf(account).plan.limits.runsPerMonth];
+    }),
+  );
+}
+
+/** What the hook would otherwise read itself, per organisation: runs in the runs' month, allowance. */
+export interface AllowanceFacts {
+  runs: ReadonlyMap<number, number>;
+  allowances: ReadonlyMap<number, number>;
 }
 
 export const runsInMonthOf = (rows: readonly RunsInMonthRow[]): Map<number, number> =>
@@ -105,12 +148,13 @@ export function createRunAllowance(deps: {
   }
 
   /**
-   * `counted`, when given, holds each organisation's runs in the runs' month as read by the
-   * transaction that stored them (`runsInMonthStatement`); otherwise they are read here.
+   * `known`, when given, holds each organisation's runs in the runs' month and its allowance as read
+   * by the transaction that stored them (`runsInMonthStatement`, `accountsStatement`); what it
+   * lacks is read here.
    */
   return async function afterRunsStored(
     runs: readonly StoredRunRef[],
-    counted?: ReadonlyMap<number, number>,
+    known?: AllowanceFacts,
   ): Promise<void> {
     const groups = new Map<string, StoredRunRef[]>();
     for (const r of runs) {
@@ -122,8 +166,8 @@ export function createRunAllowance(deps: {
     for (const [k, batch] of groups) {
       const orgId = batch[0]!.organizationId;
       const month = k.split('|')[1]!;
-      const allowance = (await standingFor(orgId)).plan.limits.runsPerMonth;
-      const used = counted?.get(orgId) ?? (await runsInMonth(sequelize, orgId, month));
+      const allowance = known?.allowances.get(orgId) ?? (await standingFor(orgId)).plan.limits.runsPerMonth;
+      const used = known?.runs.get(orgId) ?? (await runsInMonth(sequelize, orgId, month));
       const before = used - batch.length;
       const over = Math.min(batch.length, used - allowance);
       if (over > 0) {

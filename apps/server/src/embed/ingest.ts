@@ -12,7 +12,16 @@ import type { EmbedRunBody, WidgetSettings } from '@wickstone/contracts';
 import { AppError } from '../errors.js';
 import { insertRunStatements, isDuplicateKey, retryOnDeadlock, type RunRow } from '../runs/store.js';
 import { addRunsStatements, jsonValue, type Statement } from '../usage/rollups.js';
-import { monthOf, runsInMonthOf, runsInMonthStatement, type RunsInMonthRow } from '../billing/allowance.js';
+import {
+  accountsStatement,
+  allowancesOf,
+  monthOf,
+  runsInMonthOf,
+  runsInMonthStatement,
+  type AccountRow,
+  type AllowanceFacts,
+  type RunsInMonthRow,
+} from '../billing/allowance.js';
 
 /*
  * The ingest of visitors' run reports, the platform's hot path, by group commit: reports that
@@ -43,13 +52,13 @@ export interface IngestOptions {
   /**
    * Called once per committed batch with the runs it newly stored (the plan's run allowance marks
    * and mails from here), before the batch's reports are answered, with each of their
-   * organisations' runs in the runs' month as the batch's transaction read them (after counting the
-   * batch): the hook needs no round trip for them. It must not throw: a report is stored whatever
-   * it does.
+   * organisations' runs in the runs' month and allowance as the batch's transaction read them
+   * (after counting the batch): the hook needs no round trip for them. It must not throw: a report
+   * is stored whatever it does.
    */
   afterStored?: (
     runs: { id: string; organizationId: number; createdAt: Date }[],
-    runsThisMonth: ReadonlyMap<number, number>,
+    known: AllowanceFacts,
   ) => Promise<void>;
 }
 
@@ -346,20 +355,19 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
   async function store(
     rows: Prepared[],
     keys: string[],
-  ): Promise<{ known: Known; stale: string[]; runsThisMonth: Map<number, number> }> {
+  ): Promise<{ known: Known; stale: string[]; allowance: AllowanceFacts }> {
     const known: Known = new Map();
     const conn = await takeLane();
     const inList = (n: number) => Array.from({ length: n }, () => '?').join(',');
     try {
       // The batch's runs share one time (see prepare), so one month: its runs per organisation are
-      // read last, after the batch is counted, for the allowance hook.
+      // read last, after the batch is counted, with the organisations' plans, for the allowance hook.
+      const orgsOf = (fresh: RunRow[]) => [...new Set(fresh.map((r) => r.organizationId))];
       const counting = (fresh: RunRow[]): Statement[] =>
         fresh.length
           ? [
-              runsInMonthStatement(
-                [...new Set(fresh.map((r) => r.organizationId))],
-                monthOf(fresh[0]!.createdAt),
-              ),
+              accountsStatement(orgsOf(fresh)),
+              runsInMonthStatement(orgsOf(fresh), monthOf(fresh[0]!.createdAt)),
             ]
           : [];
       const attempt = async (fresh: RunRow[]): Promise<unknown[]> => {
@@ -400,12 +408,15 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         (results[1] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
       );
       const stale = keys.filter((k) => current.get(k) !== widgetCache.get(k)?.version);
-      const runsThisMonth = fresh.length
-        ? runsInMonthOf(results[results.length - 1] as RunsInMonthRow[])
-        : new Map<number, number>();
+      const allowance: AllowanceFacts = fresh.length
+        ? {
+            allowances: allowancesOf(orgsOf(fresh), results[results.length - 2] as AccountRow[]),
+            runs: runsInMonthOf(results[results.length - 1] as RunsInMonthRow[]),
+          }
+        : { allowances: new Map(), runs: new Map() };
       await conn.query(stale.length ? 'ROLLBACK' : 'COMMIT');
       giveBack(conn);
-      return { known, stale, runsThisMonth };
+      return { known, stale, allowance };
     } catch (e) {
       // Nothing committed; a connection in an unknown state is closed, not used again.
       await conn.query('ROLLBACK').catch(() => undefined);
@@ -428,13 +439,13 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
       if (missing.length) await refresh(missing);
       let prepared: Batch;
       let known: Known;
-      let runsThisMonth: ReadonlyMap<number, number>;
+      let allowance: AllowanceFacts;
       for (let attempt = 1; ; attempt++) {
         prepared = prepare(batch, widgetCache, new Date());
         const stored = await retryOnDeadlock(() => store(prepared.rows, keys));
         if (!stored.stale.length) {
           known = stored.known;
-          runsThisMonth = stored.runsThisMonth;
+          allowance = stored.allowance;
           break;
         }
         // A widget changed since its facts were cached: nothing was stored; sort the batch out again.
@@ -446,7 +457,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         const fresh = prepared.rows
           .filter(({ row }) => !known.has(row.id))
           .map(({ row }) => ({ id: row.id, organizationId: row.organizationId, createdAt: row.createdAt }));
-        if (fresh.length) await options.afterStored(fresh, runsThisMonth);
+        if (fresh.length) await options.afterStored(fresh, allowance);
       }
       for (const { item, error } of prepared.refused) item.reject(error);
       for (const { item, row } of prepared.rows) {

@@ -6,6 +6,7 @@ import { leadFieldIds } from '@wickstone/contracts';
 import { Asset, Lead, Membership, Organization, Run, User, Widget } from '../db/models/index.js';
 import { AppError } from '../errors.js';
 import type { Counters } from '../http/counters.js';
+import type { AllowanceFacts } from '../billing/allowance.js';
 import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { assetUrl } from '../widgets/service.js';
 import { leadNotificationMail, resultCopyMail } from './mail.js';
@@ -34,7 +35,7 @@ export function createEmbedService(deps: {
   /** Called with runs once they are committed (the plan's run allowance); its failure never fails the report. */
   afterRunsStored?: (
     runs: { id: string; organizationId: number; createdAt: Date }[],
-    runsThisMonth?: ReadonlyMap<number, number>,
+    known?: AllowanceFacts,
   ) => Promise<void>;
   counters: Counters;
   /** Result copies mailed per recipient address per day and per widget per hour. */
@@ -50,8 +51,8 @@ export function createEmbedService(deps: {
     createRunIngest(sequelize, {
       ...(afterStored
         ? {
-            afterStored: (runs, runsThisMonth) =>
-              afterStored(runs, runsThisMonth).catch((err: unknown) =>
+            afterStored: (runs, known) =>
+              afterStored(runs, known).catch((err: unknown) =>
                 logger.error({ err }, 'run allowance hook failed'),
               ),
           }
