@@ -22,7 +22,13 @@ import { openBenchDatabase, seconds } from './common.js';
 const DB = 'wst_bench_ingest';
 const CONNECTIONS = 50;
 const DURATION_S = 10;
-const WARMUP_S = 2;
+/**
+ * Warm-up per target, so both are measured with their code optimised by the JIT (a server runs for
+ * days): load in slices of WARMUP_SLICE_S until WARMUP_REQUESTS were answered or WARMUP_MAX_S passed.
+ */
+const WARMUP_SLICE_S = 2;
+const WARMUP_REQUESTS = 3_000;
+const WARMUP_MAX_S = 16;
 const SLICES = 5;
 const SITE = 'https://www.brackenridge-ground.example';
 const PUBLIC_KEY = 'wk_benchingest000000001';
@@ -199,7 +205,9 @@ const status = async () => {
   return Object.fromEntries(rows.map((r) => [r.Variable_name, Number(r.Value)]));
 };
 
-const [barePort, serverPort] = [await freePort(), await freePort()];
+// BENCH_BARE_PORT / BENCH_SERVER_PORT pin the two ports (on a shared machine); free ones otherwise.
+const barePort = Number(process.env.BENCH_BARE_PORT ?? 0) || (await freePort());
+const serverPort = Number(process.env.BENCH_SERVER_PORT ?? 0) || (await freePort());
 const bareUrl = `http://127.0.0.1:${barePort}`;
 const serverUrl = `http://127.0.0.1:${serverPort}`;
 const bare = start('bench/ingest-bare.ts', { PORT: String(barePort) });
@@ -210,7 +218,7 @@ const server = start(
     DB_NAME: DB,
     DB_HOST: config.db.host,
     DB_PORT: String(config.db.port),
-    LOG_LEVEL: 'info',
+    LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'info',
     RETENTION_FIRST_PURGE_MINUTES: '600',
   },
   serverNodeArgs,
@@ -223,8 +231,13 @@ try {
   await waitForHttp(`${bareUrl}/`, bare);
   await waitForHttp(`${serverUrl}/api/v1/health`, server);
   const dbPid = await databasePid();
-  await load(bareUrl, WARMUP_S, emptyLoad());
-  await load(serverUrl, WARMUP_S, warmupAcks);
+  for (const [url, into] of [
+    [bareUrl, emptyLoad()],
+    [serverUrl, warmupAcks],
+  ] as const) {
+    for (let s = 0; s < WARMUP_MAX_S && into.ok < WARMUP_REQUESTS; s += WARMUP_SLICE_S)
+      await load(url, WARMUP_SLICE_S, into);
+  }
   // Slices taken in turn, so that a busy spell on a shared machine falls on both alike.
   for (let i = 0; i < SLICES; i++) {
     await load(bareUrl, DURATION_S / SLICES, results.bare, { server: bare.pid });
@@ -245,7 +258,7 @@ const row = (name: string, r: Load) => {
   return `  ${name.padEnd(26)} ${rate(r).toFixed(0).padStart(6)} req/s   p50 ${percentile(sorted, 50).toFixed(0).padStart(4)} ms   p99 ${percentile(sorted, 99).toFixed(0).padStart(4)} ms   2xx ${r.ok}, other ${r.other}, errors ${r.errors}   CPU ${((r.cpuServerS * 1000) / r.ok).toFixed(2)} ms server + ${((r.cpuDbS * 1000) / r.ok).toFixed(2)} ms database per request`;
 };
 console.log(
-  `ingest: ${CONNECTIONS} connections, ${DURATION_S} s per target in ${SLICES} alternating slices, loopback (after ${WARMUP_S} s warm-up each)`,
+  `ingest: ${CONNECTIONS} connections, ${DURATION_S} s per target in ${SLICES} alternating slices, loopback (after a warm-up of ${WARMUP_REQUESTS} requests or ${WARMUP_MAX_S} s each)`,
 );
 console.log(row('bare Express handler', results.bare));
 console.log(row('POST /api/v1/embed/runs', results.ingest));

@@ -93,6 +93,8 @@ export function createApp(deps: AppDeps): Express {
       customLogLevel: (_req, res, err) =>
         err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
       autoLogging: config.requestLog === 'off' ? false : { ignore: (req) => req.url === '/api/v1/health' },
+      // A request's line says which request it was and how it ended, not every header both ways:
+      // a short line is cheap on the run-report hot path, and browser details stay out of the log.
       ...(line
         ? {
             quietReqLogger: true,
@@ -100,7 +102,24 @@ export function createApp(deps: AppDeps): Express {
             customSuccessMessage: (req, res, ms) => `${req.method} ${req.url} ${res.statusCode} ${ms} ms`,
             customErrorMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
           }
-        : {}),
+        : {
+            serializers: {
+              req: (req: {
+                id: unknown;
+                method: string;
+                url: string;
+                remoteAddress?: string;
+                headers?: Record<string, unknown>;
+              }) => ({
+                id: req.id,
+                method: req.method,
+                url: req.url,
+                origin: req.headers?.origin,
+                remoteAddress: req.remoteAddress,
+              }),
+              res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+            },
+          }),
     }),
   );
 
@@ -132,8 +151,10 @@ export function createApp(deps: AppDeps): Express {
     maxBatch: config.ingest.maxBatch,
     maxInFlight: config.ingest.batchesInFlight,
     // Once per committed batch: runs past the plan's allowance are marked and the owner mailed.
-    afterStored: (runs) =>
-      afterRunsStored(runs).catch((err: unknown) => logger.error({ err }, 'run allowance hook failed')),
+    afterStored: (runs, known) =>
+      afterRunsStored(runs, known).catch((err: unknown) =>
+        logger.error({ err }, 'run allowance hook failed'),
+      ),
   });
   const sheets = createSheetService({ publicUrl: config.publicUrl });
   const embed = createEmbedService({

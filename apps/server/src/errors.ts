@@ -108,6 +108,8 @@ const UNREACHABLE_CODES = new Set([
   'ER_CONNECTION_TIMEOUT',
   'ER_SOCKET_UNEXPECTED_CLOSE',
   'ER_CONNECTION_ALREADY_CLOSED',
+  // A connection the server closed (killed or restarted) before a command could be sent on it.
+  'ER_CMD_CONNECTION_CLOSED',
   'ER_CLOSING_POOL',
   'ER_POOL_ALREADY_CLOSED',
   'ER_SERVER_SHUTDOWN',

@@ -1,4 +1,5 @@
-import { describe, expect, it } from 'vitest';
+import { spawn, type ChildProcess } from 'node:child_process';
+import { afterEach, describe, expect, it } from 'vitest';
 import express from 'express';
 import request from 'supertest';
 import { pinoHttp } from 'pino-http';
@@ -22,5 +23,64 @@ describe('request logging', () => {
     expect(log).toContain('"statusCode":200');
     for (const secret of ['SESSION-SECRET', 'COOKIE-SECRET', 'CSRF-SECRET'])
       expect(log).not.toContain(secret);
+  });
+});
+
+/*
+ * The app's own destination (stdout, written asynchronously in blocks), seen from outside: a child
+ * process logs through createLogger() and the test reads its stdout.
+ */
+describe('the log written to stdout', () => {
+  const loggerModule = new URL('./logger.ts', import.meta.url).href;
+  const started: ChildProcess[] = [];
+  afterEach(() => {
+    for (const c of started.splice(0)) if (c.exitCode === null && c.signalCode === null) c.kill('SIGKILL');
+  });
+
+  function logFrom(script: string): {
+    child: ChildProcess;
+    lines: () => string[];
+    exited: Promise<number | null>;
+  } {
+    const child = spawn(
+      process.execPath,
+      [
+        '--import',
+        'tsx',
+        '--input-type=module',
+        '-e',
+        `import { createLogger } from '${loggerModule}';\n${script}`,
+      ],
+      { stdio: ['ignore', 'pipe', 'inherit'] },
+    );
+    started.push(child);
+    let out = '';
+    child.stdout!.on('data', (d: Buffer) => (out += d.toString()));
+    const exited = new Promise<number | null>((resolve) => child.once('close', (code) => resolve(code)));
+    return { child, lines: () => out.split('\n').filter(Boolean), exited };
+  }
+
+  it('writes what is still buffered when the process exits at once', async () => {
+    const { lines, exited } = logFrom(
+      `const log = createLogger({ logLevel: 'info' });
+       for (let i = 0; i < 3; i++) log.info({ n: i }, 'report stored');
+       process.exit(0);`,
+    );
+    expect(await exited).toBe(0);
+    expect(lines().map((l) => (JSON.parse(l) as { n: number }).n)).toEqual([0, 1, 2]);
+  });
+
+  it('writes a lone line while the process keeps running', async () => {
+    const { child, lines, exited } = logFrom(
+      `const log = createLogger({ logLevel: 'info' });
+       log.info({ n: 7 }, 'one quiet request');
+       setInterval(() => {}, 1000);`,
+    );
+    // The process never exits by itself: the line can only come from the periodic flush.
+    while (lines().length === 0 && child.exitCode === null) await new Promise((r) => setTimeout(r, 50));
+    expect(child.exitCode).toBeNull();
+    child.kill('SIGKILL');
+    await exited;
+    expect(lines().map((l) => (JSON.parse(l) as { n: number }).n)).toEqual([7]);
   });
 });

@@ -1,10 +1,10 @@
 import { Op, QueryTypes, type Sequelize } from 'sequelize';
 import type { Logger } from 'pino';
-import { allowanceNoticeLevels } from '@wickstone/contracts';
-import { Membership, Organization, User } from '../db/models/index.js';
+import { allowanceNoticeLevels, type PlanId } from '@wickstone/contracts';
+import { BillingAccount, Membership, Organization, User } from '../db/models/index.js';
 import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { allowanceMail } from './mail.js';
-import { standingFor } from './plan.js';
+import { standingFor, standingOf } from './plan.js';
 
 /** What the hook needs of a stored run. */
 export interface StoredRunRef {
@@ -24,13 +24,77 @@ function monthBounds(month: string): [string, string] {
 
 /** Runs an organisation logged in a month, from the daily rollups the run's own transaction kept. */
 export async function runsInMonth(sequelize: Sequelize, orgId: number, month: string): Promise<number> {
-  const [from, to] = monthBounds(month);
-  const rows = await sequelize.query<{ n: number | string | null }>(
-    'SELECT SUM(runs) AS n FROM run_daily WHERE organization_id = ? AND day >= ? AND day < ?',
-    { replacements: [orgId, from, to], type: QueryTypes.SELECT },
-  );
-  return Number(rows[0]?.n ?? 0);
+  const { sql, values } = runsInMonthStatement([orgId], month);
+  const rows = await sequelize.query<RunsInMonthRow>(sql, { replacements: values, type: QueryTypes.SELECT });
+  return runsInMonthOf(rows).get(orgId) ?? 0;
 }
+
+export interface RunsInMonthRow {
+  organization_id: number | string;
+  n: number | string | null;
+}
+
+/**
+ * The same count for several organisations as one statement, for a caller that sends it itself: the
+ * ingest reads it inside the transaction that stores a batch (after counting the batch in the
+ * rollups), so the hook below needs no round trip of its own for it.
+ */
+export function runsInMonthStatement(
+  orgIds: readonly number[],
+  month: string,
+): { sql: string; values: unknown[] } {
+  const [from, to] = monthBounds(month);
+  return {
+    sql: `SELECT organization_id, SUM(runs) AS n FROM run_daily WHERE organization_id IN (${orgIds.map(() => '?').join(',')}) AND day >= ? AND day < ? GROUP BY organization_id`,
+    values: [...orgIds, from, to],
+  };
+}
+
+export interface AccountRow {
+  organization_id: number | string;
+  plan: string;
+  status: string;
+  cancel_at_period_end: number | boolean | string;
+}
+
+/** Organisations' billing rows, read the same way by a caller that sends the statement itself. */
+export function accountsStatement(orgIds: readonly number[]): { sql: string; values: unknown[] } {
+  return {
+    sql: `SELECT organization_id, plan, status, cancel_at_period_end FROM billing_accounts WHERE organization_id IN (${orgIds.map(() => '?').join(',')})`,
+    values: [...orgIds],
+  };
+}
+
+/** Each organisation's monthly run allowance by `standingOf` (no billing row: the free plan). */
+export function allowancesOf(orgIds: readonly number[], rows: readonly AccountRow[]): Map<number, number> {
+  const byOrg = new Map(rows.map((r) => [Number(r.organization_id), r]));
+  return new Map(
+    orgIds.map((id) => {
+      const r = byOrg.get(id);
+      const account = r
+        ? BillingAccount.build(
+            {
+              organizationId: id,
+              plan: r.plan as PlanId,
+              status: r.status,
+              cancelAtPeriodEnd: Boolean(Number(r.cancel_at_period_end)),
+            },
+            { isNewRecord: false },
+          )
+        : null;
+      return [id, standingOf(account).plan.limits.runsPerMonth];
+    }),
+  );
+}
+
+/** What the hook would otherwise read itself, per organisation: runs in the runs' month, allowance. */
+export interface AllowanceFacts {
+  runs: ReadonlyMap<number, number>;
+  allowances: ReadonlyMap<number, number>;
+}
+
+export const runsInMonthOf = (rows: readonly RunsInMonthRow[]): Map<number, number> =>
+  new Map(rows.map((r) => [Number(r.organization_id), Number(r.n ?? 0)]));
 
 /**
  * After runs are stored (committed): mark those past the plan's monthly allowance, and tell the
@@ -83,17 +147,27 @@ export function createRunAllowance(deps: {
     }
   }
 
-  return async function afterRunsStored(runs: readonly StoredRunRef[]): Promise<void> {
+  /**
+   * `known`, when given, holds each organisation's runs in the runs' month and its allowance as read
+   * by the transaction that stored them (`runsInMonthStatement`, `accountsStatement`); what it
+   * lacks is read here.
+   */
+  return async function afterRunsStored(
+    runs: readonly StoredRunRef[],
+    known?: AllowanceFacts,
+  ): Promise<void> {
     const groups = new Map<string, StoredRunRef[]>();
     for (const r of runs) {
       const k = `${r.organizationId}|${monthOf(r.createdAt)}`;
-      groups.set(k, [...(groups.get(k) ?? []), r]);
+      const group = groups.get(k);
+      if (group) group.push(r);
+      else groups.set(k, [r]);
     }
     for (const [k, batch] of groups) {
       const orgId = batch[0]!.organizationId;
       const month = k.split('|')[1]!;
-      const allowance = (await standingFor(orgId)).plan.limits.runsPerMonth;
-      const used = await runsInMonth(sequelize, orgId, month);
+      const allowance = known?.allowances.get(orgId) ?? (await standingFor(orgId)).plan.limits.runsPerMonth;
+      const used = known?.runs.get(orgId) ?? (await runsInMonth(sequelize, orgId, month));
       const before = used - batch.length;
       const over = Math.min(batch.length, used - allowance);
       if (over > 0) {

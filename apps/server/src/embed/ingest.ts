@@ -12,6 +12,16 @@ import type { EmbedRunBody, WidgetSettings } from '@wickstone/contracts';
 import { AppError } from '../errors.js';
 import { insertRunStatements, isDuplicateKey, retryOnDeadlock, type RunRow } from '../runs/store.js';
 import { addRunsStatements, jsonValue, type Statement } from '../usage/rollups.js';
+import {
+  accountsStatement,
+  allowancesOf,
+  monthOf,
+  runsInMonthOf,
+  runsInMonthStatement,
+  type AccountRow,
+  type AllowanceFacts,
+  type RunsInMonthRow,
+} from '../billing/allowance.js';
 
 /*
  * The ingest of visitors' run reports, the platform's hot path, by group commit: reports that
@@ -41,10 +51,15 @@ export interface IngestOptions {
   maxInFlight?: number;
   /**
    * Called once per committed batch with the runs it newly stored (the plan's run allowance marks
-   * and mails from here), before the batch's reports are answered. It must not throw: a report is
-   * stored whatever it does.
+   * and mails from here), before the batch's reports are answered, with each of their
+   * organisations' runs in the runs' month and allowance as the batch's transaction read them
+   * (after counting the batch): the hook needs no round trip for them. It must not throw: a report
+   * is stored whatever it does.
    */
-  afterStored?: (runs: { id: string; organizationId: number; createdAt: Date }[]) => Promise<void>;
+  afterStored?: (
+    runs: { id: string; organizationId: number; createdAt: Date }[],
+    known: AllowanceFacts,
+  ) => Promise<void>;
 }
 
 /** What a report needs of its widget: read once per batch with plain SQL, no model instances. */
@@ -58,10 +73,16 @@ interface WidgetFacts {
   release: string;
 }
 
-/** The connector's connection under Sequelize's pool: what the pipelined batch is sent on. */
-interface RawConnection {
+/** A connector connection of the ingest's own (see `takeLane`). */
+interface LaneConnection {
   query(sql: string, values?: unknown[]): Promise<unknown>;
+  end(): Promise<void>;
+  destroy(): void;
+  isValid(): boolean;
 }
+
+/** A lane left idle this long is closed. */
+const LANE_IDLE_MS = 5_000;
 
 interface Pending {
   body: EmbedRunBody;
@@ -287,31 +308,70 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
   }
 
   /**
+   * Connections of the ingest's own ("lanes", one per batch in flight), opened by Sequelize's
+   * connection manager with its settings (time zone, type casting) plus multi-statement queries, so
+   * that a batch's statements travel as one query: one round trip for the whole batch, then one
+   * for COMMIT. They stay in autocommit-off mode, so every batch is a transaction of its own; one
+   * left idle for a few seconds is closed. They are outside Sequelize's pool (at most
+   * `maxInFlight` more connections per process).
+   */
+  const idleLanes: { conn: LaneConnection; timer?: NodeJS.Timeout }[] = [];
+  const closeLane = (conn: LaneConnection) => void conn.end().catch(() => conn.destroy());
+  async function takeLane(): Promise<LaneConnection> {
+    for (let idle = idleLanes.pop(); idle; idle = idleLanes.pop()) {
+      clearTimeout(idle.timer);
+      // One the database closed meanwhile (a restart, a wait_timeout) is dropped, not used.
+      if (idle.conn.isValid()) return idle.conn;
+      closeLane(idle.conn);
+    }
+    const config = sequelize.config as unknown as { dialectOptions?: Record<string, unknown> };
+    const manager = sequelize.connectionManager as unknown as {
+      connect(config: unknown): Promise<LaneConnection>;
+    };
+    return manager.connect({
+      ...config,
+      dialectOptions: { ...config.dialectOptions, multipleStatements: true },
+    });
+  }
+  function giveBack(conn: LaneConnection): void {
+    const lane: { conn: LaneConnection; timer?: NodeJS.Timeout } = { conn };
+    lane.timer = setTimeout(() => {
+      const i = idleLanes.indexOf(lane);
+      if (i >= 0) idleLanes.splice(i, 1);
+      closeLane(conn);
+    }, LANE_IDLE_MS);
+    lane.timer.unref();
+    idleLanes.push(lane);
+  }
+
+  /**
    * Store the rows in one transaction. Returns, per run id already stored before this batch, its
    * stored body hash and flag: those reports are answered as duplicates or conflicts, not inserted.
    *
-   * The statements go on one pooled connection without waiting for each other (the connector
-   * pipelines them): one round trip for the whole batch, then one for COMMIT. autocommit is off
-   * rather than a START TRANSACTION, so that if InnoDB rolls the transaction back (a deadlock) the
-   * statements queued behind it still land in a transaction, which is rolled back, never committed
-   * on their own.
+   * The statements go as one multi-statement query on a lane: MariaDB runs them in order and stops
+   * at the first that fails, leaving the transaction open (autocommit is off) to be rolled back;
+   * nothing is committed until the results are checked.
    */
-  async function store(rows: Prepared[], keys: string[]): Promise<{ known: Known; stale: string[] }> {
+  async function store(
+    rows: Prepared[],
+    keys: string[],
+  ): Promise<{ known: Known; stale: string[]; allowance: AllowanceFacts }> {
     const known: Known = new Map();
-    const pool = sequelize.connectionManager;
-    const conn = (await pool.getConnection({ type: 'INSERT' } as never)) as unknown as RawConnection;
+    const conn = await takeLane();
     const inList = (n: number) => Array.from({ length: n }, () => '?').join(',');
     try {
-      const send = async (statements: Statement[]): Promise<{ failure: unknown; results: unknown[] }> => {
-        const settled = await Promise.allSettled(statements.map((st) => conn.query(st.sql, st.values)));
-        const failed = settled.find((r) => r.status === 'rejected');
-        return {
-          failure: failed ? (failed as PromiseRejectedResult).reason : null,
-          results: settled.map((r) => (r.status === 'fulfilled' ? r.value : null)),
-        };
-      };
-      const attempt = (fresh: RunRow[]) =>
-        send([
+      // The batch's runs share one time (see prepare), so one month: its runs per organisation are
+      // read last, after the batch is counted, with the organisations' plans, for the allowance hook.
+      const orgsOf = (fresh: RunRow[]) => [...new Set(fresh.map((r) => r.organizationId))];
+      const counting = (fresh: RunRow[]): Statement[] =>
+        fresh.length
+          ? [
+              accountsStatement(orgsOf(fresh)),
+              runsInMonthStatement(orgsOf(fresh), monthOf(fresh[0]!.createdAt)),
+            ]
+          : [];
+      const attempt = async (fresh: RunRow[]): Promise<unknown[]> => {
+        const statements: Statement[] = [
           { sql: 'SET autocommit = 0', values: [] },
           {
             sql: `SELECT public_key, ${WIDGET_VERSION} FROM widgets WHERE public_key IN (${inList(keys.length)}) LOCK IN SHARE MODE`,
@@ -319,10 +379,19 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
           },
           ...insertRunStatements(fresh),
           ...addRunsStatements(fresh.map((r) => ({ ...r, led: false }))),
-        ]);
+          ...counting(fresh),
+        ];
+        return (await conn.query(
+          statements.map((st) => st.sql).join(';\n'),
+          statements.flatMap((st) => st.values),
+        )) as unknown[];
+      };
       let fresh = rows.map((p) => p.row);
-      let sent = await attempt(fresh);
-      if (sent.failure && isDuplicateKey(sent.failure)) {
+      let results: unknown[];
+      try {
+        results = await attempt(fresh);
+      } catch (e) {
+        if (!isDuplicateKey(e)) throw e;
         await conn.query('ROLLBACK');
         // A locking read sees the latest committed rows, also those another process committed
         // while this batch waited on their keys.
@@ -333,23 +402,25 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         )) as { id: string; body_hash: string; agreed: number | boolean }[];
         for (const r of stored) known.set(r.id, { bodyHash: r.body_hash, agreed: Boolean(Number(r.agreed)) });
         fresh = fresh.filter((r) => !known.has(r.id));
-        sent = await attempt(fresh);
+        results = await attempt(fresh);
       }
-      if (sent.failure) throw sent.failure;
       const current = new Map(
-        (sent.results[1] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
+        (results[1] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
       );
       const stale = keys.filter((k) => current.get(k) !== widgetCache.get(k)?.version);
+      const allowance: AllowanceFacts = fresh.length
+        ? {
+            allowances: allowancesOf(orgsOf(fresh), results[results.length - 2] as AccountRow[]),
+            runs: runsInMonthOf(results[results.length - 1] as RunsInMonthRow[]),
+          }
+        : { allowances: new Map(), runs: new Map() };
       await conn.query(stale.length ? 'ROLLBACK' : 'COMMIT');
-      void conn.query('SET autocommit = 1').then(
-        () => pool.releaseConnection(conn as never),
-        () => pool.destroyConnection(conn as never).catch(() => undefined),
-      );
-      return { known, stale };
+      giveBack(conn);
+      return { known, stale, allowance };
     } catch (e) {
-      // Nothing committed; a connection in an unknown state is not handed back to the pool.
+      // Nothing committed; a connection in an unknown state is closed, not used again.
       await conn.query('ROLLBACK').catch(() => undefined);
-      await pool.destroyConnection(conn as never).catch(() => undefined);
+      closeLane(conn);
       throw e;
     }
   }
@@ -368,11 +439,13 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
       if (missing.length) await refresh(missing);
       let prepared: Batch;
       let known: Known;
+      let allowance: AllowanceFacts;
       for (let attempt = 1; ; attempt++) {
         prepared = prepare(batch, widgetCache, new Date());
         const stored = await retryOnDeadlock(() => store(prepared.rows, keys));
         if (!stored.stale.length) {
           known = stored.known;
+          allowance = stored.allowance;
           break;
         }
         // A widget changed since its facts were cached: nothing was stored; sort the batch out again.
@@ -384,7 +457,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         const fresh = prepared.rows
           .filter(({ row }) => !known.has(row.id))
           .map(({ row }) => ({ id: row.id, organizationId: row.organizationId, createdAt: row.createdAt }));
-        if (fresh.length) await options.afterStored(fresh);
+        if (fresh.length) await options.afterStored(fresh, allowance);
       }
       for (const { item, error } of prepared.refused) item.reject(error);
       for (const { item, row } of prepared.rows) {

@@ -12,6 +12,7 @@ import { leadFieldIds } from '@wickstone/contracts';
 import { Asset, Lead, Membership, Organization, Run, User, Widget } from '../db/models/index.js';
 import { AppError } from '../errors.js';
 import type { Counters } from '../http/counters.js';
+import type { AllowanceFacts } from '../billing/allowance.js';
 import { sendSafely, type Mailer } from '../mail/mailer.js';
 import { assetUrl } from '../widgets/service.js';
 import { leadNotificationMail, resultCopyMail, type FirmBrand } from './mail.js';
@@ -38,7 +39,10 @@ export function createEmbedService(deps: {
   logger: Logger;
   publicUrl: string;
   /** Called with runs once they are committed (the plan's run allowance); its failure never fails the report. */
-  afterRunsStored?: (runs: { id: string; organizationId: number; createdAt: Date }[]) => Promise<void>;
+  afterRunsStored?: (
+    runs: { id: string; organizationId: number; createdAt: Date }[],
+    known?: AllowanceFacts,
+  ) => Promise<void>;
   counters: Counters;
   /** Result copies mailed per recipient address per day and per widget per hour. */
   copyLimits: { perRecipientPerDay: number; perWidgetPerHour: number };
@@ -53,8 +57,10 @@ export function createEmbedService(deps: {
     createRunIngest(sequelize, {
       ...(afterStored
         ? {
-            afterStored: (runs) =>
-              afterStored(runs).catch((err: unknown) => logger.error({ err }, 'run allowance hook failed')),
+            afterStored: (runs, known) =>
+              afterStored(runs, known).catch((err: unknown) =>
+                logger.error({ err }, 'run allowance hook failed'),
+              ),
           }
         : {}),
     });

@@ -30,6 +30,27 @@ describe('GET /api/v1/health', () => {
     expect(res.headers['cache-control']).toBe('no-store');
   });
 
+  it("logs a request's line without its headers: which request, from where, and how it ended", async () => {
+    const lines: string[] = [];
+    const logged = createApp({
+      config: db.config,
+      sequelize: db.sequelize,
+      logger: createLogger({ logLevel: 'info' }, { write: (line: string) => void lines.push(line) }),
+    });
+    await request(logged)
+      .get('/api/v1/no-such-thing?x=1')
+      .set('Origin', 'https://www.penrose-geotechnical.example')
+      .set('Cookie', 'wst_session=COOKIE-SECRET')
+      .set('User-Agent', 'UA-OF-A-VISITOR')
+      .expect(404);
+    const entries = lines.map((l) => JSON.parse(l) as { req?: Record<string, unknown>; res?: unknown });
+    const entry = entries.find((e) => e.req?.url === '/api/v1/no-such-thing?x=1');
+    expect(entry?.req).toMatchObject({ method: 'GET', origin: 'https://www.penrose-geotechnical.example' });
+    expect(Object.keys(entry?.req ?? {}).sort()).toEqual(['id', 'method', 'origin', 'remoteAddress', 'url']);
+    expect(entry?.res).toEqual({ statusCode: 404 });
+    for (const secret of ['COOKIE-SECRET', 'UA-OF-A-VISITOR']) expect(lines.join('')).not.toContain(secret);
+  });
+
   it('answers an unknown API route with the one error shape', async () => {
     const res = await request(app).get('/api/v1/no-such-thing').expect(404);
     expect(errorBodySchema.parse(res.body).error.code).toBe('not_found');
