@@ -8,8 +8,10 @@ export { displayUnitOf, inputApplies, unitGap, unitSymbol, withUnit, type Displa
 
 export {
   convert,
+  converter,
   displayUnit,
   fromCanonical,
+  fromCanonicalTo,
   getUnit,
   toCanonical,
   canonicalUnits,

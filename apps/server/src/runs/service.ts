@@ -5,7 +5,7 @@ import { notFound } from '../errors.js';
 import { keysetCsv } from '../export/csv.js';
 import { jsonValue } from '../usage/rollups.js';
 import { nextDay } from '../usage/days.js';
-import { showRun } from './present.js';
+import { runPrinter, showRun, valuesCell, type RunPrinter } from './present.js';
 
 export interface RunService {
   /** One page of an organisation's runs; `total` counts every run the filters match. */
@@ -37,7 +37,7 @@ interface RunColumns {
 }
 
 /** What the runs table reads of a run: never the stored working, which only the run's own page needs. */
-const LIST_COLUMNS = `r.id, r.created_at, r.widget_id, r.calculator_id, r.origin, r.page_url, r.\`release\`, r.unit_system, r.inputs,
+export const LIST_COLUMNS = `r.id, r.created_at, r.widget_id, r.calculator_id, r.origin, r.page_url, r.\`release\`, r.unit_system, r.inputs,
   JSON_EXTRACT(r.client_result, '$.outputs') AS outputs, r.warning_codes, r.agreed,
   (SELECT MIN(l.id) FROM leads l WHERE l.run_id = r.id AND l.organization_id = r.organization_id) AS lead_id`;
 
@@ -65,7 +65,7 @@ function conditions(first: string, value: unknown) {
 }
 
 /** The filters over raw runs (`runs r`). Days are UTC and both ends are included. */
-function runsWhere(orgId: number, f: RunFilters): Where {
+export function runsWhere(orgId: number, f: RunFilters): Where {
   const { sql, params, add } = conditions('r.organization_id = ?', orgId);
   if (f.from) add('r.created_at >= ?', `${f.from} 00:00:00`);
   if (f.to) add('r.created_at < ?', `${nextDay(f.to)} 00:00:00`);
@@ -104,8 +104,14 @@ function rollupCount(orgId: number, f: RunFilters): Where {
   return { sql: `SELECT COALESCE(SUM(${expr}), 0) AS n FROM run_daily WHERE ${sql.join(' AND ')}`, params };
 }
 
-export function createRunService(deps: { sequelize: Sequelize }): RunService {
+/**
+ * `reads` serves the runs list and export: the read replica when one is configured (they show what
+ * visitors' reports added, so a replica's lag only delays new runs), else the primary. A run's own
+ * page (`get`) reads the primary, as every other read does.
+ */
+export function createRunService(deps: { sequelize: Sequelize; reads?: Sequelize }): RunService {
   const { sequelize } = deps;
+  const reads = deps.reads ?? sequelize;
 
   async function widgetsOf(orgId: number): Promise<Map<number, WidgetInfo>> {
     const widgets = await Widget.findAll({
@@ -144,7 +150,7 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
   }
 
   const select = <T extends object>(sql: string, replacements: unknown[]) =>
-    sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
+    reads.query<T>(sql, { replacements, type: QueryTypes.SELECT });
 
   return {
     async list(orgId, q) {
@@ -224,6 +230,15 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
 
     async *exportCsv(orgId, f) {
       const widgets = await widgetsOf(orgId);
+      // Each widget's printer is made once per unit system and serves all of its runs: the units,
+      // conversions and labels are not looked up again for every cell.
+      const printers = new Map<string, RunPrinter>();
+      const printerOf = (w: WidgetInfo | undefined, calculatorId: string, system: 'si' | 'us') => {
+        const key = `${w?.id ?? ''}|${calculatorId}|${system}`;
+        let p = printers.get(key);
+        if (!p) printers.set(key, (p = runPrinter(calculatorId, w?.settings ?? { inputs: {} }, system)));
+        return p;
+      };
       const where = runsWhere(orgId, f);
       const dir = f.sort === 'createdAt' ? 'ASC' : 'DESC';
       const after = dir === 'DESC' ? '<' : '>';
@@ -254,22 +269,26 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
         cursor: (last) => [sqlTime(toDate(last.created_at)), last.id],
         cells: (rows) =>
           rows.map((row) => {
-            const r = item(row, widgets);
+            const widgetId = Number(row.widget_id);
+            const w = widgets.get(widgetId);
+            const system = w?.settings.units.system ?? row.unit_system;
+            const p = printerOf(w, row.calculator_id, system);
+            const leadId = row.lead_id === null ? null : Number(row.lead_id);
             return [
-              r.createdAt,
-              r.id,
-              r.widget.id,
-              r.widget.name,
-              r.calculator.title,
-              r.inputs.map((v) => `${v.label}: ${v.text}`).join('; '),
-              r.outputs.map((v) => `${v.label}: ${v.text}`).join('; '),
-              r.unitSystem,
-              r.warningCodes.join(' '),
-              r.origin,
-              r.pageUrl,
-              r.release,
-              r.agreed,
-              r.leadId,
+              toDate(row.created_at).toISOString(),
+              row.id,
+              widgetId,
+              w?.name ?? `Widget ${row.widget_id}`,
+              p.title,
+              valuesCell(p.inputs(jsonValue<Record<string, number | string>>(row.inputs))),
+              valuesCell(p.outputs(jsonValue<Record<string, number | null> | null>(row.outputs) ?? {})),
+              system,
+              jsonValue<string[]>(row.warning_codes).join(' '),
+              row.origin,
+              row.page_url,
+              row.release,
+              Boolean(Number(row.agreed)),
+              leadId,
             ];
           }),
       });
