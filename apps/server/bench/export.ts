@@ -10,7 +10,8 @@ import { Transform } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import type { Connection } from 'mariadb';
 import { runExportQuerySchema } from '@wickstone/contracts';
-import { createRunService, EXPORT_CHUNK, LIST_COLUMNS, runsWhere } from '../src/runs/service.js';
+import { QueryTypes } from 'sequelize';
+import { createRunService, EXPORT_CHUNK, exportChunkQuery } from '../src/runs/service.js';
 import { addDays, todayUtc } from '../src/usage/days.js';
 import { benchOrganization, openBenchDatabase, seconds } from './common.js';
 
@@ -28,7 +29,8 @@ try {
 
   /** The baseline: the same rows and columns, one streamed SELECT, each row's values to /dev/null. */
   async function plainSelect(): Promise<{ rows: number; ms: number }> {
-    const where = runsWhere(org!.id, filters);
+    // The export's own chunk query without its LIMIT: every row in one statement.
+    const q = exportChunkQuery(org!.id, filters, null);
     const conn = (await sequelize.connectionManager.getConnection({
       type: 'SELECT',
     } as never)) as unknown as Connection;
@@ -36,10 +38,7 @@ try {
     const t0 = performance.now();
     try {
       await pipeline(
-        conn.queryStream(
-          `SELECT ${LIST_COLUMNS} FROM runs r WHERE ${where.sql} ORDER BY r.created_at DESC, r.id DESC`,
-          where.params,
-        ),
+        conn.queryStream(q.sql.replace(/LIMIT \d+\s*$/, ''), q.params),
         new Transform({
           writableObjectMode: true,
           transform(row: Record<string, unknown>, _enc, done) {
@@ -75,6 +74,19 @@ try {
     return { rows: rows - 1, bytes, ms: performance.now() - t0, chunkMs, heap };
   }
 
+  /** What the optimizer does with a chunk from the middle of the year (ANALYZE runs it). */
+  async function plan(): Promise<string> {
+    const mid = new Date((Date.parse(`${from}T00:00:00Z`) + Date.parse(`${to}T00:00:00Z`)) / 2);
+    const q = exportChunkQuery(org!.id, filters, [mid.toISOString().replace('T', ' ').replace('Z', ''), 'f']);
+    const [row] = await sequelize.query<{ ANALYZE: string }>(`ANALYZE FORMAT=JSON ${q.sql}`, {
+      replacements: q.params,
+      type: QueryTypes.SELECT,
+    });
+    const block = JSON.parse(row!.ANALYZE).query_block;
+    const t = block.nested_loop?.[0]?.table ?? block.table;
+    return `${t.access_type} on ${t.key} (${t.used_key_parts.join(', ')}), ${t.r_rows} rows read for ${EXPORT_CHUNK} returned, ${t.r_engine_stats?.pages_read_count ?? 0} pages read from disk, ${Number(block.r_total_time_ms).toFixed(0)} ms`;
+  }
+
   const base = await plainSelect();
   const ex = await exportCsv();
   const avg = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
@@ -88,6 +100,7 @@ try {
   console.log(
     `  CSV export:                ${ex.rows.toLocaleString('en')} rows in ${seconds(ex.ms)}, ${perS(rate(ex.rows, ex.ms))} (goal 20,000); ratio to the plain SELECT ${(rate(ex.rows, ex.ms) / rate(base.rows, base.ms)).toFixed(2)}`,
   );
+  console.log(`  a chunk from the middle, ANALYZE FORMAT=JSON: ${await plan()}`);
   console.log(
     `  chunks of ${EXPORT_CHUNK}: first 20 ${first.toFixed(1)} ms each, last 20 ${last.toFixed(1)} ms each (ratio ${(last / first).toFixed(2)}; 1 is linear)`,
   );
