@@ -9,7 +9,10 @@ export interface MariaDBInstance {
 export function ensureMariaDBInstalled(): void;
 export function instance(dir: string, port: number): MariaDBInstance;
 export function sql(inst: MariaDBInstance, statements: string): string;
-export function startMariaDB(inst: MariaDBInstance, opts?: { quiet?: boolean }): Promise<number>;
+export function startMariaDB(
+  inst: MariaDBInstance,
+  opts?: { quiet?: boolean; args?: string[] },
+): Promise<number>;
 export function stopMariaDB(inst: MariaDBInstance, opts?: { quiet?: boolean }): Promise<void>;
 export function ensureDatabase(
   inst: MariaDBInstance,

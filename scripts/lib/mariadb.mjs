@@ -52,9 +52,9 @@ function asRootArgs() {
 /**
  * Start the instance if it is not running (initialising its data folder on first use), wait
  * until it answers, and return its pid. A second call finds it running; a crashed one (stale
- * pid file) is started again.
+ * pid file) is started again. `args` are further server options (the test instance's binary log).
  */
-export async function startMariaDB(inst, { quiet = false } = {}) {
+export async function startMariaDB(inst, { quiet = false, args = [] } = {}) {
   ensureMariaDBInstalled();
   mkdirSync(inst.dir, { recursive: true });
   const known = readPid(inst.pidFile);
@@ -101,6 +101,7 @@ export async function startMariaDB(inst, { quiet = false } = {}) {
       '--innodb-buffer-pool-size=256M',
       '--innodb-flush-log-at-trx-commit=1',
       '--max-connections=300',
+      ...args,
       ...asRootArgs(),
     ],
     { detached: true, stdio: ['ignore', out, out] },

@@ -47,8 +47,21 @@ export function testEnv(ports, env = process.env) {
     PAYMENTS_API_URL: `http://127.0.0.1:${ports.payments}`,
     CHROMIUM_PATH: '/usr/bin/chromium',
     ...(env.TEST_FAULT_DB_PORT ? { TEST_FAULT_DB_PORT: env.TEST_FAULT_DB_PORT } : {}),
+    ...(env.TEST_REPLICA_DB_PORT ? { TEST_REPLICA_DB_PORT: env.TEST_REPLICA_DB_PORT } : {}),
   };
 }
+
+/**
+ * The test MariaDB writes a binary log (row events, GTIDs), so the read-replica test
+ * (tests/scale/replica.test.ts) can start a replica of it. Kept a day at most: the instance is
+ * recreated by every `npm test` anyway.
+ */
+export const TEST_PRIMARY_ARGS = [
+  '--log-bin=binlog',
+  '--server-id=1',
+  '--binlog-format=ROW',
+  '--binlog-expire-logs-seconds=86400',
+];
 
 /**
  * Start the test MariaDB (from an empty data folder when `fresh`, so nothing left from an earlier
@@ -59,7 +72,7 @@ export async function startTestDatabase(db, { fresh }) {
     await stopMariaDB(db, { quiet: true });
     rmSync(db.dir, { recursive: true, force: true });
   }
-  await startMariaDB(db);
+  await startMariaDB(db, { args: TEST_PRIMARY_ARGS });
   ensureDatabase(db, {
     database: 'wickstone_test',
     user: 'wickstone_test',

@@ -57,6 +57,11 @@ import { createRunAllowance } from './billing/allowance.js';
 export interface AppDeps {
   config: Config;
   sequelize: Sequelize;
+  /**
+   * Reads that may come from the read replica (`createReadSequelize`): usage summaries and the
+   * runs list and export. Defaults to `sequelize`, the primary.
+   */
+  reads?: Sequelize;
   logger: Logger;
   /** Defaults to nodemailer over the configured SMTP server. */
   mailer?: Mailer;
@@ -174,8 +179,9 @@ export function createApp(deps: AppDeps): Express {
     audit,
     publicUrl: config.publicUrl,
   });
-  const runs = createRunService({ sequelize });
-  const usage = createUsageService({ sequelize });
+  const reads = deps.reads ?? sequelize;
+  const runs = createRunService({ sequelize, reads });
+  const usage = createUsageService({ sequelize: reads });
   const leads = createLeadService({ sequelize, runs });
   // The purge itself runs on a timer that index.ts starts; the app only serves the setting.
   const retention = createRetentionService({ sequelize, chunkSize: config.retention.chunkSize });

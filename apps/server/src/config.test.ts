@@ -22,6 +22,24 @@ describe('loadConfig', () => {
     expect(() => loadConfig({ BCRYPT_COST: '3' })).toThrow(/BCRYPT_COST/);
   });
 
+  it('reads from the primary unless a read replica is configured, whose port and account default to the primary’s', () => {
+    expect(loadConfig({}).db.read).toBeNull();
+    expect(loadConfig({ DB_PORT: '3416', DB_READ_HOST: '10.0.0.7' }).db.read).toEqual({
+      host: '10.0.0.7',
+      port: 3416,
+      user: 'wickstone',
+      password: 'wickstone-local',
+    });
+    expect(
+      loadConfig({ DB_READ_HOST: 'replica.db.example', DB_READ_PORT: '3560', DB_READ_USER: 'reader' }).db
+        .read,
+    ).toMatchObject({ host: 'replica.db.example', port: 3560, user: 'reader' });
+    expect(() => loadConfig({ DB_READ_PORT: '3560' })).toThrow(/DB_READ_HOST/);
+    expect(() => loadConfig({ DB_READ_HOST: 'replica.db.example', DB_READ_PORT: 'x' })).toThrow(
+      /DB_READ_PORT/,
+    );
+  });
+
   it('makes cookies Secure everywhere but loopback http', () => {
     expect(loadConfig({}).auth.secureCookies).toBe(false);
     expect(loadConfig({ PUBLIC_URL: 'http://localhost:5180' }).auth.secureCookies).toBe(false);

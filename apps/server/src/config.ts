@@ -27,6 +27,15 @@ const envSchema = z.object({
   DB_USER: z.string().default('wickstone'),
   DB_PASSWORD: z.string().default('wickstone-local'),
   DB_POOL_MAX: z.coerce.number().int().min(1).max(200).default(10),
+  /**
+   * A read replica of the database (binlog replication). When set, usage summaries and the runs
+   * list and export read from it; everything else, and every write, uses the primary above. The
+   * port, user and password default to the primary's.
+   */
+  DB_READ_HOST: z.string().min(1).optional(),
+  DB_READ_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  DB_READ_USER: z.string().min(1).optional(),
+  DB_READ_PASSWORD: z.string().optional(),
   /** Run reports stored per transaction at most (group commit), and such transactions at once. */
   INGEST_MAX_BATCH: z.coerce.number().int().min(1).max(5_000).default(500),
   INGEST_BATCHES_IN_FLIGHT: z.coerce.number().int().min(1).max(32).default(4),
@@ -129,6 +138,12 @@ const envSchema = z.object({
  */
 const configSchema = envSchema
   .superRefine((e, ctx) => {
+    if (!e.DB_READ_HOST && (e.DB_READ_PORT || e.DB_READ_USER || e.DB_READ_PASSWORD !== undefined))
+      ctx.addIssue({
+        code: 'custom',
+        path: ['DB_READ_HOST'],
+        message: 'the read replica’s port, user or password is set but not its host',
+      });
     if (e.NODE_ENV !== 'production') return;
     if (!e.JWT_SECRET || e.JWT_SECRET === TEST_JWT_SECRET)
       ctx.addIssue({
@@ -159,6 +174,14 @@ const configSchema = envSchema
         user: e.DB_USER,
         password: e.DB_PASSWORD,
         poolMax: e.DB_POOL_MAX,
+        read: e.DB_READ_HOST
+          ? {
+              host: e.DB_READ_HOST,
+              port: e.DB_READ_PORT ?? e.DB_PORT,
+              user: e.DB_READ_USER ?? e.DB_USER,
+              password: e.DB_READ_PASSWORD ?? e.DB_PASSWORD,
+            }
+          : null,
       },
       ingest: { maxBatch: e.INGEST_MAX_BATCH, batchesInFlight: e.INGEST_BATCHES_IN_FLIGHT },
       // Development without a secret gets a random one per process (npm start makes one per checkout).

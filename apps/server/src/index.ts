@@ -1,6 +1,6 @@
 import { loadConfig } from './config.js';
 import { createLogger } from './logger.js';
-import { createSequelize } from './db/sequelize.js';
+import { createReadSequelize, createSequelize } from './db/sequelize.js';
 import { initModels } from './db/models/index.js';
 import { createApp } from './app.js';
 import { createRetentionService } from './retention/service.js';
@@ -10,7 +10,9 @@ const config = loadConfig();
 const logger = createLogger(config);
 const sequelize = createSequelize(config.db);
 initModels(sequelize);
-const app = createApp({ config, sequelize, logger });
+// The read replica's pool, when one is configured: summaries and runs lists and exports.
+const reads = createReadSequelize(config.db);
+const app = createApp({ config, sequelize, reads: reads ?? sequelize, logger });
 // Daily purge by each organisation's retention setting; tests call the service directly instead.
 const retentionSchedule = startRetentionSchedule(
   createRetentionService({ sequelize, chunkSize: config.retention.chunkSize }),
@@ -34,6 +36,7 @@ async function shutdown(signal: string): Promise<void> {
   // Stop taking connections, let requests in flight finish, then close the pool.
   server.close(async () => {
     await sequelize.close().catch(() => undefined);
+    await reads?.close().catch(() => undefined);
     process.exit(0);
   });
   server.closeIdleConnections();

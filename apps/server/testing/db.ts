@@ -27,12 +27,19 @@ async function admin<T>(config: Config, fn: (conn: mariadb.Connection) => Promis
   }
 }
 
+/** A database name no other test file uses: `wst_` (what the test user may create), time, random. */
+export const testDatabaseName = (): string =>
+  `wst_${Date.now().toString(36)}_${randomBytes(3).toString('hex')}`;
+
 /**
  * A fresh, migrated database on the test MariaDB that `npm test` started, private to the caller,
- * so test files can run in parallel without seeing each other's rows.
+ * so test files can run in parallel without seeing each other's rows. `name` when the caller must
+ * know it beforehand (the replica test sets up replication of it first).
  */
-export async function createTestDatabase(overrides: NodeJS.ProcessEnv = {}): Promise<TestDatabase> {
-  const name = `wst_${Date.now().toString(36)}_${randomBytes(3).toString('hex')}`;
+export async function createTestDatabase(
+  overrides: NodeJS.ProcessEnv = {},
+  name = testDatabaseName(),
+): Promise<TestDatabase> {
   const config = loadConfig({
     ...process.env,
     NODE_ENV: 'test',

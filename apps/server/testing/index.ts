@@ -1,4 +1,4 @@
-export { createTestDatabase, type TestDatabase } from './db.js';
+export { createTestDatabase, testDatabaseName, type TestDatabase } from './db.js';
 export {
   seedOrgWithTeam,
   snapshotTables,
@@ -21,3 +21,5 @@ export { makePng, makeZip } from './images.js';
 export { CARD_DECLINED, CARD_OK, FakePayments, startBillingApp, type BillingTestApp } from './payments.js';
 export { createLiveWidget, runReportBody } from './embed.js';
 export { storedRollups, rollupsFromRaw } from '../src/usage/rollups.js';
+export { liveWidget, runAt, store, type FixtureWidget } from './usage.js';
+export { readCsv } from './csv.js';

@@ -30,8 +30,10 @@ export { inReaderUnits, readWarning, warningTitle, type ReadWarning } from './wo
 
 export {
   convert,
+  converter,
   displayUnit,
   fromCanonical,
+  fromCanonicalTo,
   getUnit,
   toCanonical,
   canonicalUnits,

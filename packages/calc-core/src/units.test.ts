@@ -5,8 +5,10 @@ import { CalcInputError } from './errors.js';
 import {
   canonicalUnits,
   convert,
+  converter,
   displayUnit,
   fromCanonical,
+  fromCanonicalTo,
   getUnit,
   quantityKinds,
   toCanonical,
@@ -245,5 +247,48 @@ describe('errors and spellings, exactly', () => {
     // 0.1 °F through °C and back is 0.09999999999999432 in binary64.
     expect(convert(0.1, 'degF', 'degF')).toBe(0.1);
     expect(convert(0.1, 'in', 'in')).toBe(0.1);
+  });
+});
+
+describe('conversions resolved once', () => {
+  const samples = [-40, -0.5, 0, 1e-7, 0.1, 1, 25.4, 212, 9.8e5];
+
+  it('fromCanonicalTo(unit) matches mathjs for every unit it names (relative 1e-12)', () => {
+    let checked = 0;
+    for (const id of ids) {
+      const canonical = canonicalUnits[units[id].kind];
+      const [to, from] = [mathjsName[id], mathjsName[canonical]];
+      if (to === null || from === null) continue;
+      const f = fromCanonicalTo(id);
+      for (const v of samples) {
+        const expected = mathUnit(v, from).toNumber(to);
+        const actual = f(v);
+        if (expected === 0) expect(Math.abs(actual), `${v} → ${id}`).toBeLessThan(1e-12);
+        else expect(Math.abs(actual / expected - 1), `${v} → ${id}`).toBeLessThanOrEqual(1e-12);
+      }
+      checked += 1;
+    }
+    expect(checked).toBeGreaterThan(30);
+  });
+
+  it('converter(from, to) turns inches into millimetres by the exact inch (NIST SP 811 B.8: 1 in = 25.4 mm)', () => {
+    const f = converter('in', 'mm');
+    expect(f(1)).toBeCloseTo(25.4, 12);
+    expect(f(-2)).toBeCloseTo(-50.8, 12);
+  });
+
+  it('checks the units when made and each value when called', () => {
+    expect(() => converter('m', 'N')).toThrow(/cannot convert length/);
+    expect(() => converter('m', 'furlong')).toThrow(/unknown unit "furlong"/);
+    expect(() => fromCanonicalTo('furlong')).toThrow(/unknown unit "furlong"/);
+    expect(() => converter('in', 'mm')(Number.NaN)).toThrow(CalcInputError);
+    expect(() => converter('in', 'in')(Number.POSITIVE_INFINITY)).toThrow(CalcInputError);
+  });
+
+  it('hands out one frozen definition per unit, so a lookup copies nothing and nothing can change it', () => {
+    const a = getUnit('°C');
+    expect(getUnit('degC')).toBe(a);
+    expect(Object.isFrozen(a)).toBe(true);
+    expect(a).toEqual({ ...units.degC, id: 'degC' });
   });
 });

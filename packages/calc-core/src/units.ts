@@ -251,14 +251,18 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
  * definition may offer one where its trade writes it, but no unit system shows them by default.
  */
 export const cgsUnits: readonly UnitId[] = ['dyn', 'dyn/cm', 'cP', 'g/cm3'];
+/** Each unit's definition with its id, made once: lookups hand out these shared, frozen objects. */
+const withIds = Object.fromEntries(
+  Object.entries(units).map(([id, def]) => [id, Object.freeze({ ...def, id })]),
+) as { [K in UnitId]: Readonly<UnitDefinition & { id: K }> };
 
 /** The definition of a unit id or alias; throws CalcInputError (`UNKNOWN_UNIT`) for anything else. */
-export function getUnit(id: string, field = 'unit'): UnitDefinition & { id: UnitId } {
+export function getUnit(id: string, field = 'unit'): Readonly<UnitDefinition & { id: UnitId }> {
   const key = (Object.hasOwn(units, id) ? id : aliases[id]) as UnitId | undefined;
   if (key === undefined || !Object.hasOwn(units, key)) {
     throw new CalcInputError({ field, code: 'UNKNOWN_UNIT', message: `unknown unit "${id}"` });
   }
-  return { ...units[key], id: key };
+  return withIds[key];
 }
 
 /** The display unit of a kind in a unit system. */
@@ -267,12 +271,12 @@ export function displayUnit(kind: QuantityKind, system: UnitSystemId): UnitId {
 }
 
 /**
- * Converts `value` from one unit to another of the same kind (e.g. `convert(1, 'in', 'mm')` → 25.4).
- * Throws CalcInputError `UNIT_KIND_MISMATCH` across kinds, `UNKNOWN_UNIT` for an unknown id and
- * `NOT_A_NUMBER`/`NOT_FINITE` for a non-finite value.
+ * A conversion from one unit to another of the same kind, with both units looked up once: for
+ * converting many values (an export's column) without resolving the units again for each.
+ * Throws CalcInputError `UNIT_KIND_MISMATCH` across kinds and `UNKNOWN_UNIT` for an unknown id;
+ * the function it returns throws `NOT_A_NUMBER`/`NOT_FINITE` for a non-finite value.
  */
-export function convert(value: number, fromUnit: string, toUnit: string): number {
-  finite('value', value);
+export function converter(fromUnit: string, toUnit: string): (value: number) => number {
   const from = getUnit(fromUnit, 'fromUnit');
   const to = getUnit(toUnit, 'toUnit');
   if (from.kind !== to.kind) {
@@ -282,9 +286,18 @@ export function convert(value: number, fromUnit: string, toUnit: string): number
       message: `cannot convert ${from.kind} (${from.symbol}) to ${to.kind} (${to.symbol})`,
     });
   }
-  if (from.id === to.id) return value;
-  const canonical = (value + from.offset) * from.factor;
-  return canonical / to.factor - to.offset;
+  if (from.id === to.id) return (value) => finite('value', value);
+  return (value) => ((finite('value', value) + from.offset) * from.factor) / to.factor - to.offset;
+}
+
+/**
+ * Converts `value` from one unit to another of the same kind (e.g. `convert(1, 'in', 'mm')` → 25.4).
+ * Throws CalcInputError `UNIT_KIND_MISMATCH` across kinds, `UNKNOWN_UNIT` for an unknown id and
+ * `NOT_A_NUMBER`/`NOT_FINITE` for a non-finite value.
+ */
+export function convert(value: number, fromUnit: string, toUnit: string): number {
+  finite('value', value);
+  return converter(fromUnit, toUnit)(value);
 }
 
 /** A value in a kind's canonical unit, from any unit of that kind. */
@@ -294,5 +307,11 @@ export function toCanonical(value: number, fromUnit: string): number {
 
 /** A canonical value of a unit's kind, expressed in that unit. */
 export function fromCanonical(value: number, toUnit: string): number {
-  return convert(value, canonicalUnits[getUnit(toUnit, 'toUnit').kind], toUnit);
+  finite('value', value);
+  return fromCanonicalTo(toUnit)(value);
+}
+
+/** `fromCanonical` with the unit looked up once, for converting many values into it. */
+export function fromCanonicalTo(toUnit: string): (value: number) => number {
+  return converter(canonicalUnits[getUnit(toUnit, 'toUnit').kind], toUnit);
 }

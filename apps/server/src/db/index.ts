@@ -1,3 +1,3 @@
-export { createSequelize } from './sequelize.js';
+export { createReadSequelize, createSequelize } from './sequelize.js';
 export { createMigrator, migrateUp } from './migrator.js';
 export { initModels } from './models/index.js';

@@ -37,7 +37,10 @@ export const UTF8_BOM = '\uFEFF';
  * A listing as CSV text, read from the database a chunk at a time in keyset order: `page(after)`
  * answers up to `chunk` rows after the cursor (the first ones for null), `cells` turns rows into
  * fields, `cursor` is where the next chunk starts. So the rows are never all in memory, and each
- * query is a short index range however far the export has gone. The header comes out with the first
+ * query is a short index range however far the export has gone. The next chunk's query is sent as
+ * soon as a chunk arrives, so the database reads it while this one is formatted and written: one
+ * chunk ahead at most, and only while the reader keeps reading (a reader that stops, or a client
+ * that goes away, leaves at most that one query to finish). The header comes out with the first
  * rows, so a failure before any of them still answers with an error rather than half a file.
  */
 export async function* keysetCsv<R, C>(opts: {
@@ -48,14 +51,21 @@ export async function* keysetCsv<R, C>(opts: {
   cursor: (last: R) => C;
 }): AsyncGenerator<string> {
   let head = UTF8_BOM + csvRow(opts.header);
-  let after: C | null = null;
-  for (;;) {
-    const rows = await opts.page(after);
-    const out = head + (await opts.cells(rows)).map(csvRow).join('');
-    head = '';
-    if (out) yield out;
-    const last = rows.at(-1);
-    if (last === undefined || rows.length < opts.chunk) return;
-    after = opts.cursor(last);
+  let next: Promise<R[]> | null = opts.page(null);
+  try {
+    while (next) {
+      const rows: R[] = await next;
+      const last = rows.at(-1);
+      next = last === undefined || rows.length < opts.chunk ? null : opts.page(opts.cursor(last));
+      // A failed read ahead is thrown where it is awaited, not reported as unhandled meanwhile.
+      next?.catch(() => undefined);
+      let out = head;
+      head = '';
+      for (const row of await opts.cells(rows)) out += csvRow(row);
+      if (out) yield out;
+    }
+  } finally {
+    // The reader stopped early: let the query already sent finish before the connection is reused.
+    await next?.catch(() => undefined);
   }
 }

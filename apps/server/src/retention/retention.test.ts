@@ -160,6 +160,39 @@ describe('retention', () => {
       expect(await retention.purgeAll(now)).toEqual({ organizations: 1, runs: 0, leads: 0 });
     });
 
+    it('cuts at the UTC midnight to the millisecond, each day of runs going with its rollup rows', async () => {
+      const c = await seedOrgWithTeam('Quayle Moisture Surveys');
+      const owner = new TestClient(t.app);
+      await owner.login(c.users.owner.email, c.users.owner.password);
+      const w = await liveWidget(owner, c.id, 'Quayle tube', 'tube-rise');
+      const now = new Date('2026-11-20T15:00:00Z');
+      const cutoff = retentionCutoff(2, now).getTime();
+      const at = (ms: number) => new Date(cutoff + ms).toISOString();
+      const gone = [
+        runAt(w, at(-1), { diameter: 0.004 }),
+        runAt(w, at(-DAY + 1), { diameter: 0.03 }),
+        runAt(w, at(-3 * DAY), { diameter: 0.0008 }),
+      ];
+      const kept = [runAt(w, at(0), { diameter: 0.004 }), runAt(w, at(DAY - 1), { diameter: 0.03 })];
+      await store(t.db.sequelize, [...gone, ...kept]);
+      const ours = async () =>
+        (await storedRollups(t.db.sequelize)).daily.filter((d) => d.organization_id === c.id);
+      expect((await ours()).map((d) => [d.day, d.runs])).toEqual([
+        [at(-3 * DAY).slice(0, 10), 1],
+        [at(-1).slice(0, 10), 2],
+        [at(0).slice(0, 10), 2],
+      ]);
+
+      expect(await retention.purgeOrganization(c.id, 2, now)).toEqual({ runs: 3, leads: 0 });
+      const left = await t.db.sequelize.query<{ id: string }>(
+        'SELECT id FROM runs WHERE organization_id = ? ORDER BY created_at',
+        { replacements: [c.id], type: QueryTypes.SELECT },
+      );
+      expect(left.map((r) => r.id)).toEqual(kept.map((r) => r.id));
+      expect((await ours()).map((d) => [d.day, d.runs])).toEqual([[at(0).slice(0, 10), 2]]);
+      expect(await storedRollups(t.db.sequelize)).toEqual(await rollupsFromRaw(t.db.sequelize));
+    });
+
     it('runs on a timer that can be stopped', async () => {
       let calls = 0;
       const counting: RetentionService = {

@@ -3,13 +3,16 @@ import type { AuditTrail } from '../audit/service.js';
 import type { Retention } from '@wickstone/contracts';
 import { OrganizationSetting } from '../db/models/index.js';
 import { retryOnDeadlock } from '../runs/store.js';
-import {
-  countLeads,
-  removeRuns,
-  ROLLUP_COLUMNS,
-  rollupRunOf,
-  type RollupColumnsRow,
-} from '../usage/rollups.js';
+import { countLeads, ROLLUP_COLUMNS, rollupRunOf, utcDay, type RollupColumnsRow } from '../usage/rollups.js';
+
+const DAY_MS = 86_400_000;
+
+/** The affected row count Sequelize answers a DELETE with (a number; a bigint from some drivers). */
+function affectedRows(result: unknown): number {
+  if (typeof result !== 'number' && typeof result !== 'bigint')
+    throw new Error('a DELETE answered no row count');
+  return Number(result);
+}
 
 export interface PurgeResult {
   runs: number;
@@ -60,31 +63,47 @@ export function createRetentionService(deps: { sequelize: Sequelize; chunkSize: 
     }
   }
 
+  /**
+   * One UTC day of runs at a time, oldest first, each in one transaction: the requests linked to
+   * them unlinked, the runs deleted as one range of the (organisation, time, id) key, and that
+   * day's rollup rows deleted whole. The cutoff is a UTC midnight and rollups are per UTC day, so
+   * every run a rollup row counts goes in the same transaction as the row: the rollups stay equal
+   * to what is left after every commit, without reading the runs into the server to uncount them.
+   */
   async function purgeRuns(orgId: number, cutoff: Date): Promise<number> {
-    return inChunks(() =>
-      sequelize.transaction(async (transaction) => {
-        const rows = await sel<LockedRun>(
-          `SELECT r.id, ${ROLLUP_COLUMNS} FROM runs r WHERE r.organization_id = ? AND r.created_at < ?
-           ORDER BY r.created_at, r.id LIMIT ${chunkSize} FOR UPDATE`,
-          [orgId, cutoff],
-          transaction,
-        );
-        if (!rows.length) return 0;
-        const ids = rows.map((r) => r.id);
-        await removeRuns(sequelize, rows.map(rollupRunOf), transaction);
-        await sequelize.query('UPDATE leads SET run_id = NULL WHERE organization_id = ? AND run_id IN (?)', {
-          replacements: [orgId, ids],
-          type: QueryTypes.UPDATE,
-          transaction,
-        });
-        await sequelize.query('DELETE FROM runs WHERE organization_id = ? AND id IN (?)', {
-          replacements: [orgId, ids],
-          type: QueryTypes.DELETE,
-          transaction,
-        });
-        return rows.length;
-      }),
-    );
+    if (cutoff.getTime() % DAY_MS !== 0) throw new Error('the retention cutoff must be a UTC midnight');
+    let total = 0;
+    for (;;) {
+      const [oldest] = await sequelize.query<{ created_at: Date }>(
+        'SELECT created_at FROM runs WHERE organization_id = ? AND created_at < ? ORDER BY created_at LIMIT 1',
+        { replacements: [orgId, cutoff], type: QueryTypes.SELECT },
+      );
+      if (!oldest) return total;
+      const from = new Date(Math.floor(new Date(oldest.created_at).getTime() / DAY_MS) * DAY_MS);
+      const to = new Date(from.getTime() + DAY_MS);
+      total += await retryOnDeadlock(() =>
+        sequelize.transaction(async (transaction) => {
+          const day = [orgId, from, to];
+          await sequelize.query(
+            `UPDATE leads l JOIN runs r ON r.id = l.run_id SET l.run_id = NULL
+             WHERE l.organization_id = ? AND r.organization_id = ? AND r.created_at >= ? AND r.created_at < ?`,
+            { replacements: [orgId, ...day], type: QueryTypes.UPDATE, transaction },
+          );
+          // A bulk delete is what Sequelize answers with its affected row count.
+          const deleted: unknown = await sequelize.query(
+            'DELETE FROM runs WHERE organization_id = ? AND created_at >= ? AND created_at < ?',
+            { replacements: day, type: QueryTypes.BULKDELETE, transaction },
+          );
+          for (const table of ['run_daily', 'run_warning_daily'])
+            await sequelize.query(`DELETE FROM ${table} WHERE organization_id = ? AND day = ?`, {
+              replacements: [orgId, utcDay(from)],
+              type: QueryTypes.DELETE,
+              transaction,
+            });
+          return affectedRows(deleted);
+        }),
+      );
+    }
   }
 
   async function purgeLeads(orgId: number, cutoff: Date): Promise<number> {

@@ -1,10 +1,9 @@
 import {
   displayUnitOf,
-  fromCanonical,
+  fromCanonicalTo,
   getCalculator,
   units,
   withUnit,
-  type CalculatorDefinition,
   type InputDefinition,
   type OutputDefinition,
   type UnitSystemId,
@@ -12,21 +11,99 @@ import {
 import type { ShownValue, WidgetSettings } from '@wickstone/contracts';
 import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 
-/** A value in the unit the widget shows it in: the definition's own choice for the system, else the system's unit for its kind. */
-function shown(
-  def: InputDefinition | OutputDefinition,
-  raw: number | string,
-  system: UnitSystemId,
-): ShownValue {
+/**
+ * How one input or output is printed in one unit system, worked out once (its display unit, the
+ * conversion into it, the symbol and its spacing) and then applied to any number of runs: the runs
+ * table, the run's page and the CSV export all print through here, one value at a time.
+ */
+export interface ValuePrinter {
+  id: string;
+  label: string;
+  /** The value, its unit and its text, for the runs table and a run's page. */
+  shown(raw: number | string): ShownValue;
+  /** Only the text (`1.2 mm`, `35°`, `Water`), for an export cell. */
+  text(raw: number | string): string;
+}
+
+/** The printer of a definition: the definition's own unit for the system, else the system's unit for its kind. */
+export function valuePrinter(def: InputDefinition | OutputDefinition, system: UnitSystemId): ValuePrinter {
   const base = { id: def.id, label: def.label };
   if (def.kind === 'choice') {
-    const option = def.options.find((o) => o.value === raw);
-    return { ...base, value: raw, unit: null, text: option?.label ?? String(raw) };
+    const labels = new Map<unknown, string>(def.options.map((o) => [o.value, o.label]));
+    const text = (raw: number | string) => labels.get(raw) ?? String(raw);
+    return { ...base, text, shown: (raw) => ({ ...base, value: raw, unit: null, text: text(raw) }) };
   }
-  if (typeof raw !== 'number') return { ...base, value: raw, unit: null, text: String(raw) };
   const unit = displayUnitOf(def, system);
-  const value = fromCanonical(raw, unit);
-  return { ...base, value, unit: units[unit].symbol || null, text: withUnit(formatNumber(value), unit) };
+  const toShown = fromCanonicalTo(unit);
+  const symbol = units[unit].symbol || null;
+  const suffix = withUnit('', unit);
+  const text = (raw: number | string) =>
+    typeof raw === 'number' ? formatNumber(toShown(raw)) + suffix : String(raw);
+  return {
+    ...base,
+    text,
+    shown: (raw) =>
+      typeof raw === 'number'
+        ? { ...base, value: toShown(raw), unit: symbol, text: text(raw) }
+        : { ...base, value: raw, unit: null, text: String(raw) },
+  };
+}
+
+/** A stored value of a calculator this server no longer has: its id and number as they are. */
+function plainPrinter(id: string): ValuePrinter {
+  const text = (v: number | string) => (typeof v === 'number' ? formatNumber(v) : v);
+  return { id, label: id, text, shown: (v) => ({ id, label: id, value: v, unit: null, text: text(v) }) };
+}
+
+/**
+ * What of a widget's runs is printed, in the calculator's order and one unit system: the key inputs
+ * (those the visitor could set: not locked or hidden by the firm) and the outputs. `inputs(sent)`
+ * and `outputs(values)` pick the printers of the values a run has. Made once per widget and
+ * system, it serves every run of that widget.
+ */
+export interface RunPrinter {
+  title: string;
+  inputs(sent: Record<string, number | string>): [ValuePrinter, number | string][];
+  outputs(values: Record<string, number | null>): [ValuePrinter, number][];
+}
+
+export function runPrinter(
+  calculatorId: string,
+  settings: Pick<WidgetSettings, 'inputs'>,
+  system: UnitSystemId,
+): RunPrinter {
+  const calc = getCalculator(calculatorId);
+  if (!calc) {
+    const plain = new Map<string, ValuePrinter>();
+    const of = (id: string) => plain.get(id) ?? plain.set(id, plainPrinter(id)).get(id)!;
+    return {
+      title: calculatorId,
+      inputs: (sent) => Object.entries(sent).map(([id, v]) => [of(id), v]),
+      outputs: (values) => Object.entries(values).flatMap(([id, v]) => (v === null ? [] : [[of(id), v]])),
+    };
+  }
+  const editable = (id: string) => (settings.inputs[id]?.mode ?? 'editable') === 'editable';
+  const inputs = calc.inputs.filter((i) => editable(i.id)).map((i) => valuePrinter(i, system));
+  const outputs = calc.outputs.map((o) => valuePrinter(o, system));
+  return {
+    title: calc.title,
+    inputs: (sent) => {
+      const out: [ValuePrinter, number | string][] = [];
+      for (const p of inputs) {
+        const v = sent[p.id];
+        if (v !== undefined) out.push([p, v]);
+      }
+      return out;
+    },
+    outputs: (values) => {
+      const out: [ValuePrinter, number][] = [];
+      for (const p of outputs) {
+        const v = values[p.id];
+        if (typeof v === 'number') out.push([p, v]);
+      }
+      return out;
+    },
+  };
 }
 
 /** What the runs table shows of one run's inputs and outputs. */
@@ -37,9 +114,8 @@ export interface ShownRun {
 }
 
 /**
- * The key inputs (those the visitor could set: not locked or hidden by the firm, and sent) and the
- * outputs the visitor saw, in the calculator's order and the widget's unit system. A calculator
- * this server no longer has shows its stored numbers as they are.
+ * The key inputs and the outputs the visitor saw, in the calculator's order and the widget's unit
+ * system. A calculator this server no longer has shows its stored numbers as they are.
  */
 export function showRun(
   calculatorId: string,
@@ -48,31 +124,17 @@ export function showRun(
   outputs: Record<string, number | null>,
   system: UnitSystemId,
 ): ShownRun {
-  const calc: CalculatorDefinition | undefined = getCalculator(calculatorId);
-  if (!calc) {
-    const plain = (id: string, v: number | string): ShownValue => ({
-      id,
-      label: id,
-      value: v,
-      unit: null,
-      text: typeof v === 'number' ? formatNumber(v) : v,
-    });
-    return {
-      title: calculatorId,
-      inputs: Object.entries(sent).map(([id, v]) => plain(id, v)),
-      outputs: Object.entries(outputs).flatMap(([id, v]) => (v === null ? [] : [plain(id, v)])),
-    };
-  }
-  const editable = (id: string) => (settings.inputs[id]?.mode ?? 'editable') === 'editable';
+  const p = runPrinter(calculatorId, settings, system);
   return {
-    title: calc.title,
-    inputs: calc.inputs.flatMap((i) => {
-      const v = sent[i.id];
-      return v === undefined || !editable(i.id) ? [] : [shown(i, v, system)];
-    }),
-    outputs: calc.outputs.flatMap((o) => {
-      const v = outputs[o.id];
-      return typeof v === 'number' ? [shown(o, v, system)] : [];
-    }),
+    title: p.title,
+    inputs: p.inputs(sent).map(([v, raw]) => v.shown(raw)),
+    outputs: p.outputs(outputs).map(([v, raw]) => v.shown(raw)),
   };
+}
+
+/** One export cell of a run's inputs or outputs: `Label: text`, separated by `; `. */
+export function valuesCell(values: readonly [ValuePrinter, number | string][]): string {
+  let cell = '';
+  for (const [p, raw] of values) cell += `${cell ? '; ' : ''}${p.label}: ${p.text(raw)}`;
+  return cell;
 }

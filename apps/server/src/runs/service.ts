@@ -5,7 +5,7 @@ import { notFound } from '../errors.js';
 import { keysetCsv } from '../export/csv.js';
 import { jsonValue } from '../usage/rollups.js';
 import { nextDay } from '../usage/days.js';
-import { showRun } from './present.js';
+import { runPrinter, showRun, valuesCell, type RunPrinter } from './present.js';
 
 export interface RunService {
   /** One page of an organisation's runs; `total` counts every run the filters match. */
@@ -45,7 +45,7 @@ const toDate = (v: Date | string): Date => (v instanceof Date ? v : new Date(`${
 /** An instant as a DATETIME(3) literal in UTC, the time zone the connection stores in. */
 const sqlTime = (d: Date): string => d.toISOString().replace('T', ' ').replace('Z', '');
 
-interface Where {
+export interface Where {
   sql: string;
   params: unknown[];
 }
@@ -78,6 +78,22 @@ function runsWhere(orgId: number, f: RunFilters): Where {
 }
 
 /**
+ * One chunk of the runs export: up to EXPORT_CHUNK runs after the keyset cursor (time as a
+ * DATETIME(3) literal, id) in the export's order, a range of the runs table's (organisation,
+ * time, id) key. Exported for the export benchmark, which checks the plan with ANALYZE.
+ */
+export function exportChunkQuery(orgId: number, f: RunFilters, cursor: [string, string] | null): Where {
+  const where = runsWhere(orgId, f);
+  const dir = f.sort === 'createdAt' ? 'ASC' : 'DESC';
+  const after = dir === 'DESC' ? '<' : '>';
+  return {
+    sql: `SELECT ${LIST_COLUMNS} FROM runs r WHERE ${where.sql}${cursor ? ` AND (r.created_at ${after} ? OR (r.created_at = ? AND r.id ${after} ?))` : ''}
+     ORDER BY r.created_at ${dir}, r.id ${dir} LIMIT ${EXPORT_CHUNK}`,
+    params: cursor ? [...where.params, cursor[0], cursor[0], cursor[1]] : where.params,
+  };
+}
+
+/**
  * How many runs match, from the daily rollups: every filter of the runs table is one of their
  * dimensions, and their four counters give each has-warning × agreed combination exactly
  * (inclusion–exclusion), so the total never counts raw rows.
@@ -104,8 +120,14 @@ function rollupCount(orgId: number, f: RunFilters): Where {
   return { sql: `SELECT COALESCE(SUM(${expr}), 0) AS n FROM run_daily WHERE ${sql.join(' AND ')}`, params };
 }
 
-export function createRunService(deps: { sequelize: Sequelize }): RunService {
+/**
+ * `reads` serves the runs list and export: the read replica when one is configured (they show what
+ * visitors' reports added, so a replica's lag only delays new runs), else the primary. A run's own
+ * page (`get`) reads the primary, as every other read does.
+ */
+export function createRunService(deps: { sequelize: Sequelize; reads?: Sequelize }): RunService {
   const { sequelize } = deps;
+  const reads = deps.reads ?? sequelize;
 
   async function widgetsOf(orgId: number): Promise<Map<number, WidgetInfo>> {
     const widgets = await Widget.findAll({
@@ -144,7 +166,7 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
   }
 
   const select = <T extends object>(sql: string, replacements: unknown[]) =>
-    sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
+    reads.query<T>(sql, { replacements, type: QueryTypes.SELECT });
 
   return {
     async list(orgId, q) {
@@ -224,9 +246,15 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
 
     async *exportCsv(orgId, f) {
       const widgets = await widgetsOf(orgId);
-      const where = runsWhere(orgId, f);
-      const dir = f.sort === 'createdAt' ? 'ASC' : 'DESC';
-      const after = dir === 'DESC' ? '<' : '>';
+      // Each widget's printer is made once per unit system and serves all of its runs: the units,
+      // conversions and labels are not looked up again for every cell.
+      const printers = new Map<string, RunPrinter>();
+      const printerOf = (w: WidgetInfo | undefined, calculatorId: string, system: 'si' | 'us') => {
+        const key = `${w?.id ?? ''}|${calculatorId}|${system}`;
+        let p = printers.get(key);
+        if (!p) printers.set(key, (p = runPrinter(calculatorId, w?.settings ?? { inputs: {} }, system)));
+        return p;
+      };
       yield* keysetCsv<RunColumns, [string, string]>({
         header: [
           'Time (UTC)',
@@ -245,31 +273,33 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
           'Lead',
         ],
         chunk: EXPORT_CHUNK,
-        page: (cursor) =>
-          select<RunColumns>(
-            `SELECT ${LIST_COLUMNS} FROM runs r WHERE ${where.sql}${cursor ? ` AND (r.created_at ${after} ? OR (r.created_at = ? AND r.id ${after} ?))` : ''}
-             ORDER BY r.created_at ${dir}, r.id ${dir} LIMIT ${EXPORT_CHUNK}`,
-            cursor ? [...where.params, cursor[0], cursor[0], cursor[1]] : where.params,
-          ),
+        page: (cursor) => {
+          const q = exportChunkQuery(orgId, f, cursor);
+          return select<RunColumns>(q.sql, q.params);
+        },
         cursor: (last) => [sqlTime(toDate(last.created_at)), last.id],
         cells: (rows) =>
           rows.map((row) => {
-            const r = item(row, widgets);
+            const widgetId = Number(row.widget_id);
+            const w = widgets.get(widgetId);
+            const system = w?.settings.units.system ?? row.unit_system;
+            const p = printerOf(w, row.calculator_id, system);
+            const leadId = row.lead_id === null ? null : Number(row.lead_id);
             return [
-              r.createdAt,
-              r.id,
-              r.widget.id,
-              r.widget.name,
-              r.calculator.title,
-              r.inputs.map((v) => `${v.label}: ${v.text}`).join('; '),
-              r.outputs.map((v) => `${v.label}: ${v.text}`).join('; '),
-              r.unitSystem,
-              r.warningCodes.join(' '),
-              r.origin,
-              r.pageUrl,
-              r.release,
-              r.agreed,
-              r.leadId,
+              toDate(row.created_at).toISOString(),
+              row.id,
+              widgetId,
+              w?.name ?? `Widget ${row.widget_id}`,
+              p.title,
+              valuesCell(p.inputs(jsonValue<Record<string, number | string>>(row.inputs))),
+              valuesCell(p.outputs(jsonValue<Record<string, number | null> | null>(row.outputs) ?? {})),
+              system,
+              jsonValue<string[]>(row.warning_codes).join(' '),
+              row.origin,
+              row.page_url,
+              row.release,
+              Boolean(Number(row.agreed)),
+              leadId,
             ];
           }),
       });
