@@ -36,7 +36,8 @@ import { embedRouter } from './embed/router.js';
 import { createRunIngest } from './embed/ingest.js';
 import { createReleaseService } from './releases/service.js';
 import { releasesRouter } from './releases/router.js';
-import { defaultReleasesDir } from './releases/paths.js';
+import { releaseRoutes } from './releases/api.js';
+import { releaseDirsOf } from './releases/paths.js';
 import { createWidgetService } from './widgets/service.js';
 import { widgetRoutes } from './widgets/router.js';
 import { createRunService } from './runs/service.js';
@@ -107,8 +108,8 @@ export function createApp(deps: AppDeps): Express {
   );
   const orgs = createOrgService({ sequelize, audit });
   const invitations = createInvitationService({ config, sequelize, audit, mailer, logger });
-  const releasesDir = config.releasesDir ?? defaultReleasesDir;
-  const releases = createReleaseService(releasesDir, config.publicUrl);
+  const releaseDirs = releaseDirsOf(config);
+  const releases = createReleaseService(releaseDirs.build, config.publicUrl, releaseDirs.published);
   const widgets = createWidgetService({
     sequelize,
     releases,
@@ -120,11 +121,13 @@ export function createApp(deps: AppDeps): Express {
   const ingest = createRunIngest(sequelize, {
     maxBatch: config.ingest.maxBatch,
     maxInFlight: config.ingest.batchesInFlight,
+    // Each run is recomputed with the engine of the release that made it.
+    engineOf: (release) => releases.engine(release),
     // Once per committed batch: runs past the plan's allowance are marked and the owner mailed.
     afterStored: (runs) =>
       afterRunsStored(runs).catch((err: unknown) => logger.error({ err }, 'run allowance hook failed')),
   });
-  const sheets = createSheetService({ publicUrl: config.publicUrl });
+  const sheets = createSheetService({ publicUrl: config.publicUrl, releases });
   const embed = createEmbedService({
     sequelize,
     mailer,
@@ -154,6 +157,7 @@ export function createApp(deps: AppDeps): Express {
   invitationRoutes(routes, { invitations, auth, sessions, limits });
   auditRoutes(routes, audit);
   widgetRoutes(routes, widgets, audit);
+  releaseRoutes(routes, releases);
   assetRoutes(routes, assets);
   runRoutes(routes, runs);
   sheetRoutes(routes, sheets, config.embed, counters);
@@ -166,7 +170,7 @@ export function createApp(deps: AppDeps): Express {
   registries.set(app, routes.records);
 
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
-  app.use('/releases', releasesRouter(releasesDir));
+  app.use('/releases', releasesRouter(releases.dirs));
   app.use(`${API_BASE}/embed`, embedRouter(embed, sheets, config.embed, counters));
   // The payments provider's signed events: raw bytes for the signature check, no session, no CSRF.
   app.use(`${API_BASE}/billing/webhook`, billingWebhookRouter(billing));

@@ -163,7 +163,10 @@ export const widgetSchema = z.object({
   status: z.enum(widgetStatuses),
   allowedOrigins: z.array(z.string()),
   settings: widgetSettingsSchema,
+  /** The release the snippet points at: the pin resolved. */
   release: z.string(),
+  /** What the developer pinned (`0.1.0`, `~0.2`); null when the widget stays on the release it was made with. */
+  releasePin: z.string().nullable(),
   logoUrl: z.string().nullable(),
   embed: z.object({ scriptUrl: z.string(), integrity: z.string(), snippet: z.string() }),
   createdAt: z.string(),
@@ -248,6 +251,11 @@ export const embedRunBodySchema = z.strictObject({
     version: z.string().max(40),
   }),
   pageUrl: webUrlSchema.max(2000).optional(),
+  /**
+   * The widget release whose script ran the calculation (the server recomputes with that release's
+   * engine); reports without it are taken as made by the widget's current release.
+   */
+  release: z.string().max(40).optional(),
 });
 export type EmbedRunBody = z.infer<typeof embedRunBodySchema>;
 export const embedRunResponseSchema = z.object({

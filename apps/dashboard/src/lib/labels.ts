@@ -29,6 +29,8 @@ export const auditLabel: Record<AuditEntry['type'], string> = {
   'member.removed': 'Removed from the team',
   'widget.created': 'Widget created',
   'widget.updated': 'Widget changed',
+  'widget.release_pinned': 'Widget release pin moved',
+  'widget.key_rotated': 'Widget embed key replaced',
   'lead.updated': 'Enquiry updated',
   'lead.note_added': 'Note added to an enquiry',
   'lead.erased': 'Enquirer’s personal data erased',

@@ -2,6 +2,7 @@ import {
   createWidgetBodySchema,
   orgParamsSchema,
   pageQuerySchema,
+  setReleasePinBodySchema,
   updateWidgetBodySchema,
   widgetParamsSchema,
 } from '@wickstone/contracts';
@@ -59,6 +60,20 @@ export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService, audit: A
     { access: 'widgets:read', params: widgetParamsSchema, query: pageQuerySchema },
     async ({ org, params, query }) => ({
       body: await widgets.revisions(org.id, params.widgetId, query.page, query.pageSize),
+    }),
+  );
+
+  routes.put(
+    '/orgs/:orgId/widgets/:widgetId/release',
+    { access: 'releases:pin', params: widgetParamsSchema, body: setReleasePinBodySchema },
+    async ({ org, session, params, body, meta }) => ({
+      body: await widgets.setPin(
+        org.id,
+        params.widgetId,
+        session.user.id,
+        body.pin,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
     }),
   );
 }

@@ -9,6 +9,7 @@ import * as leadsByRunAndOrganisation from './20261202100100-leads-by-run-and-or
 import * as createRateLimitCounters from './20261202110000-create-rate-limit-counters.js';
 import * as billing from './20261202120000-billing.js';
 import * as leadNotes from './20261202130000-lead-notes.js';
+import * as widgetReleasePins from './20261202150000-widget-release-pins.js';
 
 /**
  * Every migration, in order, listed explicitly so the same list runs from the TypeScript sources
@@ -26,4 +27,5 @@ export const migrations = [
   { name: '20261202110000-create-rate-limit-counters', ...createRateLimitCounters },
   { name: '20261202120000-billing', ...billing },
   { name: '20261202130000-lead-notes', ...leadNotes },
+  { name: '20261202150000-widget-release-pins', ...widgetReleasePins },
 ];
