@@ -157,7 +157,7 @@ export function createApp(deps: AppDeps): Express {
   invitationRoutes(routes, { invitations, auth, sessions, limits });
   auditRoutes(routes, audit);
   widgetRoutes(routes, widgets, audit);
-  releaseRoutes(routes, releases);
+  releaseRoutes(routes, releases, sequelize);
   assetRoutes(routes, assets);
   runRoutes(routes, runs);
   sheetRoutes(routes, sheets, config.embed, counters);

@@ -76,7 +76,8 @@ export const releasePinSchema = z
 export const setReleasePinBodySchema = z.strictObject({ pin: releasePinSchema });
 export type SetReleasePinBody = z.infer<typeof setReleasePinBodySchema>;
 
-export const upgradePreviewQuerySchema = z.strictObject({ to: releaseVersionSchema });
+/** `to`: the candidate release; the newest release the server has when left out. */
+export const upgradePreviewQuerySchema = z.strictObject({ to: releaseVersionSchema.optional() });
 
 /** One output's changes between two engines over a widget's logged runs. */
 export const upgradeOutputChangeSchema = z.object({

@@ -1,9 +1,10 @@
 import { createHash } from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import * as currentEngine from '@wickstone/calc-core';
-import { CalcInputError, canonicalJson, type CalculationResult, type JsonValue } from '@wickstone/calc-core';
+import { canonicalJson, type CalculationResult, type JsonValue } from '@wickstone/calc-core';
 import type { EmbedRunBody, WidgetSettings } from '@wickstone/contracts';
 import { AppError } from '../errors.js';
+import { isCalcInputError } from '../releases/service.js';
 import { insertRunStatements, isDuplicateKey, retryOnDeadlock, type RunRow } from '../runs/store.js';
 import { addRunsStatements, jsonValue, type Statement } from '../usage/rollups.js';
 
@@ -135,14 +136,6 @@ export function checkWidget<W extends Pick<WidgetFacts, 'status' | 'allowedOrigi
     });
   }
   return w;
-}
-
-/** calc-core's input error, also from a published release's engine (which has its own copy of the class). */
-export function isCalcInputError(e: unknown): e is CalcInputError {
-  return (
-    e instanceof CalcInputError ||
-    (e instanceof Error && e.name === 'CalcInputError' && Array.isArray((e as { issues?: unknown }).issues))
-  );
 }
 
 /** The server's own calculation of a report; a 400 naming the input when it cannot be made. */

@@ -83,6 +83,7 @@ describe('the route table', () => {
       // issue 15: every member reads the releases; the developer (and owner, admin) pins them
       'GET /api/v1/releases': 'signedIn',
       'PUT /api/v1/orgs/:orgId/widgets/:widgetId/release': 'releases:pin',
+      'GET /api/v1/orgs/:orgId/widgets/:widgetId/upgrade-preview': 'releases:pin',
     };
     const declared = Object.fromEntries(routes.map((r) => [routeKey(r), r.access]));
     for (const [key, access] of Object.entries(issue4)) expect(declared[key], key).toBe(access);

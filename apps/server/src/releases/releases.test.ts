@@ -10,6 +10,7 @@ import {
   errorBodySchema,
   releaseListSchema,
   releaseManifestSchema,
+  upgradePreviewSchema,
   verifyResponseSchema,
   widgetSchema,
   type Widget,
@@ -153,6 +154,52 @@ describe('releases side by side, and pins', () => {
     const res = await report(runBy(rel.older, '0.9.9')).expect(400);
     expect(fieldsOf(res.body)).toEqual(['body.release']);
     expect(await snapshotTables(t.db.sequelize)).toEqual(before);
+  });
+
+  it('previews an upgrade over the widget’s logged runs: the runs the newer engine changes, by how much', async () => {
+    // Two more runs the change moves (a contact angle below 90°) and two it cannot (90°: no meniscus).
+    const extra = [
+      { ...inputs, diameter: 0.0003 },
+      { ...inputs, diameter: 0.0015, contactAngleDeg: 5 },
+      { ...inputs, contactAngleDeg: 90 },
+      { ...inputs, diameter: 0.002, contactAngleDeg: 90 },
+    ];
+    for (const x of extra) {
+      const r = engineOf(rel.older).calculate('tube-rise', x);
+      const body = { ...reportOf(r, { id: randomUUID(), publicKey: widget.publicKey, unitSystem: 'si' }), release: rel.older };
+      await report(body).expect(201);
+    }
+    const url = `/orgs/${org.id}/widgets/${widget.id}/upgrade-preview?to=${rel.newer}`;
+    const preview = upgradePreviewSchema.parse((await developer.get(url).expect(200)).body);
+    expect(preview.from).toEqual({ version: rel.older, engineVersion: engineOf(rel.older).VERSION });
+    expect(preview.to.version).toBe(rel.newer);
+    const stored = await Run.findAll({ where: { widgetId: widget.id } });
+    expect(preview.runs).toBe(stored.length);
+    // Expected from the two engines themselves, run by run.
+    const moves = stored.map((run) => {
+      const a = engineOf(rel.older).calculate('tube-rise', run.inputs).outputs.riseCorrected as number;
+      const b = engineOf(rel.newer).calculate('tube-rise', run.inputs).outputs.riseCorrected as number;
+      return { id: run.id, rel: Math.abs(b - a) / Math.abs(a), angle: run.inputs.contactAngleDeg };
+    });
+    const changed = moves.filter((m) => m.rel > 1e-9);
+    expect(changed.every((m) => Number(m.angle) < 90)).toBe(true);
+    expect(changed.length).toBe(stored.length - 2);
+    expect(preview.runsChanged).toBe(changed.length);
+    expect(preview.outputs.map((o) => o.id)).toEqual(['riseCorrected']);
+    expect(preview.outputs[0]?.runsChanged).toBe(changed.length);
+    expect(preview.outputs[0]?.largestRelativeChange).toBeCloseTo(Math.max(...changed.map((m) => m.rel)), 12);
+    expect(new Set(preview.topRuns.map((r) => r.runId))).toEqual(new Set(changed.map((m) => m.id)));
+    expect(preview.topRuns[0]?.largestRelativeChange).toBe(preview.outputs[0]?.largestRelativeChange);
+    expect(preview.refused).toBe(0);
+    // The same release changes nothing; an unknown one is a 400 naming the query; the analyst may not look.
+    const none = upgradePreviewSchema.parse(
+      (await developer.get(`/orgs/${org.id}/widgets/${widget.id}/upgrade-preview?to=${rel.older}`).expect(200)).body,
+    );
+    expect(none.runsChanged).toBe(0);
+    expect(none.topRuns).toEqual([]);
+    const bad = await developer.get(`/orgs/${org.id}/widgets/${widget.id}/upgrade-preview?to=0.9.9`).expect(400);
+    expect(fieldsOf(bad.body)).toEqual(['query.to']);
+    await analyst.get(url).expect(403);
   });
 
   it('moving the pin to a minor line changes the snippet; the old files stay served', async () => {

@@ -4,6 +4,7 @@ import path from 'node:path';
 import semver from 'semver';
 import type { z } from 'zod';
 import * as currentEngine from '@wickstone/calc-core';
+import { CalcInputError } from '@wickstone/calc-core';
 import {
   publishedReleaseSchema,
   releaseManifestSchema,
@@ -12,6 +13,14 @@ import {
   type ReleaseManifest,
   type ReleaseSummary,
 } from '@wickstone/contracts';
+
+/** calc-core's input error, also from a published release's engine (which has its own copy of the class). */
+export function isCalcInputError(e: unknown): e is CalcInputError {
+  return (
+    e instanceof CalcInputError ||
+    (e instanceof Error && e.name === 'CalcInputError' && Array.isArray((e as { issues?: unknown }).issues))
+  );
+}
 
 /** What the server needs of a release's engine: calc-core's runner and registry. */
 export interface RunEngine {
