@@ -34,12 +34,13 @@ import { assetRoutes } from './assets/router.js';
 import { createEmbedService } from './embed/service.js';
 import { embedRouter } from './embed/router.js';
 import { createRunIngest } from './embed/ingest.js';
+import { createRefusalCounter } from './embed/refusals.js';
 import { createReleaseService } from './releases/service.js';
 import { releasesRouter } from './releases/router.js';
 import { releaseRoutes } from './releases/api.js';
 import { releaseDirsOf } from './releases/paths.js';
 import { createWidgetService } from './widgets/service.js';
-import { widgetRoutes } from './widgets/router.js';
+import { embedAccessRoutes, widgetRoutes } from './widgets/router.js';
 import { createRunService } from './runs/service.js';
 import { runRoutes } from './runs/router.js';
 import { createSheetService } from './sheets/service.js';
@@ -146,6 +147,7 @@ export function createApp(deps: AppDeps): Express {
     publicUrl: config.publicUrl,
   });
   const runs = createRunService({ sequelize });
+  const refusals = createRefusalCounter(sequelize);
   const usage = createUsageService({ sequelize });
   const leads = createLeadService({ sequelize, runs });
   // The purge itself runs on a timer that index.ts starts; the app only serves the setting.
@@ -158,6 +160,7 @@ export function createApp(deps: AppDeps): Express {
   auditRoutes(routes, audit);
   widgetRoutes(routes, widgets, audit);
   releaseRoutes(routes, releases, sequelize);
+  embedAccessRoutes(routes, widgets, refusals, audit);
   assetRoutes(routes, assets);
   runRoutes(routes, runs);
   sheetRoutes(routes, sheets, config.embed, counters);
@@ -171,7 +174,7 @@ export function createApp(deps: AppDeps): Express {
 
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
   app.use('/releases', releasesRouter(releases.dirs));
-  app.use(`${API_BASE}/embed`, embedRouter(embed, sheets, config.embed, counters));
+  app.use(`${API_BASE}/embed`, embedRouter(embed, sheets, config.embed, counters, refusals));
   // The payments provider's signed events: raw bytes for the signature check, no session, no CSRF.
   app.use(`${API_BASE}/billing/webhook`, billingWebhookRouter(billing));
 

@@ -285,3 +285,26 @@ export const embedLeadBodySchema = z.strictObject({
 });
 export type EmbedLeadBody = z.infer<typeof embedLeadBodySchema>;
 export const embedLeadResponseSchema = z.object({ id: z.number().int() });
+
+// ---- Embed access: the sites allowed to embed a widget, and the ones refused ----
+
+/** `PUT /orgs/:orgId/widgets/:widgetId/origins`: the whole list, replacing the old one. */
+export const setOriginsBodySchema = z.strictObject({
+  origins: z.array(originSchema).max(20, 'At most 20 origins'),
+});
+export type SetOriginsBody = z.infer<typeof setOriginsBodySchema>;
+
+/** Refusals (403: origin not allowed) per origin over the last `days` days, most refused first. */
+export const refusedOriginsSchema = z.object({
+  days: z.number().int(),
+  items: z.array(
+    z.object({
+      origin: z.string(),
+      refusals: z.number().int(),
+      lastDay: z.string(),
+      /** Per day, oldest first: `YYYY-MM-DD` and the count. */
+      byDay: z.array(z.object({ day: z.string(), refusals: z.number().int() })),
+    }),
+  ),
+});
+export type RefusedOrigins = z.infer<typeof refusedOriginsSchema>;

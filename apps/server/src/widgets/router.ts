@@ -2,6 +2,7 @@ import {
   createWidgetBodySchema,
   orgParamsSchema,
   pageQuerySchema,
+  setOriginsBodySchema,
   setReleasePinBodySchema,
   updateWidgetBodySchema,
   widgetParamsSchema,
@@ -9,6 +10,8 @@ import {
 import { auditTrail, type AuditService } from '../audit/service.js';
 import type { ApiRoutes } from '../http/routes.js';
 import type { WidgetService } from './service.js';
+import type { RefusalCounter } from '../embed/refusals.js';
+import { fieldError } from '../errors.js';
 
 export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService, audit: AuditService): void {
   routes.get(
@@ -75,5 +78,41 @@ export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService, audit: A
         auditTrail(audit, org.id, session.user.id, meta),
       ),
     }),
+  );
+}
+
+/** The developer's side of embedding: which sites may embed a widget, and which were refused. */
+export function embedAccessRoutes(
+  routes: ApiRoutes,
+  widgets: WidgetService,
+  refusals: RefusalCounter,
+  audit: AuditService,
+): void {
+  routes.put(
+    '/orgs/:orgId/widgets/:widgetId/origins',
+    { access: 'embed:manage', params: widgetParamsSchema, body: setOriginsBodySchema },
+    async ({ org, session, params, body, meta }) => {
+      // Named by this route's own field (the service, shared with PATCH, names allowedOrigins).
+      if (body.origins.length === 0 && (await widgets.get(org.id, params.widgetId)).status === 'live')
+        throw fieldError('body.origins', 'A live widget needs at least one site allowed to embed it');
+      return {
+        body: await widgets.update(
+          org.id,
+          params.widgetId,
+          session.user.id,
+          { allowedOrigins: body.origins },
+          auditTrail(audit, org.id, session.user.id, meta),
+        ),
+      };
+    },
+  );
+
+  routes.get(
+    '/orgs/:orgId/widgets/:widgetId/refused-origins',
+    { access: 'embed:manage', params: widgetParamsSchema },
+    async ({ org, params }) => {
+      await widgets.get(org.id, params.widgetId);
+      return { body: await refusals.list(org.id, params.widgetId) };
+    },
   );
 }

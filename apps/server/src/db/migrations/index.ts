@@ -10,6 +10,7 @@ import * as createRateLimitCounters from './20261202110000-create-rate-limit-cou
 import * as billing from './20261202120000-billing.js';
 import * as leadNotes from './20261202130000-lead-notes.js';
 import * as widgetReleasePins from './20261202150000-widget-release-pins.js';
+import * as refusedOrigins from './20261202150100-refused-origins.js';
 
 /**
  * Every migration, in order, listed explicitly so the same list runs from the TypeScript sources
@@ -28,4 +29,5 @@ export const migrations = [
   { name: '20261202120000-billing', ...billing },
   { name: '20261202130000-lead-notes', ...leadNotes },
   { name: '20261202150000-widget-release-pins', ...widgetReleasePins },
+  { name: '20261202150100-refused-origins', ...refusedOrigins },
 ];
