@@ -12,7 +12,8 @@ export const roleSummary: Record<Role, string> = {
   owner: 'Everything an admin does, plus handing out and taking back the owner role.',
   admin: 'Sets up widgets, brand and lead forms; manages the team.',
   analyst: 'Reviews usage and works the leads.',
-  developer: 'Looks after embed keys, allowed sites and release pins.',
+  developer:
+    'Pins widgets to releases after previewing the change, and keeps the sites allowed to embed them.',
 };
 
 export const roleOptions = roles.map((r) => ({ value: r, label: roleLabel[r] }));
