@@ -21,3 +21,4 @@ export { makePng, makeZip } from './images.js';
 export { CARD_DECLINED, CARD_OK, FakePayments, startBillingApp, type BillingTestApp } from './payments.js';
 export { createLiveWidget, runReportBody } from './embed.js';
 export { storedRollups, rollupsFromRaw } from '../src/usage/rollups.js';
+export { publishTestReleases, TEST_ENGINE_CHANGE, type TestReleases } from './releases.js';
