@@ -8,7 +8,7 @@ import reactHooks from 'eslint-plugin-react-hooks';
 
 export default tseslint.config(
   {
-    ignores: ['**/dist/**', '**/node_modules/**', '**/.turbo/**', 'var/**', '**/coverage/**'],
+    ignores: ['**/dist/**', '**/node_modules/**', '**/.turbo/**', 'var/**', '**/coverage/**', 'releases/**'],
   },
   js.configs.recommended,
   ...tseslint.configs.recommended,

@@ -38,7 +38,8 @@ const fontFile = path.join(
   MANROPE_FILE,
 );
 
-const releasesDir = path.join(widgetDir, 'dist', 'releases');
+// `WICKSTONE_RELEASES_OUT` writes elsewhere (tests build a second release into a temporary folder).
+const releasesDir = process.env.WICKSTONE_RELEASES_OUT ?? path.join(widgetDir, 'dist', 'releases');
 const finalDir = path.join(releasesDir, widgetVersion);
 // Written beside the release and renamed into place, so a server never reads a half-written one.
 const stagingDir = path.join(releasesDir, `.staging-${widgetVersion}-${process.pid}`);

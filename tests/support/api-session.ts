@@ -13,6 +13,13 @@ export class ApiSession {
     private readonly headers: Record<string, string> = {},
   ) {}
 
+  /** A session signed in as this user. */
+  static async signedIn(base: string, user: { email: string; password: string }): Promise<ApiSession> {
+    const session = new ApiSession(base);
+    await session.json('POST', '/auth/login', { email: user.email, password: user.password }, 200);
+    return session;
+  }
+
   private keep(res: Response) {
     for (const c of res.headers.getSetCookie()) {
       const [pair] = c.split(';');

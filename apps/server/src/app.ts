@@ -34,11 +34,13 @@ import { assetRoutes } from './assets/router.js';
 import { createEmbedService } from './embed/service.js';
 import { embedRouter } from './embed/router.js';
 import { createRunIngest } from './embed/ingest.js';
+import { createRefusalCounter } from './embed/refusals.js';
 import { createReleaseService } from './releases/service.js';
 import { releasesRouter } from './releases/router.js';
-import { defaultReleasesDir } from './releases/paths.js';
+import { releaseRoutes } from './releases/api.js';
+import { releaseDirsOf } from './releases/paths.js';
 import { createWidgetService } from './widgets/service.js';
-import { widgetRoutes } from './widgets/router.js';
+import { embedAccessRoutes, widgetRoutes } from './widgets/router.js';
 import { createRunService } from './runs/service.js';
 import { runRoutes } from './runs/router.js';
 import { createSheetService } from './sheets/service.js';
@@ -142,8 +144,8 @@ export function createApp(deps: AppDeps): Express {
   );
   const orgs = createOrgService({ sequelize, audit });
   const invitations = createInvitationService({ config, sequelize, audit, mailer, logger });
-  const releasesDir = config.releasesDir ?? defaultReleasesDir;
-  const releases = createReleaseService(releasesDir, config.publicUrl);
+  const releaseDirs = releaseDirsOf(config);
+  const releases = createReleaseService(releaseDirs.build, config.publicUrl, releaseDirs.published);
   const widgets = createWidgetService({
     sequelize,
     releases,
@@ -155,13 +157,15 @@ export function createApp(deps: AppDeps): Express {
   const ingest = createRunIngest(sequelize, {
     maxBatch: config.ingest.maxBatch,
     maxInFlight: config.ingest.batchesInFlight,
+    // Each run is recomputed with the engine of the release that made it.
+    engineOf: (release) => releases.engine(release),
     // Once per committed batch: runs past the plan's allowance are marked and the owner mailed.
     afterStored: (runs, known) =>
       afterRunsStored(runs, known).catch((err: unknown) =>
         logger.error({ err }, 'run allowance hook failed'),
       ),
   });
-  const sheets = createSheetService({ publicUrl: config.publicUrl });
+  const sheets = createSheetService({ publicUrl: config.publicUrl, releases });
   const embed = createEmbedService({
     sequelize,
     mailer,
@@ -181,6 +185,7 @@ export function createApp(deps: AppDeps): Express {
   });
   const reads = deps.reads ?? sequelize;
   const runs = createRunService({ sequelize, reads });
+  const refusals = createRefusalCounter(sequelize);
   const usage = createUsageService({ sequelize: reads });
   const leads = createLeadService({ sequelize, runs });
   // The purge itself runs on a timer that index.ts starts; the app only serves the setting.
@@ -192,6 +197,8 @@ export function createApp(deps: AppDeps): Express {
   invitationRoutes(routes, { invitations, auth, sessions, limits });
   auditRoutes(routes, audit);
   widgetRoutes(routes, widgets, audit);
+  releaseRoutes(routes, releases, sequelize);
+  embedAccessRoutes(routes, widgets, refusals, audit);
   assetRoutes(routes, assets);
   runRoutes(routes, runs);
   sheetRoutes(routes, sheets, config.embed, counters);
@@ -204,8 +211,8 @@ export function createApp(deps: AppDeps): Express {
   registries.set(app, routes.records);
 
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
-  app.use('/releases', releasesRouter(releasesDir));
-  app.use(`${API_BASE}/embed`, embedRouter(embed, sheets, config.embed, counters));
+  app.use('/releases', releasesRouter(releases.dirs));
+  app.use(`${API_BASE}/embed`, embedRouter(embed, sheets, config.embed, counters, refusals));
   // The payments provider's signed events: raw bytes for the signature check, no session, no CSRF.
   app.use(`${API_BASE}/billing/webhook`, billingWebhookRouter(billing));
 

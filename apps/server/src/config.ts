@@ -94,6 +94,8 @@ const envSchema = z.object({
   DASHBOARD_DIR: z.string().optional(),
   /** Where the widget build writes its releases (one folder per version). */
   RELEASES_DIR: z.string().optional(),
+  /** Where published releases are kept (`releases/` in the repository by default; see README). */
+  PUBLISHED_RELEASES_DIR: z.string().optional(),
   /** The demo consultancy's site (npm start): its port, and where the seed writes its snippets. */
   DEMO_SITE_PORT: z.coerce.number().int().min(1).max(65535).default(5181),
   DEMO_SITE_FILE: z.string().optional(),
@@ -217,6 +219,7 @@ const configSchema = envSchema
       },
       dashboardDir: e.DASHBOARD_DIR,
       releasesDir: e.RELEASES_DIR,
+      publishedReleasesDir: e.PUBLISHED_RELEASES_DIR,
       demo: { sitePort: e.DEMO_SITE_PORT, snippetsFile: e.DEMO_SITE_FILE },
       embed: {
         leadsPerIp: e.LEAD_LIMIT_PER_IP,

@@ -5,6 +5,9 @@ import { initModels } from './db/models/index.js';
 import { createApp } from './app.js';
 import { createRetentionService } from './retention/service.js';
 import { startRetentionSchedule } from './retention/schedule.js';
+import { releaseDirsOf } from './releases/paths.js';
+import { createReleaseService } from './releases/service.js';
+import { followReleasePins } from './widgets/service.js';
 
 const config = loadConfig();
 const logger = createLogger(config);
@@ -21,6 +24,15 @@ const retentionSchedule = startRetentionSchedule(
     intervalMs: config.retention.purgeIntervalMs,
     firstDelayMs: config.retention.firstPurgeDelayMs,
   },
+);
+
+// Widgets pinned to a minor line move to its newest release, which can only have arrived with this deployment.
+const releaseDirs = releaseDirsOf(config);
+followReleasePins(createReleaseService(releaseDirs.build, config.publicUrl, releaseDirs.published)).then(
+  (moved) => {
+    if (moved) logger.info({ moved }, 'widgets moved to the newest release of their pinned line');
+  },
+  (err: unknown) => logger.error({ err }, 'following release pins failed'),
 );
 
 const server = app.listen(config.port, config.host, () => {

@@ -97,6 +97,9 @@ export class TestClient {
   post(path: string, body?: unknown) {
     return this.send('post', path, body);
   }
+  put(path: string, body?: unknown) {
+    return this.send('put', path, body);
+  }
   patch(path: string, body?: unknown) {
     return this.send('patch', path, body);
   }

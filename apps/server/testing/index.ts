@@ -23,3 +23,4 @@ export { createLiveWidget, runReportBody } from './embed.js';
 export { storedRollups, rollupsFromRaw } from '../src/usage/rollups.js';
 export { liveWidget, runAt, store, type FixtureWidget } from './usage.js';
 export { readCsv } from './csv.js';
+export { publishTestReleases, TEST_ENGINE_CHANGE, type TestReleases } from './releases.js';

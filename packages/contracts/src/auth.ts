@@ -141,6 +141,8 @@ export const auditEventTypes = [
   'member.removed',
   'widget.created',
   'widget.updated',
+  'widget.release_pinned',
+  'widget.key_rotated',
   'lead.updated',
   'lead.note_added',
   'lead.erased',

@@ -183,7 +183,10 @@ export const widgetSchema = z.object({
   status: z.enum(widgetStatuses),
   allowedOrigins: z.array(z.string()),
   settings: widgetSettingsSchema,
+  /** The release the snippet points at: the pin resolved. */
   release: z.string(),
+  /** What the developer pinned (`0.1.0`, `~0.2`); null when the widget stays on the release it was made with. */
+  releasePin: z.string().nullable(),
   logoUrl: z.string().nullable(),
   embed: z.object({ scriptUrl: z.string(), integrity: z.string(), snippet: z.string() }),
   createdAt: z.string(),
@@ -272,6 +275,11 @@ export const embedRunBodySchema = z.strictObject({
     version: z.string().max(40),
   }),
   pageUrl: webUrlSchema.max(2000).optional(),
+  /**
+   * The widget release whose script ran the calculation (the server recomputes with that release's
+   * engine); reports without it are taken as made by the widget's current release.
+   */
+  release: z.string().max(40).optional(),
 });
 export type EmbedRunBody = z.infer<typeof embedRunBodySchema>;
 export const embedRunResponseSchema = z.object({
@@ -301,3 +309,26 @@ export const embedLeadBodySchema = z.strictObject({
 });
 export type EmbedLeadBody = z.infer<typeof embedLeadBodySchema>;
 export const embedLeadResponseSchema = z.object({ id: z.number().int() });
+
+// ---- Embed access: the sites allowed to embed a widget, and the ones refused ----
+
+/** `PUT /orgs/:orgId/widgets/:widgetId/origins`: the whole list, replacing the old one. */
+export const setOriginsBodySchema = z.strictObject({
+  origins: z.array(originSchema).max(20, 'At most 20 origins'),
+});
+export type SetOriginsBody = z.infer<typeof setOriginsBodySchema>;
+
+/** Refusals (403: origin not allowed) per origin over the last `days` days, most refused first. */
+export const refusedOriginsSchema = z.object({
+  days: z.number().int(),
+  items: z.array(
+    z.object({
+      origin: z.string(),
+      refusals: z.number().int(),
+      lastDay: z.string(),
+      /** Per day, oldest first: `YYYY-MM-DD` and the count. */
+      byDay: z.array(z.object({ day: z.string(), refusals: z.number().int() })),
+    }),
+  ),
+});
+export type RefusedOrigins = z.infer<typeof refusedOriginsSchema>;

@@ -18,7 +18,10 @@ import { init, parse } from 'es-module-lexer';
 import { build } from 'vite';
 
 export const widgetDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
-export const widgetVersion = JSON.parse(readFileSync(path.join(widgetDir, 'package.json'), 'utf8')).version;
+/** The package's version; `WICKSTONE_RELEASE_VERSION` builds another (tests publish a second release with it). */
+export const widgetVersion =
+  process.env.WICKSTONE_RELEASE_VERSION ??
+  JSON.parse(readFileSync(path.join(widgetDir, 'package.json'), 'utf8')).version;
 
 /** The Manrope the release ships: one variable font file for every weight, Latin only. */
 export const MANROPE_FILE = 'manrope-latin-wght-normal.woff2';

@@ -111,7 +111,13 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
     const key = `${apiBase ?? ''} ${widget.publicKey}`;
     if (apiBase === null) reporter = null;
     else if (reporter === null || key !== reporterKey) {
-      const args = { apiBase, publicKey: widget.publicKey, href: () => location.href };
+      const args = {
+        apiBase,
+        publicKey: widget.publicKey,
+        href: () => location.href,
+        // The release this script belongs to: the server recomputes the run with its engine.
+        release: __WICKSTONE_VERSION__,
+      };
       reporter = deferredReporter((extras) => extras.createReporter(args), newRunId);
     }
     reporterKey = key;

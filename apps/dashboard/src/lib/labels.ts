@@ -12,7 +12,8 @@ export const roleSummary: Record<Role, string> = {
   owner: 'Everything an admin does, plus handing out and taking back the owner role.',
   admin: 'Sets up widgets, brand and lead forms; manages the team.',
   analyst: 'Reviews usage and works the leads.',
-  developer: 'Looks after embed keys, allowed sites and release pins.',
+  developer:
+    'Pins widgets to releases after previewing the change, and keeps the sites allowed to embed them.',
 };
 
 export const roleOptions = roles.map((r) => ({ value: r, label: roleLabel[r] }));
@@ -29,6 +30,8 @@ export const auditLabel: Record<AuditEntry['type'], string> = {
   'member.removed': 'Removed from the team',
   'widget.created': 'Widget created',
   'widget.updated': 'Widget changed',
+  'widget.release_pinned': 'Widget release pin moved',
+  'widget.key_rotated': 'Widget embed key replaced',
   'lead.updated': 'Enquiry updated',
   'lead.note_added': 'Note added to an enquiry',
   'lead.erased': 'Enquirer’s personal data erased',

@@ -20,6 +20,7 @@ import {
 } from '../components/widget-editor-sections';
 import type { SectionProps } from '../components/widget-fields';
 import { EmbedCodeSection } from '../components/widget-embed';
+import { ReleaseSection } from '../components/widget-release';
 import { HistorySection } from '../components/widget-history';
 import { InputsSection } from '../components/widget-inputs';
 import { LeadFormSection } from '../components/widget-lead-form';
@@ -50,7 +51,7 @@ export function Editor({
   calc: CalculatorDefinition;
   editable: boolean;
 }) {
-  const { orgId } = useOrg();
+  const { orgId, role } = useOrg();
   const summaryRef = useRef<HTMLDivElement>(null);
   const formRef = useRef<HTMLDivElement>(null);
   const focusFirstProblem = () =>
@@ -95,6 +96,7 @@ export function Editor({
             <SheetSection {...props} />
             <SitesSection {...props} />
             <EmbedCodeSection widget={widget} dirty={editor.dirty} />
+            <ReleaseSection orgId={orgId} widget={widget} role={role} />
             <HistorySection
               orgId={orgId}
               widgetId={widget.id}

@@ -13,6 +13,7 @@ export function sampleWidget(over: Partial<Widget> = {}): Widget {
     allowedOrigins: [],
     settings: defaultWidgetSettings(),
     release: '0.1.0',
+    releasePin: null,
     logoUrl: null,
     embed: { scriptUrl: '', integrity: '', snippet: '' },
     createdAt: '2026-12-01T10:00:00.000Z',

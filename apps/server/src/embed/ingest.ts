@@ -1,15 +1,10 @@
 import { createHash } from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
-import {
-  CalcInputError,
-  calculate,
-  canonicalJson,
-  getCalculator,
-  type CalculationResult,
-  type JsonValue,
-} from '@wickstone/calc-core';
+import * as currentEngine from '@wickstone/calc-core';
+import { canonicalJson, type CalculationResult, type JsonValue } from '@wickstone/calc-core';
 import type { EmbedRunBody, WidgetSettings } from '@wickstone/contracts';
 import { AppError } from '../errors.js';
+import { isCalcInputError } from '../releases/service.js';
 import { insertRunStatements, isDuplicateKey, retryOnDeadlock, type RunRow } from '../runs/store.js';
 import { addRunsStatements, jsonValue, type Statement } from '../usage/rollups.js';
 import {
@@ -60,6 +55,17 @@ export interface IngestOptions {
     runs: { id: string; organizationId: number; createdAt: Date }[],
     known: AllowanceFacts,
   ) => Promise<void>;
+  /**
+   * The engine of a widget release (null when the server has no such release): each run is
+   * recomputed with the engine of the release that made it. Without it, the server's own engine.
+   */
+  engineOf?: (release: string) => RunEngine | null;
+}
+
+/** calc-core's runner and registry, as a release's engine module exports them. */
+export interface RunEngine {
+  calculate: typeof currentEngine.calculate;
+  getCalculator: typeof currentEngine.getCalculator;
 }
 
 /** What a report needs of its widget: read once per batch with plain SQL, no model instances. */
@@ -157,8 +163,9 @@ export function checkWidget<W extends Pick<WidgetFacts, 'status' | 'allowedOrigi
 export function recompute(
   w: Pick<WidgetFacts, 'id' | 'calculatorId' | 'settings'>,
   body: EmbedRunBody,
+  engine: RunEngine = currentEngine,
 ): CalculationResult {
-  const calc = getCalculator(w.calculatorId);
+  const calc = engine.getCalculator(w.calculatorId);
   if (!calc) throw new AppError('internal', `widget ${w.id} names a calculator this server lacks`);
   // A locked or hidden input is the firm's choice: a visitor's report may not change it.
   for (const [id, s] of Object.entries(w.settings.inputs)) {
@@ -168,9 +175,9 @@ export function recompute(
       throw field(`body.inputs.${id}`, 'This input is fixed by the widget');
   }
   try {
-    return calculate(w.calculatorId, body.inputs);
+    return engine.calculate(w.calculatorId, body.inputs);
   } catch (e) {
-    if (!(e instanceof CalcInputError)) throw e;
+    if (!isCalcInputError(e)) throw e;
     const fields = e.issues.map((i) => ({ field: `body.inputs.${i.field}`, message: i.message }));
     throw new AppError(
       'validation_failed',
@@ -271,7 +278,11 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
           followers.push({ item, of: first, same: first.row.bodyHash === hash });
           continue;
         }
-        const server = recompute(w, body);
+        // The release whose script made the run (older widgets do not say: their widget's release).
+        const release = body.release ?? w.release;
+        const engine = options.engineOf ? options.engineOf(release) : currentEngine;
+        if (!engine) throw field('body.release', `No widget release ${release} on this server`);
+        const server = recompute(w, body, engine);
         const mismatch = compareResults(body.result, server);
         const p: Prepared = {
           item,
@@ -282,7 +293,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
             calculatorId: w.calculatorId,
             origin: (origin as string).toLowerCase(),
             pageUrl: body.pageUrl ?? null,
-            release: w.release,
+            release,
             calcVersion: body.result.version,
             unitSystem: body.unitSystem,
             inputs: body.inputs,

@@ -13,6 +13,7 @@ import { AppError, isDatabaseUnavailable, parseRequest } from '../errors.js';
 import type { Counters } from '../http/counters.js';
 import { byIp, sharedRateLimit } from '../http/rate-limit.js';
 import type { EmbedService } from './service.js';
+import type { RefusalCounter } from './refusals.js';
 import type { SheetService } from '../sheets/service.js';
 import { sendSheet } from '../sheets/send.js';
 
@@ -75,6 +76,7 @@ export function embedRouter(
   sheets: SheetService,
   limits: EmbedLimits,
   counters: Counters,
+  refusals?: RefusalCounter,
 ): Router {
   const router = express.Router();
   const known = new Map<string, { ok: boolean; until: number }>();
@@ -204,5 +206,32 @@ export function embedRouter(
     res.send(asset.data);
   });
 
+  // A request refused because its page's origin is not allowed is counted for the widget it named,
+  // so the developer sees a site missing from the list. Counting never changes the answer.
+  router.use(async (err: unknown, req: Request, _res: Response, next: NextFunction) => {
+    const origin = req.get('origin');
+    if (refusals && origin && err instanceof AppError && err.code === 'forbidden' && refusedFor(err)) {
+      const key = keyOf(req);
+      if (key) await refusals.count(key, origin).catch(() => undefined);
+    }
+    next(err);
+  });
+
   return router;
+}
+
+/** A refusal of the page's origin (other 403s, a lead form turned off, are not counted). */
+const refusedFor = (err: AppError) =>
+  typeof err.details === 'object' && err.details !== null && 'origin' in err.details;
+
+/** The widget key a request names: in its path, body or query. */
+function keyOf(req: Request): string | null {
+  const fromPath = /^\/widgets\/([^/]+)$/.exec(req.path)?.[1];
+  const candidates = [
+    fromPath,
+    (req.body as { publicKey?: unknown } | undefined)?.publicKey,
+    req.query.publicKey,
+  ];
+  const key = candidates.find((k): k is string => typeof k === 'string');
+  return key && publicKeySchema.safeParse(key).success ? key : null;
 }

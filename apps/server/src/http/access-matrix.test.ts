@@ -80,6 +80,12 @@ describe('the route table', () => {
       'POST /api/v1/orgs/:orgId/billing/plan': 'billing:manage',
       'POST /api/v1/orgs/:orgId/billing/cancel': 'billing:manage',
       'POST /api/v1/orgs/:orgId/billing/resume': 'billing:manage',
+      // issue 15: every member reads the releases; the developer (and owner, admin) pins them
+      'GET /api/v1/releases': 'signedIn',
+      'PUT /api/v1/orgs/:orgId/widgets/:widgetId/release': 'releases:pin',
+      'GET /api/v1/orgs/:orgId/widgets/:widgetId/upgrade-preview': 'releases:pin',
+      'PUT /api/v1/orgs/:orgId/widgets/:widgetId/origins': 'embed:manage',
+      'GET /api/v1/orgs/:orgId/widgets/:widgetId/refused-origins': 'embed:manage',
     };
     const declared = Object.fromEntries(routes.map((r) => [routeKey(r), r.access]));
     for (const [key, access] of Object.entries(issue4)) expect(declared[key], key).toBe(access);

@@ -119,6 +119,7 @@ export class ApiRoutes {
 
   /** State changes take params and a body, never a query; DELETE takes no body either. */
   readonly post: BodyRoute = (path, spec, handler) => this.add('post', path, spec, handler);
+  readonly put: BodyRoute = (path, spec, handler) => this.add('put', path, spec, handler);
   readonly patch: BodyRoute = (path, spec, handler) => this.add('patch', path, spec, handler);
   readonly delete: BodylessRoute = (path, spec, handler) => this.add('delete', path, spec, handler);
 

@@ -20,6 +20,8 @@ const validBodies: Record<string, unknown> = {
   'POST /api/v1/orgs/:orgId/invitations': { email: 'someone-new@tests.example', role: 'analyst' },
   'POST /api/v1/orgs/:orgId/widgets': { name: 'Intruder widget', calculatorId: 'tube-rise' },
   'PATCH /api/v1/orgs/:orgId/widgets/:widgetId': { name: 'Taken over' },
+  'PUT /api/v1/orgs/:orgId/widgets/:widgetId/release': { pin: '0.1.0' },
+  'PUT /api/v1/orgs/:orgId/widgets/:widgetId/origins': { origins: ['https://intruder.example'] },
   'PATCH /api/v1/orgs/:orgId/leads/:leadId': { status: 'closed' },
   'POST /api/v1/orgs/:orgId/leads/:leadId/notes': { body: 'Taken over' },
   'PATCH /api/v1/orgs/:orgId/settings/retention': { months: 1 },

@@ -9,6 +9,7 @@ import { Asset, Organization, Run, Widget } from '../db/models/index.js';
 import { AppError } from '../errors.js';
 import { shown } from '../embed/format.js';
 import { renderSheet } from './render.js';
+import type { ReleaseService } from '../releases/service.js';
 
 export interface Sheet {
   pdf: Buffer;
@@ -57,7 +58,11 @@ const sheetSettings = (w: Widget): WidgetSettings['sheet'] =>
   // Widgets saved before sheets existed have no setting: the default (on, A4) holds for them.
   (w.settings as Partial<WidgetSettings>).sheet ?? DEFAULT_SHEET;
 
-export function createSheetService(deps: { publicUrl: string }): SheetService {
+export function createSheetService(deps: {
+  publicUrl: string;
+  /** Release engines: a run is verified with the engine of the release that made it. */
+  releases?: Pick<ReleaseService, 'engine'>;
+}): SheetService {
   const base = deps.publicUrl.replace(/\/$/, '');
   const verifyUrl = (runId: string) => `${base}/verify/${runId}`;
 
@@ -135,7 +140,14 @@ export function createSheetService(deps: { publicUrl: string }): SheetService {
       const stored = run?.serverResult as unknown as CalculationResult | null | undefined;
       if (!run || !stored) throw noRun();
       const calc = calculatorOf(run);
-      const now = calculate(run.calculatorId, run.inputs);
+      // Re-run with the engine of the release that made the run, not whatever this server runs now.
+      const engine = deps.releases ? deps.releases.engine(run.release) : { calculate };
+      if (!engine)
+        throw new AppError(
+          'internal',
+          `run ${run.id} was made by release ${run.release}, which this server lacks`,
+        );
+      const now = engine.calculate(run.calculatorId, run.inputs);
       const text = (v: number | null | undefined, out: CalculatorDefinition['outputs'][number]) =>
         v === null || v === undefined ? 'not defined here' : shown(v, out, run.unitSystem);
       const outputs = calc.outputs

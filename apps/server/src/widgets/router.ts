@@ -2,12 +2,16 @@ import {
   createWidgetBodySchema,
   orgParamsSchema,
   pageQuerySchema,
+  setOriginsBodySchema,
+  setReleasePinBodySchema,
   updateWidgetBodySchema,
   widgetParamsSchema,
 } from '@wickstone/contracts';
 import { auditTrail, type AuditService } from '../audit/service.js';
 import type { ApiRoutes } from '../http/routes.js';
 import type { WidgetService } from './service.js';
+import type { RefusalCounter } from '../embed/refusals.js';
+import { fieldError } from '../errors.js';
 
 export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService, audit: AuditService): void {
   routes.get(
@@ -60,5 +64,55 @@ export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService, audit: A
     async ({ org, params, query }) => ({
       body: await widgets.revisions(org.id, params.widgetId, query.page, query.pageSize),
     }),
+  );
+
+  routes.put(
+    '/orgs/:orgId/widgets/:widgetId/release',
+    { access: 'releases:pin', params: widgetParamsSchema, body: setReleasePinBodySchema },
+    async ({ org, session, params, body, meta }) => ({
+      body: await widgets.setPin(
+        org.id,
+        params.widgetId,
+        session.user.id,
+        body.pin,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
+    }),
+  );
+}
+
+/** The developer's side of embedding: which sites may embed a widget, and which were refused. */
+export function embedAccessRoutes(
+  routes: ApiRoutes,
+  widgets: WidgetService,
+  refusals: RefusalCounter,
+  audit: AuditService,
+): void {
+  routes.put(
+    '/orgs/:orgId/widgets/:widgetId/origins',
+    { access: 'embed:manage', params: widgetParamsSchema, body: setOriginsBodySchema },
+    async ({ org, session, params, body, meta }) => {
+      // Named by this route's own field (the service, shared with PATCH, names allowedOrigins).
+      if (body.origins.length === 0 && (await widgets.get(org.id, params.widgetId)).status === 'live')
+        throw fieldError('body.origins', 'A live widget needs at least one site allowed to embed it');
+      return {
+        body: await widgets.update(
+          org.id,
+          params.widgetId,
+          session.user.id,
+          { allowedOrigins: body.origins },
+          auditTrail(audit, org.id, session.user.id, meta),
+        ),
+      };
+    },
+  );
+
+  routes.get(
+    '/orgs/:orgId/widgets/:widgetId/refused-origins',
+    { access: 'embed:manage', params: widgetParamsSchema },
+    async ({ org, params }) => {
+      await widgets.get(org.id, params.widgetId);
+      return { body: await refusals.list(org.id, params.widgetId) };
+    },
   );
 }

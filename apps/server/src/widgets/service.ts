@@ -1,6 +1,7 @@
 import { embedSnippet, reservedHeight } from './snippet.js';
 import { randomBytes } from 'node:crypto';
-import type { Sequelize } from 'sequelize';
+import { Op, type Sequelize, type Transaction } from 'sequelize';
+import semver from 'semver';
 import {
   CalcInputError,
   getCalculator,
@@ -45,6 +46,22 @@ export interface WidgetService {
     page: number,
     pageSize: number,
   ): Promise<{ items: WidgetRevisionDto[]; total: number }>;
+  /**
+   * Pin the widget to an exact release or a minor line (`~0.2`), resolved now; its snippet and SRI
+   * follow. A 400 naming `body.pin` when no release the server has fits, nothing changed.
+   */
+  setPin(
+    orgId: number,
+    widgetId: number,
+    actorId: number,
+    pin: string,
+    trail?: AuditTrail,
+  ): Promise<WidgetDto>;
+  /**
+   * Move widgets pinned to a minor line to its newest published release (after a release is
+   * published and the server restarted); returns how many moved.
+   */
+  followPins(): Promise<number>;
   toDto(widget: Widget): WidgetDto;
 }
 
@@ -121,6 +138,22 @@ function checkInputSettings(calc: CalculatorDefinition, settings: WidgetSettings
   }
 }
 
+/**
+ * Move widgets pinned to a minor line (`~0.2`) to its newest published release: run when the
+ * server starts, since releases only arrive with a deployment. Returns how many moved.
+ */
+export async function followReleasePins(releases: ReleaseService): Promise<number> {
+  let moved = 0;
+  const pinned = await Widget.findAll({ where: { releasePin: { [Op.startsWith]: '~' } } });
+  for (const w of pinned) {
+    const version = releases.resolve(w.releasePin as string);
+    if (!version || version === w.release || !releases.script(version, w.calculatorId)) continue;
+    await w.update({ release: version });
+    moved += 1;
+  }
+  return moved;
+}
+
 export function createWidgetService(deps: {
   sequelize: Sequelize;
   releases: ReleaseService;
@@ -175,6 +208,7 @@ export function createWidgetService(deps: {
       allowedOrigins: w.allowedOrigins,
       settings: w.settings,
       release: w.release,
+      releasePin: w.releasePin ?? null,
       logoUrl: logo,
       embed: embed(w),
       createdAt: w.createdAt.toISOString(),
@@ -206,8 +240,66 @@ export function createWidgetService(deps: {
     release: w.release,
   });
 
+  /** The widget, locked for the rest of the transaction; a 404 when the organisation has none such. */
+  async function findForUpdate(orgId: number, widgetId: number, transaction: Transaction): Promise<Widget> {
+    const w = await Widget.findOne({
+      where: { id: widgetId, organizationId: orgId },
+      lock: transaction.LOCK.UPDATE,
+      transaction,
+    });
+    if (!w) throw new AppError('not_found', 'Widget not found');
+    return w;
+  }
+
+  /** The release a pin stands for, or a 400 naming `body.pin`. */
+  function resolvePin(pin: string, calculatorId: string): string {
+    const exact = semver.valid(pin);
+    const version = exact ? (releases.get(pin) ? pin : null) : releases.resolve(pin);
+    if (!version)
+      throw fieldError(
+        'body.pin',
+        exact ? `No release ${pin} on this server` : `No published release in the line ${pin}`,
+      );
+    if (!releases.script(version, calculatorId))
+      throw fieldError('body.pin', `Release ${version} has no ${calculatorId} calculator`);
+    return version;
+  }
+
   return {
     toDto: (w) => toDto(w),
+
+    async setPin(orgId, widgetId, actorId, pin, trail) {
+      return sequelize.transaction(async (transaction) => {
+        const w = await findForUpdate(orgId, widgetId, transaction);
+        const release = resolvePin(pin, w.calculatorId);
+        const before = { release: w.release, releasePin: w.releasePin ?? null };
+        const after = { release, releasePin: pin };
+        const changes = diff(before, after);
+        if (changes.length === 0) return dto(w);
+        await w.update(after, { transaction });
+        await WidgetRevision.create(
+          {
+            widgetId: w.id,
+            organizationId: orgId,
+            authorId: actorId,
+            changes,
+            snapshot: snapshot(w),
+          },
+          { transaction },
+        );
+        await trail?.(
+          {
+            type: 'widget.release_pinned',
+            subject: w.name,
+            details: { widgetId: w.id, pin, release: { from: before.release, to: release } },
+          },
+          transaction,
+        );
+        return dto(w);
+      });
+    },
+
+    followPins: () => followReleasePins(releases),
 
     async list(orgId, page, pageSize) {
       const { rows, count } = await Widget.findAndCountAll({
@@ -273,12 +365,7 @@ export function createWidgetService(deps: {
 
     async update(orgId, widgetId, actorId, body, trail) {
       return sequelize.transaction(async (transaction) => {
-        const w = await Widget.findOne({
-          where: { id: widgetId, organizationId: orgId },
-          lock: transaction.LOCK.UPDATE,
-          transaction,
-        });
-        if (!w) throw new AppError('not_found', 'Widget not found');
+        const w = await findForUpdate(orgId, widgetId, transaction);
         const calc = calculatorOf(w.calculatorId, 'calculatorId');
         if (body.settings) {
           checkInputSettings(calc, body.settings, 'body.settings');

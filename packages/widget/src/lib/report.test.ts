@@ -21,6 +21,7 @@ describe('buildRunBody', () => {
       result,
       unitSystem: 'us',
       href: 'https://www.brackenridge-ground.example/damp?x=1',
+      release: '0.1.0',
     });
     expect(embedRunBodySchema.parse(body)).toEqual(body);
     // temperatureC does not apply to a table liquid: left out, as calc-core left it out of the hash.
@@ -35,6 +36,8 @@ describe('buildRunBody', () => {
     });
     expect(body.unitSystem).toBe('us');
     expect(body.pageUrl).toBe('https://www.brackenridge-ground.example/damp?x=1');
+    // The release that ran it, so the server recomputes with that release's engine.
+    expect(body.release).toBe('0.1.0');
   });
 
   it('carries warning codes only, and nulls for outputs that do not apply', () => {
@@ -49,6 +52,7 @@ describe('buildRunBody', () => {
     expect(body.result.warnings).toContain('FINE_GRAINED_SOIL');
     expect(body.result.outputs.layerCapillaryRise).toBeNull();
     expect(body).not.toHaveProperty('pageUrl');
+    expect(body).not.toHaveProperty('release');
     expect(embedRunBodySchema.safeParse(body).success).toBe(true);
   });
 });

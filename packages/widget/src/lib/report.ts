@@ -20,8 +20,10 @@ export function buildRunBody(args: {
   result: CalculationResult;
   unitSystem: UnitSystemId;
   href: string;
+  /** The widget release that ran the calculation; the server recomputes with that release's engine. */
+  release?: string;
 }): EmbedRunBody {
-  const { id, publicKey, result, unitSystem, href } = args;
+  const { id, publicKey, result, unitSystem, href, release } = args;
   const pageUrl = pageUrlFor(href);
   return {
     id,
@@ -35,5 +37,6 @@ export function buildRunBody(args: {
       version: result.version,
     },
     ...(pageUrl === undefined ? {} : { pageUrl }),
+    ...(release === undefined ? {} : { release }),
   };
 }

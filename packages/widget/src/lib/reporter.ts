@@ -26,6 +26,8 @@ export function createReporter(args: {
   apiBase: string;
   publicKey: string;
   href: () => string;
+  /** The widget release that made the results (sent with each report). */
+  release?: string;
   send?: SendOptions;
   makeId?: () => string;
   onReply?: (id: string, reply: Reply) => void;
@@ -37,7 +39,14 @@ export function createReporter(args: {
       const key = `${unitSystem}:${result.inputHash}`;
       if (last !== null && last.key === key && !last.failed()) return last.report;
       const id = given ?? makeId();
-      const body = buildRunBody({ id, publicKey: args.publicKey, result, unitSystem, href: args.href() });
+      const body = buildRunBody({
+        id,
+        publicKey: args.publicKey,
+        result,
+        unitSystem,
+        href: args.href(),
+        release: args.release,
+      });
       // A refused or lost report is not reused: calculating again sends a fresh one.
       let failed = false;
       const stored = request(`${args.apiBase}/api/v1/embed/runs`, body, args.send).then((reply) => {

@@ -9,6 +9,8 @@ import * as leadsByRunAndOrganisation from './20261202100100-leads-by-run-and-or
 import * as createRateLimitCounters from './20261202110000-create-rate-limit-counters.js';
 import * as billing from './20261202120000-billing.js';
 import * as leadNotes from './20261202130000-lead-notes.js';
+import * as widgetReleasePins from './20261202150000-widget-release-pins.js';
+import * as refusedOrigins from './20261202150100-refused-origins.js';
 import * as runsSheetProject from './20261202180000-runs-sheet-project.js';
 
 /**
@@ -27,5 +29,7 @@ export const migrations = [
   { name: '20261202110000-create-rate-limit-counters', ...createRateLimitCounters },
   { name: '20261202120000-billing', ...billing },
   { name: '20261202130000-lead-notes', ...leadNotes },
+  { name: '20261202150000-widget-release-pins', ...widgetReleasePins },
+  { name: '20261202150100-refused-origins', ...refusedOrigins },
   { name: '20261202180000-runs-sheet-project', ...runsSheetProject },
 ];

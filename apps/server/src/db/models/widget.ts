@@ -18,6 +18,7 @@ export class Widget extends Model<InferAttributes<Widget>, InferCreationAttribut
   declare allowedOrigins: string[];
   declare settings: WidgetSettings;
   declare release: string;
+  declare releasePin: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -33,6 +34,7 @@ export class Widget extends Model<InferAttributes<Widget>, InferCreationAttribut
         allowedOrigins: { type: DataTypes.JSON, allowNull: false },
         settings: { type: DataTypes.JSON, allowNull: false },
         release: { type: DataTypes.STRING(40), allowNull: false },
+        releasePin: { type: DataTypes.STRING(40), allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

@@ -1,0 +1,51 @@
+import { QueryTypes, type Sequelize } from 'sequelize';
+import type { RefusedOrigins } from '@wickstone/contracts';
+
+/** The days of refusals a developer sees. */
+export const REFUSAL_DAYS = 30;
+
+export interface RefusalCounter {
+  /** Count one refused request of the widget with this key from this origin, today (database clock). */
+  count(publicKey: string, origin: string): Promise<void>;
+  /** A widget's refusals over the last REFUSAL_DAYS days, per origin. */
+  list(orgId: number, widgetId: number): Promise<RefusedOrigins>;
+}
+
+/**
+ * Refused origins counted in MariaDB (one upsert per refusal, so every server process adds to the
+ * same row); a key no widget has counts nothing.
+ */
+export function createRefusalCounter(sequelize: Sequelize): RefusalCounter {
+  return {
+    async count(publicKey, origin) {
+      await sequelize.query(
+        `INSERT INTO refused_origins (widget_id, origin, day, refusals)
+         SELECT id, ?, CURRENT_DATE(), 1 FROM widgets WHERE public_key = ?
+         ON DUPLICATE KEY UPDATE refusals = refusals + 1`,
+        { replacements: [origin.toLowerCase().slice(0, 200), publicKey], type: QueryTypes.INSERT },
+      );
+    },
+    async list(orgId, widgetId) {
+      const rows = await sequelize.query<{ origin: string; day: string | Date; refusals: number }>(
+        `SELECT r.origin, r.day, r.refusals FROM refused_origins r
+         JOIN widgets w ON w.id = r.widget_id
+         WHERE w.organization_id = ? AND r.widget_id = ? AND r.day > CURRENT_DATE() - INTERVAL ? DAY
+         ORDER BY r.day`,
+        { replacements: [orgId, widgetId, REFUSAL_DAYS], type: QueryTypes.SELECT },
+      );
+      const byOrigin = new Map<string, RefusedOrigins['items'][number]>();
+      for (const r of rows) {
+        const day = typeof r.day === 'string' ? r.day.slice(0, 10) : r.day.toISOString().slice(0, 10);
+        const item = byOrigin.get(r.origin) ?? { origin: r.origin, refusals: 0, lastDay: day, byDay: [] };
+        item.refusals += Number(r.refusals);
+        item.lastDay = day;
+        item.byDay.push({ day, refusals: Number(r.refusals) });
+        byOrigin.set(r.origin, item);
+      }
+      const items = [...byOrigin.values()].sort(
+        (a, b) => b.refusals - a.refusals || a.origin.localeCompare(b.origin),
+      );
+      return { days: REFUSAL_DAYS, items };
+    },
+  };
+}
