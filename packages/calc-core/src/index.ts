@@ -83,6 +83,19 @@ export {
 
 export { canonicalJson, sha256Hex, type JsonValue } from './hash.js';
 export { runCalculation, resolveInputs, hashInputs, resultsAgree } from './calculators/engine.js';
+export {
+  tableIssues,
+  tableRows,
+  tableField,
+  parseTableField,
+  cellName,
+  showTable,
+  tableSummary,
+  rowsFromCells,
+  plainInputs,
+  type ShownTable,
+  type TableWording,
+} from './calculators/table.js';
 export { calculators, calculatorIds, getCalculator, calculate, type CalculatorId } from './registry.js';
 export { calculator as tubeRiseCalculator } from './calculators/tube-rise.js';
 export { calculator as slotRiseCalculator } from './calculators/slot-rise.js';
@@ -90,6 +103,15 @@ export { calculator as soilCapillaryRiseCalculator } from './calculators/soil-ca
 export { calculator as interfacePressureCalculator } from './calculators/interface-pressure.js';
 export { calculator as wettingForceCalculator } from './calculators/wetting-force.js';
 export { calculator as wickingTimeCalculator } from './calculators/wicking-time.js';
+export { calculator as absorptionCoefficientCalculator } from './calculators/absorption-coefficient.js';
+export {
+  absorptionPoints,
+  fitLine,
+  inFitWindow,
+  FIT_WINDOW_S,
+  type AbsorptionMethod,
+  type LineFit,
+} from './formulas/absorption.js';
 export type {
   Band,
   BandBasis,
@@ -100,6 +122,7 @@ export type {
   ChoiceOption,
   Condition,
   InputDefinition,
+  InputValue,
   InputValues,
   OutputDefinition,
   Outputs,
@@ -107,6 +130,9 @@ export type {
   Reference,
   Solution,
   Spread,
+  TableColumn,
+  TableInput,
+  TableRow,
   Warning,
   WarningDefinition,
   WorkingStep,

@@ -1,4 +1,5 @@
 import { CalcInputError } from './errors.js';
+import { calculator as absorptionCoefficient } from './calculators/absorption-coefficient.js';
 import { runCalculation } from './calculators/engine.js';
 import { calculator as interfacePressure } from './calculators/interface-pressure.js';
 import { calculator as slotRise } from './calculators/slot-rise.js';
@@ -16,10 +17,17 @@ export const calculators: readonly CalculatorDefinition[] = [
   interfacePressure,
   wettingForce,
   wickingTime,
+  absorptionCoefficient,
 ];
 
 export type CalculatorId =
-  'tube-rise' | 'slot-rise' | 'soil-capillary-rise' | 'interface-pressure' | 'wetting-force' | 'wicking-time';
+  | 'tube-rise'
+  | 'slot-rise'
+  | 'soil-capillary-rise'
+  | 'interface-pressure'
+  | 'wetting-force'
+  | 'wicking-time'
+  | 'absorption-coefficient';
 
 export const calculatorIds: readonly CalculatorId[] = calculators.map((c) => c.id as CalculatorId);
 

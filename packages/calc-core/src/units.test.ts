@@ -68,6 +68,18 @@ const mathjsName: Readonly<Record<UnitId, string | null>> = {
   day: 'day',
   'm/s2': 'm/s^2',
   'ft/s2': 'ft/s^2',
+  kg: 'kg',
+  g: 'g',
+  lb: 'lbm',
+  'kg/m2': 'kg/m^2',
+  'lb/ft2': 'lbm/ft^2',
+  'kg/(m2*s^0.5)': 'kg/(m^2 s^0.5)',
+  'kg/(m2*h^0.5)': 'kg/(m^2 h^0.5)',
+  'lb/(ft2*h^0.5)': 'lbm/(ft^2 h^0.5)',
+  'm/s^0.5': 'm/s^0.5',
+  'mm/s^0.5': 'mm/s^0.5',
+  'mm/min^0.5': 'mm/min^0.5',
+  'in/min^0.5': 'inch/min^0.5',
   '1': null,
 };
 

@@ -15,6 +15,10 @@ export type QuantityKind =
   | 'viscosity'
   | 'time'
   | 'acceleration'
+  | 'mass'
+  | 'arealMass'
+  | 'absorptionCoefficient'
+  | 'sorptivity'
   | 'dimensionless';
 
 export const quantityKinds: readonly QuantityKind[] = [
@@ -30,6 +34,10 @@ export const quantityKinds: readonly QuantityKind[] = [
   'viscosity',
   'time',
   'acceleration',
+  'mass',
+  'arealMass',
+  'absorptionCoefficient',
+  'sorptivity',
   'dimensionless',
 ];
 
@@ -129,6 +137,27 @@ export const units = {
   // acceleration, canonical m/s²
   'm/s2': unit('acceleration', 'm/s²', 'metre per second squared', 1),
   'ft/s2': unit('acceleration', 'ft/s²', 'foot per second squared', FOOT_M),
+  // mass, canonical kg
+  kg: unit('mass', 'kg', 'kilogram', 1),
+  g: unit('mass', 'g', 'gram', 1e-3),
+  lb: unit('mass', 'lb', 'pound', POUND_KG),
+  // mass per area (water taken up per wetted face), canonical kg/m²
+  'kg/m2': unit('arealMass', 'kg/m²', 'kilogram per square metre', 1),
+  'lb/ft2': unit('arealMass', 'lb/ft²', 'pound per square foot', POUND_KG / SQUARE_FOOT_M2),
+  // water absorption coefficient, canonical kg/(m²·√s); EN ISO 15148 also states it per √h (√3600 s = 60)
+  'kg/(m2*s^0.5)': unit('absorptionCoefficient', 'kg/(m²·√s)', 'kilogram per square metre root second', 1),
+  'kg/(m2*h^0.5)': unit('absorptionCoefficient', 'kg/(m²·√h)', 'kilogram per square metre root hour', 1 / 60),
+  'lb/(ft2*h^0.5)': unit(
+    'absorptionCoefficient',
+    'lb/(ft²·√h)',
+    'pound per square foot root hour',
+    POUND_KG / SQUARE_FOOT_M2 / 60,
+  ),
+  // sorptivity, canonical m/√s; ASTM C1585 reports mm/√s, Hall & Hoff often mm/√min
+  'm/s^0.5': unit('sorptivity', 'm/√s', 'metre per root second', 1),
+  'mm/s^0.5': unit('sorptivity', 'mm/√s', 'millimetre per root second', 1e-3),
+  'mm/min^0.5': unit('sorptivity', 'mm/√min', 'millimetre per root minute', 1e-3 / Math.sqrt(60)),
+  'in/min^0.5': unit('sorptivity', 'in/√min', 'inch per root minute', INCH_M / Math.sqrt(60)),
   // pure numbers
   '1': unit('dimensionless', '', 'dimensionless', 1),
 } as const satisfies Record<string, UnitDefinition>;
@@ -161,6 +190,10 @@ export const canonicalUnits: Readonly<Record<QuantityKind, UnitId>> = {
   viscosity: 'Pa*s',
   time: 's',
   acceleration: 'm/s2',
+  mass: 'kg',
+  arealMass: 'kg/m2',
+  absorptionCoefficient: 'kg/(m2*s^0.5)',
+  sorptivity: 'm/s^0.5',
   dimensionless: '1',
 };
 
@@ -185,6 +218,10 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     viscosity: 'mPa*s',
     time: 's',
     acceleration: 'm/s2',
+    mass: 'g',
+    arealMass: 'kg/m2',
+    absorptionCoefficient: 'kg/(m2*s^0.5)',
+    sorptivity: 'mm/min^0.5',
     dimensionless: '1',
   },
   us: {
@@ -200,6 +237,10 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     viscosity: 'cP',
     time: 's',
     acceleration: 'ft/s2',
+    mass: 'lb',
+    arealMass: 'lb/ft2',
+    absorptionCoefficient: 'lb/(ft2*h^0.5)',
+    sorptivity: 'in/min^0.5',
     dimensionless: '1',
   },
 };

@@ -2,23 +2,37 @@ import {
   displayUnitOf,
   fromCanonical,
   getCalculator,
+  showTable,
+  tableSummary,
   units,
   withUnit,
   type CalculatorDefinition,
   type InputDefinition,
   type OutputDefinition,
+  type TableRow,
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { ShownValue, WidgetSettings } from '@wickstone/contracts';
 import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 
+/** An input as stored: a number, a choice value, or a table's rows. */
+type SentValue = number | string | readonly unknown[];
+
 /** A value in the unit the widget shows it in: the definition's own choice for the system, else the system's unit for its kind. */
-function shown(
-  def: InputDefinition | OutputDefinition,
-  raw: number | string,
-  system: UnitSystemId,
-): ShownValue {
+function shown(def: InputDefinition | OutputDefinition, raw: SentValue, system: UnitSystemId): ShownValue {
   const base = { id: def.id, label: def.label };
+  if (def.kind === 'table') {
+    if (!Array.isArray(raw)) return { ...base, value: null, unit: null, text: String(raw) };
+    const t = showTable(def, raw as TableRow[], system);
+    return {
+      ...base,
+      value: null,
+      unit: null,
+      text: tableSummary(def, raw as TableRow[], system),
+      table: { columns: [...t.columns], rows: t.rows.map((r) => [...r]) },
+    };
+  }
+  if (typeof raw === 'object') return { ...base, value: null, unit: null, text: `${raw.length} rows` };
   if (def.kind === 'choice') {
     const option = def.options.find((o) => o.value === raw);
     return { ...base, value: raw, unit: null, text: option?.label ?? String(raw) };
@@ -44,18 +58,18 @@ export interface ShownRun {
 export function showRun(
   calculatorId: string,
   settings: Pick<WidgetSettings, 'inputs'>,
-  sent: Record<string, number | string>,
+  sent: Record<string, SentValue>,
   outputs: Record<string, number | null>,
   system: UnitSystemId,
 ): ShownRun {
   const calc: CalculatorDefinition | undefined = getCalculator(calculatorId);
   if (!calc) {
-    const plain = (id: string, v: number | string): ShownValue => ({
+    const plain = (id: string, v: SentValue): ShownValue => ({
       id,
       label: id,
-      value: v,
+      value: typeof v === 'object' ? null : v,
       unit: null,
-      text: typeof v === 'number' ? formatNumber(v) : v,
+      text: typeof v === 'number' ? formatNumber(v) : typeof v === 'object' ? `${v.length} rows` : v,
     });
     return {
       title: calculatorId,

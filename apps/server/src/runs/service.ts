@@ -121,7 +121,7 @@ export function createRunService(deps: { sequelize: Sequelize }): RunService {
     const shown = showRun(
       row.calculator_id,
       w?.settings ?? { inputs: {} },
-      jsonValue<Record<string, number | string>>(row.inputs),
+      jsonValue<Record<string, number | string | unknown[]>>(row.inputs),
       jsonValue<Record<string, number | null> | null>(row.outputs) ?? {},
       system,
     );

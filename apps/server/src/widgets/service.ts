@@ -66,10 +66,17 @@ export function assetUrl(publicUrl: string, asset: { id: number; sha256: string 
 function checkInputSettings(calc: CalculatorDefinition, settings: WidgetSettings, where: string): void {
   const known = new Set(calc.inputs.map((i) => i.id));
   const fields: { field: string; message: string }[] = [];
-  const defaults: Record<string, number | string> = {};
+  const defaults: Record<string, unknown> = {};
   for (const [id, s] of Object.entries(settings.inputs)) {
+    const input = calc.inputs.find((i) => i.id === id);
     if (!known.has(id))
       fields.push({ field: `${where}.inputs.${id}`, message: `${calc.title} has no input "${id}"` });
+    else if (input?.kind === 'table' && s.mode !== 'editable')
+      // Readings are the visitor's own measurements: a firm may offer starting rows, never fix them.
+      fields.push({
+        field: `${where}.inputs.${id}.mode`,
+        message: `${input.label} is the visitor's own readings: it cannot be locked or hidden`,
+      });
     else if (s.default !== undefined) defaults[id] = s.default;
   }
   if (fields.length === 0) {

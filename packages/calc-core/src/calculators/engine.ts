@@ -4,12 +4,14 @@ import { formatValue } from '../format.js';
 import { canonicalJson, sha256Hex } from '../hash.js';
 import { canonicalUnits } from '../units.js';
 import { VERSION } from '../version.js';
+import { tableIssues, tableRows } from './table.js';
 import type {
   Band,
   BandBasis,
   CalculationResult,
   CalculatorDefinition,
   InputDefinition,
+  InputValue,
   InputValues,
   Outputs,
   QuantityInput,
@@ -61,7 +63,7 @@ export function resolveInputs(def: CalculatorDefinition, raw: unknown): InputVal
   const chosen = Object.fromEntries(choices);
   const applies = (input: InputDefinition): boolean => inputApplies(input, def.inputs, chosen);
 
-  const resolved: Record<string, number | string> = {};
+  const resolved: Record<string, InputValue> = {};
   for (const input of def.inputs) {
     if (!applies(input)) continue;
     if (input.kind === 'choice') {
@@ -75,6 +77,13 @@ export function resolveInputs(def: CalculatorDefinition, raw: unknown): InputVal
           message: `${input.label} must be one of: ${input.options.map((o) => o.value).join(', ')}`,
         });
       }
+      continue;
+    }
+    if (input.kind === 'table') {
+      const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];
+      const found = tableIssues(input, value);
+      if (found.length > 0) issues.push(...found);
+      else resolved[input.id] = tableRows(input, value as readonly Readonly<Record<string, unknown>>[]);
       continue;
     }
     const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];

@@ -53,7 +53,33 @@ export interface ChoiceInput extends InputCommon {
   readonly default: string;
 }
 
-export type InputDefinition = QuantityInput | ChoiceInput;
+/** One numeric column of a table input. Canonical units, as for a quantity input. */
+export interface TableColumn {
+  /** Stable camelCase id: the key of the value in each row. */
+  readonly id: string;
+  readonly label: string;
+  readonly kind: QuantityKind;
+  /** Inclusive bounds of every value in the column, canonical units. */
+  readonly min: number;
+  readonly max: number;
+  readonly display?: Partial<Readonly<Record<UnitSystemId, UnitId>>>;
+  /** Each row's value must be greater than the one above it (readings in time order). */
+  readonly increasing?: boolean;
+}
+
+/** One row of a table input: a number (canonical units) per column id. */
+export type TableRow = Readonly<Record<string, number>>;
+
+/** Rows of named numeric columns: a laboratory's readings, typed, pasted or uploaded. */
+export interface TableInput extends InputCommon {
+  readonly kind: 'table';
+  readonly columns: readonly TableColumn[];
+  readonly minRows: number;
+  readonly maxRows: number;
+  readonly default: readonly TableRow[];
+}
+
+export type InputDefinition = QuantityInput | ChoiceInput | TableInput;
 
 export interface OutputDefinition {
   readonly id: string;
@@ -83,8 +109,11 @@ export interface Reference {
   readonly basis: Basis;
 }
 
-/** Resolved inputs: canonical numbers and choice values, keyed by input id. */
-export type InputValues = Readonly<Record<string, number | string>>;
+/** One resolved input: a canonical number, a choice value, or a table's rows. */
+export type InputValue = number | string | readonly TableRow[];
+
+/** Resolved inputs: canonical numbers, choice values and tables, keyed by input id. */
+export type InputValues = Readonly<Record<string, InputValue>>;
 
 /** One line of working, what an engineer checks: formula, the numbers put in, the value out. */
 export interface WorkingStep {

@@ -1,5 +1,6 @@
 import type { CalculationResult, UnitSystemId } from '@wickstone/calc-core';
 import type { EmbedRunBody } from '@wickstone/contracts';
+import { plainInputs } from '@wickstone/calc-core/table';
 
 /**
  * A random v4 UUID. `crypto.randomUUID` exists only in secure contexts, and a firm's site may
@@ -42,7 +43,7 @@ export function buildRunBody(args: {
   return {
     id,
     publicKey,
-    inputs: { ...result.inputs },
+    inputs: plainInputs(result.inputs),
     unitSystem,
     result: {
       outputs: { ...result.outputs },

@@ -1,4 +1,5 @@
-import type { CalculatorDefinition, InputDefinition } from '@wickstone/calc-core';
+import type { CalculatorDefinition, InputDefinition, TableRow } from '@wickstone/calc-core';
+import { tableIssues } from '@wickstone/calc-core/table';
 import type { EmbedWidget, InputMode } from '@wickstone/contracts';
 
 type InputSettings = EmbedWidget['settings']['inputs'];
@@ -7,8 +8,8 @@ type InputSettings = EmbedWidget['settings']['inputs'];
 export interface ResolvedInput {
   readonly def: InputDefinition;
   readonly mode: InputMode;
-  /** Canonical number (SI, degrees, °C) or a choice value: the firm's default if usable, else the calculator's. */
-  readonly initial: number | string;
+  /** Canonical number (SI, degrees, °C), a choice value or a table's rows: the firm's default if usable, else the calculator's. */
+  readonly initial: number | string | readonly TableRow[];
   /** The firm's default could not be used (wrong type or not an option) and the calculator's was taken. */
   readonly defaultRejected: boolean;
 }
@@ -27,14 +28,16 @@ export function resolveInputSettings(def: CalculatorDefinition, settings: InputS
     const s = Object.hasOwn(settings, input.id) ? settings[input.id] : undefined;
     const mode: InputMode = s !== undefined && MODES.includes(s.mode) ? s.mode : 'editable';
     const wanted = s?.default;
-    let initial: number | string = input.default;
+    let initial: ResolvedInput['initial'] = input.default;
     let defaultRejected = false;
     if (wanted !== undefined) {
       const usable =
         input.kind === 'choice'
           ? typeof wanted === 'string' && input.options.some((o) => o.value === wanted)
-          : typeof wanted === 'number' && Number.isFinite(wanted);
-      if (usable) initial = wanted;
+          : input.kind === 'table'
+            ? tableIssues(input, wanted).length === 0
+            : typeof wanted === 'number' && Number.isFinite(wanted);
+      if (usable) initial = wanted as ResolvedInput['initial'];
       else defaultRejected = true;
     }
     return { def: input, mode, initial, defaultRejected };

@@ -160,7 +160,10 @@ export function Result({
           {band.basis
             .map((b) => {
               const input = calculator.inputs.find((x) => x.id === b.input);
-              const unit = input && input.kind !== 'choice' ? displayUnitOf(input, system) : null;
+              const unit =
+                input && input.kind !== 'choice' && input.kind !== 'table'
+                  ? displayUnitOf(input, system)
+                  : null;
               const edges = unit
                 ? withUnit(
                     `${formatValue(toDisplay(b.low, unit))} to ${formatValue(toDisplay(b.high, unit))}`,
