@@ -19,6 +19,7 @@ import { calculators, VERSION as calcCoreVersion } from '@wickstone/calc-core';
 import {
   buildChunks,
   buildLoader,
+  hasTableInput,
   checkContents,
   closure,
   FLIGHT_GOAL,
@@ -63,7 +64,7 @@ const files = {};
 const chunkFigures = {};
 console.log(`Wickstone widget ${widgetVersion} (calc-core ${calcCoreVersion})`);
 try {
-  const { files: chunks, engines, extras } = await buildChunks(calculators.map((c) => c.id));
+  const { files: chunks, engines, extras, tables } = await buildChunks(calculators.map((c) => c.id));
   for (const [name, chunk] of chunks) {
     const m = emit(name, chunk.code);
     chunkFigures[name] = {
@@ -90,7 +91,11 @@ try {
     const engine = engines[calc.id];
     if (!engine) throw new Error(`no engine chunk for ${calc.id}`);
     const file = `wickstone-${calc.id}.js`;
-    const loader = emit(file, await buildLoader(calc.id, calcCoreVersion, chunks, engine, extras));
+    const tablesFile = hasTableInput(calc) ? tables : null;
+    const loader = emit(
+      file,
+      await buildLoader(calc.id, calcCoreVersion, chunks, engine, extras, tablesFile),
+    );
     const flight = [...closure(chunks, engine)];
     const gzip = loader.gzipBytes + flight.reduce((s, f) => s + chunkFigures[f].gzipBytes, 0);
     const brotli = loader.brotliBytes + flight.reduce((s, f) => s + chunkFigures[f].brotliBytes, 0);

@@ -46,6 +46,11 @@ const EXTRAS_ONLY = new Set(
     path.join(src, f),
   ),
 );
+// ---- tables chunk (h2-tradetab): the table input, CSV reading and chart, for calculators with a table input.
+const TABLES_ENTRY = path.join(src, 'tables.ts');
+const TABLES_DIR = path.join(src, 'tables') + path.sep;
+/** Whether a calculator takes a table input, and so its loader may fetch the tables chunk. */
+export const hasTableInput = (calc) => calc.inputs.some((i) => i.kind === 'table');
 
 const common = (define) => ({
   configFile: false,
@@ -174,6 +179,7 @@ export async function buildChunks(calculatorIds) {
   const input = {
     ...Object.fromEntries(calculatorIds.map((id) => [`engine-${id}`, ENGINE + id])),
     extras: path.join(src, 'extras.ts'),
+    tables: TABLES_ENTRY,
   };
   const runtimeMemo = new Map();
   /** A module the first paint needs: Preact, the widget's own code, and what they import from calc-core. */
@@ -183,7 +189,12 @@ export async function buildChunks(calculatorIds) {
     seen.add(id);
     let yes = false;
     if (/[\\/]node_modules[\\/]preact[\\/]/.test(id)) yes = true;
-    else if (id.startsWith(src)) yes = !EXTRAS_ONLY.has(id.split('?')[0]) && !id.includes('extras.css');
+    else if (id.startsWith(src))
+      yes =
+        !EXTRAS_ONLY.has(id.split('?')[0]) &&
+        !id.includes('extras.css') &&
+        id.split('?')[0] !== TABLES_ENTRY &&
+        !id.startsWith(TABLES_DIR);
     else if (CALCULATOR_MODULE.test(id)) yes = false;
     else if (id.includes(`${path.sep}calc-core${path.sep}`))
       // calc-core's index re-exports everything: what only it imports is the engines' business.
@@ -228,6 +239,7 @@ export async function buildChunks(calculatorIds) {
   const files = new Map();
   const engines = {};
   let extras = null;
+  let tables = null;
   for (const o of outputsOf(result)) {
     if (o.type !== 'chunk') throw new Error(`unexpected asset ${o.fileName} in the release build`);
     if (process.env.WICKSTONE_CHUNK_MODULES)
@@ -237,10 +249,12 @@ export async function buildChunks(calculatorIds) {
         );
     files.set(o.fileName, { code: wrapChunk(o), imports: o.imports.map((f) => path.posix.basename(f)) });
     if (o.isEntry && o.name === 'extras') extras = o.fileName;
+    else if (o.isEntry && o.name === 'tables') tables = o.fileName;
     else if (o.isEntry) engines[o.name.slice('engine-'.length)] = o.fileName;
   }
   if (extras === null) throw new Error('no extras chunk was built');
-  return { files, engines, extras };
+  if (tables === null) throw new Error('no tables chunk was built');
+  return { files, engines, extras, tables };
 }
 
 /** Every chunk `file` reaches through static imports (itself included), in load order. */
@@ -255,16 +269,25 @@ export function closure(files, file, out = new Set()) {
  * One calculator's loader: an IIFE carrying the table of the chunks it may load (SRI hash and
  * static imports of each), so every file the snippet's script brings in is checked.
  */
-export async function buildLoader(calculatorId, calcCoreVersion, files, engineFile, extrasFile) {
+export async function buildLoader(
+  calculatorId,
+  calcCoreVersion,
+  files,
+  engineFile,
+  extrasFile,
+  tablesFile = null,
+) {
   const table = {};
-  for (const f of new Set([...closure(files, engineFile), ...closure(files, extrasFile)]))
-    table[f] = [measure(files.get(f).code).integrity, files.get(f).imports];
+  const reach = [...closure(files, engineFile), ...closure(files, extrasFile)];
+  if (tablesFile !== null) reach.push(...closure(files, tablesFile));
+  for (const f of new Set(reach)) table[f] = [measure(files.get(f).code).integrity, files.get(f).imports];
   const result = await build({
     ...common({
       __WICKSTONE_CALCULATOR__: JSON.stringify(calculatorId),
       __WICKSTONE_CALC_CORE_VERSION__: JSON.stringify(calcCoreVersion),
       __WICKSTONE_ENGINE__: JSON.stringify(engineFile),
       __WICKSTONE_EXTRAS__: JSON.stringify(extrasFile),
+      __WICKSTONE_TABLES__: JSON.stringify(tablesFile),
       __WICKSTONE_CHUNKS__: JSON.stringify(table),
     }),
     build: {

@@ -4,6 +4,7 @@ import type { MountHandle, MountOptions } from './global.js';
 import { createReporter, type Reporter } from './lib/reporter.js';
 import { App } from './ui/App.js';
 import { loadExtras, withExtras, type ExtrasModule } from './lazy.js';
+import { setTablesFetch, type TablesModule } from './lazy-tables.js';
 import { HOST_TAG } from './placement.js';
 import css from './ui/styles.css?inline';
 
@@ -65,6 +66,8 @@ export interface Bundle {
   readonly defaultApiBase: string | null;
   /** Fetches the extras chunk (working, lead form, font); null where there is none to fetch. */
   readonly extras: (() => Promise<ExtrasModule>) | null;
+  /** Fetches the tables chunk (table input, CSV, chart); absent for a calculator without a table input. */
+  readonly tables?: (() => Promise<TablesModule>) | null;
 }
 
 /**
@@ -73,6 +76,7 @@ export interface Bundle {
  */
 export function mountWidget(bundle: Bundle, element: Element, first: MountOptions): MountHandle {
   const { calculator } = bundle;
+  setTablesFetch(bundle.tables ?? null);
   const { host, made } = hostIn(element, calculator.id);
   host.setAttribute('data-wickstone', 'host');
   host.setAttribute('data-calculator', calculator.id);

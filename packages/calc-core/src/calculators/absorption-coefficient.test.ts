@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { CalcInputError } from '../errors.js';
 import { calculate } from '../registry.js';
+import { fromCanonical } from '../units.js';
 import { readingsInput, run } from './absorption-coefficient.js';
 
 // The calculator's default readings are an invented test (no published worked example of either
@@ -34,7 +35,12 @@ describe('absorption-coefficient: reference checks', () => {
     expect(r.outputs.rSquared).toBeCloseTo(r2, 12);
     expect(r.outputs.pointsInFit).toBe(n);
     // √h = 60 √s exactly; S = A_w / ρ_w (ASTM C1585's I = Δm/(a·d), from memory), ρ_w 1000 kg/m³ by default.
-    expect(r.outputs.absorptionCoefficientPerRootHour).toBeCloseTo(aw * 60, 10);
+    // Outputs are canonical; shown per √h the figure is 60 × A_w per √s (√3600 = 60).
+    expect(r.outputs.absorptionCoefficientPerRootHour).toBe(r.outputs.absorptionCoefficient);
+    expect(fromCanonical(r.outputs.absorptionCoefficientPerRootHour ?? 0, 'kg/(m2*h^0.5)')).toBeCloseTo(
+      aw * 60,
+      10,
+    );
     expect(r.outputs.sorptivity).toBeCloseTo(aw / 1000, 15);
     expect(r.warnings).toEqual([]);
   });

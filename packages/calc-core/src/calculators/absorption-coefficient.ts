@@ -8,6 +8,7 @@ import {
   type AbsorptionMethod,
 } from '../formulas/absorption.js';
 import { runner } from './engine.js';
+import { tableIssues } from './table.js';
 import { choice, DAMP_CAUTION, ESTIMATE_CAUTION, fmt, num, q, warning } from './shared.js';
 import type {
   CalculatorDefinition,
@@ -265,7 +266,8 @@ function solve(inputs: InputValues): Solution {
     ...base,
     outputs: outputs({
       absorptionCoefficient: fit.slope,
-      absorptionCoefficientPerRootHour: fit.slope * ROOT_SECONDS_PER_ROOT_HOUR,
+      // The same quantity as A_w, kept canonical (per √s); its display unit kg/(m²·√h) shows 60 × the figure.
+      absorptionCoefficientPerRootHour: fit.slope,
       sorptivity,
       intercept: fit.intercept,
       rSquared: fit.rSquared,
@@ -395,6 +397,7 @@ export const calculator: CalculatorDefinition = {
     },
   ],
   solve,
+  checkTable: (input, value) => tableIssues(input, value),
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */

@@ -4,7 +4,6 @@ import { formatValue } from '../format.js';
 import { canonicalJson, sha256Hex } from '../hash.js';
 import { canonicalUnits } from '../units.js';
 import { VERSION } from '../version.js';
-import { tableIssues, tableRows } from './table.js';
 import type {
   Band,
   BandBasis,
@@ -81,9 +80,15 @@ export function resolveInputs(def: CalculatorDefinition, raw: unknown): InputVal
     }
     if (input.kind === 'table') {
       const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];
-      const found = tableIssues(input, value);
+      if (def.checkTable === undefined)
+        throw new Error(`${def.id}: table input ${input.id} needs checkTable`);
+      const found = def.checkTable(input, value);
       if (found.length > 0) issues.push(...found);
-      else resolved[input.id] = tableRows(input, value as readonly Readonly<Record<string, unknown>>[]);
+      // Checked: an array of plain objects holding a number in every column. Copied in column order.
+      else
+        resolved[input.id] = (value as readonly Readonly<Record<string, number>>[]).map((row) =>
+          Object.fromEntries(input.columns.map((c) => [c.id, row[c.id] as number])),
+        );
       continue;
     }
     const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];

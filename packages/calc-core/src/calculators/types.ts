@@ -1,3 +1,4 @@
+import type { FieldIssue } from '../errors.js';
 import type { Basis } from '../properties/liquids.js';
 import type { QuantityKind, UnitId, UnitSystemId } from '../units.js';
 
@@ -184,6 +185,12 @@ export interface CalculatorDefinition {
   readonly references: readonly Reference[];
   /** Pure: resolved inputs in, solution out. Throws CalcInputError for combinations no single field shows. */
   readonly solve: (inputs: InputValues) => Solution;
+  /**
+   * Checks a table input's raw value (`tableIssues`): required of a calculator with a table input.
+   * Carried by the definition rather than imported by the engine, so calculators without tables do
+   * not bundle it.
+   */
+  readonly checkTable?: (input: TableInput, value: unknown) => readonly FieldIssue[];
 }
 
 export interface CalculationResult {

@@ -1,6 +1,5 @@
 import type { CalculationResult, UnitSystemId } from '@wickstone/calc-core';
 import type { EmbedRunBody } from '@wickstone/contracts';
-import { plainInputs } from '@wickstone/calc-core/table';
 
 /**
  * A random v4 UUID. `crypto.randomUUID` exists only in secure contexts, and a firm's site may
@@ -43,7 +42,8 @@ export function buildRunBody(args: {
   return {
     id,
     publicKey,
-    inputs: plainInputs(result.inputs),
+    // A JSON copy (table rows as plain objects): exactly what goes over the wire.
+    inputs: JSON.parse(JSON.stringify(result.inputs)) as EmbedRunBody['inputs'],
     unitSystem,
     result: {
       outputs: { ...result.outputs },

@@ -1,5 +1,4 @@
 import type { CalculatorDefinition, InputDefinition, TableRow } from '@wickstone/calc-core';
-import { tableIssues } from '@wickstone/calc-core/table';
 import type { EmbedWidget, InputMode } from '@wickstone/contracts';
 
 type InputSettings = EmbedWidget['settings']['inputs'];
@@ -35,7 +34,8 @@ export function resolveInputSettings(def: CalculatorDefinition, settings: InputS
         input.kind === 'choice'
           ? typeof wanted === 'string' && input.options.some((o) => o.value === wanted)
           : input.kind === 'table'
-            ? tableIssues(input, wanted).length === 0
+            ? // calc-core names any bad row on Calculate; the firm's rows are used as set, like its numbers.
+              Array.isArray(wanted)
             : typeof wanted === 'number' && Number.isFinite(wanted);
       if (usable) initial = wanted as ResolvedInput['initial'];
       else defaultRejected = true;
