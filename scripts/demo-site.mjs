@@ -14,7 +14,11 @@ function page() {
   const { widgets } = JSON.parse(readFileSync(snippetsFile, 'utf8'));
   return template
     .replace('{{WIDGET_1}}', widgets[0]?.snippet ?? '')
-    .replace('{{WIDGET_2}}', widgets[1]?.snippet ?? '');
+    .replace('{{WIDGET_2}}', widgets[1]?.snippet ?? '')
+    .replace(
+      '{{WIDGET_ABSORPTION}}',
+      widgets.find((w) => w.calculatorId === 'absorption-coefficient')?.snippet ?? '',
+    );
 }
 
 const server = createServer((req, res) => {

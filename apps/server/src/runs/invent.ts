@@ -79,7 +79,7 @@ export function runRowFrom(w: RunWidget, result: CalculationResult, run: Invente
 }
 
 /** `runRowFrom` with the calculation done here; inputs in canonical units keyed by input id. */
-export function inventRun(w: RunWidget, inputs: Record<string, number | string>, run: InventedRun): RunRow {
+export function inventRun(w: RunWidget, inputs: Record<string, unknown>, run: InventedRun): RunRow {
   return runRowFrom(w, calculate(w.calculatorId, inputs), run);
 }
 
