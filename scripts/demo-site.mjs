@@ -12,8 +12,13 @@ const snippetsFile = process.env.DEMO_SITE_SNIPPETS ?? path.join(root, 'var', 'd
 
 function page() {
   const { widgets } = JSON.parse(readFileSync(snippetsFile, 'utf8'));
-  // {{WIDGET_n}} is the n-th widget the seed wrote.
-  return template.replace(/\{\{WIDGET_(\d+)\}\}/g, (_, n) => widgets[Number(n) - 1]?.snippet ?? '');
+  // {{WIDGET_ABSORPTION}} is the seed's absorption widget; {{WIDGET_n}} the n-th widget it wrote.
+  return template
+    .replace(
+      '{{WIDGET_ABSORPTION}}',
+      widgets.find((w) => w.calculatorId === 'absorption-coefficient')?.snippet ?? '',
+    )
+    .replace(/\{\{WIDGET_(\d+)\}\}/g, (_, n) => widgets[Number(n) - 1]?.snippet ?? '');
 }
 
 const server = createServer((req, res) => {

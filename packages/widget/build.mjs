@@ -20,6 +20,7 @@ import { calculators, VERSION as calcCoreVersion } from '@wickstone/calc-core';
 import {
   buildChunks,
   buildLoader,
+  hasTableInput,
   checkContents,
   closure,
   FLIGHT_GOAL,
@@ -65,7 +66,7 @@ const files = {};
 const chunkFigures = {};
 console.log(`Wickstone widget ${widgetVersion} (calc-core ${calcCoreVersion})`);
 try {
-  const { files: chunks, engines, texts, extras } = await buildChunks(calculators.map((c) => c.id));
+  const { files: chunks, engines, texts, extras, tables } = await buildChunks(calculators.map((c) => c.id));
   for (const [name, chunk] of chunks) {
     const m = emit(name, chunk.code);
     chunkFigures[name] = {
@@ -92,9 +93,10 @@ try {
     const engine = engines[calc.id];
     if (!engine) throw new Error(`no engine chunk for ${calc.id}`);
     const file = `wickstone-${calc.id}.js`;
+    const tablesFile = hasTableInput(calc) ? tables : null;
     const loader = emit(
       file,
-      await buildLoader(calc.id, calcCoreVersion, chunks, engine, texts[calc.id], extras),
+      await buildLoader(calc.id, calcCoreVersion, chunks, engine, texts[calc.id], extras, tablesFile),
     );
     const flight = [...closure(chunks, engine)];
     for (const f of flight.filter((x) => chunks.get(x).hasTexts))

@@ -9,7 +9,7 @@ import type { TestClient } from './client.js';
  */
 export function runReportBody(
   publicKey: string,
-  p: { id: string; calculatorId?: string; inputs?: Record<string, number | string>; pageUrl?: string },
+  p: { id: string; calculatorId?: string; inputs?: Record<string, unknown>; pageUrl?: string },
 ) {
   const r = calculate(p.calculatorId ?? 'tube-rise', p.inputs ?? { diameter: 0.0008 });
   return reportOf(r, {

@@ -113,7 +113,7 @@ type Def = Pick<CalculatorDefinition, 'inputs' | 'outputs' | 'warnings' | 'headl
 /** A value of one of the calculator's inputs or outputs, in the unit its definition shows it in; a time in words. */
 function shown(def: Def, id: string, value: number, system: UnitSystemId): string {
   const item = [...def.outputs, ...def.inputs].find((x) => x.id === id);
-  if (item === undefined || item.kind === 'choice') return formatResult(value);
+  if (item === undefined || item.kind === 'choice' || item.kind === 'table') return formatResult(value);
   if (item.kind === 'time') return durationText(value);
   const unit = item.display?.[system];
   return readable(value, item.kind, system, unit ?? readableUnit(item.kind, system, value));

@@ -124,8 +124,30 @@ export {
   tensionFromRise as tensionFromRiseCalculator,
   risingDampHeight as risingDampHeightCalculator,
   frostScreening as frostScreeningCalculator,
+  absorptionCoefficient as absorptionCoefficientCalculator,
   type CalculatorId,
 } from './registry.js';
+export {
+  tableIssues,
+  tableRows,
+  tableField,
+  parseTableField,
+  cellName,
+  showTable,
+  tableSummary,
+  rowsFromCells,
+  plainInputs,
+  type ShownTable,
+  type TableWording,
+} from './calculators/table.js';
+export {
+  absorptionPoints,
+  fitLine,
+  inFitWindow,
+  FIT_WINDOW_S,
+  type AbsorptionMethod,
+  type LineFit,
+} from './formulas/absorption.js';
 export type {
   Band,
   BandBasis,
@@ -138,6 +160,7 @@ export type {
   ChoiceOption,
   Condition,
   InputDefinition,
+  InputValue,
   InputValues,
   OutputDefinition,
   Outputs,
@@ -145,6 +168,9 @@ export type {
   Reference,
   Solution,
   Spread,
+  TableColumn,
+  TableInput,
+  TableRow,
   Warning,
   WarningDefinition,
   WorkingStep,

@@ -1,4 +1,6 @@
 import { CalcInputError } from './errors.js';
+import { calculator as absorptionCoefficientCore } from './calculators/absorption-coefficient.js';
+import { texts as absorptionCoefficientTexts } from './calculators/absorption-coefficient.texts.js';
 import { runCalculation } from './calculators/engine.js';
 import { calculator as contactAngleFromForceCore } from './calculators/contact-angle-from-force.js';
 import { texts as contactAngleFromForceTexts } from './calculators/contact-angle-from-force.texts.js';
@@ -51,6 +53,10 @@ export const contactAngleFromForce: CalculatorDefinition = withTexts(
 export const tensionFromRise: CalculatorDefinition = withTexts(tensionFromRiseCore, tensionFromRiseTexts);
 export const risingDampHeight: CalculatorDefinition = withTexts(risingDampHeightCore, risingDampHeightTexts);
 export const frostScreening: CalculatorDefinition = withTexts(frostScreeningCore, frostScreeningTexts);
+export const absorptionCoefficient: CalculatorDefinition = withTexts(
+  absorptionCoefficientCore,
+  absorptionCoefficientTexts,
+);
 
 /** Every calculator, in the order a picker shows them. Registered by hand: nothing registers itself on import. */
 export const calculators: readonly CalculatorDefinition[] = [
@@ -64,6 +70,7 @@ export const calculators: readonly CalculatorDefinition[] = [
   tensionFromRise,
   risingDampHeight,
   frostScreening,
+  absorptionCoefficient,
 ];
 
 export type CalculatorId =
@@ -76,7 +83,8 @@ export type CalculatorId =
   | 'contact-angle-from-force'
   | 'tension-from-rise'
   | 'rising-damp-height'
-  | 'frost-screening';
+  | 'frost-screening'
+  | 'absorption-coefficient';
 
 export const calculatorIds: readonly CalculatorId[] = calculators.map((c) => c.id as CalculatorId);
 

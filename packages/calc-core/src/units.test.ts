@@ -84,6 +84,15 @@ const mathjsName: Readonly<Record<UnitId, string | null>> = {
   'm3/(m*s)': 'm^3/(m s)',
   'L/(m*day)': 'L/(m day)',
   'gal/(ft*day)': 'gal/(ft day)',
+  kg: 'kg',
+  g: 'g',
+  lb: 'lbm',
+  'kg/m2': 'kg/m^2',
+  'lb/ft2': 'lbm/ft^2',
+  'kg/(m2*s^0.5)': 'kg/(m^2 s^0.5)',
+  'kg/(m2*h^0.5)': 'kg/(m^2 h^0.5)',
+  'lb/(ft2*h^0.5)': 'lbm/(ft^2 h^0.5)',
+  'in/min^0.5': 'inch/min^0.5',
   '1': null,
 };
 

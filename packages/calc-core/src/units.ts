@@ -19,6 +19,9 @@ export type QuantityKind =
   | 'evaporationRate'
   | 'volumePerLength'
   | 'flowPerLength'
+  | 'mass'
+  | 'arealMass'
+  | 'absorptionCoefficient'
   | 'dimensionless';
 
 export const quantityKinds: readonly QuantityKind[] = [
@@ -38,6 +41,9 @@ export const quantityKinds: readonly QuantityKind[] = [
   'evaporationRate',
   'volumePerLength',
   'flowPerLength',
+  'mass',
+  'arealMass',
+  'absorptionCoefficient',
   'dimensionless',
 ];
 
@@ -157,6 +163,24 @@ export const units = {
   'm3/(m*s)': unit('flowPerLength', 'm³/(m·s)', 'cubic metre per metre second', 1),
   'L/(m*day)': unit('flowPerLength', 'L/(m·day)', 'litre per metre day', 0.001 / DAY_S),
   'gal/(ft*day)': unit('flowPerLength', 'gal/(ft·day)', 'US gallon per foot day', GALLON_M3 / FOOT_M / DAY_S),
+  // mass, canonical kg
+  kg: unit('mass', 'kg', 'kilogram', 1),
+  g: unit('mass', 'g', 'gram', 1e-3),
+  lb: unit('mass', 'lb', 'pound', POUND_KG),
+  // mass per area (water taken up per wetted face), canonical kg/m²
+  'kg/m2': unit('arealMass', 'kg/m²', 'kilogram per square metre', 1),
+  'lb/ft2': unit('arealMass', 'lb/ft²', 'pound per square foot', POUND_KG / SQUARE_FOOT_M2),
+  // water absorption coefficient, canonical kg/(m²·√s); EN ISO 15148 also states it per √h (√3600 s = 60)
+  'kg/(m2*s^0.5)': unit('absorptionCoefficient', 'kg/(m²·√s)', 'kilogram per square metre root second', 1),
+  'kg/(m2*h^0.5)': unit('absorptionCoefficient', 'kg/(m²·√h)', 'kilogram per square metre root hour', 1 / 60),
+  'lb/(ft2*h^0.5)': unit(
+    'absorptionCoefficient',
+    'lb/(ft²·√h)',
+    'pound per square foot root hour',
+    POUND_KG / SQUARE_FOOT_M2 / 60,
+  ),
+  // sorptivity, canonical m/√s; ASTM C1585 reports mm/√s, Hall & Hoff often mm/√min
+  'in/min^0.5': unit('sorptivity', 'in/√min', 'inch per root minute', INCH_M / Math.sqrt(60)),
   // pure numbers
   '1': unit('dimensionless', '', 'dimensionless', 1),
 } as const satisfies Record<string, UnitDefinition>;
@@ -193,6 +217,9 @@ export const canonicalUnits: Readonly<Record<QuantityKind, UnitId>> = {
   evaporationRate: 'm/s',
   volumePerLength: 'm3/m',
   flowPerLength: 'm3/(m*s)',
+  mass: 'kg',
+  arealMass: 'kg/m2',
+  absorptionCoefficient: 'kg/(m2*s^0.5)',
   dimensionless: '1',
 };
 
@@ -222,6 +249,9 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     evaporationRate: 'mm/day',
     volumePerLength: 'L/m',
     flowPerLength: 'L/(m*day)',
+    mass: 'g',
+    arealMass: 'kg/m2',
+    absorptionCoefficient: 'kg/(m2*s^0.5)',
     dimensionless: '1',
   },
   us: {
@@ -241,6 +271,9 @@ export const unitSystems: Readonly<Record<UnitSystemId, Readonly<Record<Quantity
     evaporationRate: 'in/day',
     volumePerLength: 'gal/ft',
     flowPerLength: 'gal/(ft*day)',
+    mass: 'lb',
+    arealMass: 'lb/ft2',
+    absorptionCoefficient: 'lb/(ft2*h^0.5)',
     dimensionless: '1',
   },
 };

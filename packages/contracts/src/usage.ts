@@ -69,6 +69,13 @@ export const shownValueSchema = z.object({
   value: z.union([z.number(), z.string()]).nullable(),
   unit: z.string().nullable(),
   text: z.string(),
+  /** A table input (value null, text a one-line summary): its columns with unit symbols and every row in them. */
+  table: z
+    .object({
+      columns: z.array(z.object({ id: z.string(), label: z.string(), unit: z.string() })),
+      rows: z.array(z.array(z.number())),
+    })
+    .optional(),
 });
 export type ShownValue = z.infer<typeof shownValueSchema>;
 
@@ -112,7 +119,10 @@ export const runDetailSchema = runListItemSchema.extend({
   calcVersion: z.string(),
   inputHash: z.string(),
   /** The inputs exactly as the visitor's browser sent them (canonical SI units). */
-  sentInputs: z.record(z.string(), z.union([z.number(), z.string()])),
+  sentInputs: z.record(
+    z.string(),
+    z.union([z.number(), z.string(), z.array(z.record(z.string(), z.unknown()))]),
+  ),
   /** What the visitor's browser reported: outputs, warning codes, input hash, version. */
   clientResult: z.record(z.string(), z.unknown()),
   /** The server's recomputation as stored: inputs, outputs, warnings, working, band, version, hash. */

@@ -64,10 +64,22 @@ export const widgetColorsSchema = z
     }
   });
 
+/**
+ * A table input's rows as sent: at most 200 rows of at most 10 cells. Cells are loosely typed here
+ * so that calc-core, which knows the columns, names each bad cell by row and column.
+ */
+export const tableValueSchema = z
+  .array(
+    z
+      .record(z.string().max(40), z.union([z.number().finite(), z.string().max(60), z.null()]))
+      .refine((r) => Object.keys(r).length <= 10, 'At most 10 columns'),
+  )
+  .max(200, 'At most 200 rows');
+
 export const inputSettingSchema = z.strictObject({
   mode: z.enum(inputModes),
-  /** SI default (or a choice value) overriding the calculator's own. */
-  default: z.union([z.number().finite(), z.string().max(60)]).optional(),
+  /** SI default (a choice value, or a table's rows) overriding the calculator's own. */
+  default: z.union([z.number().finite(), z.string().max(60), tableValueSchema]).optional(),
   /**
    * For a choice: the options the firm offers, a subset of the calculator's (the server checks
    * each is one of them and that the default is among them). Absent: every option.
@@ -258,7 +270,7 @@ export const embedWidgetSchema = z.object({
 });
 export type EmbedWidget = z.infer<typeof embedWidgetSchema>;
 
-const inputValue = z.union([z.number().finite(), z.string().max(60)]);
+const inputValue = z.union([z.number().finite(), z.string().max(60), tableValueSchema]);
 
 export const embedRunBodySchema = z.strictObject({
   /** Made in the browser, so a retried report is stored once. */

@@ -75,6 +75,11 @@ const EXTRAS_ONLY = new Set(
     'lib/transport.ts',
   ].map((f) => path.join(src, f)),
 );
+// ---- tables chunk (h2-tradetab): the table input, CSV reading and chart, for calculators with a table input.
+const TABLES_ENTRY = path.join(src, 'tables.ts');
+const TABLES_DIR = path.join(src, 'tables') + path.sep;
+/** Whether a calculator takes a table input, and so its loader may fetch the tables chunk. */
+export const hasTableInput = (calc) => calc.inputs.some((i) => i.kind === 'table');
 
 const common = (define) => ({
   configFile: false,
@@ -204,6 +209,7 @@ export async function buildChunks(calculatorIds) {
     ...Object.fromEntries(calculatorIds.map((id) => [`engine-${id}`, ENGINE + id])),
     ...Object.fromEntries(calculatorIds.map((id) => [`texts-${id}`, TEXTS + id])),
     extras: path.join(src, 'extras.ts'),
+    tables: TABLES_ENTRY,
   };
   const runtimeMemo = new Map();
   /** A module the first paint needs: Preact, the widget's own code, and what they import from calc-core. */
@@ -213,7 +219,12 @@ export async function buildChunks(calculatorIds) {
     seen.add(id);
     let yes = false;
     if (/[\\/]node_modules[\\/]preact[\\/]/.test(id)) yes = true;
-    else if (id.startsWith(src)) yes = !EXTRAS_ONLY.has(id.split('?')[0]) && !id.includes('extras.css');
+    else if (id.startsWith(src))
+      yes =
+        !EXTRAS_ONLY.has(id.split('?')[0]) &&
+        !id.includes('extras.css') &&
+        id.split('?')[0] !== TABLES_ENTRY &&
+        !id.startsWith(TABLES_DIR);
     else if (CALCULATOR_MODULE.test(id)) yes = false;
     else if (id.includes(`${path.sep}calc-core${path.sep}`))
       // calc-core's index re-exports everything: what only it imports is the engines' business.
@@ -261,6 +272,7 @@ export async function buildChunks(calculatorIds) {
   const engines = {};
   const texts = {};
   let extras = null;
+  let tables = null;
   for (const o of outputsOf(result)) {
     if (o.type !== 'chunk') throw new Error(`unexpected asset ${o.fileName} in the release build`);
     if (process.env.WICKSTONE_CHUNK_MODULES)
@@ -275,10 +287,12 @@ export async function buildChunks(calculatorIds) {
     });
     if (o.isEntry && o.name === 'extras') extras = o.fileName;
     else if (o.isEntry && o.name.startsWith('texts-')) texts[o.name.slice('texts-'.length)] = o.fileName;
+    else if (o.isEntry && o.name === 'tables') tables = o.fileName;
     else if (o.isEntry) engines[o.name.slice('engine-'.length)] = o.fileName;
   }
   if (extras === null) throw new Error('no extras chunk was built');
-  return { files, engines, texts, extras };
+  if (tables === null) throw new Error('no tables chunk was built');
+  return { files, engines, texts, extras, tables };
 }
 
 /** Every chunk `file` reaches through static imports (itself included), in load order. */
@@ -293,14 +307,19 @@ export function closure(files, file, out = new Set()) {
  * One calculator's loader: an IIFE carrying the table of the chunks it may load (SRI hash and
  * static imports of each), so every file the snippet's script brings in is checked.
  */
-export async function buildLoader(calculatorId, calcCoreVersion, files, engineFile, textsFile, extrasFile) {
+export async function buildLoader(
+  calculatorId,
+  calcCoreVersion,
+  files,
+  engineFile,
+  textsFile,
+  extrasFile,
+  tablesFile = null,
+) {
   const table = {};
-  for (const f of new Set([
-    ...closure(files, engineFile),
-    ...closure(files, textsFile),
-    ...closure(files, extrasFile),
-  ]))
-    table[f] = [measure(files.get(f).code).integrity, files.get(f).imports];
+  const reach = [...closure(files, engineFile), ...closure(files, textsFile), ...closure(files, extrasFile)];
+  if (tablesFile !== null) reach.push(...closure(files, tablesFile));
+  for (const f of new Set(reach)) table[f] = [measure(files.get(f).code).integrity, files.get(f).imports];
   const result = await build({
     ...common({
       __WICKSTONE_CALCULATOR__: JSON.stringify(calculatorId),
@@ -308,6 +327,7 @@ export async function buildLoader(calculatorId, calcCoreVersion, files, engineFi
       __WICKSTONE_ENGINE__: JSON.stringify(engineFile),
       __WICKSTONE_TEXTS__: JSON.stringify(textsFile),
       __WICKSTONE_EXTRAS__: JSON.stringify(extrasFile),
+      __WICKSTONE_TABLES__: JSON.stringify(tablesFile),
       __WICKSTONE_CHUNKS__: JSON.stringify(table),
     }),
     build: {

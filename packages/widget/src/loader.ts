@@ -10,6 +10,7 @@ import { installGlobal, type MountHandle, type MountOptions } from './global.js'
 import { isEmbedWidget } from './lib/shape.js';
 import type { Engine, TextsChunk } from './engine.js';
 import type { ExtrasModule } from './lazy.js';
+import type { TablesModule } from './lazy-tables.js';
 import {
   apiBaseFor,
   findOwnScript,
@@ -27,6 +28,8 @@ declare const __WICKSTONE_ENGINE__: string;
 declare const __WICKSTONE_TEXTS__: string;
 /** The extras chunk: what follows first paint. */
 declare const __WICKSTONE_EXTRAS__: string;
+/** The tables chunk (table input, CSV, chart) for a calculator with a table input, else null. */
+declare const __WICKSTONE_TABLES__: string | null;
 /** Every chunk this loader may fetch, with its SRI hash and static imports. */
 declare const __WICKSTONE_CHUNKS__: ChunkTable;
 
@@ -67,6 +70,10 @@ function mount(element: Element, first: MountOptions): MountHandle {
           defaultApiBase: script ? apiBaseFor(script.src, null) : null,
           texts: load && (() => load(__WICKSTONE_TEXTS__) as Promise<TextsChunk>),
           extras: load && (() => load(__WICKSTONE_EXTRAS__) as Promise<ExtrasModule>),
+          tables:
+            load && __WICKSTONE_TABLES__ !== null
+              ? () => load(__WICKSTONE_TABLES__ as string) as Promise<TablesModule>
+              : null,
         },
         element,
         latest,

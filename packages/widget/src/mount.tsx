@@ -6,6 +6,7 @@ import type { Reporter } from './lib/reporter.js';
 import { newRunId } from './lib/run-id.js';
 import { App } from './ui/App.js';
 import { deferredReporter, loadExtras, withExtras, type ExtrasModule } from './lazy.js';
+import { setTablesFetch, type TablesModule } from './lazy-tables.js';
 import { HOST_TAG } from './placement.js';
 import css from './ui/styles.css?inline';
 
@@ -70,6 +71,8 @@ export interface Bundle {
   readonly texts?: (() => Promise<TextsChunk>) | null;
   /** Fetches the extras chunk (working, lead form, run reporter, font); null where there is none to fetch. */
   readonly extras: (() => Promise<ExtrasModule>) | null;
+  /** Fetches the tables chunk (table input, CSV, chart); absent for a calculator without a table input. */
+  readonly tables?: (() => Promise<TablesModule>) | null;
 }
 
 /**
@@ -79,6 +82,7 @@ export interface Bundle {
 export function mountWidget(bundle: Bundle, element: Element, first: MountOptions): MountHandle {
   // Until the texts arrive the calculator has no cautions or references of its own to show.
   let calculator: CalculatorDefinition = { cautions: [], references: [], ...bundle.calculator };
+  setTablesFetch(bundle.tables ?? null);
   const { host, made } = hostIn(element, calculator.id);
   host.setAttribute('data-wickstone', 'host');
   host.setAttribute('data-calculator', calculator.id);

@@ -3,6 +3,7 @@ import { formatValue } from '@wickstone/calc-core/format';
 import type { RunDetail, ShownValue } from '@wickstone/contracts';
 import { formatDateTime } from '../lib/labels';
 import { Badge, Card, Notice } from './ui';
+import { RunInputsTable } from './run-inputs-table';
 
 /** One stored step of the server's working: canonical value and unit, exactly as kept. */
 interface StoredStep {
@@ -94,6 +95,7 @@ export function RunRecord({ run }: { run: RunDetail }) {
         <ValueList title={`Inputs (${run.unitSystem.toUpperCase()} units)`} values={run.inputs} />
         <ValueList title="Results shown" values={run.outputs} />
       </div>
+      {run.inputs.map((v) => (v.table ? <RunInputsTable key={v.id} value={v} /> : null))}
       <Card className="p-4">
         <h3 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">Warnings</h3>
         {run.warningCodes.length === 0 ? (

@@ -102,7 +102,7 @@ function Value({
   }
   const input = /^settings\.inputs\.(\w+)\.default$/.exec(path);
   const def = input ? calc.inputs.find((i) => i.id === input[1]) : undefined;
-  if (typeof value === 'number' && def && def.kind !== 'choice') {
+  if (typeof value === 'number' && def && def.kind !== 'choice' && def.kind !== 'table') {
     const unit = displayUnitOf(def, system);
     return <span className="tabular-nums">{withUnit(formatNumber(fromCanonical(value, unit)), unit)}</span>;
   }

@@ -1,4 +1,11 @@
-import { displayUnitOf, inputApplies, units, unitSymbol, type InputDefinition } from '@wickstone/calc-core';
+import {
+  displayUnitOf,
+  inputApplies,
+  units,
+  unitSymbol,
+  type InputDefinition,
+  type TableInput,
+} from '@wickstone/calc-core';
 import { inputModes, type InputMode } from '@wickstone/contracts';
 import {
   calculatorDefaultNumber,
@@ -11,6 +18,7 @@ import {
   startingChoices,
 } from '../lib/widget-draft';
 import { FieldProblem } from './form';
+import { TableInputRow } from './widget-table-input';
 import { EditorSection, smallControlClass, type SectionProps } from './widget-fields';
 
 export const inputModeLabel: Record<InputMode, string> = {
@@ -39,7 +47,11 @@ const kindLabel: Record<string, string> = {
   dimensionless: 'number',
 };
 
-function InputRow({ input, applies, ...props }: SectionProps & { input: InputDefinition; applies: boolean }) {
+function InputRow({
+  input,
+  applies,
+  ...props
+}: SectionProps & { input: Exclude<InputDefinition, TableInput>; applies: boolean }) {
   const { draft, onChange, errors, readOnly, calc } = props;
   const setting = draft.settings.inputs[input.id];
   const mode = setting?.mode ?? 'editable';
@@ -211,14 +223,18 @@ export function InputsSection(props: SectionProps) {
           <span>Default</span>
         </div>
         <ul className="-mt-2">
-          {calc.inputs.map((input) => (
-            <InputRow
-              key={input.id}
-              input={input}
-              applies={inputApplies(input, calc.inputs, choices)}
-              {...props}
-            />
-          ))}
+          {calc.inputs.map((input) =>
+            input.kind === 'table' ? (
+              <TableInputRow key={input.id} input={input} {...props} />
+            ) : (
+              <InputRow
+                key={input.id}
+                input={input}
+                applies={inputApplies(input, calc.inputs, choices)}
+                {...props}
+              />
+            ),
+          )}
         </ul>
       </div>
     </EditorSection>

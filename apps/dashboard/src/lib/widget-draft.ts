@@ -3,12 +3,16 @@ import {
   type ChoiceInput,
   displayUnitOf,
   fromCanonical,
+  rowsFromCells,
+  showTable,
   toCanonical,
   unitSymbol,
   withUnit,
   type CalculatorDefinition,
   type InputDefinition,
   type QuantityInput,
+  type TableInput,
+  type TableRow,
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import {
@@ -80,6 +84,12 @@ function defaultTextsFor(calc: CalculatorDefinition, settings: WidgetSettings): 
   for (const input of calc.inputs) {
     if (input.kind === 'choice') continue;
     const value = settings.inputs[input.id]?.default;
+    if (input.kind === 'table') {
+      texts[input.id] = Array.isArray(value)
+        ? tableText(input, value as TableRow[], settings.units.system)
+        : '';
+      continue;
+    }
     texts[input.id] =
       typeof value === 'number'
         ? formatNumber(fromCanonical(value, displayUnitOf(input, settings.units.system)))
@@ -128,7 +138,11 @@ export function withUnitSystem(
 function withInput(
   draft: WidgetDraft,
   id: string,
-  change: { mode?: InputMode; default?: number | string | undefined; options?: string[] | undefined },
+  change: {
+    mode?: InputMode;
+    default?: WidgetSettings['inputs'][string]['default'];
+    options?: string[] | undefined;
+  },
 ): WidgetDraft {
   const current = draft.settings.inputs[id] ?? { mode: 'editable' as InputMode };
   const next = { ...current, ...change };
@@ -151,6 +165,35 @@ export function setDefaultText(draft: WidgetDraft, input: QuantityInput, text: s
   if (Number.isNaN(parsed)) return base;
   return withInput(base, input.id, {
     default: toCanonical(parsed, displayUnitOf(input, draft.settings.units.system)),
+  });
+}
+
+// ---- a table input's starting rows, typed or pasted as lines of cells in the display units
+
+const LINE_CELLS = /\s*[;\t]\s*|\s*,\s+|\s+/;
+
+/** The table's rows as lines of cells (`5  1845.81`), in the unit system's display units. */
+export function tableText(input: TableInput, rows: readonly TableRow[], system: UnitSystemId): string {
+  return showTable(input, rows, system)
+    .text.map((r) => r.join('  '))
+    .join('\n');
+}
+
+/** Lines of cells (spaces, tabs, semicolons or a comma and a space between them) read as rows; every problem named by row and column. */
+export function readTableText(input: TableInput, text: string, system: UnitSystemId) {
+  const cells = lines(text).map((l) => l.split(LINE_CELLS).filter((c) => c !== ''));
+  if (cells.length === 0) return { rows: [] as TableRow[], issues: [] };
+  const units = Object.fromEntries(input.columns.map((c) => [c.id, displayUnitOf(c, system)]));
+  return rowsFromCells(input, cells, parseNumber, { units });
+}
+
+/** Typed starting rows: stored canonical when every cell reads, dropped when the box is emptied. */
+export function setTableDefaultText(draft: WidgetDraft, input: TableInput, text: string): WidgetDraft {
+  const base = { ...draft, defaultTexts: { ...draft.defaultTexts, [input.id]: text } };
+  const read = readTableText(input, text, draft.settings.units.system);
+  if (read.rows === null) return base;
+  return withInput(base, input.id, {
+    default: read.rows.length === 0 ? undefined : read.rows.map((r) => ({ ...r })),
   });
 }
 
@@ -327,6 +370,11 @@ export function validateDraft(
     if (input.kind === 'choice') continue;
     const key = `settings.inputs.${input.id}.default`;
     const text = draft.defaultTexts[input.id] ?? '';
+    if (input.kind === 'table') {
+      const read = readTableText(input, text, system);
+      if (read.rows === null) add(key, read.issues.map((i) => i.message).join('; '));
+      continue;
+    }
     const parsed = parseNumber(text);
     const unit = displayUnitOf(input, system);
     if (Number.isNaN(parsed)) {

@@ -2,6 +2,7 @@ import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 import {
   displayUnitOf,
   fromCanonical,
+  showTable,
   withUnit,
   type CalculationResult,
   type CalculatorDefinition,
@@ -33,6 +34,11 @@ export function resultLines(
     if (v === undefined || options.hide?.has(input.id)) continue;
     if (input.kind === 'choice') {
       lines.push(`  ${input.label}: ${input.options.find((o) => o.value === v)?.label ?? String(v)}`);
+    } else if (input.kind === 'table') {
+      if (!Array.isArray(v)) continue;
+      const t = showTable(input, v, system);
+      lines.push(`  ${input.label} (${t.columns.map((c) => `${c.label}, ${c.unit}`).join(' | ')}):`);
+      for (const row of t.text) lines.push(`    ${row.join(' | ')}`);
     } else if (typeof v === 'number') {
       lines.push(`  ${input.label}: ${shown(v, input, system)}`);
     }

@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { calculate, type CalculationResult } from '@wickstone/calc-core';
+import { calculate, plainInputs, type CalculationResult } from '@wickstone/calc-core';
 import type { WidgetSettings } from '@wickstone/contracts';
 import type { RunRow } from './store.js';
 
@@ -62,7 +62,7 @@ export function runRowFrom(w: RunWidget, result: CalculationResult, run: Invente
     release: w.release,
     calcVersion: result.version,
     unitSystem: run.unitSystem ?? w.settings.units.system,
-    inputs: { ...result.inputs },
+    inputs: plainInputs(result.inputs),
     clientResult: { outputs, warnings, inputHash: result.inputHash, version: result.version },
     serverResult: result as unknown as Record<string, unknown>,
     warningCodes: warnings,
@@ -79,7 +79,7 @@ export function runRowFrom(w: RunWidget, result: CalculationResult, run: Invente
 }
 
 /** `runRowFrom` with the calculation done here; inputs in canonical units keyed by input id. */
-export function inventRun(w: RunWidget, inputs: Record<string, number | string>, run: InventedRun): RunRow {
+export function inventRun(w: RunWidget, inputs: Record<string, unknown>, run: InventedRun): RunRow {
   return runRowFrom(w, calculate(w.calculatorId, inputs), run);
 }
 

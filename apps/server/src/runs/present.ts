@@ -2,14 +2,20 @@ import {
   displayUnitOf,
   fromCanonicalTo,
   getCalculator,
+  showTable,
+  tableSummary,
   units,
   withUnit,
   type InputDefinition,
   type OutputDefinition,
+  type TableRow,
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { ShownValue, WidgetSettings } from '@wickstone/contracts';
 import { formatValue as formatNumber } from '@wickstone/calc-core/format';
+
+/** An input as stored: a number, a choice value, or a table's rows. */
+export type SentValue = number | string | readonly unknown[];
 
 /**
  * How one input or output is printed in one unit system, worked out once (its display unit, the
@@ -20,39 +26,69 @@ export interface ValuePrinter {
   id: string;
   label: string;
   /** The value, its unit and its text, for the runs table and a run's page. */
-  shown(raw: number | string): ShownValue;
-  /** Only the text (`1.2 mm`, `35°`, `Water`), for an export cell. */
-  text(raw: number | string): string;
+  shown(raw: SentValue): ShownValue;
+  /** Only the text (`1.2 mm`, `35°`, `Water`, a table's summary), for an export cell. */
+  text(raw: SentValue): string;
 }
 
 /** The printer of a definition: the definition's own unit for the system, else the system's unit for its kind. */
 export function valuePrinter(def: InputDefinition | OutputDefinition, system: UnitSystemId): ValuePrinter {
   const base = { id: def.id, label: def.label };
+  const rows = (raw: readonly unknown[]) => `${raw.length} rows`;
+  if (def.kind === 'table') {
+    const text = (raw: SentValue) =>
+      Array.isArray(raw) ? tableSummary(def, raw as TableRow[], system) : String(raw);
+    return {
+      ...base,
+      text,
+      shown: (raw) => {
+        if (!Array.isArray(raw)) return { ...base, value: null, unit: null, text: String(raw) };
+        const t = showTable(def, raw as TableRow[], system);
+        return {
+          ...base,
+          value: null,
+          unit: null,
+          text: text(raw),
+          table: { columns: [...t.columns], rows: t.rows.map((r) => [...r]) },
+        };
+      },
+    };
+  }
   if (def.kind === 'choice') {
     const labels = new Map<unknown, string>(def.options.map((o) => [o.value, o.label]));
-    const text = (raw: number | string) => labels.get(raw) ?? String(raw);
-    return { ...base, text, shown: (raw) => ({ ...base, value: raw, unit: null, text: text(raw) }) };
+    const text = (raw: SentValue) => (typeof raw === 'object' ? rows(raw) : (labels.get(raw) ?? String(raw)));
+    return {
+      ...base,
+      text,
+      shown: (raw) => ({ ...base, value: typeof raw === 'object' ? null : raw, unit: null, text: text(raw) }),
+    };
   }
   const unit = displayUnitOf(def, system);
   const toShown = fromCanonicalTo(unit);
   const symbol = units[unit].symbol || null;
   const suffix = withUnit('', unit);
-  const text = (raw: number | string) =>
-    typeof raw === 'number' ? formatNumber(toShown(raw)) + suffix : String(raw);
+  const text = (raw: SentValue) =>
+    typeof raw === 'number' ? formatNumber(toShown(raw)) + suffix : typeof raw === 'object' ? rows(raw) : raw;
   return {
     ...base,
     text,
     shown: (raw) =>
       typeof raw === 'number'
         ? { ...base, value: toShown(raw), unit: symbol, text: text(raw) }
-        : { ...base, value: raw, unit: null, text: String(raw) },
+        : { ...base, value: typeof raw === 'object' ? null : raw, unit: null, text: text(raw) },
   };
 }
 
 /** A stored value of a calculator this server no longer has: its id and number as they are. */
 function plainPrinter(id: string): ValuePrinter {
-  const text = (v: number | string) => (typeof v === 'number' ? formatNumber(v) : v);
-  return { id, label: id, text, shown: (v) => ({ id, label: id, value: v, unit: null, text: text(v) }) };
+  const text = (v: SentValue) =>
+    typeof v === 'number' ? formatNumber(v) : typeof v === 'object' ? `${v.length} rows` : v;
+  return {
+    id,
+    label: id,
+    text,
+    shown: (v) => ({ id, label: id, value: typeof v === 'object' ? null : v, unit: null, text: text(v) }),
+  };
 }
 
 /**
@@ -63,7 +99,7 @@ function plainPrinter(id: string): ValuePrinter {
  */
 export interface RunPrinter {
   title: string;
-  inputs(sent: Record<string, number | string>): [ValuePrinter, number | string][];
+  inputs(sent: Record<string, SentValue>): [ValuePrinter, SentValue][];
   outputs(values: Record<string, number | null>): [ValuePrinter, number][];
 }
 
@@ -88,7 +124,7 @@ export function runPrinter(
   return {
     title: calc.title,
     inputs: (sent) => {
-      const out: [ValuePrinter, number | string][] = [];
+      const out: [ValuePrinter, SentValue][] = [];
       for (const p of inputs) {
         const v = sent[p.id];
         if (v !== undefined) out.push([p, v]);
@@ -120,7 +156,7 @@ export interface ShownRun {
 export function showRun(
   calculatorId: string,
   settings: Pick<WidgetSettings, 'inputs'>,
-  sent: Record<string, number | string>,
+  sent: Record<string, SentValue>,
   outputs: Record<string, number | null>,
   system: UnitSystemId,
 ): ShownRun {
@@ -133,7 +169,7 @@ export function showRun(
 }
 
 /** One export cell of a run's inputs or outputs: `Label: text`, separated by `; `. */
-export function valuesCell(values: readonly [ValuePrinter, number | string][]): string {
+export function valuesCell(values: readonly [ValuePrinter, SentValue][]): string {
   let cell = '';
   for (const [p, raw] of values) cell += `${cell ? '; ' : ''}${p.label}: ${p.text(raw)}`;
   return cell;

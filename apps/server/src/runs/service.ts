@@ -143,7 +143,7 @@ export function createRunService(deps: { sequelize: Sequelize; reads?: Sequelize
     const shown = showRun(
       row.calculator_id,
       w?.settings ?? { inputs: {} },
-      jsonValue<Record<string, number | string>>(row.inputs),
+      jsonValue<Record<string, number | string | unknown[]>>(row.inputs),
       jsonValue<Record<string, number | null> | null>(row.outputs) ?? {},
       system,
     );

@@ -4,6 +4,7 @@ import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
 import { formatValue } from '@wickstone/calc-core/format';
 import { withUnit } from '@wickstone/calc-core/display';
+import { showTable } from '@wickstone/calc-core/table';
 import type {
   CalculationResult,
   CalculatorDefinition,
@@ -172,6 +173,11 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
     if (v === undefined) continue;
     if (input.kind === 'choice') {
       inputs.push([input.label, input.options.find((o) => o.value === v)?.label ?? String(v)]);
+    } else if (input.kind === 'table') {
+      if (!Array.isArray(v)) continue;
+      const t = showTable(input, v, system);
+      const head = t.columns.map((c) => `${c.label} (${c.unit})`).join('   ');
+      inputs.push([input.label, [head, ...t.text.map((r) => r.join('   '))].join('\n')]);
     } else if (typeof v === 'number') {
       const entered = shown(v, input, system);
       const si = shown(v, input, 'si');
@@ -204,7 +210,7 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
     for (const b of result.band.basis) {
       const input = calc.inputs.find((i) => i.id === b.input);
       const range =
-        input && input.kind !== 'choice'
+        input && input.kind !== 'choice' && input.kind !== 'table'
           ? `${shown(b.low, input, system)} to ${shown(b.high, input, system)}`
           : `${b.low} to ${b.high}`;
       para(`${input?.label ?? b.input}: ${range} (${b.source})`, { color: MUTED, size: 8, indent: 10 });

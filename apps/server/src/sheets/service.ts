@@ -3,6 +3,7 @@ import {
   getCalculator,
   type CalculationResult,
   type CalculatorDefinition,
+  tableSummary,
 } from '@wickstone/calc-core';
 import type { SheetProject, VerifyResponse, WidgetSettings } from '@wickstone/contracts';
 import { Asset, Organization, Run, Widget } from '../db/models/index.js';
@@ -167,9 +168,13 @@ export function createSheetService(deps: {
         const t =
           i.kind === 'choice'
             ? (i.options.find((o) => o.value === v)?.label ?? String(v))
-            : typeof v === 'number'
-              ? shown(v, i, run.unitSystem)
-              : String(v);
+            : i.kind === 'table'
+              ? Array.isArray(v)
+                ? tableSummary(i, v, run.unitSystem)
+                : String(v)
+              : typeof v === 'number'
+                ? shown(v, i, run.unitSystem)
+                : String(v);
         return [{ id: i.id, label: i.label, text: t }];
       });
       return {

@@ -113,10 +113,17 @@ function checkOptions(
 function checkInputSettings(calc: CalculatorDefinition, settings: WidgetSettings, where: string): void {
   const known = new Set(calc.inputs.map((i) => i.id));
   const fields: { field: string; message: string }[] = [];
-  const defaults: Record<string, number | string> = {};
+  const defaults: Record<string, unknown> = {};
   for (const [id, s] of Object.entries(settings.inputs)) {
+    const input = calc.inputs.find((i) => i.id === id);
     if (!known.has(id))
       fields.push({ field: `${where}.inputs.${id}`, message: `${calc.title} has no input "${id}"` });
+    else if (input?.kind === 'table' && s.mode !== 'editable')
+      // Readings are the visitor's own measurements: a firm may offer starting rows, never fix them.
+      fields.push({
+        field: `${where}.inputs.${id}.mode`,
+        message: `${input.label} is the visitor's own readings: it cannot be locked or hidden`,
+      });
     else if (s.default !== undefined) defaults[id] = s.default;
     if (s.options !== undefined && known.has(id)) checkOptions(calc, id, s, `${where}.inputs.${id}`, fields);
   }

@@ -15,7 +15,9 @@ import * as slotRise from './slot-rise.js';
 import * as soilCapillaryRise from './soil-capillary-rise.js';
 import * as tensionFromRise from './tension-from-rise.js';
 import * as tubeRise from './tube-rise.js';
-import type { CalculatorDefinition, CalculatorTexts, InputDefinition } from './types.js';
+import { arbitraryInputs } from '../../testing/arbitrary.js';
+import * as absorptionCoefficient from './absorption-coefficient.js';
+import type { CalculatorDefinition, CalculatorTexts, InputDefinition, TableRow } from './types.js';
 import * as wettingForce from './wetting-force.js';
 import * as wickingTime from './wicking-time.js';
 
@@ -32,22 +34,18 @@ const modules = {
   tensionFromRise,
   risingDampHeight,
   frostScreening,
+  absorptionCoefficient,
 };
 /** Every calculator's texts module (`<id>.texts.ts`), by calculator id. */
 const textModules = Object.entries(
   import.meta.glob<{ texts: CalculatorTexts }>('./*.texts.ts', { eager: true }),
 ).map(([file, m]) => ({ calculator: file.slice(2, -'.texts.ts'.length), texts: m.texts }));
+/** The input a field names: `readings.2.mass` is in the table `readings`. */
+const inputOf = (field: string): string => field.split('.')[0] ?? field;
 
-/** Any inputs a form could send: every choice from its options, every number within its range. */
-function arbitraryInputs(def: CalculatorDefinition): fc.Arbitrary<Record<string, number | string>> {
-  const fields: Record<string, fc.Arbitrary<number | string>> = {};
-  for (const input of def.inputs) {
-    fields[input.id] =
-      input.kind === 'choice'
-        ? fc.constantFrom(...input.options.map((o) => o.value))
-        : fc.double({ min: input.min, max: input.max, noNaN: true });
-  }
-  return fc.record(fields);
+/** Any inputs a form could send: every choice from its options, every number within its range, tables in order. */
+function anyInputs(def: CalculatorDefinition): fc.Arbitrary<Record<string, number | string | TableRow[]>> {
+  return arbitraryInputs(def, (input) => fc.double({ min: input.min, max: input.max, noNaN: true }));
 }
 
 describe.each(calculators.map((c) => [c.id, c] as const))('%s', (_id, def) => {
@@ -62,6 +60,19 @@ describe.each(calculators.map((c) => [c.id, c] as const))('%s', (_id, def) => {
       expect(input.id).toMatch(/^[a-z][A-Za-z0-9]*$/);
       if (input.kind === 'choice') {
         expect(input.options.map((o) => o.value)).toContain(input.default);
+      } else if (input.kind === 'table') {
+        expect(input.minRows).toBeGreaterThan(0);
+        expect(input.maxRows).toBeGreaterThanOrEqual(input.minRows);
+        expect(input.default.length).toBeGreaterThanOrEqual(input.minRows);
+        for (const c of input.columns) {
+          expect(c.id).toMatch(/^[a-z][A-Za-z0-9]*$/);
+          expect(c.min).toBeLessThan(c.max);
+          for (const unit of Object.values(c.display ?? {})) expect(units[unit].kind).toBe(c.kind);
+          for (const row of input.default) {
+            expect(row[c.id]).toBeGreaterThanOrEqual(c.min);
+            expect(row[c.id]).toBeLessThanOrEqual(c.max);
+          }
+        }
       } else {
         expect(Object.values(units).some((u) => u.kind === input.kind)).toBe(true);
         expect(input.default).toBeGreaterThanOrEqual(input.min);
@@ -136,13 +147,15 @@ describe.each(calculators.map((c) => [c.id, c] as const))('%s', (_id, def) => {
     const base = calculate(def.id, {});
     const explicit = calculate(def.id, base.inputs);
     expect(explicit.inputHash).toBe(base.inputHash);
-    const hidden = def.inputs.find((i) => !(i.id in base.inputs) && i.kind !== 'choice');
-    if (hidden !== undefined && hidden.kind !== 'choice') {
+    const hidden = def.inputs.find(
+      (i) => !(i.id in base.inputs) && i.kind !== 'choice' && i.kind !== 'table',
+    );
+    if (hidden !== undefined && hidden.kind !== 'choice' && hidden.kind !== 'table') {
       const other = hidden.default === hidden.max ? hidden.min : hidden.max;
       expect(calculate(def.id, { [hidden.id]: other }).inputHash).toBe(base.inputHash);
     }
-    const shown = def.inputs.find((i) => i.id in base.inputs && i.kind !== 'choice');
-    if (shown !== undefined && shown.kind !== 'choice') {
+    const shown = def.inputs.find((i) => i.id in base.inputs && i.kind !== 'choice' && i.kind !== 'table');
+    if (shown !== undefined && shown.kind !== 'choice' && shown.kind !== 'table') {
       const other = shown.default === shown.max ? (shown.default + shown.min) / 2 : shown.max;
       expect(calculate(def.id, { [shown.id]: other }).inputHash).not.toBe(base.inputHash);
     }
@@ -151,14 +164,14 @@ describe.each(calculators.map((c) => [c.id, c] as const))('%s', (_id, def) => {
   it('for any inputs a form can send: a finite result with declared warnings, or a CalcInputError (fast-check)', () => {
     const declared = new Set(def.warnings.map((w) => w.code));
     fc.assert(
-      fc.property(arbitraryInputs(def), (inputs) => {
+      fc.property(anyInputs(def), (inputs) => {
         let result;
         try {
           result = calculate(def.id, inputs);
         } catch (err) {
           expect(err).toBeInstanceOf(CalcInputError);
           const issues = (err as CalcInputError).issues;
-          for (const issue of issues) expect(def.inputs.map((i) => i.id)).toContain(issue.field);
+          for (const issue of issues) expect(def.inputs.map((i) => i.id)).toContain(inputOf(issue.field));
           return;
         }
         for (const v of Object.values(result.outputs)) expect(v === null || Number.isFinite(v)).toBe(true);
@@ -201,7 +214,7 @@ describe.each(calculators.map((c) => [c.id, c] as const))('%s', (_id, def) => {
 });
 
 describe('registry and engine', () => {
-  it('registers the ten calculators of the design, in order, by stable id', () => {
+  it('registers the calculators of the design, in order, by stable id', () => {
     expect(calculatorIds).toEqual([
       'tube-rise',
       'slot-rise',
@@ -213,6 +226,7 @@ describe('registry and engine', () => {
       'tension-from-rise',
       'rising-damp-height',
       'frost-screening',
+      'absorption-coefficient',
     ]);
     expect(getCalculator('nope')).toBeUndefined();
     expect(() => calculate('nope', {})).toThrow(expect.objectContaining({ code: 'UNKNOWN_CALCULATOR' }));

@@ -11,6 +11,7 @@ import type {
   CalculatorCore,
   CalculatorTexts,
   InputDefinition,
+  InputValue,
   InputValues,
   Outputs,
   QuantityInput,
@@ -62,7 +63,7 @@ export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
   const chosen = Object.fromEntries(choices);
   const applies = (input: InputDefinition): boolean => inputApplies(input, def.inputs, chosen);
 
-  const resolved: Record<string, number | string> = {};
+  const resolved: Record<string, InputValue> = {};
   for (const input of def.inputs) {
     if (!applies(input)) continue;
     if (input.kind === 'choice') {
@@ -76,6 +77,19 @@ export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
           message: `${input.label} must be one of: ${input.options.map((o) => o.value).join(', ')}`,
         });
       }
+      continue;
+    }
+    if (input.kind === 'table') {
+      const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];
+      if (def.checkTable === undefined)
+        throw new Error(`${def.id}: table input ${input.id} needs checkTable`);
+      const found = def.checkTable(input, value);
+      if (found.length > 0) issues.push(...found);
+      // Checked: an array of plain objects holding a number in every column. Copied in column order.
+      else
+        resolved[input.id] = (value as readonly Readonly<Record<string, number>>[]).map((row) =>
+          Object.fromEntries(input.columns.map((c) => [c.id, row[c.id] as number])),
+        );
       continue;
     }
     const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];

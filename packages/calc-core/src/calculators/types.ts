@@ -1,3 +1,4 @@
+import type { FieldIssue } from '../errors.js';
 import type { Basis } from '../properties/liquids.js';
 import type { QuantityKind, UnitId, UnitSystemId } from '../units.js';
 
@@ -58,7 +59,33 @@ export interface ChoiceInput extends InputCommon {
   readonly default: string;
 }
 
-export type InputDefinition = QuantityInput | ChoiceInput;
+/** One numeric column of a table input. Canonical units, as for a quantity input. */
+export interface TableColumn {
+  /** Stable camelCase id: the key of the value in each row. */
+  readonly id: string;
+  readonly label: string;
+  readonly kind: QuantityKind;
+  /** Inclusive bounds of every value in the column, canonical units. */
+  readonly min: number;
+  readonly max: number;
+  readonly display?: Partial<Readonly<Record<UnitSystemId, UnitId>>>;
+  /** Each row's value must be greater than the one above it (readings in time order). */
+  readonly increasing?: boolean;
+}
+
+/** One row of a table input: a number (canonical units) per column id. */
+export type TableRow = Readonly<Record<string, number>>;
+
+/** Rows of named numeric columns: a laboratory's readings, typed, pasted or uploaded. */
+export interface TableInput extends InputCommon {
+  readonly kind: 'table';
+  readonly columns: readonly TableColumn[];
+  readonly minRows: number;
+  readonly maxRows: number;
+  readonly default: readonly TableRow[];
+}
+
+export type InputDefinition = QuantityInput | ChoiceInput | TableInput;
 
 export interface OutputDefinition {
   readonly id: string;
@@ -92,8 +119,11 @@ export interface Reference {
   readonly appliesWhen?: readonly Condition[];
 }
 
-/** Resolved inputs: canonical numbers and choice values, keyed by input id. */
-export type InputValues = Readonly<Record<string, number | string>>;
+/** One resolved input: a canonical number, a choice value, or a table's rows. */
+export type InputValue = number | string | readonly TableRow[];
+
+/** Resolved inputs: canonical numbers, choice values and tables, keyed by input id. */
+export type InputValues = Readonly<Record<string, InputValue>>;
 
 /** One line of working, what an engineer checks: formula, the numbers put in, the value out. */
 export interface WorkingStep {
@@ -193,6 +223,12 @@ export interface CalculatorCore {
   readonly headline?: HeadlineDefinition;
   /** Pure: resolved inputs in, solution out. Throws CalcInputError for combinations no single field shows. */
   readonly solve: (inputs: InputValues) => Solution;
+  /**
+   * Checks a table input's raw value (`tableIssues`): required of a calculator with a table input.
+   * Carried by the definition rather than imported by the engine, so calculators without tables do
+   * not bundle it.
+   */
+  readonly checkTable?: (input: TableInput, value: unknown) => readonly FieldIssue[];
 }
 
 /** What a calculator says beside its figures, in `calculators/<id>.texts.ts`: imported by nothing that computes. */

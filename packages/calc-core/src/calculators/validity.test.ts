@@ -4,7 +4,8 @@ import { CalcInputError } from '../errors.js';
 import { liquids } from '../properties/liquids.js';
 import { waterDensity, waterSurfaceTension, waterViscosity } from '../properties/water.js';
 import { calculate, calculators, getCalculator } from '../registry.js';
-import type { CalculationResult, CalculatorDefinition } from './types.js';
+import { arbitraryInputs } from '../../testing/arbitrary.js';
+import type { CalculationResult, CalculatorDefinition, TableRow } from './types.js';
 
 // What the engine must never do: print a number where its method does not hold. Each case of
 // issue 10 is pinned here, every warning and caution code has a test that fails when the code is
@@ -199,6 +200,7 @@ describe('hazards belong to the result', () => {
         'STRUCTURE_AND_HEALTH',
       ],
       'frost-screening': ['ESTIMATE_ONLY', 'FROST_HEAVE', 'FOUNDATIONS', 'FROST_TESTING_AND_DESIGN'],
+      'absorption-coefficient': ['ESTIMATE_ONLY', 'LABORATORY_RESULT', 'DAMP_DIAGNOSIS'],
     };
     for (const def of calculators) {
       expect(calculate(def.id, {}).cautions.map((c) => c.code)).toEqual(own[def.id]);
@@ -213,6 +215,10 @@ describe('hazards belong to the result', () => {
     expect(damp?.source).toMatch(/BS 6576.*BRE Digest 245.*from memory/);
   });
 });
+
+/** Readings (s, kg) from masses at 0, 5 min, 20 min, 1 h, 2 h and 4 h. */
+const rowsOf = (masses: readonly number[], times = [0, 300, 1200, 3600, 7200, 14400]) =>
+  masses.map((mass, i) => ({ time: times[i] ?? 0, mass }));
 
 // Inputs that raise each declared warning code: the code must be there, its withheld outputs null,
 // its step in the working, and the same code absent from the calculator's default run.
@@ -282,6 +288,18 @@ const triggers: readonly (readonly [string, Record<string, unknown>, string])[] 
   ['frost-screening', { uniformity: 10 }, 'INTERMEDIATE_GRADATION'],
   ['frost-screening', { finesShare: 0.035 }, 'NEAR_THRESHOLD'],
   ['frost-screening', { uniformity: 3, finesShare: 0.06 }, 'SCREENS_DISAGREE'],
+  [
+    'absorption-coefficient',
+    { method: 'astm-c1585', readings: rowsOf([1, 1.001, 1.002, 1.003, 1.004], [0, 20, 40, 120, 30000]) },
+    'TOO_FEW_POINTS_IN_FIT',
+  ],
+  ['absorption-coefficient', { readings: rowsOf([1, 1.002, 1.002, 1.002, 1.002, 1.002]) }, 'NO_UPTAKE'],
+  ['absorption-coefficient', { readings: rowsOf([1, 1.004, 1.001, 1.005, 1.002, 1.006]) }, 'NOT_LINEAR'],
+  [
+    'absorption-coefficient',
+    { readings: rowsOf([1, 1.0037, 1.0068, 1.0114, 1.0159, 1.0222]) },
+    'SHORTER_THAN_TEST',
+  ],
 ];
 
 describe('every warning code', () => {
@@ -366,25 +384,28 @@ const signs: Readonly<Record<string, Readonly<Record<string, 'positive' | 'nonNe
     fringeGap: 'any',
     fringeReachesFrostLine: 'nonNegative',
   },
+  'absorption-coefficient': {
+    absorptionCoefficient: 'positive',
+    absorptionCoefficientPerRootHour: 'positive',
+    sorptivity: 'positive',
+    intercept: 'any',
+    rSquared: 'nonNegative',
+    pointsInFit: 'nonNegative',
+  },
 };
 
 /** Every choice from its options, every number over its whole range (log-uniform where it spans decades). */
-function anyInputs(def: CalculatorDefinition): fc.Arbitrary<Record<string, number | string>> {
-  const fields: Record<string, fc.Arbitrary<number | string>> = {};
-  for (const input of def.inputs) {
-    if (input.kind === 'choice') {
-      fields[input.id] = fc.constantFrom(...input.options.map((o) => o.value));
-    } else if (input.min > 0 && input.max / input.min > 100) {
+function anyInputs(def: CalculatorDefinition): fc.Arbitrary<Record<string, number | string | TableRow[]>> {
+  return arbitraryInputs(def, (input) => {
+    if (input.min > 0 && input.max / input.min > 100) {
       const lo = Math.log(input.min);
       const hi = Math.log(input.max);
-      fields[input.id] = fc
+      return fc
         .double({ min: 0, max: 1, noNaN: true })
         .map((u) => Math.min(input.max, Math.max(input.min, Math.exp(lo + u * (hi - lo)))));
-    } else {
-      fields[input.id] = fc.double({ min: input.min, max: input.max, noNaN: true });
     }
-  }
-  return fc.record(fields);
+    return fc.double({ min: input.min, max: input.max, noNaN: true });
+  });
 }
 
 describe('property sweep over every calculator (fast-check)', () => {
@@ -440,6 +461,11 @@ describe('property sweep over every calculator (fast-check)', () => {
             expect(R / Number(r.inputs.wireRadius)).toBeGreaterThanOrEqual(30);
             expect(R ** 3 / V).toBeGreaterThanOrEqual(0.3);
             expect(R ** 3 / V).toBeLessThanOrEqual(4.5);
+          }
+          // A rate only beside a fit whose correlation reaches ASTM C1585's 0.98 (from memory).
+          if (id === 'absorption-coefficient' && r.outputs.absorptionCoefficient !== null) {
+            expect(Math.sqrt(r.outputs.rSquared ?? 0)).toBeGreaterThanOrEqual(0.98);
+            expect(r.outputs.pointsInFit).toBeGreaterThanOrEqual(3);
           }
           // Every step that applies a method names its source.
           for (const s of r.working) {

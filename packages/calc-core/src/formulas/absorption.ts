@@ -89,3 +89,22 @@ export function absorptionPoints(
     y: (finite(`readings.${i}.mass`, r.mass) - first.mass) / area,
   }));
 }
+
+/** The test methods whose rules pick the readings that enter the fit. */
+export type AbsorptionMethod = 'en-iso-15148' | 'astm-c1585';
+
+/**
+ * The times (s) whose readings enter the straight-line fit, inclusive. EN ISO 15148 fits every
+ * weighing after the dry one (from memory: 5 min, 20 min, 1 h, 2 h, 4 h, 8 h and 24 h); ASTM C1585
+ * fits the initial rate from 1 min to 6 h (from memory), leaving the later, slower uptake out.
+ */
+export const FIT_WINDOW_S: Readonly<Record<AbsorptionMethod, readonly [from: number, to: number]>> = {
+  'en-iso-15148': [Number.MIN_VALUE, Number.POSITIVE_INFINITY],
+  'astm-c1585': [60, 6 * 3600],
+};
+
+/** Whether a reading at `timeS` seconds enters the fit under `method`. */
+export function inFitWindow(method: AbsorptionMethod, timeS: number): boolean {
+  const [from, to] = FIT_WINDOW_S[method];
+  return timeS >= from && timeS <= to;
+}

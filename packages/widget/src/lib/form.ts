@@ -1,4 +1,4 @@
-import type { ChoiceInput, FieldIssue, QuantityInput, UnitSystemId } from '@wickstone/calc-core';
+import type { ChoiceInput, FieldIssue, QuantityInput, TableRow, UnitSystemId } from '@wickstone/calc-core';
 import { practicalDefault } from '@wickstone/calc-core/answer';
 import { inputApplies, optionsFor } from '@wickstone/calc-core/display';
 import type { ResolvedInput } from './settings.js';
@@ -13,21 +13,26 @@ import { displayUnitOf, formatInput, fromDisplay, parseNumber, toDisplay, withUn
  */
 export interface FieldState {
   readonly text: string;
-  readonly value: number | string | null;
+  /** A table input holds its rows (canonical units) here and no text. */
+  readonly value: number | string | readonly TableRow[] | null;
   readonly fromDefault?: true;
 }
 
+/** A value the form sends: what a field holds, or a locked input's starting value. */
+type FormValue = FieldState['value'];
+
 export type FormState = Readonly<Record<string, FieldState>>;
 
-function shown(value: number | string, input: ResolvedInput, system: UnitSystemId): string {
+function shown(value: ResolvedInput['initial'], input: ResolvedInput, system: UnitSystemId): string {
   if (typeof value === 'string') return value;
+  if (typeof value === 'object') return '';
   return formatInput(toDisplay(value, displayUnitOf(input.def as QuantityInput, system)));
 }
 
 /** An input at its starting value in `system`: rounded practically when the visitor can edit it. */
 function atDefault(input: ResolvedInput, system: UnitSystemId): FieldState {
   const value = input.initial;
-  if (typeof value === 'string' || input.mode !== 'editable') {
+  if (typeof value === 'string' || typeof value === 'object' || input.mode !== 'editable') {
     return { text: shown(value, input, system), value };
   }
   const unit = displayUnitOf(input.def as QuantityInput, system);
@@ -105,8 +110,8 @@ export function reformat(
 export function effectiveValues(
   inputs: readonly ResolvedInput[],
   state: FormState,
-): Record<string, string | number | null> {
-  const out: Record<string, string | number | null> = {};
+): Record<string, FormValue> {
+  const out: Record<string, FormValue> = {};
   for (const input of inputs)
     out[input.def.id] = input.mode === 'editable' ? (state[input.def.id]?.value ?? null) : input.initial;
   return out;
@@ -123,12 +128,9 @@ export function applicable(inputs: readonly ResolvedInput[], state: FormState): 
  * The raw inputs handed to calc-core's `run`: every input that takes part. Locked and hidden
  * inputs always send their starting value, whatever the form holds.
  */
-export function collectInputs(
-  inputs: readonly ResolvedInput[],
-  state: FormState,
-): Record<string, number | string | null> {
+export function collectInputs(inputs: readonly ResolvedInput[], state: FormState): Record<string, FormValue> {
   const values = effectiveValues(inputs, state);
-  const out: Record<string, number | string | null> = {};
+  const out: Record<string, FormValue> = {};
   for (const input of applicable(inputs, state)) out[input.def.id] = values[input.def.id] ?? null;
   return out;
 }
@@ -142,7 +144,7 @@ export function issueMessage(
   input: ResolvedInput | undefined,
   system: UnitSystemId,
 ): string {
-  if (input === undefined || input.def.kind === 'choice') return issue.message;
+  if (input === undefined || input.def.kind === 'choice' || input.def.kind === 'table') return issue.message;
   if (issue.code === 'REQUIRED') return 'Enter a value';
   if (issue.code === 'NOT_A_NUMBER' || issue.code === 'NOT_FINITE') return 'Enter a number, such as 0.5';
   if (issue.code !== 'BELOW_MIN' && issue.code !== 'ABOVE_MAX') return issue.message;

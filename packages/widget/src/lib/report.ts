@@ -28,7 +28,8 @@ export function buildRunBody(args: {
   return {
     id,
     publicKey,
-    inputs: { ...result.inputs },
+    // A JSON copy (table rows as plain objects): exactly what goes over the wire.
+    inputs: JSON.parse(JSON.stringify(result.inputs)) as EmbedRunBody['inputs'],
     unitSystem,
     result: {
       outputs: { ...result.outputs },

@@ -1,4 +1,4 @@
-import type { CalculatorCore, InputDefinition } from '@wickstone/calc-core';
+import type { CalculatorCore, InputDefinition, TableRow } from '@wickstone/calc-core';
 import type { EmbedWidget, InputMode } from '@wickstone/contracts';
 
 type InputSettings = EmbedWidget['settings']['inputs'];
@@ -7,8 +7,8 @@ type InputSettings = EmbedWidget['settings']['inputs'];
 export interface ResolvedInput {
   readonly def: InputDefinition;
   readonly mode: InputMode;
-  /** Canonical number (SI, degrees, °C) or a choice value: the firm's default if usable, else the calculator's. */
-  readonly initial: number | string;
+  /** Canonical number (SI, degrees, °C), a choice value or a table's rows: the firm's default if usable, else the calculator's. */
+  readonly initial: number | string | readonly TableRow[];
   /** The firm's default could not be used (wrong type or not an option) and the calculator's was taken. */
   readonly defaultRejected: boolean;
   /** For a choice the firm limited: the options it offers. Absent: every option. */
@@ -29,14 +29,17 @@ export function resolveInputSettings(def: CalculatorCore, settings: InputSetting
     const s = Object.hasOwn(settings, input.id) ? settings[input.id] : undefined;
     const mode: InputMode = s !== undefined && MODES.includes(s.mode) ? s.mode : 'editable';
     const wanted = s?.default;
-    let initial: number | string = input.default;
+    let initial: ResolvedInput['initial'] = input.default;
     let defaultRejected = false;
     if (wanted !== undefined) {
       const usable =
         input.kind === 'choice'
           ? typeof wanted === 'string' && input.options.some((o) => o.value === wanted)
-          : typeof wanted === 'number' && Number.isFinite(wanted);
-      if (usable) initial = wanted;
+          : input.kind === 'table'
+            ? // calc-core names any bad row on Calculate; the firm's rows are used as set, like its numbers.
+              Array.isArray(wanted)
+            : typeof wanted === 'number' && Number.isFinite(wanted);
+      if (usable) initial = wanted as ResolvedInput['initial'];
       else defaultRejected = true;
     }
     const allowed = input.kind === 'choice' ? s?.options : undefined;

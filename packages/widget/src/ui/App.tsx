@@ -3,6 +3,7 @@ import {
   type CalculationResult,
   type CalculatorDefinition,
   type FieldIssue,
+  type TableRow,
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { EmbedWidget } from '@wickstone/contracts';
@@ -26,6 +27,7 @@ import { controlId, Field } from './Field.js';
 import { useExtras } from '../lazy.js';
 import type { LeadTarget } from './LeadForm.js';
 import { Result, warningId } from './Result.js';
+import { ChartSlot, TableSlot } from './TableSlot.js';
 
 export interface AppProps {
   readonly widget: EmbedWidget;
@@ -131,6 +133,9 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
   const fieldErrors = new Map<string, string>();
   const otherErrors: string[] = [];
   for (const issue of issues) {
+    // A cell of a table input (`readings.2.mass`): the table names it beside the cell itself.
+    if (issue.field.includes('.') && byId.get(issue.field.split('.')[0] ?? '')?.def.kind === 'table')
+      continue;
     const input = byId.get(issue.field);
     if (input && input.mode !== 'hidden' && visible.includes(input)) {
       const note = input.mode === 'locked' ? ' (a value set by the firm)' : '';
@@ -246,19 +251,31 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
         aria-label={`${widget.name}: inputs`}
       >
         <div class="grid">
-          {visible.map((input) => (
-            <Field
-              key={input.def.id}
-              input={input}
-              state={form[input.def.id] ?? { text: '', value: null }}
-              system={shownSystem}
-              error={fieldErrors.get(input.def.id)}
-              options={offeredOptions(input, inputs, form)}
-              warningIds={warnedFields.get(input.def.id) ?? []}
-              onText={onText}
-              onChoice={onChoice}
-            />
-          ))}
+          {visible.map((input) =>
+            input.def.kind === 'table' ? (
+              <TableSlot
+                key={input.def.id}
+                input={input.def}
+                rows={
+                  Array.isArray(form[input.def.id]?.value) ? (form[input.def.id]?.value as TableRow[]) : null
+                }
+                system={shownSystem}
+                onRows={(rows) => edit({ ...form, [input.def.id]: { text: '', value: rows as TableRow[] } })}
+              />
+            ) : (
+              <Field
+                key={input.def.id}
+                input={input}
+                state={form[input.def.id] ?? { text: '', value: null }}
+                system={shownSystem}
+                error={fieldErrors.get(input.def.id)}
+                options={offeredOptions(input, inputs, form)}
+                warningIds={warnedFields.get(input.def.id) ?? []}
+                onText={onText}
+                onChoice={onChoice}
+              />
+            ),
+          )}
         </div>
         {otherErrors.length > 0 && (
           <div class="form-error" data-wickstone="form-error">
@@ -293,8 +310,13 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
           extras={extras}
         />
       )}
+      {outcome && calculator.inputs.some((i) => i.kind === 'table') && <ChartSlot result={outcome.result} />}
       {extras && (outcome !== null || preview) && settings.sheet.enabled && (
-        <extras.SheetBlock publicKey={widget.publicKey} apiBase={preview ? null : apiBase} target={leadTarget} />
+        <extras.SheetBlock
+          publicKey={widget.publicKey}
+          apiBase={preview ? null : apiBase}
+          target={leadTarget}
+        />
       )}
       {/* In preview the form shows from the start, so an admin sees the fields as they set them. */}
       {extras && (outcome !== null || preview) && settings.leadForm.enabled && (

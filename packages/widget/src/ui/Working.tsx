@@ -131,7 +131,10 @@ export function Notes(props: NotesProps) {
           {band.basis
             .map((b) => {
               const input = calculator.inputs.find((x) => x.id === b.input);
-              const unit = input && input.kind !== 'choice' ? displayUnitOf(input, system) : null;
+              const unit =
+                input && input.kind !== 'choice' && input.kind !== 'table'
+                  ? displayUnitOf(input, system)
+                  : null;
               const edges = unit
                 ? withUnit(
                     `${formatResult(toDisplay(b.low, unit))} to ${formatResult(toDisplay(b.high, unit))}`,

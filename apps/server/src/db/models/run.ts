@@ -21,7 +21,8 @@ export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run
   declare release: string;
   declare calcVersion: string;
   declare unitSystem: UnitSystem;
-  declare inputs: Record<string, number | string>;
+  /** Numbers, choice values and table rows (a list of cells per row), as the browser sent them. */
+  declare inputs: Record<string, number | string | Record<string, unknown>[]>;
   declare clientResult: StoredResult;
   declare serverResult: StoredResult | null;
   declare warningCodes: string[];

@@ -20,7 +20,7 @@ describe("the demo firm's live widgets", () => {
     await t.close();
   });
 
-  it('puts a tube-rise, a soil and a rising-damp widget live on the demo site, with invented runs of the third', async () => {
+  it('puts tube-rise, soil, rising-damp and absorption widgets live on the demo site, with invented runs of the rising-damp one', async () => {
     await seedDemo(t.db.sequelize, { bcryptCost: 4 });
     const org = await Organization.findOne({ where: { slug: 'brackenridge-ground' } });
     const owner = await Membership.findOne({ where: { organizationId: org!.id, role: 'owner' } });
@@ -37,6 +37,7 @@ describe("the demo firm's live widgets", () => {
       ['tube-rise', 'live'],
       ['soil-capillary-rise', 'live'],
       ['rising-damp-height', 'live'],
+      ['absorption-coefficient', 'live'],
     ]);
     const damp = seeded.widgets[2]!;
     expect(damp.allowedOrigins).toEqual(origins);

@@ -63,7 +63,31 @@ const demoWidgets: DemoWidget[] = [
       leadForm: { ...s.leadForm, notify: ['surveys@brackenridge-ground.example'] },
     }),
   },
+  {
+    name: 'Laboratory: water absorption coefficient',
+    calculatorId: 'absorption-coefficient',
+    settings: (s) => ({
+      ...s,
+      inputs: { faceArea: { mode: 'locked', default: 0.01 } },
+      cautions:
+        'Our laboratory cuts 100 mm × 100 mm specimens; send us three for a reported value. One specimen is a first look only.',
+      leadForm: { ...s.leadForm, notify: ['laboratory@brackenridge-ground.example'] },
+    }),
+  },
 ];
+
+/** An invented partial-immersion test (s, kg) on a 100 mm × 100 mm face: A_w from 0.01 to 0.2 kg/(m²·√s). */
+function inventedReadings(rnd: () => number): { time: number; mass: number }[] {
+  const aw = 0.01 + rnd() * 0.19;
+  const dry = 1.2 + rnd() * 0.8;
+  return [0, 300, 1200, 3600, 7200, 14400, 28800, 86400].map((time) => ({
+    time,
+    mass:
+      time === 0
+        ? dry
+        : Math.round((dry + 0.01 * (0.05 + aw * Math.sqrt(time)) + (rnd() - 0.5) * 4e-5) * 1e5) / 1e5,
+  }));
+}
 
 const visitors = [
   ['Hester Quayle', 'hester.quayle@mail.example', '4 Mill Lane, Ashby Parva'],
@@ -84,21 +108,23 @@ async function seedRuns(w: Widget, origin: string, seed: number): Promise<number
   const now = Date.now();
   const rows: RunRow[] = [];
   for (let i = 0; i < 180; i++) {
-    const inputs: Record<string, number | string> =
-      w.calculatorId === 'tube-rise'
-        ? {
-            diameter: [0.0002, 0.0005, 0.001, 0.002, 0.004][Math.floor(rnd() * 5)] as number,
-            temperatureC: 5 + Math.round(rnd() * 20),
-          }
-        : w.calculatorId === 'rising-damp-height'
+    const inputs: Record<string, unknown> =
+      w.calculatorId === 'absorption-coefficient'
+        ? { readings: inventedReadings(rnd), faceArea: 0.01 }
+        : w.calculatorId === 'tube-rise'
           ? {
-              wallThickness: [0.225, 0.35, 0.45, 0.6][Math.floor(rnd() * 4)] as number,
-              evaporationRate: ((0.3 + Math.round(rnd() * 15) / 10) * 1e-3) / 86_400,
+              diameter: [0.0002, 0.0005, 0.001, 0.002, 0.004][Math.floor(rnd() * 5)] as number,
+              temperatureC: 5 + Math.round(rnd() * 20),
             }
-          : {
-              d10: [0.00002, 0.00008, 0.0002, 0.0006][Math.floor(rnd() * 4)] as number,
-              waterTableDepth: 0.5 + Math.round(rnd() * 30) / 10,
-            };
+          : w.calculatorId === 'rising-damp-height'
+            ? {
+                wallThickness: [0.225, 0.35, 0.45, 0.6][Math.floor(rnd() * 4)] as number,
+                evaporationRate: ((0.3 + Math.round(rnd() * 15) / 10) * 1e-3) / 86_400,
+              }
+            : {
+                d10: [0.00002, 0.00008, 0.0002, 0.0006][Math.floor(rnd() * 4)] as number,
+                waterTableDepth: 0.5 + Math.round(rnd() * 30) / 10,
+              };
     rows.push(
       inventRun(w, inputs, {
         id: seededUuid(`demo-run-${seed}-${i}`),
