@@ -34,10 +34,11 @@ export const FLIGHT_GOAL = 14 * 1024;
  * Lowered from 32 to 30 KB when the calculators' cautions and references (their texts modules) and
  * the run reporter left the first flight (largest: wetting-force 28.3 KB brotli); the rest of a
  * kilobyte is room for the result's headline and picture being added beside this change.
- * Raised to 31 KB when the headline sentence and the four trade calculators joined (frost-screening
- * 30.2 KB brotli, the largest): the ceiling still stops growth; the goal is unchanged.
+ * Raised to 32 KB when the headline sentence, the five trade calculators and the table input's slot
+ * joined (absorption-coefficient 31.2 KB brotli, the largest): the ceiling still stops growth; the
+ * goal is unchanged and not met.
  */
-export const FLIGHT_LIMIT = 31 * 1024;
+export const FLIGHT_LIMIT = 32 * 1024;
 
 const ENGINE = 'virtual:wickstone-engine/';
 const TEXTS = 'virtual:wickstone-texts/';
