@@ -42,7 +42,7 @@ describe('the trade calculators through the same runs table and e-mailed copy', 
     ['rising-damp-height', 'si', 'waterHeld', '55.56 L/m'],
     ['rising-damp-height', 'us', 'dailyFlow', '0.1278 gal/(ft·day)'],
     ['contact-angle-from-force', 'si', 'contactAngleDeg', '59.83°'],
-    ['tension-from-rise', 'us', 'surfaceTension', '61.59 dyn/cm'],
+    ['tension-from-rise', 'us', 'surfaceTension', '61.59 mN/m'],
     ['frost-screening', 'si', 'frostGroup', '2'],
   ] as const)('%s (%s): %s shows as %s', (id, system, output, text) => {
     const result = calculate(id, {});

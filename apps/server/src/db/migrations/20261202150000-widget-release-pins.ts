@@ -1,4 +1,4 @@
-import { DataTypes } from 'sequelize';
+import { DataTypes, QueryTypes } from 'sequelize';
 import type { Migration } from '../migrator.js';
 
 // A widget's release pin: an exact version or a minor line (`~0.2`). `release` stays the resolved
@@ -12,5 +12,6 @@ export const up: Migration = async ({ context: qi }) => {
 };
 
 export const down: Migration = async ({ context: qi }) => {
-  await qi.removeColumn('widgets', 'release_pin');
+  // Raw DDL with a type: Sequelize 6's removeColumn runs an untyped query that fails with the mariadb 3 connector.
+  await qi.sequelize.query('ALTER TABLE widgets DROP COLUMN release_pin', { type: QueryTypes.UPDATE });
 };
