@@ -244,7 +244,7 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await editor.getByRole('button', { name: `Use ${site.origin}` }).click();
     await expect.poll(() => origins.inputValue()).toBe(site.origin);
     expect(await editor.locator('[data-site-check="ok"]').textContent()).toContain(site.origin);
-    await editor.getByRole('radio', { name: /^Live/ }).check();
+    await editor.getByRole('radio', { name: /^In service/ }).check();
 
     // A save that never reaches the server loses nothing: the form stays as typed, and saving again works.
     let dropped = 0;
@@ -306,7 +306,9 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(await latest.locator('[data-change="settings.units.system"]').textContent()).toContain(
       'Metric (SI)→US customary',
     );
-    expect(await latest.locator('[data-change="status"]').textContent()).toContain('Draft→Live');
+    expect(await latest.locator('[data-change="status"]').textContent()).toContain(
+      'In preparation→In service',
+    );
     expect(await latest.textContent()).toContain(org.users.admin.name);
 
     // Copied from the page, as a person would.

@@ -264,7 +264,7 @@ export function createWidgetService(deps: {
         if (after.status === 'live' && after.allowedOrigins.length === 0) {
           throw fieldError(
             'body.allowedOrigins',
-            'A live widget needs at least one site allowed to embed it',
+            'A widget in service needs at least one site allowed to embed it',
           );
         }
         if (after.status === 'live' && before.status !== 'live')
