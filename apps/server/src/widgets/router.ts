@@ -4,6 +4,7 @@ import {
   pageQuerySchema,
   updateWidgetBodySchema,
   widgetParamsSchema,
+  widgetRevisionParamsSchema,
 } from '@wickstone/contracts';
 import { auditTrail, type AuditService } from '../audit/service.js';
 import type { ApiRoutes } from '../http/routes.js';
@@ -59,6 +60,20 @@ export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService, audit: A
     { access: 'widgets:read', params: widgetParamsSchema, query: pageQuerySchema },
     async ({ org, params, query }) => ({
       body: await widgets.revisions(org.id, params.widgetId, query.page, query.pageSize),
+    }),
+  );
+
+  routes.post(
+    '/orgs/:orgId/widgets/:widgetId/revisions/:revisionId/restore',
+    { access: 'widgets:write', params: widgetRevisionParamsSchema },
+    async ({ org, session, params, meta }) => ({
+      body: await widgets.restore(
+        org.id,
+        params.widgetId,
+        params.revisionId,
+        session.user.id,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
     }),
   );
 }

@@ -45,6 +45,18 @@ export interface WidgetService {
     page: number,
     pageSize: number,
   ): Promise<{ items: WidgetRevisionDto[]; total: number }>;
+  /**
+   * Puts back the name, sites and settings the widget had after revision `revisionId`, as a new
+   * save (so it is itself in the history and the audit log, which names the revision). The status
+   * stays as it is now: restoring settings never puts a widget on or off a site by surprise.
+   */
+  restore(
+    orgId: number,
+    widgetId: number,
+    revisionId: number,
+    actorId: number,
+    trail?: AuditTrail,
+  ): Promise<WidgetDto>;
   toDto(widget: Widget): WidgetDto;
 }
 
@@ -175,7 +187,7 @@ export function createWidgetService(deps: {
     release: w.release,
   });
 
-  return {
+  const service: WidgetService = {
     toDto: (w) => toDto(w),
 
     async list(orgId, page, pageSize) {
@@ -294,6 +306,28 @@ export function createWidgetService(deps: {
       });
     },
 
+    async restore(orgId, widgetId, revisionId, actorId, trail) {
+      await find(orgId, widgetId);
+      const revision = await WidgetRevision.findOne({
+        where: { id: revisionId, widgetId, organizationId: orgId },
+      });
+      if (!revision) throw new AppError('not_found', 'Revision not found');
+      const snap = revision.snapshot as Partial<ReturnType<typeof snapshot>>;
+      return service.update(
+        orgId,
+        widgetId,
+        actorId,
+        {
+          ...(snap.name !== undefined ? { name: snap.name } : {}),
+          ...(snap.allowedOrigins !== undefined ? { allowedOrigins: snap.allowedOrigins } : {}),
+          ...(snap.settings !== undefined ? { settings: snap.settings } : {}),
+        },
+        trail &&
+          ((entry, transaction) =>
+            trail({ ...entry, details: { ...entry.details, restoredRevision: revisionId } }, transaction)),
+      );
+    },
+
     async revisions(orgId, widgetId, page, pageSize) {
       await find(orgId, widgetId);
       const { rows, count } = await WidgetRevision.findAndCountAll({
@@ -322,4 +356,5 @@ export function createWidgetService(deps: {
       };
     },
   };
+  return service;
 }
