@@ -315,6 +315,38 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
     expect(await enquiry.textContent()).toContain('Awaiting reply → Replied');
   });
 
+  it('puts back an earlier revision from the editor, as a new revision the audit names', async () => {
+    const page = await freshPage(1280);
+    const home = await signIn(page, 'admin');
+    await page.goto(`${app.url}${home}/widgets/${tubeId}`);
+    const first = page.locator('[data-revision]').last();
+    await first.getByRole('button', { name: 'Restore revision 1' }).click();
+    await first.getByRole('button', { name: 'Restore', exact: true }).click();
+    await page.getByText(/^Revision 1 restored at /).waitFor();
+    const [row] = await q<{ name: string; status: string; settings: unknown }>(
+      'SELECT name, status, settings FROM widgets WHERE id = ?',
+      [tubeId],
+    );
+    const settings = (typeof row!.settings === 'string' ? JSON.parse(row!.settings) : row!.settings) as {
+      units: { system: string };
+    };
+    // The name and unit system it was created with; still in service.
+    expect(row).toMatchObject({ name: 'Rising damp in a pore', status: 'live' });
+    expect(settings.units.system).toBe('si');
+    await expect
+      .poll(() => page.locator('[data-revision]').first().locator('[data-revision-words]').textContent())
+      .toMatch(/^Renamed it “Rising damp in a pore” and changed the unit system/);
+    const [entry] = await q<{ details: unknown }>(
+      "SELECT details FROM audit_events WHERE organization_id = ? AND type = 'widget.updated' ORDER BY id DESC LIMIT 1",
+      [org.id],
+    );
+    const details = (typeof entry!.details === 'string' ? JSON.parse(entry!.details) : entry!.details) as {
+      restoredRevision?: number;
+    };
+    expect(details.restoredRevision).toEqual(expect.any(Number));
+    await screenshot(page, 'screens-revisions-1280');
+  });
+
   for (const role of ['owner', 'admin', 'analyst', 'developer'] as const) {
     it(`finds nothing serious on any screen the ${role} can open`, { timeout: 300_000 }, async () => {
       for (const width of [1280, 390]) {

@@ -303,12 +303,14 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     // The save is in the history with what changed.
     const latest = editor.locator('[data-revision]').first();
     await latest.locator('[data-change="settings.units.system"]').waitFor();
-    expect(await latest.locator('[data-change="settings.units.system"]').textContent()).toContain(
-      'Metric (SI)→US customary',
+    expect(await latest.locator('[data-change="settings.units.system"]').textContent()).toMatch(
+      /was\s*Metric \(SI\)\s*now\s*US customary/,
     );
-    expect(await latest.locator('[data-change="status"]').textContent()).toContain(
-      'In preparation→In service',
+    expect(await latest.locator('[data-change="status"]').textContent()).toMatch(
+      /was\s*In preparation\s*now\s*In service/,
     );
+    // The revision says in words what was done.
+    expect(await latest.locator('[data-revision-words]').textContent()).toMatch(/^Put it in service/);
     expect(await latest.textContent()).toContain(org.users.admin.name);
 
     // Copied from the page, as a person would.

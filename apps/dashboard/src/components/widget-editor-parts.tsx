@@ -22,7 +22,7 @@ const sections = [
   ['widget-sheet', 'Calculation sheet'],
   ['widget-sites', 'Sites'],
   ['widget-embed', 'Embed code'],
-  ['widget-history', 'History'],
+  ['widget-history', 'Revisions'],
 ] as const;
 
 /** The section an error key belongs to, for the summary's links. */

@@ -4,6 +4,7 @@ import { useBlocker, useParams } from 'react-router';
 import { getCalculator, type CalculatorDefinition } from '@wickstone/calc-core';
 import { can, type Widget } from '@wickstone/contracts';
 import { ApiError } from '../lib/api';
+import { formatDateTime } from '../lib/labels';
 import { useOrg } from '../lib/org-context';
 import { usePageTitle } from '../lib/use-page-title';
 import { useWidgetEditor } from '../lib/use-widget-editor';
@@ -100,6 +101,18 @@ export function Editor({
               widgetId={widget.id}
               calc={calc}
               system={widget.settings.units.system}
+              restore={
+                editable
+                  ? {
+                      allowed: !editor.dirty,
+                      onRestored: (w, n) =>
+                        editor.adopt(
+                          w,
+                          `Revision ${n} restored at ${formatDateTime(w.updatedAt)}, as a new revision.`,
+                        ),
+                    }
+                  : undefined
+              }
             />
           </div>
           <PreviewPanel widget={widget} preview={editor.preview} dirty={editor.dirty} />
