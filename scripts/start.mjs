@@ -81,7 +81,10 @@ try {
       },
     }),
   );
-  const server = startChild('app', 'node', ['apps/server/dist/index.js'], { env });
+  // Calm by default: no line per request (errors still show). LOG_LEVEL=info brings the request log back.
+  const server = startChild('app', 'node', ['apps/server/dist/index.js'], {
+    env: { ...env, LOG_LEVEL: process.env.LOG_LEVEL ?? 'error' },
+  });
   children.push(server);
   server.on('exit', (code) => {
     if (code !== 0 && code !== null) {
@@ -97,9 +100,20 @@ try {
     }),
   );
   await waitForHttp(`http://127.0.0.1:${demoPort}/`);
-  log(`the demo consultancy's website, with two embedded widgets: http://localhost:${demoPort}`);
-  log(`Wickstone is running at http://127.0.0.1:${port}  (Ctrl-C stops it)`);
-  log(`fake mailbox: http://127.0.0.1:${port}/dev/mail`);
+  // Everything a person needs, together and last: where to go and how to sign in.
+  const { demoUsers } = await import('../apps/server/dist/db/seed/demo.js');
+  console.log(
+    [
+      '',
+      `Wickstone is running (Ctrl-C stops everything)`,
+      `  dashboard        http://127.0.0.1:${port}`,
+      `  demo firm's site http://localhost:${demoPort}  (two embedded widgets)`,
+      `  fake mailbox     http://127.0.0.1:${port}/dev/mail`,
+      'Demo sign-ins (invented staff of an invented firm):',
+      ...demoUsers.map((u) => `  ${u.role.padEnd(10)} ${u.email}  ${u.password}`),
+      '',
+    ].join('\n'),
+  );
 } catch (err) {
   console.error(`[wickstone] start failed: ${err instanceof Error ? err.message : err}`);
   await shutdown(1);
