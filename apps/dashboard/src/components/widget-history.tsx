@@ -93,7 +93,7 @@ function shortText(s: string): string {
   return s.length > 90 ? `${s.slice(0, 88)}…` : s;
 }
 
-function Value({
+export function SettingValue({
   path,
   value,
   calc,
@@ -202,9 +202,9 @@ function ChangeList({
             ) : (
               <span className="grid grid-cols-[2.5rem_minmax(0,1fr)] items-baseline gap-x-2 gap-y-0.5">
                 <span className="text-xs font-semibold tracking-wider text-ink-soft uppercase">was</span>
-                <Value path={c.path} value={c.before} calc={calc} system={system} />
+                <SettingValue path={c.path} value={c.before} calc={calc} system={system} />
                 <span className="text-xs font-semibold tracking-wider text-ink-soft uppercase">now</span>
-                <Value path={c.path} value={c.after} calc={calc} system={system} />
+                <SettingValue path={c.path} value={c.after} calc={calc} system={system} />
               </span>
             )}
           </dd>
