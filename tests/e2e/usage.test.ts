@@ -220,12 +220,13 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
   });
 
   it('moves the lead to contacted, adds a dated note, and the database holds both', async () => {
-    await page.getByRole('link', { name: 'Open the lead' }).click();
+    await page.getByRole('link', { name: 'Open the enquiry' }).click();
     await page.waitForURL(new RegExp(`/leads/${leadId}$`));
     await page.getByText(visitor.email).first().waitFor();
-    await page.getByLabel('Status').selectOption('contacted');
+    // The stored code stays 'contacted'; people read the status as 'Replied'.
+    await page.getByLabel('Status').selectOption({ label: 'Replied' });
     await page.getByRole('button', { name: 'Save', exact: true }).click();
-    await page.getByText('Saved: the lead is contacted.').waitFor();
+    await page.getByText('Saved. Status: Replied.').waitFor();
     await page.getByLabel('Add a note').fill('Rang back; survey pencilled in for Thursday.');
     await page.getByRole('button', { name: 'Add the note' }).click();
     await page
@@ -246,11 +247,11 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
   it('lists the lead under its new status', async () => {
     await page
       .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: 'Leads', exact: true })
+      .getByRole('link', { name: 'Enquiries', exact: true })
       .click();
     await page.locator(`[data-lead-row="${leadId}"]`).waitFor();
     await page.getByLabel('Status').selectOption('new');
-    await page.getByText('No lead matches these filters').waitFor();
+    await page.getByText('No enquiry matches these filters').waitFor();
     await page.getByLabel('Status').selectOption('contacted');
     await page.locator(`[data-lead-row="${leadId}"]`).waitFor();
     expect(new URL(page.url()).searchParams.get('status')).toBe('contacted');
@@ -267,7 +268,7 @@ describe('usage and leads in Chromium: filter runs, read the working, work a lea
     const [before] = await q<{ name: string | null }>('SELECT name FROM leads WHERE id = ?', [leadId]);
     expect(before!.name).toBe(visitor.name);
     await page.getByRole('button', { name: 'Erase', exact: true }).click();
-    await page.getByText('The personal data of this lead was erased').waitFor();
+    await page.getByText('The personal data of this enquiry was erased').waitFor();
     expect(await page.getByText(visitor.email).count()).toBe(0);
     const [after] = await q<{ name: string | null; email: string | null; runId: string | null }>(
       'SELECT name, email, run_id AS runId FROM leads WHERE id = ?',

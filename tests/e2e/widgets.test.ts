@@ -244,7 +244,7 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await editor.getByRole('button', { name: `Use ${site.origin}` }).click();
     await expect.poll(() => origins.inputValue()).toBe(site.origin);
     expect(await editor.locator('[data-site-check="ok"]').textContent()).toContain(site.origin);
-    await editor.getByRole('radio', { name: /^Live/ }).check();
+    await editor.getByRole('radio', { name: /^In service/ }).check();
 
     // A save that never reaches the server loses nothing: the form stays as typed, and saving again works.
     let dropped = 0;
@@ -303,10 +303,14 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     // The save is in the history with what changed.
     const latest = editor.locator('[data-revision]').first();
     await latest.locator('[data-change="settings.units.system"]').waitFor();
-    expect(await latest.locator('[data-change="settings.units.system"]').textContent()).toContain(
-      'Metric (SI)→US customary',
+    expect(await latest.locator('[data-change="settings.units.system"]').textContent()).toMatch(
+      /was\s*Metric \(SI\)\s*now\s*US customary/,
     );
-    expect(await latest.locator('[data-change="status"]').textContent()).toContain('Draft→Live');
+    expect(await latest.locator('[data-change="status"]').textContent()).toMatch(
+      /was\s*In preparation\s*now\s*In service/,
+    );
+    // The revision says in words what was done.
+    expect(await latest.locator('[data-revision-words]').textContent()).toMatch(/^Put it in service/);
     expect(await latest.textContent()).toContain(org.users.admin.name);
 
     // Copied from the page, as a person would.
@@ -342,9 +346,11 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     const editor = page.locator('[data-widget-editor]');
     await widgetIn(page.locator('[data-widget-preview]')).locator('[data-wickstone="root"]').waitFor();
     expect(await page.getByRole('button', { name: 'Save changes' }).count()).toBe(0);
-    expect(await editor.getByLabel('Text colour', { exact: true }).inputValue()).toBe(brand.text);
-    expect(await editor.getByLabel('Text colour', { exact: true }).isDisabled()).toBe(true);
-    expect(await editor.getByLabel('Allowed origins').isDisabled()).toBe(true);
+    // A summary in words, not a form of greyed-out fields.
+    expect(await editor.locator('input, select, textarea:not([data-embed-snippet])').count()).toBe(0);
+    expect(await editor.locator('[data-summary="settings.look.colors.text"]').textContent()).toBe(brand.text);
+    expect(await editor.locator('[data-summary="allowedOrigins"]').textContent()).toContain(site.origin);
+    expect(await editor.locator('[data-summary="settings.units.system"]').textContent()).toBe('US customary');
     expect(await editor.getByLabel(/Upload a logo/).count()).toBe(0);
     expect(await editor.locator('[data-embed-snippet]').inputValue()).toBe(snippet);
   });

@@ -48,3 +48,12 @@ export async function startApp(env: NodeJS.ProcessEnv = {}): Promise<RunningApp>
     },
   };
 }
+
+/** The fake SMTP server and its mailbox API that `npm test` / `test:env` started, for an app that sends mail. */
+export function mailEnv(): NodeJS.ProcessEnv {
+  return {
+    SMTP_HOST: process.env.SMTP_HOST ?? '127.0.0.1',
+    SMTP_PORT: process.env.SMTP_PORT,
+    FAKE_MAIL_API_URL: process.env.FAKE_MAIL_API_URL,
+  };
+}

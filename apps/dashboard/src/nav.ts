@@ -15,7 +15,7 @@ export const orgNav: readonly NavEntry[] = [
   { label: 'Overview', path: '', permission: 'org:read' },
   { label: 'Widgets', path: 'widgets', permission: 'widgets:read' },
   { label: 'Usage', path: 'usage', permission: 'usage:read' },
-  { label: 'Leads', path: 'leads', permission: 'leads:read' },
+  { label: 'Enquiries', path: 'leads', permission: 'leads:read' },
   { label: 'Team', path: 'team', permission: 'members:read' },
   { label: 'Audit log', path: 'audit', permission: 'audit:read' },
   { label: 'Data retention', path: 'settings/retention', permission: 'org:read' },

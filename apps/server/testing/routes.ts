@@ -13,6 +13,7 @@ export function probeUrl(route: RouteRecord, values: Record<string, string | num
     invitationId: '4000000000',
     widgetId: '4000000000',
     leadId: '4000000000',
+    revisionId: '4000000000',
     runId: '00000000-0000-4000-8000-000000000000',
     token: 'x'.repeat(43),
   };

@@ -9,3 +9,4 @@ export * from './releases.js';
 export * from './plans.js';
 export * from './text.js';
 export * from './sheets.js';
+export * from './words.js';

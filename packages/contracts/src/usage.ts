@@ -84,9 +84,9 @@ export const runListItemSchema = z.object({
   createdAt: z.string(),
   widget: z.object({ id: z.number().int(), name: z.string() }),
   calculator: z.object({ id: z.string(), title: z.string() }),
-  /** The widget's unit system, in which `inputs` and `outputs` are shown. */
+  /** The widget's unit system today. */
   unitSystem: z.enum(unitSystems),
-  /** The unit system the visitor had chosen when the run was made. */
+  /** The unit system the visitor had chosen when the run was made, in which `inputs` and `outputs` are shown. */
   visitorUnitSystem: z.enum(unitSystems),
   /** The inputs the visitor could set and sent (not those the firm fixed), in the calculator's order. */
   inputs: z.array(shownValueSchema),

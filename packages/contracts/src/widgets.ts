@@ -186,6 +186,9 @@ export const widgetParamsSchema = z.strictObject({
   orgId: z.coerce.number().int().positive(),
   widgetId: z.coerce.number().int().positive(),
 });
+export const widgetRevisionParamsSchema = widgetParamsSchema.extend({
+  revisionId: z.coerce.number().int().positive(),
+});
 
 export const widgetSchema = z.object({
   id: z.number().int(),

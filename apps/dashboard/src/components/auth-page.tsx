@@ -19,7 +19,7 @@ export function AuthPage({
     <section aria-labelledby={id} className="space-y-6">
       <div className="space-y-1">
         {eyebrow ? (
-          <p className="text-sm font-semibold tracking-wider text-accent uppercase">{eyebrow}</p>
+          <p className="text-sm font-semibold tracking-wider text-brand uppercase">{eyebrow}</p>
         ) : null}
         <h1 id={id} className="text-2xl font-bold tracking-tight">
           {title}

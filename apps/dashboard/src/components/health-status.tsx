@@ -2,34 +2,25 @@ import { useQuery } from '@tanstack/react-query';
 import { healthQuery } from '../queries/health';
 import { ApiError } from '../lib/api';
 
-/** The live service check: a small line in the public footer and on the overview. */
+/**
+ * The imprint line at the foot of the public pages: the server's version when it answers, and a
+ * plain sentence when it does not. Timings belong on a system page, not in front of visitors.
+ */
 export function HealthStatus({ className = '' }: { className?: string }) {
   const { data, error, isPending } = useQuery(healthQuery());
-  const base = `inline-flex items-start gap-2 text-sm ${className}`;
-  if (isPending) {
-    return (
-      <p role="status" className={`${base} text-ink-soft`}>
-        <span aria-hidden="true" className="mt-1.5 h-2 w-2 shrink-0 rounded-full bg-line-strong" />
-        Checking the service…
-      </p>
-    );
-  }
+  const base = `text-sm ${className}`;
+  if (isPending) return <p className={`${base} text-ink-soft`}>Wickstone</p>;
   if (error) {
-    const message = error instanceof ApiError ? error.body.message : 'The server cannot be reached';
+    const message = error instanceof ApiError ? error.body.message : 'the server cannot be reached';
     return (
       <p role="status" data-health="down" className={`${base} font-semibold text-bad`}>
-        <span aria-hidden="true" className="mt-1.5 h-2 w-2 shrink-0 rounded-full bg-bad" />
-        Service degraded: {message}
+        Wickstone is not answering just now ({message}). Try again in a minute.
       </p>
     );
   }
   return (
-    <p role="status" data-health="ok" className={`${base} text-ink-soft`}>
-      <span aria-hidden="true" className="mt-1.5 h-2 w-2 shrink-0 rounded-full bg-ok" />
-      <span>
-        <span className="font-semibold text-ok">Service healthy</span> · database round trip{' '}
-        {data.database.roundTripMs} ms · server {data.version}
-      </span>
+    <p data-health="ok" className={`${base} text-ink-soft`}>
+      Wickstone {data.version} · capillarity calculators for ground, damp and surface work
     </p>
   );
 }

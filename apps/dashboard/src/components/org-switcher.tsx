@@ -39,7 +39,7 @@ export function OrgSwitcher({ me, orgId, section }: { me: MeResponse; orgId: num
   }, [open]);
 
   if (me.memberships.length < 2) {
-    return <span className="min-w-0 truncate text-lg font-bold text-card">{current?.organizationName}</span>;
+    return <span className="block min-w-0 truncate font-bold">{current?.organizationName}</span>;
   }
   // In another organisation, stay on the same screen when the role there allows it.
   const entry = orgNav.find((n) => n.path === section);
@@ -51,7 +51,7 @@ export function OrgSwitcher({ me, orgId, section }: { me: MeResponse; orgId: num
         aria-expanded={open}
         aria-controls={listId}
         onClick={() => setOpenOn(open ? null : location.pathname)}
-        className="flex w-full min-w-0 items-center gap-2 rounded-md border border-brand-tint/30 px-2 py-1 text-left text-lg font-bold text-card hover:bg-brand sm:w-auto sm:max-w-md"
+        className="flex w-full min-w-0 items-center gap-2 rounded-sm border border-line-strong px-2 py-0.5 text-left font-bold text-ink hover:bg-paper-deep sm:w-auto sm:max-w-md"
       >
         <span className="sr-only">Organisation: </span>
         <span className="truncate">{current?.organizationName}</span>

@@ -50,8 +50,8 @@ export function PlanUsage({ summary }: { summary: BillingSummary }) {
             : 'Past the allowance, runs are still stored (marked) and widgets keep working.'
         }
       />
-      <Meter label="Live widgets" used={usage.liveWidgets} limit={limits.liveWidgets} />
-      <Meter label="Widgets, drafts included" used={usage.widgets} limit={limits.widgets} />
+      <Meter label="Widgets in service" used={usage.liveWidgets} limit={limits.liveWidgets} />
+      <Meter label="All widgets, those in preparation included" used={usage.widgets} limit={limits.widgets} />
     </div>
   );
 }

@@ -1,8 +1,9 @@
-import { unitGap, units, unitSymbol, type UnitId } from '@wickstone/calc-core';
+import { fromCanonical, getCalculator, units, type UnitId, type UnitSystemId } from '@wickstone/calc-core';
+import { displayUnitOf, unitGap, unitSymbol, withUnit } from '@wickstone/calc-core/display';
 import { formatValue } from '@wickstone/calc-core/format';
 import type { RunDetail, ShownValue } from '@wickstone/contracts';
 import { formatDateTime } from '../lib/labels';
-import { Badge, Card, Notice } from './ui';
+import { Card, Notice } from './ui';
 import { RunInputsTable } from './run-inputs-table';
 
 /** One stored step of the server's working: canonical value and unit, exactly as kept. */
@@ -17,6 +18,9 @@ interface StoredStep {
   unit: string;
   /** What stands between number and symbol: calc-core's one rule (`35°`, `20 °C`). */
   gap: string;
+  /** The value again in the visitor's units when they differ from the working's SI, as the widget shows it. */
+  converted: string | null;
+  source: string;
 }
 
 function unitOf(id: string): { unit: string; gap: string } {
@@ -31,7 +35,14 @@ const text = (v: unknown): string =>
  * The contract keeps the stored result as an open record (it is whatever the calculator wrote at
  * the time), so the steps are read defensively rather than trusted to a shape.
  */
-function storedSteps(result: RunDetail['serverResult']): StoredStep[] {
+function inVisitorUnits(value: unknown, id: string, system: UnitSystemId): string | null {
+  if (typeof value !== 'number' || !Object.hasOwn(units, id)) return null;
+  const unit = id as UnitId;
+  const shown = displayUnitOf({ kind: units[unit].kind }, system);
+  return shown === unit ? null : withUnit(formatValue(fromCanonical(value, shown)), shown);
+}
+
+function storedSteps(result: RunDetail['serverResult'], system: UnitSystemId): StoredStep[] {
   const working = result?.working;
   if (!Array.isArray(working)) return [];
   return working.map((raw: unknown) => {
@@ -43,6 +54,8 @@ function storedSteps(result: RunDetail['serverResult']): StoredStep[] {
       value: typeof s.value === 'number' ? formatValue(s.value) : text(s.value),
       exact: text(s.value),
       ...unitOf(text(s.unit)),
+      converted: inVisitorUnits(s.value, text(s.unit), system),
+      source: text(s.source),
     };
   });
 }
@@ -67,15 +80,50 @@ function ValueList({ title, values }: { title: string; values: readonly ShownVal
   );
 }
 
-/** A run as the firm reviews it: values, the stored working step by step, warnings, agreement. */
+const systemName: Record<UnitSystemId, string> = { si: 'metric (SI)', us: 'US customary' };
+
+interface StoredWarning {
+  code: string;
+  title: string | null;
+  message: string;
+}
+
+/** The warnings as the visitor read them: the calculator's title for each, and the stored sentence. */
+function storedWarnings(run: RunDetail): StoredWarning[] {
+  const calc = getCalculator(run.calculator.id);
+  const titleOf = (code: string) => calc?.warnings.find((w) => w.code === code)?.summary ?? null;
+  const stored = run.serverResult?.warnings;
+  const messages = new Map<string, string>();
+  if (Array.isArray(stored)) {
+    for (const raw of stored as unknown[]) {
+      if (typeof raw === 'object' && raw !== null) {
+        const w = raw as Record<string, unknown>;
+        if (typeof w.code === 'string') messages.set(w.code, text(w.message));
+      }
+    }
+  }
+  const codes = [...new Set([...run.warningCodes, ...messages.keys()])];
+  return codes.map((code) => ({ code, title: titleOf(code), message: messages.get(code) ?? '' }));
+}
+
+/** A run as the firm reviews it: what the visitor saw, in their units, then the stored working step by step. */
 export function RunRecord({ run }: { run: RunDetail }) {
-  const steps = storedSteps(run.serverResult);
+  const system = run.visitorUnitSystem;
+  const steps = storedSteps(run.serverResult, system);
+  const warnings = storedWarnings(run);
   return (
     <div className="space-y-4">
       <p className="text-sm text-ink-soft">
         {run.widget.name} · {run.calculator.title} ·{' '}
         <time dateTime={run.createdAt}>{formatDateTime(run.createdAt)}</time> · {run.origin} · release{' '}
         {run.release} · calculator version {run.calcVersion}
+      </p>
+      <p className="text-sm" data-visitor-units={system}>
+        Shown in <strong>{systemName[system]}</strong> units, as the visitor saw them
+        {run.unitSystem !== system
+          ? ` (the widget opens in ${systemName[run.unitSystem]}; the visitor switched)`
+          : ''}
+        .
       </p>
       {run.agreed ? (
         <Notice tone="ok">The server recomputed this run from its inputs and reached the same result.</Notice>
@@ -92,19 +140,23 @@ export function RunRecord({ run }: { run: RunDetail }) {
         </Notice>
       )}
       <div className="grid gap-4 md:grid-cols-2">
-        <ValueList title={`Inputs (${run.unitSystem.toUpperCase()} units)`} values={run.inputs} />
-        <ValueList title="Results shown" values={run.outputs} />
+        <ValueList title="Inputs the visitor set" values={run.inputs} />
+        <ValueList title="Results the visitor saw" values={run.outputs} />
       </div>
       {run.inputs.map((v) => (v.table ? <RunInputsTable key={v.id} value={v} /> : null))}
       <Card className="p-4">
         <h3 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">Warnings</h3>
-        {run.warningCodes.length === 0 ? (
+        {warnings.length === 0 ? (
           <p className="mt-2 text-sm text-ink-soft">No validity warning was raised.</p>
         ) : (
-          <ul className="mt-2 flex flex-wrap gap-2">
-            {run.warningCodes.map((c) => (
-              <li key={c}>
-                <Badge tone="warn">{c}</Badge>
+          <ul className="mt-2 space-y-3">
+            {warnings.map((w) => (
+              <li key={w.code} data-run-warning={w.code} className="text-sm">
+                <p className="font-semibold text-warn">
+                  {w.title ?? w.code}{' '}
+                  <code className="ml-1 font-mono text-xs font-normal text-ink-soft">{w.code}</code>
+                </p>
+                {w.message ? <p className="mt-0.5">{w.message}</p> : null}
               </li>
             ))}
           </ul>
@@ -114,6 +166,10 @@ export function RunRecord({ run }: { run: RunDetail }) {
         <h3 id={`working-${run.id}`} className="text-lg font-bold tracking-tight">
           Working, as stored
         </h3>
+        <p className="text-sm text-ink-soft">
+          Worked in SI, as the formulas are written; each value is repeated in the visitor&apos;s units where
+          they differ.
+        </p>
         {steps.length === 0 ? (
           <p className="text-sm text-ink-soft">No working was stored for this run.</p>
         ) : (
@@ -137,7 +193,9 @@ export function RunRecord({ run }: { run: RunDetail }) {
                   </strong>
                   {s.gap}
                   {s.unit}
+                  {s.converted ? <span className="text-ink-soft"> ({s.converted})</span> : null}
                 </p>
+                {s.source ? <p className="mt-1 text-xs text-ink-soft">{s.source}</p> : null}
               </li>
             ))}
           </ol>

@@ -154,12 +154,15 @@ export function Badge({
   );
 }
 
-/** The product mark and name, linking to the start; on the dark header band and brand panel. */
+/** The product mark and name, linking to the start. */
 export function BrandLink({
   large = false,
+  tone = 'dark',
   nameClassName = '',
 }: {
   large?: boolean;
+  /** `dark`: on the brand panel of the public pages; `light`: in the signed-in title block. */
+  tone?: 'dark' | 'light';
   nameClassName?: string;
 }) {
   return (
@@ -169,9 +172,29 @@ export function BrandLink({
       aria-label="Wickstone, to the start"
     >
       <img src="/favicon.svg" alt="" className={large ? 'h-8 w-8' : 'h-7 w-7'} />
-      <span className={`font-bold tracking-tight text-card ${large ? 'text-xl' : ''} ${nameClassName}`}>
+      <span
+        className={`font-bold tracking-tight ${tone === 'dark' ? 'text-card' : 'text-ink'} ${large ? 'text-xl' : ''} ${nameClassName}`}
+      >
         Wickstone
       </span>
     </Link>
+  );
+}
+
+/**
+ * An address, e-mail or URL that may wrap in a narrow table cell: it breaks only after its own
+ * punctuation (`.`, `/`, `@`, `-`, `:`), never inside a word, which `break-all` did.
+ */
+export function Breakable({ text }: { text: string }) {
+  const parts = text.split(/(?<=[./@:-])/);
+  return (
+    <>
+      {parts.map((part, i) => (
+        <span key={i}>
+          {part}
+          {i < parts.length - 1 ? <wbr /> : null}
+        </span>
+      ))}
+    </>
   );
 }

@@ -22,7 +22,7 @@ const sections = [
   ['widget-sheet', 'Calculation sheet'],
   ['widget-sites', 'Sites'],
   ['widget-embed', 'Embed code'],
-  ['widget-history', 'History'],
+  ['widget-history', 'Revisions'],
 ] as const;
 
 /** The section an error key belongs to, for the summary's links. */
@@ -37,10 +37,20 @@ function sectionOf(key: string): string {
   return 'widget-status';
 }
 
-export function EditorNav() {
+/** What a reader sees instead of the form (widget-summary), then the same last two sections. */
+const summarySections = [
+  ['summary-basics', 'Name, status and units'],
+  ['summary-inputs', 'Inputs'],
+  ['summary-look', 'Look'],
+  ['summary-visitors', 'Cautions, requests and sheets'],
+  ['widget-embed', 'Embed code'],
+  ['widget-history', 'Revisions'],
+] as const;
+
+export function EditorNav({ summary = false }: { summary?: boolean }) {
   return (
     <nav aria-label="Editor sections" className="flex flex-wrap gap-x-1 gap-y-1 text-sm">
-      {sections.map(([id, label]) => (
+      {(summary ? summarySections : sections).map(([id, label]) => (
         <a
           key={id}
           href={`#${id}`}

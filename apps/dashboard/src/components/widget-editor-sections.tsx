@@ -7,9 +7,9 @@ import { statusLabel } from './widget-status';
 /* The editor's three short sections; the longer ones have a file each (widget-inputs, widget-look, …). */
 
 const statusDetail: Record<WidgetStatus, string> = {
-  draft: 'Not shown anywhere yet; the embed code places nothing.',
-  live: 'Shown on the sites listed under Sites. Needs at least one site.',
-  paused: 'Taken off every site for now; nothing else changes.',
+  draft: 'Being set up: shown on no site yet, so the embed code places nothing.',
+  live: 'Working on the sites listed under Sites. Needs at least one site.',
+  paused: 'Taken off every site for now; its settings and records stay as they are.',
 };
 
 export function StatusSection({ draft, onChange, errors, readOnly }: SectionProps) {

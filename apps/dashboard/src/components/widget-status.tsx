@@ -1,11 +1,7 @@
-import type { WidgetStatus } from '@wickstone/contracts';
+import { widgetStatusWords, type WidgetStatus } from '@wickstone/contracts';
 import { Badge } from './ui';
 
-export const statusLabel: Record<WidgetStatus, string> = {
-  draft: 'Draft',
-  live: 'Live',
-  paused: 'Paused',
-};
+export const statusLabel = widgetStatusWords;
 
 const statusTone: Record<WidgetStatus, 'neutral' | 'brand' | 'warn'> = {
   draft: 'neutral',

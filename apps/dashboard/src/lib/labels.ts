@@ -10,8 +10,8 @@ export const roleLabel: Record<Role, string> = {
 /** One line on what each role is for, shown where a role is chosen. */
 export const roleSummary: Record<Role, string> = {
   owner: 'Everything an admin does, plus handing out and taking back the owner role.',
-  admin: 'Sets up widgets, brand and lead forms; manages the team.',
-  analyst: 'Reviews usage and works the leads.',
+  admin: 'Sets up widgets, brand and request forms; manages the team.',
+  analyst: 'Reviews usage and answers the enquiries.',
   developer:
     'Pins widgets to releases after previewing the change, and keeps the sites allowed to embed them.',
 };

@@ -1,10 +1,5 @@
-import { leadStatuses, type LeadStatus } from '@wickstone/contracts';
+import { leadStatuses, leadStatusWords } from '@wickstone/contracts';
 
-export const leadStatusLabel: Record<LeadStatus, string> = {
-  new: 'New',
-  contacted: 'Contacted',
-  qualified: 'Qualified',
-  closed: 'Closed',
-};
+export const leadStatusLabel = leadStatusWords;
 
 export const leadStatusOptions = leadStatuses.map((s) => ({ value: s, label: leadStatusLabel[s] }));

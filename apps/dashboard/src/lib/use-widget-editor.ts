@@ -127,6 +127,14 @@ export function useWidgetEditor(
     });
   };
 
+  /** A restore saved elsewhere on the page: the draft becomes what is saved now. */
+  const adopt = (next: Widget, message: string) => {
+    setDraft(draftFromWidget(next, calc));
+    setAttempted(false);
+    setServerErrors({});
+    setOutcome({ tone: 'ok', text: message });
+  };
+
   const discard = () => {
     setDraft(saved);
     setAttempted(false);
@@ -148,5 +156,6 @@ export function useWidgetEditor(
     onChange,
     save,
     discard,
+    adopt,
   };
 }

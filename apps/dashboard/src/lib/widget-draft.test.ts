@@ -108,7 +108,9 @@ describe('checks before saving', () => {
 
   it('asks a live widget for a site and checks each origin by its line', () => {
     const live = { ...fresh(), status: 'live' as const };
-    expect(errorsOf(live).allowedOrigins).toBe('A live widget needs at least one site allowed to embed it');
+    expect(errorsOf(live).allowedOrigins).toBe(
+      'A widget in service needs at least one site allowed to embed it',
+    );
     const sites = {
       ...live,
       sitesText:

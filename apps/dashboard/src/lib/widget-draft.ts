@@ -398,7 +398,7 @@ export function validateDraft(
   });
   if (raw.allowedOrigins.length > MAX_SITES) add('allowedOrigins', `At most ${MAX_SITES} sites`);
   if (draft.status === 'live' && raw.allowedOrigins.length === 0) {
-    add('allowedOrigins', 'A live widget needs at least one site allowed to embed it');
+    add('allowedOrigins', 'A widget in service needs at least one site allowed to embed it');
   }
   raw.settings.leadForm.notify.forEach((line, i) => {
     const problem = checkEmail(line);

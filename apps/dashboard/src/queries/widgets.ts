@@ -67,6 +67,26 @@ export function useUpdateWidget(orgId: number, widgetId: number) {
   });
 }
 
+/** Puts an earlier revision back: a save like any other, so the same three things change. */
+export function useRestoreRevision(orgId: number, widgetId: number) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async (revisionId: number) =>
+      widgetSchema.parse(
+        await apiFetch(`/orgs/${orgId}/widgets/${widgetId}/revisions/${revisionId}/restore`, {
+          method: 'POST',
+        }),
+      ),
+    onSuccess: async (widget: Widget) => {
+      client.setQueryData(widgetKey(orgId, widgetId), widget);
+      await Promise.all([
+        client.invalidateQueries({ queryKey: [...widgetsKey(orgId), 'list'] }),
+        client.invalidateQueries({ queryKey: [...widgetKey(orgId, widgetId), 'revisions'] }),
+      ]);
+    },
+  });
+}
+
 /** A logo upload: multipart, field `file`, through the same client (CSRF token, error shape) as every call. */
 async function uploadAsset(orgId: number, file: File): Promise<Asset> {
   const form = new FormData();

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { AuditEntry } from '@wickstone/contracts';
+import { leadStatusWords, widgetStatusWords, type AuditEntry } from '@wickstone/contracts';
 import { auditLabel, formatDateTime, roleLabel } from '../lib/labels';
 import { useOrg } from '../lib/org-context';
 import { usePageTitle } from '../lib/use-page-title';
@@ -34,17 +34,28 @@ function detailText(entry: AuditEntry): string {
     .map(([k, v]) => {
       const key = k.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
       if (v === true) return key;
+      // A stored status code reads as the word the screens use for it.
+      const statusWords: Record<string, string> | null =
+        k !== 'status'
+          ? null
+          : entry.type.startsWith('lead.')
+            ? leadStatusWords
+            : entry.type.startsWith('widget.')
+              ? widgetStatusWords
+              : null;
       const word = (x: unknown): string =>
         x === null || x === undefined
           ? 'none'
-          : typeof x === 'string' && x in roleLabel
-            ? roleLabel[x as keyof typeof roleLabel]
-            : typeof x === 'object'
-              ? // A small record (a plan and its standing): its fields in words, not JSON.
-                Object.entries(x)
-                  .map(([k, y]) => `${k} ${String(y)}`)
-                  .join(', ')
-              : String(x);
+          : typeof x === 'string' && statusWords && x in statusWords
+            ? (statusWords[x] ?? x)
+            : typeof x === 'string' && x in roleLabel
+              ? roleLabel[x as keyof typeof roleLabel]
+              : typeof x === 'object'
+                ? // A small record (a plan and its standing): its fields in words, not JSON.
+                  Object.entries(x)
+                    .map(([k, y]) => `${k} ${String(y)}`)
+                    .join(', ')
+                : String(x);
       const value = Array.isArray(v)
         ? v.map(word).join(', ')
         : typeof v === 'object' && v !== null && 'from' in v && 'to' in v

@@ -35,7 +35,7 @@ const count = new Intl.NumberFormat('en-GB');
 function features(p: Plan): string[] {
   const l = p.limits;
   return [
-    `${l.liveWidgets} live ${l.liveWidgets === 1 ? 'widget' : 'widgets'} (${l.widgets} in all)`,
+    `${l.liveWidgets} ${l.liveWidgets === 1 ? 'widget' : 'widgets'} in service (${l.widgets} in all)`,
     `${count.format(l.runsPerMonth)} logged runs a month`,
     l.sheets ? 'Calculation sheets' : 'No calculation sheets',
     l.shippedFonts ? 'Your brand font in the widget' : "The visitor's system font",
@@ -59,8 +59,8 @@ function Standing({ summary }: { summary: BillingSummary }) {
       return (
         <Notice tone="bad">
           Payment for the {plans[summary.subscribedPlan].name} plan did not go through, so the{' '}
-          {plans.bench.name} plan&apos;s limits apply. Live widgets keep working; no more can go live until
-          the firm pays again.
+          {plans.bench.name} plan&apos;s limits apply. Widgets in service keep working; no more can be put in
+          service until the firm pays again.
         </Notice>
       );
     case 'ending':

@@ -31,8 +31,8 @@ function Contact({ lead }: { lead: LeadDetail }) {
       <h2 className="text-lg font-bold tracking-tight">Contact</h2>
       {lead.erasedAt ? (
         <Notice tone="info" className="mt-2">
-          The personal data of this lead was erased on {formatDateTime(lead.erasedAt)}. The run it came from
-          stays, so the usage figures do not change.
+          The personal data of this enquiry was erased on {formatDateTime(lead.erasedAt)}. The run it came
+          from stays, so the usage figures do not change.
         </Notice>
       ) : (
         <dl className="mt-2 grid grid-cols-[8rem_minmax(0,1fr)] gap-x-4 gap-y-1.5 text-sm">
@@ -89,7 +89,7 @@ function WorkForm({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
           // Show what the server now holds, and say so where it is announced.
           setStatus(l.status);
           setAssignee(l.assignee ? String(l.assignee.id) : '');
-          setSaved(`Saved: the lead is ${leadStatusLabel[l.status].toLowerCase()}.`);
+          setSaved(`Saved. Status: ${leadStatusLabel[l.status]}.`);
         },
       },
     );
@@ -107,7 +107,7 @@ function WorkForm({ lead, writable }: { lead: LeadDetail; writable: boolean }) {
     <Card className="p-4">
       <h2 className="text-lg font-bold tracking-tight">Follow-up</h2>
       {!writable ? (
-        <p className="mt-1 text-sm text-ink-soft">Your role can read this lead but not change it.</p>
+        <p className="mt-1 text-sm text-ink-soft">Your role can read this enquiry but not change it.</p>
       ) : null}
       <form onSubmit={submit} noValidate className="mt-3 space-y-4">
         <FormError message={formError} />
@@ -239,19 +239,19 @@ function Erase({ lead }: { lead: LeadDetail }) {
 }
 
 export function LeadPage() {
-  usePageTitle('Lead');
+  usePageTitle('Enquiry');
   const { orgId, role } = useOrg();
   const leadId = Number(useParams().leadId);
   const valid = Number.isInteger(leadId) && leadId > 0;
   const lead = useQuery({ ...leadQuery(orgId, valid ? leadId : 0), enabled: valid });
 
   let body;
-  if (!valid) body = <ErrorState title="This is not a lead's address" error={null} />;
-  else if (lead.isPending) body = <LoadingState label="Loading the lead…" />;
+  if (!valid) body = <ErrorState title="This is not an enquiry's address" error={null} />;
+  else if (lead.isPending) body = <LoadingState label="Loading the enquiry…" />;
   else if (lead.isError)
     body = (
       <ErrorState
-        title="This lead could not be loaded"
+        title="This enquiry could not be loaded"
         error={lead.error}
         onRetry={() => void lead.refetch()}
       />
@@ -286,14 +286,14 @@ export function LeadPage() {
 
   return (
     <section className="space-y-6">
-      <TextLink to={orgPath(orgId, 'leads')}>← Back to leads</TextLink>
+      <TextLink to={orgPath(orgId, 'leads')}>← Back to enquiries</TextLink>
       <PageHeader
         title={
           lead.data
             ? lead.data.erasedAt
-              ? `Lead ${lead.data.id}`
-              : (lead.data.name ?? `Lead ${lead.data.id}`)
-            : 'Lead'
+              ? `Enquiry ${lead.data.id}`
+              : (lead.data.name ?? `Enquiry ${lead.data.id}`)
+            : 'Enquiry'
         }
         lead={lead.data ? <LeadStatusBadge lead={lead.data} /> : undefined}
       />

@@ -13,7 +13,7 @@ import { widgetListQuery } from '../queries/widgets';
 import { table } from '../components/table';
 import { NoSuchPage, PagedTable } from '../components/paged-table';
 import { EmptyState, ErrorState, LoadingState } from '../components/states';
-import { Badge, PageHeader, buttonClass } from '../components/ui';
+import { Badge, Breakable, PageHeader, buttonClass } from '../components/ui';
 import { FilterBar, FilterSelect, FilterSearch } from '../components/filter-controls';
 
 const pageSize = 25;
@@ -37,11 +37,11 @@ function LeadRow({ lead }: { lead: Lead }) {
           to={orgPath(orgId, `leads/${lead.id}`)}
           className="font-semibold text-brand underline decoration-brand/30 underline-offset-4 hover:decoration-brand"
         >
-          {lead.erasedAt ? 'Personal data erased' : (lead.name ?? lead.email ?? `Lead ${lead.id}`)}
+          {lead.erasedAt ? 'Personal data erased' : (lead.name ?? lead.email ?? `Enquiry ${lead.id}`)}
         </Link>
         {!lead.erasedAt ? (
-          <span className="block text-xs break-all text-ink-soft">
-            {[lead.email, lead.company].filter(Boolean).join(' · ')}
+          <span className="block text-xs text-ink-soft">
+            <Breakable text={[lead.email, lead.company].filter(Boolean).join(' · ')} />
           </span>
         ) : null}
       </td>
@@ -62,7 +62,7 @@ function LeadRow({ lead }: { lead: Lead }) {
 }
 
 export function LeadsPage() {
-  usePageTitle('Leads');
+  usePageTitle('Enquiries');
   const { orgId } = useOrg();
   const [params, set] = useFilterParams();
   const page = pageParam(params);
@@ -76,11 +76,11 @@ export function LeadsPage() {
   const filtered = filters !== '';
 
   let body;
-  if (leads.isPending) body = <LoadingState label="Loading the leads…" />;
+  if (leads.isPending) body = <LoadingState label="Loading the enquiries…" />;
   else if (leads.isError)
     body = (
       <ErrorState
-        title="The leads could not be loaded"
+        title="The enquiries could not be loaded"
         error={leads.error}
         onRetry={() => void leads.refetch()}
       />
@@ -90,7 +90,7 @@ export function LeadsPage() {
       page > 1 ? (
         <NoSuchPage page={page} onFirst={() => set('page', '')} />
       ) : (
-        <EmptyState title={filtered ? 'No lead matches these filters' : 'No leads yet'}>
+        <EmptyState title={filtered ? 'No enquiry matches these filters' : 'No enquiries yet'}>
           {filtered
             ? 'Clear a filter to see more.'
             : 'When a visitor asks for a site assessment from one of your widgets, the request lands here and the firm is e-mailed.'}
@@ -100,12 +100,12 @@ export function LeadsPage() {
     body = (
       <div className="space-y-3">
         <PagedTable
-          noun="leads"
+          noun="enquiries"
           page={page}
           pageSize={pageSize}
           total={leads.data.total}
           onPage={(p) => set('page', p === 1 ? '' : String(p))}
-          caption="Leads, newest first"
+          caption="Enquiries, newest first"
           loading={leads.isPlaceholderData}
           columns={[
             { label: 'Status' },
@@ -127,7 +127,7 @@ export function LeadsPage() {
   return (
     <section className="space-y-6">
       <PageHeader
-        title="Leads"
+        title="Enquiries"
         lead="Visitors who asked for a site assessment after using a widget. Take one, note what was agreed, and move it along."
         actions={
           <a

@@ -1,14 +1,16 @@
 import { useQuery } from '@tanstack/react-query';
 import { can, plans } from '@wickstone/contracts';
 import { useOrg } from '../lib/org-context';
-import { roleLabel, roleSummary } from '../lib/labels';
+import { formatDate, roleLabel, roleSummary } from '../lib/labels';
+import { utcDay } from '../lib/usage-filters';
+import { leadListQuery, usageSummaryQuery } from '../queries/usage';
+import { widgetListQuery } from '../queries/widgets';
 import { usePageTitle } from '../lib/use-page-title';
 import { orgPath } from '../nav';
 import { membersQuery } from '../queries/members';
 import { planQuery } from '../queries/billing';
 import { PlanUsage } from '../components/plan-usage';
-import { HealthStatus } from '../components/health-status';
-import { Card, PageHeader, Spinner, TextLink } from '../components/ui';
+import { Breakable, Card, PageHeader, Spinner, TextLink } from '../components/ui';
 import { describeError } from '../components/states';
 
 function TeamSummary() {
@@ -62,15 +64,188 @@ function PlanSummary() {
           </TextLink>
         ) : null}
       </div>
-      {plan.isPending ? (
-        <p role="status" className="flex items-center gap-2 text-ink-soft">
-          <Spinner /> Reading the plan…
-        </p>
-      ) : plan.isError ? (
-        <p className="text-bad">{describeError(plan.error)}</p>
-      ) : (
+      {plan.isSuccess ? (
         <PlanUsage summary={plan.data} />
+      ) : (
+        <Waiting query={plan} label="Reading the plan…" />
       )}
+    </Card>
+  );
+}
+
+/** A card's body while its data is on the way, or why it did not come. */
+function Waiting({ query, label }: { query: { isError: boolean; error: unknown }; label: string }) {
+  if (query.isError) return <p className="text-bad">{describeError(query.error)}</p>;
+  return (
+    <p role="status" className="flex items-center gap-2 text-ink-soft">
+      <Spinner /> {label}
+    </p>
+  );
+}
+
+const ruleHeading = 'text-sm font-semibold tracking-wider text-ink-soft uppercase';
+
+/** One figure with its words, or the state of fetching it. */
+function Figure({
+  query,
+  value,
+  unit,
+  testId,
+}: {
+  query: { isPending: boolean; isError: boolean; error: unknown };
+  value: number | undefined;
+  unit: (n: number) => string;
+  testId: string;
+}) {
+  if (query.isPending || query.isError || value === undefined)
+    return <Waiting query={query} label="Counting…" />;
+  return (
+    <p className="text-3xl font-bold tracking-tight tabular-nums">
+      <span data-figure={testId}>{value}</span>
+      <span className="ml-2 text-base font-semibold text-ink-soft">{unit(value)}</span>
+    </p>
+  );
+}
+
+/** The analyst's first question: who is waiting for a reply. */
+function EnquiriesWaiting() {
+  const { orgId } = useOrg();
+  const waiting = useQuery(leadListQuery(orgId, 'status=new&sort=createdAt&page=1&pageSize=3'));
+  return (
+    <Card className="space-y-3 p-5">
+      <h2 className={ruleHeading}>Enquiries awaiting a reply</h2>
+      <Figure
+        query={waiting}
+        value={waiting.data?.total}
+        unit={(n) => (n === 1 ? 'enquiry' : 'enquiries')}
+        testId="enquiries-waiting"
+      />
+      {waiting.data && waiting.data.items.length > 0 ? (
+        <ul className="space-y-1 text-sm">
+          {waiting.data.items.map((l) => (
+            <li key={l.id}>
+              <TextLink to={orgPath(orgId, `leads/${l.id}`)}>
+                {l.erasedAt ? `Enquiry ${l.id}` : (l.name ?? l.email ?? `Enquiry ${l.id}`)}
+              </TextLink>{' '}
+              <span className="text-ink-soft">
+                via {l.widget.name}, {formatDate(l.createdAt)}
+              </span>
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      <TextLink to={`${orgPath(orgId, 'leads')}?status=new`} className="text-sm">
+        Every enquiry awaiting a reply
+      </TextLink>
+    </Card>
+  );
+}
+
+/** The admin's: which widgets are working on which sites, and how much they were used this week. */
+function WidgetsAtWork() {
+  const { orgId } = useOrg();
+  const widgets = useQuery(widgetListQuery(orgId, 1, 100));
+  const inService = widgets.data?.items.filter((w) => w.status === 'live') ?? [];
+  const sites = new Set(inService.flatMap((w) => w.allowedOrigins));
+  return (
+    <Card className="space-y-3 p-5">
+      <h2 className={ruleHeading}>Widgets in service</h2>
+      <Figure
+        query={widgets}
+        value={widgets.data ? inService.length : undefined}
+        unit={() => `on ${sites.size} ${sites.size === 1 ? 'site' : 'sites'}`}
+        testId="widgets-in-service"
+      />
+      {inService.length > 0 ? (
+        <ul className="space-y-1 text-sm">
+          {inService.slice(0, 4).map((w) => (
+            <li key={w.id}>
+              <TextLink to={orgPath(orgId, `widgets/${w.id}`)}>{w.name}</TextLink>{' '}
+              <span className="text-ink-soft">
+                on <Breakable text={w.allowedOrigins.join(', ')} />
+              </span>
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      <TextLink to={orgPath(orgId, 'widgets')} className="text-sm">
+        All widgets
+      </TextLink>
+    </Card>
+  );
+}
+
+function RunsThisWeek() {
+  const { orgId } = useOrg();
+  const from = utcDay(-6);
+  const to = utcDay(0);
+  const summary = useQuery(usageSummaryQuery(orgId, `from=${from}&to=${to}`));
+  const totals = summary.data?.totals;
+  return (
+    <Card className="space-y-3 p-5">
+      <h2 className={ruleHeading}>Runs in the last 7 days</h2>
+      <Figure
+        query={summary}
+        value={totals?.runs}
+        unit={(n) => (n === 1 ? 'run' : 'runs')}
+        testId="runs-this-week"
+      />
+      {totals ? (
+        <p className="text-sm text-ink-soft">
+          {totals.withWarning} with a validity warning · {totals.withLead} led to an enquiry · week before:{' '}
+          {summary.data?.previous.totals.runs ?? 0}
+        </p>
+      ) : null}
+      <TextLink to={`${orgPath(orgId, 'usage')}?from=${from}&to=${to}`} className="text-sm">
+        Usage for these days
+      </TextLink>
+    </Card>
+  );
+}
+
+/** The developer's: which release each widget runs, and (when the server counts them) refused pages. */
+function ReleasesInUse() {
+  const { orgId } = useOrg();
+  const widgets = useQuery(widgetListQuery(orgId, 1, 100));
+  const byRelease = new Map<string, string[]>();
+  for (const w of widgets.data?.items ?? [])
+    byRelease.set(w.release, [...(byRelease.get(w.release) ?? []), w.name]);
+  return (
+    <Card className="space-y-3 p-5">
+      <h2 className={ruleHeading}>Releases in use</h2>
+      {!widgets.isSuccess ? (
+        <Waiting query={widgets} label="Reading the widgets…" />
+      ) : byRelease.size === 0 ? (
+        <p className="text-sm text-ink-soft">No widget yet.</p>
+      ) : (
+        <ul className="space-y-1 text-sm" data-releases-in-use>
+          {[...byRelease].map(([release, names]) => (
+            <li key={release}>
+              <span className="font-semibold tabular-nums">Release {release}</span>{' '}
+              <span className="text-ink-soft">
+                · {names.length} {names.length === 1 ? 'widget' : 'widgets'}: {names.join(', ')}
+              </span>
+            </li>
+          ))}
+        </ul>
+      )}
+    </Card>
+  );
+}
+
+/*
+ * SLOT (developer overview): pages refused because their origin is not allowed, and whether a
+ * newer release is ready for each pin. The server does not count refused origins on this branch;
+ * the card says so rather than show a figure it does not have.
+ */
+function RefusedOrigins() {
+  return (
+    <Card className="space-y-2 p-5" data-slot="refused-origins">
+      <h2 className={ruleHeading}>Refused pages</h2>
+      <p className="text-sm text-ink-soft">
+        Pages that tried to show a widget from a site it does not allow will be counted here. The server does
+        not count them yet.
+      </p>
     </Card>
   );
 }
@@ -78,22 +253,21 @@ function PlanSummary() {
 export function OverviewPage() {
   const { organizationName, role } = useOrg();
   usePageTitle(organizationName);
+  const analystWork = can(role, 'leads:read');
+  const adminWork = can(role, 'widgets:write');
+  const developerWork = role === 'developer';
   return (
     <section className="space-y-6">
-      <PageHeader title={organizationName} lead="Overview of your organisation's workspace." />
+      <PageHeader title={organizationName} lead={`${roleLabel[role]} · ${roleSummary[role]}`} />
       <div className="grid gap-4 sm:grid-cols-2">
-        <Card className="space-y-3 p-5">
-          <h2 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">Your role</h2>
-          <p className="text-3xl font-bold tracking-tight">{roleLabel[role]}</p>
-          <p className="text-sm text-ink-soft">{roleSummary[role]}</p>
-        </Card>
+        {analystWork ? <EnquiriesWaiting /> : null}
+        {adminWork ? <WidgetsAtWork /> : null}
+        {adminWork || role === 'analyst' ? <RunsThisWeek /> : null}
+        {developerWork ? <ReleasesInUse /> : null}
+        {developerWork ? <RefusedOrigins /> : null}
         <TeamSummary />
       </div>
       <PlanSummary />
-      <Card className="flex flex-wrap items-center justify-between gap-3 px-5 py-4">
-        <h2 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">Service</h2>
-        <HealthStatus />
-      </Card>
     </section>
   );
 }

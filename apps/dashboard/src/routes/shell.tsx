@@ -12,11 +12,15 @@ import { OrgSwitcher } from '../components/org-switcher';
 import { BrandLink, LiveMessage } from '../components/ui';
 import type { NoticeState } from './login';
 
+/* A register of the firm's pages: ruled rows, each numbered like the sheets of a report. */
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
   [
-    'block whitespace-nowrap rounded-md px-3 py-2 text-sm font-semibold transition-colors',
-    isActive ? 'bg-brand-tint text-brand-strong' : 'text-ink-soft hover:bg-paper-deep hover:text-ink',
+    'flex items-center gap-3 border-b border-line px-2 py-2 text-sm transition-colors',
+    isActive ? 'font-bold text-ink' : 'font-semibold text-ink-soft hover:bg-paper-deep hover:text-ink',
   ].join(' ');
+
+const titleCell = 'flex min-w-0 flex-col justify-center px-4 py-2 sm:px-5';
+const titleLabel = 'text-xs font-semibold tracking-wider text-ink-soft uppercase';
 
 /** The frame around every signed-in screen: whose organisation, what this role may open, who is signed in. */
 export function AppShell() {
@@ -27,6 +31,7 @@ export function AppShell() {
   const logout = useLogout();
   const [signingOut, setSigningOut] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
+  const [navOpen, setNavOpen] = useState(false);
   const orgMatch = useMatch({ path: '/orgs/:orgId/*' });
   const sectionMatch = useMatch({ path: '/orgs/:orgId/:section/*' });
 
@@ -63,6 +68,25 @@ export function AppShell() {
     });
   };
 
+  const entries = membership && role ? orgNav.filter((entry) => can(role, entry.permission)) : [];
+  const links: { key: string; to: string; label: string; end: boolean }[] = [
+    ...entries.map((entry) => ({
+      key: entry.path || 'overview',
+      to: orgPath(membership!.organizationId, entry.path),
+      label: entry.label,
+      end: entry.path === '',
+    })),
+    { key: 'account', to: '/account', label: 'Your account', end: false },
+    ...(account.memberships.length > 1 || !membership
+      ? [{ key: 'orgs', to: '/orgs', label: 'Organisations', end: true }]
+      : []),
+  ];
+  const here = links.find((l) =>
+    l.end
+      ? location.pathname === l.to
+      : location.pathname === l.to || location.pathname.startsWith(`${l.to}/`),
+  );
+
   return (
     <div className="min-h-screen">
       <a
@@ -71,34 +95,44 @@ export function AppShell() {
       >
         Skip to content
       </a>
-      <header className="on-dark bg-brand-strong text-brand-tint">
-        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-5 gap-y-3 px-4 py-3 sm:px-6">
-          <BrandLink nameClassName="hidden sm:inline" />
-          <span aria-hidden="true" className="hidden h-6 w-px bg-brand-tint/25 sm:block" />
-          {membership ? (
-            <div className="order-last flex w-full min-w-0 items-center gap-3 sm:order-none sm:w-auto sm:flex-1">
-              <OrgSwitcher me={account} orgId={membership.organizationId} section={section} />
-              <span className="shrink-0 rounded-full border border-brand-tint/30 px-2 py-0.5 text-xs font-semibold">
-                {roleLabel[membership.role]}
-              </span>
+      {/* The frame reads like the title block of a drawing sheet: who, which firm, in what role. */}
+      <header className="border-b-2 border-ink bg-card">
+        <div className="mx-auto flex max-w-7xl flex-wrap items-stretch sm:flex-nowrap">
+          <div className="flex items-center px-4 py-2 sm:px-6">
+            <BrandLink tone="light" nameClassName="hidden sm:inline" />
+          </div>
+          <dl className="order-last flex w-full min-w-0 border-t border-line sm:order-none sm:w-auto sm:flex-1 sm:border-t-0 sm:border-l">
+            <div className={`${titleCell} flex-1`}>
+              <dt className={titleLabel}>Organisation</dt>
+              <dd className="min-w-0">
+                {membership ? (
+                  <OrgSwitcher me={account} orgId={membership.organizationId} section={section} />
+                ) : (
+                  <span className="text-ink-soft">None yet</span>
+                )}
+              </dd>
             </div>
-          ) : (
-            <span className="order-last w-full text-brand-tint/80 sm:order-none sm:w-auto sm:flex-1">
-              No organisation
-            </span>
-          )}
-          <div className="ml-auto flex items-center gap-3">
-            <Link
-              to="/account"
-              className="hidden max-w-[14rem] truncate rounded-md text-sm font-semibold text-card hover:underline md:inline"
-            >
-              {account.user.name}
-            </Link>
+            {membership ? (
+              <div className={`${titleCell} flex-none border-l border-line`}>
+                <dt className={titleLabel}>Role</dt>
+                <dd className="font-semibold">{roleLabel[membership.role]}</dd>
+              </div>
+            ) : null}
+            <div className={`${titleCell} hidden flex-none border-l border-line md:flex`}>
+              <dt className={titleLabel}>Signed in</dt>
+              <dd className="min-w-0">
+                <Link to="/account" className="block max-w-[14rem] truncate font-semibold hover:underline">
+                  {account.user.name}
+                </Link>
+              </dd>
+            </div>
+          </dl>
+          <div className="ml-auto flex items-center border-l border-line px-4 py-2 sm:px-5">
             <button
               type="button"
               onClick={signOut}
               disabled={logout.isPending}
-              className="rounded-md border border-brand-tint/40 px-3 py-1 text-sm font-semibold text-card hover:bg-brand disabled:opacity-60"
+              className="rounded-md px-2 py-1 text-sm font-semibold text-brand underline decoration-brand/30 underline-offset-4 hover:decoration-brand disabled:opacity-60"
             >
               {logout.isPending ? 'Signing out…' : 'Sign out'}
             </button>
@@ -106,37 +140,56 @@ export function AppShell() {
         </div>
       </header>
 
-      <div className="mx-auto max-w-7xl md:grid md:grid-cols-[13rem_1fr] md:gap-8 md:px-6">
+      <div className="mx-auto max-w-7xl md:grid md:grid-cols-[14rem_1fr] md:gap-8 md:px-6">
         <nav aria-label="Main" className="border-b border-line bg-paper md:border-b-0 md:py-8">
-          <ul className="flex gap-1 overflow-x-auto px-4 py-2 md:flex-col md:overflow-visible md:p-0">
-            {membership && role
-              ? orgNav
-                  .filter((entry) => can(role, entry.permission))
-                  .map((entry) => (
-                    <li key={entry.path}>
-                      <NavLink
-                        to={orgPath(membership.organizationId, entry.path)}
-                        end={entry.path === ''}
-                        className={navLinkClass}
+          {/* On a phone the contents fold behind one button that names where you are and how many pages there are. */}
+          <button
+            type="button"
+            aria-expanded={navOpen}
+            aria-controls="main-contents"
+            onClick={() => setNavOpen((o) => !o)}
+            className="flex w-full items-center justify-between gap-3 px-4 py-3 text-left md:hidden"
+          >
+            <span className="min-w-0">
+              <span className="block text-xs font-semibold tracking-wider text-ink-soft uppercase">
+                Contents · {links.length} pages
+              </span>
+              <span className="block truncate font-bold">{here?.label ?? 'Choose a page'}</span>
+            </span>
+            <span
+              aria-hidden="true"
+              className="shrink-0 rounded-sm border border-line-strong px-2 py-0.5 text-sm"
+            >
+              {navOpen ? 'Close ▴' : 'All ▾'}
+            </span>
+          </button>
+          <p className="hidden px-3 pb-2 text-xs font-semibold tracking-wider text-ink-soft uppercase md:block">
+            Contents
+          </p>
+          <ol
+            id="main-contents"
+            className={`${navOpen ? 'block' : 'hidden'} border-t border-line px-2 pb-3 md:block md:px-0 md:pb-0`}
+          >
+            {links.map((l, i) => (
+              <li key={l.key} className={l.key === 'account' ? 'md:mt-4' : undefined}>
+                <NavLink to={l.to} end={l.end} className={navLinkClass} onClick={() => setNavOpen(false)}>
+                  {({ isActive }) => (
+                    <>
+                      <span
+                        aria-hidden="true"
+                        className={`inline-flex h-6 w-7 shrink-0 items-center justify-center rounded-sm text-xs tabular-nums ${
+                          isActive ? 'bg-brand text-card' : 'border border-line-strong text-ink-soft'
+                        }`}
                       >
-                        {entry.label}
-                      </NavLink>
-                    </li>
-                  ))
-              : null}
-            <li className="md:mt-4 md:border-t md:border-line md:pt-4">
-              <NavLink to="/account" className={navLinkClass}>
-                Your account
-              </NavLink>
-            </li>
-            {account.memberships.length > 1 || !membership ? (
-              <li>
-                <NavLink to="/orgs" end className={navLinkClass}>
-                  Organisations
+                        {String(i + 1).padStart(2, '0')}
+                      </span>
+                      {l.label}
+                    </>
+                  )}
                 </NavLink>
               </li>
-            ) : null}
-          </ul>
+            ))}
+          </ol>
         </nav>
         <main id="main" tabIndex={-1} className="min-w-0 space-y-6 px-4 py-6 sm:px-6 md:px-0 md:py-8">
           <LiveMessage message={problem} tone="bad" />

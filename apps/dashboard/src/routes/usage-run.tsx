@@ -42,7 +42,7 @@ export function RunPage() {
               {can(role, 'leads:read') ? (
                 <>
                   {' · '}
-                  <TextLink to={orgPath(orgId, `leads/${lead.id}`)}>Open the lead</TextLink>
+                  <TextLink to={orgPath(orgId, `leads/${lead.id}`)}>Open the enquiry</TextLink>
                 </>
               ) : null}
             </p>

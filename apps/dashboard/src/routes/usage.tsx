@@ -11,7 +11,7 @@ import { widgetListQuery } from '../queries/widgets';
 import { table } from '../components/table';
 import { NoSuchPage, PagedTable } from '../components/paged-table';
 import { EmptyState, ErrorState, LoadingState } from '../components/states';
-import { Badge, Card, PageHeader, buttonClass } from '../components/ui';
+import { Badge, Breakable, Card, PageHeader, buttonClass } from '../components/ui';
 import { FilterBar, FilterDate, FilterSelect } from '../components/filter-controls';
 import { RunsPerDayChart } from '../components/usage-chart';
 
@@ -80,8 +80,8 @@ function Breakdown({
           <tbody>
             {rows.map((r) => (
               <tr key={r.key} className="border-t border-line tabular-nums">
-                <th scope="row" className="py-1 pr-2 text-left font-normal break-all">
-                  {r.label}
+                <th scope="row" className="py-1 pr-2 text-left font-normal">
+                  <Breakable text={r.label} />
                 </th>
                 <td className="py-1 text-right">{r.runs}</td>
                 <td className="py-1 text-right">{r.withLead}</td>
@@ -190,8 +190,8 @@ function RunRow({ run }: { run: RunListItem }) {
           <span className="text-ink-soft">None</span>
         )}
       </td>
-      <td data-label="Site" className={`${tdClass} ${table.labelled} break-all`}>
-        {run.origin}
+      <td data-label="Site" className={`${tdClass} ${table.labelled}`}>
+        <Breakable text={run.origin} />
         <span className="block text-xs text-ink-soft">release {run.release}</span>
       </td>
       <td className={tdClass}>
@@ -266,7 +266,7 @@ export function UsagePage() {
         <NoSuchPage page={page} onFirst={() => set('page', '')} />
       ) : (
         <EmptyState title="No runs match these filters">
-          Runs appear here as visitors use your live widgets. Widen the dates or clear a filter.
+          Runs appear here as visitors use your widgets in service. Widen the dates or clear a filter.
         </EmptyState>
       );
   else {

@@ -4,6 +4,7 @@ import { useBlocker, useParams } from 'react-router';
 import { getCalculator, type CalculatorDefinition } from '@wickstone/calc-core';
 import { can, type Widget } from '@wickstone/contracts';
 import { ApiError } from '../lib/api';
+import { formatDateTime } from '../lib/labels';
 import { useOrg } from '../lib/org-context';
 import { usePageTitle } from '../lib/use-page-title';
 import { useWidgetEditor } from '../lib/use-widget-editor';
@@ -27,6 +28,7 @@ import { LeadFormSection } from '../components/widget-lead-form';
 import { LookSection } from '../components/widget-look';
 import { SitesSection } from '../components/widget-sites';
 import { StatusBadge } from '../components/widget-status';
+import { WidgetSummary } from '../components/widget-summary';
 
 /** Asks before leaving with unsaved changes: in the page for a link (no browser dialog), by the browser for a reload. */
 function useLeaveGuard(dirty: boolean) {
@@ -80,21 +82,29 @@ export function Editor({
   return (
     <div className="space-y-5" onKeyDown={onKeyDown}>
       {!editable ? (
-        <Notice>You can read every setting and copy the embed code. Owners and admins change widgets.</Notice>
+        <Notice>
+          What this widget is set to, and its embed code to copy. Owners and admins change widgets.
+        </Notice>
       ) : null}
       <div className="@container space-y-5">
-        <EditorNav />
+        <EditorNav summary={!editable} />
         <div className="grid items-start gap-6 @4xl:grid-cols-[minmax(0,1fr)_26rem]">
           <div ref={formRef} className="min-w-0 space-y-5" data-widget-editor>
             {editor.attempted ? <ErrorSummary ref={summaryRef} errors={editor.errors} calc={calc} /> : null}
-            <StatusSection {...props} />
-            <InputsSection {...props} />
-            <UnitsSection {...props} />
-            <LookSection {...props} fallbackColors={editor.fallbackColors} />
-            <CautionsSection {...props} />
-            <LeadFormSection {...props} />
-            <SheetSection {...props} />
-            <SitesSection {...props} />
+            {editable ? (
+              <>
+                <StatusSection {...props} />
+                <InputsSection {...props} />
+                <UnitsSection {...props} />
+                <LookSection {...props} fallbackColors={editor.fallbackColors} />
+                <CautionsSection {...props} />
+                <LeadFormSection {...props} />
+                <SheetSection {...props} />
+                <SitesSection {...props} />
+              </>
+            ) : (
+              <WidgetSummary widget={widget} calc={calc} />
+            )}
             <EmbedCodeSection widget={widget} dirty={editor.dirty} />
             <ReleaseSection orgId={orgId} widget={widget} role={role} />
             <HistorySection
@@ -102,6 +112,18 @@ export function Editor({
               widgetId={widget.id}
               calc={calc}
               system={widget.settings.units.system}
+              restore={
+                editable
+                  ? {
+                      allowed: !editor.dirty,
+                      onRestored: (w, n) =>
+                        editor.adopt(
+                          w,
+                          `Revision ${n} restored at ${formatDateTime(w.updatedAt)}, as a new revision.`,
+                        ),
+                    }
+                  : undefined
+              }
             />
           </div>
           <PreviewPanel widget={widget} preview={editor.preview} dirty={editor.dirty} />

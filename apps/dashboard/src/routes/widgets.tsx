@@ -11,7 +11,7 @@ import { widgetListQuery } from '../queries/widgets';
 import { table } from '../components/table';
 import { NoSuchPage, PagedTable } from '../components/paged-table';
 import { EmptyState, ErrorState, LoadingState } from '../components/states';
-import { ButtonLink, PageHeader } from '../components/ui';
+import { Breakable, ButtonLink, PageHeader } from '../components/ui';
 import { StatusBadge } from '../components/widget-status';
 
 const pageSize = 25;
@@ -21,8 +21,8 @@ function Sites({ widget }: { widget: Widget }) {
   const [first, ...rest] = widget.allowedOrigins;
   if (!first) return <span className="text-ink-soft">None yet</span>;
   return (
-    <span className="break-all">
-      {first}
+    <span>
+      <Breakable text={first} />
       {rest.length ? <span className="text-ink-soft"> and {rest.length} more</span> : null}
     </span>
   );

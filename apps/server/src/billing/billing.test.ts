@@ -275,7 +275,7 @@ describe('the subscription over time', () => {
     const before = await snapshotTables(t.db.sequelize);
     const refused = await owner.post(`/orgs/${org.id}/billing/plan`, { plan: 'field' }).expect(409);
     const err = errorBodySchema.parse(refused.body).error;
-    expect(err.message).toMatch(/take 1 of them down first/);
+    expect(err.message).toMatch(/put 1 of them on hold first/);
     expect(err.details).toMatchObject({ takeDown: 1, limit: 5 });
     expect(await snapshotTables(t.db.sequelize)).toEqual(before);
     expect(

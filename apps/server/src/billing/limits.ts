@@ -34,9 +34,9 @@ export async function assertLiveRoom(
   if (live.length < plan.limits.liveWidgets) return;
   throw new AppError(
     'plan_limit',
-    `The ${plan.name} plan allows ${plan.limits.liveWidgets} live ${widgetWord(plan.limits.liveWidgets)}, and ` +
-      `${live.map((w) => `"${w.name}"`).join(', ')} ${live.length === 1 ? 'is' : 'are'} live. ` +
-      'Take one down, or an owner can move to a larger plan under Billing.',
+    `The ${plan.name} plan allows ${plan.limits.liveWidgets} ${widgetWord(plan.limits.liveWidgets)} in service, and ` +
+      `${live.map((w) => `"${w.name}"`).join(', ')} ${live.length === 1 ? 'is' : 'are'} in service. ` +
+      'Put one on hold, or an owner can move to a larger plan under Billing.',
     { plan: plan.id, limit: plan.limits.liveWidgets, live, upgrade: upgradePath(orgId) },
   );
 }
@@ -61,8 +61,8 @@ export async function assertFitsPlan(orgId: number, target: Plan): Promise<void>
   if (excess <= 0) return;
   throw new AppError(
     'conflict',
-    `The ${target.name} plan allows ${target.limits.liveWidgets} live ${widgetWord(target.limits.liveWidgets)} and ${live.length} are live: ` +
-      `take ${excess} of them down first (${live.map((w) => `"${w.name}"`).join(', ')}).`,
+    `The ${target.name} plan allows ${target.limits.liveWidgets} ${widgetWord(target.limits.liveWidgets)} in service and ${live.length} are in service: ` +
+      `put ${excess} of them on hold first (${live.map((w) => `"${w.name}"`).join(', ')}).`,
     { plan: target.id, limit: target.limits.liveWidgets, takeDown: excess, live },
   );
 }

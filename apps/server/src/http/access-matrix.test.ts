@@ -56,6 +56,7 @@ describe('the route table', () => {
       'GET /api/v1/orgs/:orgId/widgets/:widgetId': 'widgets:read',
       'PATCH /api/v1/orgs/:orgId/widgets/:widgetId': 'widgets:write',
       'GET /api/v1/orgs/:orgId/widgets/:widgetId/revisions': 'widgets:read',
+      'POST /api/v1/orgs/:orgId/widgets/:widgetId/revisions/:revisionId/restore': 'widgets:write',
       'POST /api/v1/orgs/:orgId/assets': 'assets:write',
       // issue 6: every member reads usage; owners, admins and analysts work leads; owners and admins set retention
       'GET /api/v1/orgs/:orgId/runs': 'usage:read',

@@ -404,11 +404,12 @@ describe('leads', () => {
       expect(formula[5]).toBe(`'=HYPERLINK("http://evil.example","click")`);
       expect(formula[7]).toBe("'+44 Builders");
       expect(res.text).toContain(`"'=HYPERLINK(""http://evil.example"",""click"")"`);
-      expect(formula[3]).toBe('contacted');
+      // The status in the words the dashboard shows, not the stored code.
+      expect(formula[3]).toBe('Replied');
       // The erased lead: its status and times stay, its person is gone.
       const erased = rows[2]!;
       expect(erased.slice(5, 11)).toEqual(['', '', '', '', '', '']);
-      expect(erased[3]).toBe('qualified');
+      expect(erased[3]).toBe('Visit proposed');
       expect(erased[15]).toMatch(/^\d{4}-\d{2}-\d{2}T/);
       expect(
         (await analyst.get(`/orgs/${org.id}/leads/export?status=new`).expect(200)).text.split('\r\n').length,

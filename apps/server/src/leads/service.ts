@@ -9,6 +9,7 @@ import type {
   LeadListResponse,
   UpdateLeadBody,
 } from '@wickstone/contracts';
+import { leadStatusWords } from '@wickstone/contracts';
 import { Lead, LeadNote, Membership, Run, User, Widget } from '../db/models/index.js';
 import { AppError, fieldError, notFound } from '../errors.js';
 import { keysetCsv } from '../export/csv.js';
@@ -324,7 +325,8 @@ export function createLeadService(deps: { sequelize: Sequelize; runs: RunService
               l.id,
               l.createdAt,
               l.updatedAt,
-              l.status,
+              // People read the export: the status in words, as the dashboard shows it.
+              leadStatusWords[l.status],
               l.widget.name,
               l.name,
               l.email,

@@ -150,8 +150,9 @@ export interface ShownRun {
 }
 
 /**
- * The key inputs and the outputs the visitor saw, in the calculator's order and the widget's unit
- * system. A calculator this server no longer has shows its stored numbers as they are.
+ * The key inputs (those the visitor could set: not locked or hidden by the firm, and sent) and the
+ * outputs the visitor saw, in the calculator's order and the unit system the visitor saw. A calculator
+ * this server no longer has shows its stored numbers as they are.
  */
 export function showRun(
   calculatorId: string,

@@ -252,13 +252,18 @@ describe('runs', () => {
       expect(r).toMatchObject({ origin: SITE, agreed: true, leadId: null, warningCodes: [] });
     });
 
-    it('shows a US widget in inches and feet even when the visitor had switched to SI', async () => {
+    it('shows a run of a US widget in the SI units the visitor had switched to, as they saw it', async () => {
       const r = await find(ids.jan12!);
       expect(r.unitSystem).toBe('us');
       expect(r.visitorUnitSystem).toBe('si');
-      expect(r.inputs.find((v) => v.id === 'd10')).toMatchObject({ unit: 'in' });
-      expect(r.inputs.find((v) => v.id === 'd10')!.value as number).toBeCloseTo(0.0001 / 0.0254, 12);
-      expect(r.outputs.find((v) => v.id === 'capillaryRise')).toMatchObject({ unit: 'ft' });
+      expect(r.inputs.find((v) => v.id === 'd10')).toMatchObject({ unit: 'mm', text: '0.1 mm' });
+      expect(r.outputs.find((v) => v.id === 'capillaryRise')).toMatchObject({ unit: 'm' });
+      // The US visitor of the same widget sees inches and feet.
+      const us = await find(ids.jan15!);
+      expect(us.visitorUnitSystem).toBe('us');
+      expect(us.inputs.find((v) => v.id === 'd10')).toMatchObject({ unit: 'in' });
+      expect(us.inputs.find((v) => v.id === 'd10')!.value as number).toBeCloseTo(0.00002 / 0.0254, 12);
+      expect(us.inputs.find((v) => v.id === 'waterTableDepth')).toMatchObject({ unit: 'ft' });
     });
 
     it('says which run led to a lead', async () => {

@@ -139,7 +139,9 @@ export function createRunService(deps: { sequelize: Sequelize; reads?: Sequelize
 
   function item(row: RunColumns, widgets: Map<number, WidgetInfo>): RunListItem {
     const w = widgets.get(Number(row.widget_id));
-    const system = w?.settings.units.system ?? row.unit_system;
+    // As the visitor saw it: the unit system they had chosen, stored with the run. The widget's
+    // own system may have changed since, or the visitor may have switched.
+    const system = row.unit_system;
     const shown = showRun(
       row.calculator_id,
       w?.settings ?? { inputs: {} },
@@ -152,8 +154,8 @@ export function createRunService(deps: { sequelize: Sequelize; reads?: Sequelize
       createdAt: toDate(row.created_at).toISOString(),
       widget: { id: Number(row.widget_id), name: w?.name ?? `Widget ${row.widget_id}` },
       calculator: { id: row.calculator_id, title: shown.title },
-      unitSystem: system,
-      visitorUnitSystem: row.unit_system,
+      unitSystem: w?.settings.units.system ?? row.unit_system,
+      visitorUnitSystem: system,
       inputs: shown.inputs,
       outputs: shown.outputs,
       warningCodes: jsonValue<string[]>(row.warning_codes),

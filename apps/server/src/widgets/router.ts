@@ -6,6 +6,7 @@ import {
   setReleasePinBodySchema,
   updateWidgetBodySchema,
   widgetParamsSchema,
+  widgetRevisionParamsSchema,
 } from '@wickstone/contracts';
 import { auditTrail, type AuditService } from '../audit/service.js';
 import type { ApiRoutes } from '../http/routes.js';
@@ -75,6 +76,20 @@ export function widgetRoutes(routes: ApiRoutes, widgets: WidgetService, audit: A
         params.widgetId,
         session.user.id,
         body.pin,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
+    }),
+  );
+
+  routes.post(
+    '/orgs/:orgId/widgets/:widgetId/revisions/:revisionId/restore',
+    { access: 'widgets:write', params: widgetRevisionParamsSchema },
+    async ({ org, session, params, meta }) => ({
+      body: await widgets.restore(
+        org.id,
+        params.widgetId,
+        params.revisionId,
+        session.user.id,
         auditTrail(audit, org.id, session.user.id, meta),
       ),
     }),

@@ -62,6 +62,18 @@ export interface WidgetService {
    * published and the server restarted); returns how many moved.
    */
   followPins(): Promise<number>;
+  /**
+   * Puts back the name, sites and settings the widget had after revision `revisionId`, as a new
+   * save (so it is itself in the history and the audit log, which names the revision). The status
+   * stays as it is now: restoring settings never puts a widget on or off a site by surprise.
+   */
+  restore(
+    orgId: number,
+    widgetId: number,
+    revisionId: number,
+    actorId: number,
+    trail?: AuditTrail,
+  ): Promise<WidgetDto>;
   toDto(widget: Widget): WidgetDto;
 }
 
@@ -272,7 +284,7 @@ export function createWidgetService(deps: {
     return version;
   }
 
-  return {
+  const service: WidgetService = {
     toDto: (w) => toDto(w),
 
     async setPin(orgId, widgetId, actorId, pin, trail) {
@@ -389,7 +401,7 @@ export function createWidgetService(deps: {
         if (after.status === 'live' && after.allowedOrigins.length === 0) {
           throw fieldError(
             'body.allowedOrigins',
-            'A live widget needs at least one site allowed to embed it',
+            'A widget in service needs at least one site allowed to embed it',
           );
         }
         if (after.status === 'live' && before.status !== 'live')
@@ -417,6 +429,28 @@ export function createWidgetService(deps: {
         );
         return dto(w);
       });
+    },
+
+    async restore(orgId, widgetId, revisionId, actorId, trail) {
+      await find(orgId, widgetId);
+      const revision = await WidgetRevision.findOne({
+        where: { id: revisionId, widgetId, organizationId: orgId },
+      });
+      if (!revision) throw new AppError('not_found', 'Revision not found');
+      const snap = revision.snapshot as Partial<ReturnType<typeof snapshot>>;
+      return service.update(
+        orgId,
+        widgetId,
+        actorId,
+        {
+          ...(snap.name !== undefined ? { name: snap.name } : {}),
+          ...(snap.allowedOrigins !== undefined ? { allowedOrigins: snap.allowedOrigins } : {}),
+          ...(snap.settings !== undefined ? { settings: snap.settings } : {}),
+        },
+        trail &&
+          ((entry, transaction) =>
+            trail({ ...entry, details: { ...entry.details, restoredRevision: revisionId } }, transaction)),
+      );
     },
 
     async revisions(orgId, widgetId, page, pageSize) {
@@ -447,4 +481,5 @@ export function createWidgetService(deps: {
       };
     },
   };
+  return service;
 }

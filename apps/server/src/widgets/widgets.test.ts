@@ -178,6 +178,59 @@ describe('widgets API', () => {
     expect(await WidgetRevision.count({ where: { widgetId: w.id } })).toBe(2);
   });
 
+  it('restores the name, sites and settings of an earlier revision as a new, audited save, keeping the status', async () => {
+    const w = await create('Restorable');
+    const settings = structuredClone(w.settings);
+    settings.cautions = 'Readings on site govern.';
+    await owner
+      .patch(`/orgs/${org.id}/widgets/${w.id}`, {
+        name: 'Restorable, changed',
+        settings,
+        allowedOrigins: ['https://www.restore.example'],
+        status: 'live',
+      })
+      .expect(200);
+    const revisions = (await analyst.get(`/orgs/${org.id}/widgets/${w.id}/revisions`).expect(200)).body as {
+      items: { id: number }[];
+    };
+    const first = revisions.items.at(-1)!.id;
+    // Analysts may read the history but not restore from it; another firm cannot reach it at all.
+    await analyst.post(`/orgs/${org.id}/widgets/${w.id}/revisions/${first}/restore`).expect(403);
+    await outsider.post(`/orgs/${other.id}/widgets/${w.id}/revisions/${first}/restore`).expect(404);
+    const otherWidget = await create('Someone else');
+    await owner.post(`/orgs/${org.id}/widgets/${otherWidget.id}/revisions/${first}/restore`).expect(404);
+
+    // Going back to the first revision would leave a widget in service with no site: refused, nothing changes.
+    const refused = await owner
+      .post(`/orgs/${org.id}/widgets/${w.id}/revisions/${first}/restore`)
+      .expect(400);
+    expect(fieldsOf(refused.body).map((f) => f.field)).toEqual(['body.allowedOrigins']);
+    expect(await WidgetRevision.count({ where: { widgetId: w.id } })).toBe(2);
+    await owner.patch(`/orgs/${org.id}/widgets/${w.id}`, { status: 'paused' }).expect(200);
+
+    const restored = widgetSchema.parse(
+      (await owner.post(`/orgs/${org.id}/widgets/${w.id}/revisions/${first}/restore`).expect(200)).body,
+    );
+    expect(restored).toMatchObject({ name: 'Restorable', status: 'paused', allowedOrigins: [] });
+    expect(restored.settings).toEqual(w.settings);
+    const latest = (await analyst.get(`/orgs/${org.id}/widgets/${w.id}/revisions`).expect(200)).body as {
+      items: { changes: { path: string; before: unknown; after: unknown }[] }[];
+      total: number;
+    };
+    expect(latest.total).toBe(4);
+    expect(latest.items[0]?.changes).toContainEqual({
+      path: 'settings.cautions',
+      before: 'Readings on site govern.',
+      after: '',
+    });
+    const audit = (await owner.get(`/orgs/${org.id}/audit`).expect(200)).body as {
+      items: { type: string; details: Record<string, unknown> }[];
+    };
+    expect(audit.items.find((e) => e.type === 'widget.updated' && e.details.restoredRevision)).toMatchObject({
+      details: { widgetId: w.id, restoredRevision: first },
+    });
+  });
+
   it('lets analysts read but not change, and hides widgets from other organisations', async () => {
     const w = await create('Scoped');
     await analyst.patch(`/orgs/${org.id}/widgets/${w.id}`, { name: 'nope' }).expect(403);
