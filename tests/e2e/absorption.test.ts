@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import type { Browser, Page } from 'playwright-core';
 import { calculate } from '@wickstone/calc-core';
-import { formatValue } from '@wickstone/calc-core/format';
+import { formatResult } from '@wickstone/calc-core/answer';
 import { seedOrgWithTeam, type FixtureOrg } from '@wickstone/server/testing';
 import { launchBrowser, screenshot } from '../support/browser.js';
 import { startApp, type RunningApp } from '../support/server.js';
@@ -146,11 +146,11 @@ describe('absorption coefficient from an uploaded CSV, in Chromium', () => {
     expect(aw).toBeGreaterThan(0);
     const shown = widget(page).locator('[data-output="absorptionCoefficient"]');
     await shown.waitFor();
-    expect(await shown.textContent()).toContain(formatValue(aw ?? 0));
+    expect(await shown.textContent()).toContain(formatResult(aw ?? 0));
     // Per root hour: 60 × the per-root-second figure (√3600 s = 60 √s).
     expect(
       await widget(page).locator('[data-output="absorptionCoefficientPerRootHour"]').textContent(),
-    ).toContain(formatValue((aw ?? 0) * 60));
+    ).toContain(formatResult((aw ?? 0) * 60));
     const chart = widget(page).locator('[data-wickstone="chart"]');
     await chart.waitFor();
     expect(await chart.locator('[data-wickstone="fit-line"]').count()).toBe(1);

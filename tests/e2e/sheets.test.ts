@@ -16,7 +16,7 @@ import {
   withUnit,
   type CalculationResult,
 } from '@wickstone/calc-core';
-import { formatValue } from '@wickstone/calc-core/format';
+import { formatResult } from '@wickstone/calc-core/answer';
 import { seedOrgWithTeam, type FixtureOrg } from '@wickstone/server/testing';
 import { launchBrowser, screenshot } from '../support/browser.js';
 import { startApp, type RunningApp } from '../support/server.js';
@@ -137,7 +137,7 @@ describe('calculation sheet from the demo site in Chromium: download, read, veri
     const calc = getCalculator('tube-rise')!;
     const rise = calc.outputs.find((o) => o.id === 'rise')!;
     const unit = displayUnitOf(rise, 'si');
-    const figure = withUnit(formatValue(fromCanonical(r.outputs.rise as number, unit)), unit);
+    const figure = withUnit(formatResult(fromCanonical(r.outputs.rise as number, unit)), unit);
 
     // The result as the widget showed it: one formatting rule for the widget and the sheet.
     expect(collapse(await result.innerText())).toContain(figure);

@@ -99,7 +99,7 @@ describe('trade calculators in the widget editor and on a firm’s page', () => 
     await editor.getByLabel('For visitors: The wall dries from', { exact: true }).selectOption('locked');
     await expect.poll(() => preview.locator('[data-input="wallThickness"]').inputValue()).toBe('450');
     await editor.getByLabel('Allowed origins').fill(site.origin);
-    await editor.getByRole('radio', { name: /^Live/ }).check();
+    await editor.getByRole('radio', { name: /^In service/ }).check();
     await page.getByRole('button', { name: 'Save changes' }).click();
     await page.locator('[data-status="live"]').waitFor();
     await screenshot(page, 'trade-editor-rising-damp-desktop');

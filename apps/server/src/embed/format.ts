@@ -1,3 +1,4 @@
+import { formatResult } from '@wickstone/calc-core/answer';
 import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 import {
   displayUnitOf,
@@ -10,10 +11,14 @@ import {
   type UnitSystemId,
 } from '@wickstone/calc-core';
 
-/** A canonical value in the unit the widget shows it in, with its symbol spaced as everywhere else. */
+/**
+ * A canonical value in the unit the widget shows it in, written as the widget writes it (3
+ * significant figures, no powers of ten: calc-core's `formatResult`), its symbol spaced as everywhere
+ * else: the sheet and the e-mails print the figure the visitor saw.
+ */
 export function shown(value: number, item: Displayable, system: UnitSystemId): string {
   const unit = displayUnitOf(item, system);
-  return withUnit(formatNumber(fromCanonical(value, unit)), unit);
+  return withUnit(formatResult(fromCanonical(value, unit)), unit);
 }
 
 /**

@@ -12,6 +12,7 @@ import {
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { ShownValue, WidgetSettings } from '@wickstone/contracts';
+import { formatResult } from '@wickstone/calc-core/answer';
 import { formatValue as formatNumber } from '@wickstone/calc-core/format';
 
 /** An input as stored: a number, a choice value, or a table's rows. */
@@ -32,7 +33,12 @@ export interface ValuePrinter {
 }
 
 /** The printer of a definition: the definition's own unit for the system, else the system's unit for its kind. */
-export function valuePrinter(def: InputDefinition | OutputDefinition, system: UnitSystemId): ValuePrinter {
+export function valuePrinter(
+  def: InputDefinition | OutputDefinition,
+  system: UnitSystemId,
+  /** How a figure is written on screen: results as the widget writes them (3 s.f.), inputs in full. */
+  figure: (n: number) => string = formatNumber,
+): ValuePrinter {
   const base = { id: def.id, label: def.label };
   const rows = (raw: readonly unknown[]) => `${raw.length} rows`;
   if (def.kind === 'table') {
@@ -71,10 +77,11 @@ export function valuePrinter(def: InputDefinition | OutputDefinition, system: Un
     typeof raw === 'number' ? formatNumber(toShown(raw)) + suffix : typeof raw === 'object' ? rows(raw) : raw;
   return {
     ...base,
+    // The export keeps every figure's digits; the screens write them as the visitor saw them.
     text,
     shown: (raw) =>
       typeof raw === 'number'
-        ? { ...base, value: toShown(raw), unit: symbol, text: text(raw) }
+        ? { ...base, value: toShown(raw), unit: symbol, text: figure(toShown(raw)) + suffix }
         : { ...base, value: typeof raw === 'object' ? null : raw, unit: null, text: text(raw) },
   };
 }
@@ -120,7 +127,7 @@ export function runPrinter(
   }
   const editable = (id: string) => (settings.inputs[id]?.mode ?? 'editable') === 'editable';
   const inputs = calc.inputs.filter((i) => editable(i.id)).map((i) => valuePrinter(i, system));
-  const outputs = calc.outputs.map((o) => valuePrinter(o, system));
+  const outputs = calc.outputs.map((o) => valuePrinter(o, system, formatResult));
   return {
     title: calc.title,
     inputs: (sent) => {
