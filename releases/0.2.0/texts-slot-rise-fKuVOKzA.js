@@ -1,0 +1,2 @@
+Wickstone._d("0.2.0/texts-slot-rise-fKuVOKzA.js",function($wkr){const{l:e,n:t,o:n,r,s:i,t:a}=$wkr("shared-texts-eg4Lld6Y.js");;var o={cautions:[r,{code:`REAL_CRACKS`,text:`Real cracks taper, branch and are rough; the parallel-wall result is an upper-bound style estimate for the narrowest sustained width, not a measurement.`},a,t],references:[{id:`jurin-slot`,citation:`Force balance of Jurin's law per unit length of two parallel plates, as in standard capillarity texts`,usedFor:`h = 2σ cos θ/(ρ g w)`,basis:`common practice`},i,...e,...n]};return{"texts":o}
+});
