@@ -63,7 +63,10 @@ export function fitLine(points: readonly { readonly x: number; readonly y: numbe
     });
   const slope = sxy / sxx;
   const intercept = meanY - slope * meanX;
-  const rSquared = syy === 0 ? 1 : (sxy * sxy) / (sxx * syy);
+  // As two ratios, not Sxy²/(Sxx·Syy): with gains near the smallest doubles (a balance reading 0 and
+  // 1e-166 kg) the products underflow to 0/0. Clamped to [0, 1] against rounding; no spread in y is 1.
+  const raw = (sxy / sxx) * (sxy / syy);
+  const rSquared = syy === 0 || !Number.isFinite(raw) ? 1 : Math.min(1, Math.max(0, raw));
   return { n, slope, intercept, rSquared, meanX, meanY, sxx, sxy, syy };
 }
 
