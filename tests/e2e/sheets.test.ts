@@ -56,7 +56,7 @@ describe('calculation sheet from the demo site in Chromium: download, read, veri
       if (req.url !== '/') return void res.writeHead(404).end();
       res
         .writeHead(200, { 'content-type': 'text/html; charset=utf-8' })
-        .end(template.replace('{{WIDGET_1}}', snippet).replace(/\{\{WIDGET_\d+\}\}/g, ''));
+        .end(template.replace('{{WIDGET_1}}', snippet).replace(/\{\{WIDGET_[A-Z0-9_]+\}\}/g, ''));
     });
     await new Promise<void>((resolve) => site.listen(0, '127.0.0.1', resolve));
     siteOrigin = `http://127.0.0.1:${(site.address() as AddressInfo).port}`;
