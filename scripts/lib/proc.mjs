@@ -11,13 +11,18 @@ export function log(msg) {
 
 /** Run a command to completion with inherited output; throws on a non-zero exit. */
 export function run(cmd, args, opts = {}) {
-  const r = spawnSync(cmd, args, { stdio: 'inherit', cwd: root, ...opts });
+  succeeded(spawnSync(cmd, args, { stdio: 'inherit', cwd: root, ...opts }), cmd, args);
+}
+
+/** The finished command's result, or an error naming it (its exit code on `exitCode`). */
+function succeeded(r, cmd, args) {
   if (r.error) throw r.error;
   if (r.status !== 0) {
     const err = new Error(`${cmd} ${args.join(' ')} exited with ${r.status ?? r.signal}`);
     err.exitCode = r.status ?? 1;
     throw err;
   }
+  return r;
 }
 
 /** Run a command, its errors shown as they come, and return what it printed (throws as `run`). */
@@ -28,14 +33,9 @@ export function runCapture(cmd, args, opts = {}) {
     encoding: 'utf8',
     ...opts,
   });
-  if (r.error) throw r.error;
-  if (r.status !== 0) {
-    process.stdout.write(r.stdout ?? '');
-    const err = new Error(`${cmd} ${args.join(' ')} exited with ${r.status ?? r.signal}`);
-    err.exitCode = r.status ?? 1;
-    throw err;
-  }
-  return r.stdout ?? '';
+  // On failure what it printed is shown before the error.
+  if (r.status !== 0) process.stdout.write(r.stdout ?? '');
+  return succeeded(r, cmd, args).stdout ?? '';
 }
 
 /** Run a command and return its exit code (for the test runner, whose code we pass on). */

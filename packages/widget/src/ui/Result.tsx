@@ -45,6 +45,24 @@ function Figure({ value, unit }: { value: number; unit: UnitId }) {
   );
 }
 
+/**
+ * A result's cautions: its own (the chosen liquid's hazard first), then the calculator's from its
+ * texts, which follow first paint (the widget's engine computes without them).
+ */
+export function resultCautions(
+  calculator: Pick<CalculatorDefinition, 'cautions'>,
+  result: Pick<CalculationResult, 'cautions'>,
+): CalculationResult['cautions'] {
+  return [
+    ...result.cautions,
+    ...calculator.cautions.filter((c) => !result.cautions.some((r) => r.code === c.code)),
+  ];
+}
+
+/** A caution about the liquid itself, shown beside the figures rather than in the notes. */
+export const isHazard = (c: { code: string }): boolean =>
+  c.code.startsWith('HAZARD_') || c.code === 'OTHER_LIQUID_HAZARD';
+
 /** The firm's own cautions: one per paragraph or line, blank lines ignored. */
 export function splitCautions(text: string): string[] {
   return text
@@ -114,13 +132,7 @@ export function Result({
     return w ? [{ output: o, warning: w }] : [];
   });
   const inputLabel = (id: string): string => calculator.inputs.find((i) => i.id === id)?.label ?? id;
-  // The result's own cautions: the chosen liquid's hazard first, then the calculator's (from its
-  // texts, which follow first paint: the widget's engine computes without them).
-  const cautions = [
-    ...result.cautions,
-    ...calculator.cautions.filter((c) => !result.cautions.some((r) => r.code === c.code)),
-  ];
-  const hazards = cautions.filter((c) => c.code.startsWith('HAZARD_') || c.code === 'OTHER_LIQUID_HAZARD');
+  const hazards = resultCautions(calculator, result).filter(isHazard);
   return (
     <section
       class={stale ? 'result is-stale' : 'result'}

@@ -3,7 +3,7 @@ import { formatResult, isSecondaryOutput } from '@wickstone/calc-core/answer';
 import { referencesFor } from '@wickstone/calc-core/display';
 import { inReaderUnits, readWarning, warningTitle } from '@wickstone/calc-core/wording';
 import { displayUnitOf, formatValue, outputUnitFor, toDisplay, unitKind, withUnit } from '../lib/units.js';
-import { Readout, splitCautions } from './Result.js';
+import { isHazard, Readout, resultCautions, splitCautions } from './Result.js';
 
 interface WorkingProps {
   readonly calculator: CalculatorDefinition;
@@ -116,12 +116,7 @@ export function Notes(props: NotesProps) {
   const supporting = calculator.outputs.filter(
     (o) => isSecondaryOutput(o) && typeof result.outputs[o.id] === 'number',
   );
-  // The result's cautions, then the calculator's own from its texts (the widget's engine computes
-  // without them: they follow first paint).
-  const general = [
-    ...result.cautions,
-    ...calculator.cautions.filter((c) => !result.cautions.some((r) => r.code === c.code)),
-  ].filter((c) => !c.code.startsWith('HAZARD_') && c.code !== 'OTHER_LIQUID_HAZARD');
+  const general = resultCautions(calculator, result).filter((c) => !isHazard(c));
   return (
     <>
       <Warnings {...props} />
