@@ -50,7 +50,15 @@ export interface TestReleases {
  * that version, with an engine bundled from calc-core's build changed by `TEST_ENGINE_CHANGE`.
  * Needs calc-core, contracts and the widget's dependencies built (`npm run test:env` does it).
  */
-export async function publishTestReleases(newer = '0.2.0'): Promise<TestReleases> {
+/** The version the widget's source builds as: the release the test publishes beside 0.1.0. */
+const sourceVersion = (): string =>
+  (
+    JSON.parse(readFileSync(path.join(repo, 'packages', 'widget', 'package.json'), 'utf8')) as {
+      version: string;
+    }
+  ).version;
+
+export async function publishTestReleases(newer = sourceVersion()): Promise<TestReleases> {
   const tmp = mkdtempSync(path.join(tmpdir(), 'wst-test-releases-'));
   const dir = path.join(tmp, 'releases');
   mkdirSync(dir);
