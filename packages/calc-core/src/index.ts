@@ -107,12 +107,20 @@ export {
 } from './formulas/wicking.js';
 
 export { canonicalJson, sha256Hex, type JsonValue } from './hash.js';
-export { runCalculation, resolveInputs, hashInputs, resultsAgree } from './calculators/engine.js';
+export {
+  runCalculation,
+  computeCalculation,
+  computer,
+  resolveInputs,
+  hashInputs,
+  resultsAgree,
+} from './calculators/engine.js';
 export {
   calculators,
   calculatorIds,
   getCalculator,
   calculate,
+  compute,
   withTexts,
   tubeRise as tubeRiseCalculator,
   slotRise as slotRiseCalculator,
@@ -156,6 +164,7 @@ export type {
   CalculatorDefinition,
   CalculatorTexts,
   Caution,
+  ComputedResult,
   ChoiceInput,
   ChoiceOption,
   Condition,

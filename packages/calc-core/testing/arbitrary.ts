@@ -51,3 +51,19 @@ export function arbitraryInputs(
   }
   return fc.record(fields);
 }
+
+/** Every choice from its options, every number over its whole range (log-uniform where it spans decades). */
+export function anyInputs(
+  def: CalculatorDefinition,
+): fc.Arbitrary<Record<string, number | string | TableRow[]>> {
+  return arbitraryInputs(def, (input) => {
+    if (input.min > 0 && input.max / input.min > 100) {
+      const lo = Math.log(input.min);
+      const hi = Math.log(input.max);
+      return fc
+        .double({ min: 0, max: 1, noNaN: true })
+        .map((u) => Math.min(input.max, Math.max(input.min, Math.exp(lo + u * (hi - lo)))));
+    }
+    return fc.double({ min: input.min, max: input.max, noNaN: true });
+  });
+}

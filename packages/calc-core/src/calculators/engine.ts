@@ -10,6 +10,8 @@ import type {
   CalculationResult,
   CalculatorCore,
   CalculatorTexts,
+  Caution,
+  ComputedResult,
   InputDefinition,
   InputValue,
   InputValues,
@@ -107,9 +109,10 @@ export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
   return resolved;
 }
 
-function checkSolution(def: CalculatorCore, solution: Solution): void {
+/** `withWorking` false checks the numbers only: the working (a warning's step) is then never built. */
+function checkSolution(def: CalculatorCore, solution: Solution, withWorking: boolean): void {
   // A definition that breaks its own contract is a bug in calc-core, not a bad input: plain Error.
-  const { outputs, warnings, working } = solution;
+  const { outputs, warnings } = solution;
   for (const out of def.outputs) {
     const v = outputs[out.id];
     if (v === undefined || (v !== null && !Number.isFinite(v))) {
@@ -117,10 +120,10 @@ function checkSolution(def: CalculatorCore, solution: Solution): void {
     }
   }
   const declared = new Set(def.warnings.map((w) => w.code));
-  const steps = new Set(working.map((s) => s.id).filter((id) => id !== undefined));
+  const steps = withWorking ? new Set(solution.working.map((s) => s.id)) : null;
   for (const w of warnings) {
     if (!declared.has(w.code)) throw new Error(`${def.id}: warning ${w.code} is not declared`);
-    if (w.step !== undefined && !steps.has(w.step)) {
+    if (steps !== null && w.step !== undefined && !steps.has(w.step)) {
       throw new Error(`${def.id}: warning ${w.code} points at a step ${w.step} the working does not have`);
     }
     // A withheld output is null: never a figure beside the warning that says it does not hold.
@@ -147,6 +150,27 @@ export function runCalculation(
   raw: unknown,
 ): CalculationResult {
   const inputs = resolveInputs(def, raw);
+  const solution = solveChecked(def, inputs, true);
+  return {
+    calculator: def.id,
+    inputs,
+    outputs: solution.outputs,
+    warnings: solution.warnings,
+    working: solution.working,
+    band: solution.band,
+    assumptions: solution.assumptions,
+    cautions: cautionsOf(def, solution),
+    version: VERSION,
+    inputHash: hashInputs(def.id, inputs),
+  };
+}
+
+function cautionsOf(def: Partial<CalculatorTexts>, solution: Solution): Caution[] {
+  return [...(solution.hazards ?? []), ...(def.cautions ?? [])];
+}
+
+/** Solves resolved inputs; a RangeError from a formula is the visitor's input, not a bug. */
+function solveChecked(def: CalculatorCore, inputs: InputValues, withWorking: boolean): Solution {
   let solution;
   try {
     solution = def.solve(inputs);
@@ -156,19 +180,40 @@ export function runCalculation(
     }
     throw err;
   }
-  checkSolution(def, solution);
+  checkSolution(def, solution, withWorking);
+  return solution;
+}
+
+/**
+ * Runs one calculator for its numbers only: validates, solves and checks as `runCalculation` does,
+ * but never reads the solution's working or assumptions (built lazily by `solved`, so they are never
+ * formatted) and hashes nothing. Its outputs, warnings and band are those `runCalculation` gives for
+ * the same inputs; a widget shows them at once and asks for the working when it shows it.
+ * @param raw inputs keyed by input id, canonical units (SI, angles in degrees, temperatures in °C)
+ * @throws CalcInputError listing every bad field
+ */
+export function computeCalculation(
+  def: CalculatorCore & Partial<CalculatorTexts>,
+  raw: unknown,
+): ComputedResult {
+  const inputs = resolveInputs(def, raw);
+  const solution = solveChecked(def, inputs, false);
   return {
     calculator: def.id,
     inputs,
     outputs: solution.outputs,
     warnings: solution.warnings,
-    working: solution.working,
     band: solution.band,
-    assumptions: solution.assumptions,
-    cautions: [...(solution.hazards ?? []), ...(def.cautions ?? [])],
+    cautions: cautionsOf(def, solution),
     version: VERSION,
-    inputHash: hashInputs(def.id, inputs),
   };
+}
+
+/** `computeCalculation` bound to one definition: the `compute` each calculator subpath exports. */
+export function computer(
+  def: CalculatorCore & Partial<CalculatorTexts>,
+): (inputs: unknown) => ComputedResult {
+  return (inputs) => computeCalculation(def, inputs);
 }
 
 /** `runCalculation` bound to one definition: the `run` each calculator subpath exports. */

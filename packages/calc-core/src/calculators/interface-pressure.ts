@@ -1,6 +1,6 @@
 import { capillaryLength } from '../formulas/capillary.js';
 import { bubblePressure, laplacePressure, poreEntryPressure } from '../formulas/laplace.js';
-import { bandOver, runner } from './engine.js';
+import { bandOver, computer, runner } from './engine.js';
 import {
   ANGLE_FIELDS,
   choice,
@@ -269,3 +269,6 @@ export const calculator: CalculatorCore = {
  * its texts: `calculate` (the registry) gives them.
  */
 export const run = runner(calculator);
+
+/** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
+export const compute = computer(calculator);

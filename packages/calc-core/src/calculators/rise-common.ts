@@ -25,6 +25,7 @@ import {
   warning,
   capillaryLengthStep,
   solved,
+  type Explanation,
 } from './shared.js';
 import type {
   HeadlineDefinition,
@@ -183,78 +184,6 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
   });
   const s = geometry.sizeSymbol;
 
-  const working: WorkingStep[] = [
-    ...liquid.working,
-    ...angle.working,
-    capillaryLengthStep(sigma, rho, g, lc),
-    {
-      id: 'size-ratio',
-      label: `Half the ${geometry.noun} against the capillary length`,
-      formula: `(${s}/2) / ℓc`,
-      substituted: `${q(size / 2, 'm')} / ${q(lc, 'm')}`,
-      value: ratio,
-      unit: '1',
-      source: 'Rayleigh 1915 (the rise law and its correction need r ≪ ℓc)',
-    },
-  ];
-  if (outputs.rise !== null && outputs.rise !== undefined) {
-    working.push({
-      id: 'rise',
-      label: geometry.sizeId === 'diameter' ? "Rise, Jurin's law" : 'Rise between parallel walls',
-      formula: geometry.riseFormula,
-      substituted: `${geometry.sizeId === 'diameter' ? 4 : 2} × ${q(sigma, 'N/m')} × cos ${q(angle.angleDeg, 'deg')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(size, 'm')})`,
-      value: rise,
-      unit: 'm',
-      source: geometry.riseSource,
-    });
-  }
-  if (outputs.riseCorrected !== null && outputs.riseCorrected !== undefined) {
-    const m = geometry.correction(size, angle.angleDeg);
-    const tube = geometry.sizeId === 'diameter';
-    working.push(
-      {
-        id: 'meniscus-sag',
-        label: 'Meniscus radius and sag',
-        formula: tube ? 'R_m = r / cos θ, s = R_m·(1 − sin θ)' : 'R_m = (w/2) / cos θ, s = R_m·(1 − sin θ)',
-        substituted: `${tube ? 'r' : 'w/2'} = ${q(size / 2, 'm')}, θ = ${q(angle.angleDeg, 'deg')}: R_m = ${Number.isFinite(m.radius) ? q(m.radius, 'm') : '∞ (flat)'}`,
-        value: m.sag,
-        unit: 'm',
-        source: 'spherical (tube) or cylindrical (slot) meniscus, Rayleigh 1915',
-      },
-      {
-        id: 'meniscus-held',
-        label: tube
-          ? 'Liquid held above the lowest point of the meniscus'
-          : 'Liquid held above the lowest point, per unit length',
-        formula: geometry.heldFormula,
-        substituted: `s = ${q(m.sag, 'm')}, ${s} = ${q(size, 'm')}`,
-        value: m.held,
-        unit: tube ? 'm3' : 'm2',
-        source: 'geometry of the meniscus, derived here',
-      },
-      {
-        id: 'meniscus-correction',
-        label: 'Meniscus-weight correction',
-        formula: geometry.correctionFormula,
-        substituted: tube
-          ? `${q(m.held, 'm3')} / (π × (${q(size / 2, 'm')})²)`
-          : `${q(m.held, 'm2')} / ${q(size, 'm')}`,
-        value: m.correction,
-        unit: 'm',
-        source: 'Rayleigh 1915 (r/3 at θ = 0); the same geometry for θ > 0, derived here',
-      },
-      {
-        id: 'rise-corrected',
-        label: 'Rise to the bottom of the meniscus, corrected',
-        formula: 'h − δ',
-        substituted: `${q(rise, 'm')} − ${q(m.correction, 'm')}`,
-        value: outputs.riseCorrected,
-        unit: 'm',
-        source: 'Rayleigh 1915',
-      },
-    );
-  }
-
   const warnings: Warning[] = [];
   const fields = [geometry.sizeId];
   if (tooWide) {
@@ -290,15 +219,90 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
   }
 
   const band = bandOver(angle.basis, outputs, (v) => evaluate(v.contactAngleDeg ?? angle.angleDeg));
-  const assumptions = [
-    ...STATIC_ASSUMPTIONS,
-    geometry.shape,
-    'The rise is measured from the flat free surface of a wide reservoir to the bottom of the meniscus.',
-    liquid.assumption,
-    angle.assumption,
-    gravityAssumption(g),
-  ];
-  return solved({ outputs, working, warnings, band, assumptions }, liquid);
+  // The working and assumptions are text: built only when read (by `calculate`, not `compute`).
+  const explain = (): Explanation => {
+    const working: WorkingStep[] = [
+      ...liquid.working,
+      ...angle.working,
+      capillaryLengthStep(sigma, rho, g, lc),
+      {
+        id: 'size-ratio',
+        label: `Half the ${geometry.noun} against the capillary length`,
+        formula: `(${s}/2) / ℓc`,
+        substituted: `${q(size / 2, 'm')} / ${q(lc, 'm')}`,
+        value: ratio,
+        unit: '1',
+        source: 'Rayleigh 1915 (the rise law and its correction need r ≪ ℓc)',
+      },
+    ];
+    if (outputs.rise !== null && outputs.rise !== undefined) {
+      working.push({
+        id: 'rise',
+        label: geometry.sizeId === 'diameter' ? "Rise, Jurin's law" : 'Rise between parallel walls',
+        formula: geometry.riseFormula,
+        substituted: `${geometry.sizeId === 'diameter' ? 4 : 2} × ${q(sigma, 'N/m')} × cos ${q(angle.angleDeg, 'deg')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(size, 'm')})`,
+        value: rise,
+        unit: 'm',
+        source: geometry.riseSource,
+      });
+    }
+    if (outputs.riseCorrected !== null && outputs.riseCorrected !== undefined) {
+      const m = geometry.correction(size, angle.angleDeg);
+      const tube = geometry.sizeId === 'diameter';
+      working.push(
+        {
+          id: 'meniscus-sag',
+          label: 'Meniscus radius and sag',
+          formula: tube ? 'R_m = r / cos θ, s = R_m·(1 − sin θ)' : 'R_m = (w/2) / cos θ, s = R_m·(1 − sin θ)',
+          substituted: `${tube ? 'r' : 'w/2'} = ${q(size / 2, 'm')}, θ = ${q(angle.angleDeg, 'deg')}: R_m = ${Number.isFinite(m.radius) ? q(m.radius, 'm') : '∞ (flat)'}`,
+          value: m.sag,
+          unit: 'm',
+          source: 'spherical (tube) or cylindrical (slot) meniscus, Rayleigh 1915',
+        },
+        {
+          id: 'meniscus-held',
+          label: tube
+            ? 'Liquid held above the lowest point of the meniscus'
+            : 'Liquid held above the lowest point, per unit length',
+          formula: geometry.heldFormula,
+          substituted: `s = ${q(m.sag, 'm')}, ${s} = ${q(size, 'm')}`,
+          value: m.held,
+          unit: tube ? 'm3' : 'm2',
+          source: 'geometry of the meniscus, derived here',
+        },
+        {
+          id: 'meniscus-correction',
+          label: 'Meniscus-weight correction',
+          formula: geometry.correctionFormula,
+          substituted: tube
+            ? `${q(m.held, 'm3')} / (π × (${q(size / 2, 'm')})²)`
+            : `${q(m.held, 'm2')} / ${q(size, 'm')}`,
+          value: m.correction,
+          unit: 'm',
+          source: 'Rayleigh 1915 (r/3 at θ = 0); the same geometry for θ > 0, derived here',
+        },
+        {
+          id: 'rise-corrected',
+          label: 'Rise to the bottom of the meniscus, corrected',
+          formula: 'h − δ',
+          substituted: `${q(rise, 'm')} − ${q(m.correction, 'm')}`,
+          value: outputs.riseCorrected,
+          unit: 'm',
+          source: 'Rayleigh 1915',
+        },
+      );
+    }
+    const assumptions = [
+      ...STATIC_ASSUMPTIONS,
+      geometry.shape,
+      'The rise is measured from the flat free surface of a wide reservoir to the bottom of the meniscus.',
+      liquid.assumption,
+      angle.assumption,
+      gravityAssumption(g),
+    ];
+    return { working, assumptions };
+  };
+  return solved({ outputs, warnings, band, explain }, liquid);
 }
 
 /**

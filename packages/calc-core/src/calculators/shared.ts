@@ -206,35 +206,37 @@ function waterProperty<T>(compute: () => T): T {
  */
 export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): ResolvedLiquid {
   const id = choice(inputs, 'liquid');
-  const working: WorkingStep[] = [];
+  // Each working line is made only when the working is read (`calculate`), never by `compute`.
+  const steps: (() => WorkingStep)[] = [];
   if (id === 'water') {
     const t = num(inputs, 'temperatureC');
     const T = t + 273.15;
     const sigma = waterProperty(() => waterSurfaceTension(t));
     const { B, b, mu: expo, Tc } = IAPWS_R1_76;
     const tau = 1 - T / Tc;
-    working.push({
+    steps.push(() => ({
       label: `Surface tension of water at ${q(t, 'degC')}`,
       formula: `σ = B·τ^μ·(1 + b·τ), τ = 1 − T / Tc; B = ${coef(B * 1000)} mN/m, b = ${coef(b)}, μ = ${coef(expo)}, Tc = ${coef(Tc)} K`,
       substituted: `T = ${q(T, 'K', 6)}, τ = 1 − ${formatValue(T, 6)} / ${coef(Tc)} = ${formatValue(tau, 6)}; σ = ${coef(B)} N/m × ${formatValue(tau, 6)}^${coef(expo)} × (1 + (${coef(b)}) × ${formatValue(tau, 6)})`,
       value: sigma,
       unit: 'N/m',
       source: IAPWS_ST,
-    });
+    }));
     let rho = 0;
     if (needs.density === true) {
       const d = waterProperty(() => waterDensity(t));
       rho = d.value;
       const { a1, a2, a3, a4, a5 } = TANAKA_2001;
-      const kellTerms = KELL_1975.a.map((a, n) =>
-        n === 0 ? coef(a) : `${coef(a)}·t${n === 1 ? '' : SUPERSCRIPT[String(n)]}`,
-      );
-      working.push({
+      const kellTerms = (): string[] =>
+        KELL_1975.a.map((a, n) =>
+          n === 0 ? coef(a) : `${coef(a)}·t${n === 1 ? '' : SUPERSCRIPT[String(n)]}`,
+        );
+      steps.push(() => ({
         label: `Density of water at ${q(t, 'degC')}`,
         formula:
           d.formulation === 'tanaka-2001'
             ? `ρ = a₅·[1 − (t + a₁)²·(t + a₂) / (a₃·(t + a₄))]; a₁ = ${coef(a1)} °C, a₂ = ${coef(a2)} °C, a₃ = ${coef(a3)} °C², a₄ = ${coef(a4)} °C, a₅ = ${coef(a5)} kg/m³`
-            : `ρ = (${kellTerms.join(' + ').replaceAll('+ −', '− ')}) / (1 + ${coef(KELL_1975.b)}·t), kg/m³, t in °C`,
+            : `ρ = (${kellTerms().join(' + ').replaceAll('+ −', '− ')}) / (1 + ${coef(KELL_1975.b)}·t), kg/m³, t in °C`,
         substituted:
           d.formulation === 'tanaka-2001'
             ? `t = ${q(t, 'degC')}: ${coef(a5)} × [1 − (${formatValue(t + a1, 6)})² × ${formatValue(t + a2, 6)} / (${coef(a3)} × ${formatValue(t + a4, 6)})]`
@@ -242,20 +244,20 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
         value: rho,
         unit: 'kg/m3',
         source: d.formulation === 'tanaka-2001' ? 'Tanaka et al. 2001' : 'Kell 1975',
-      });
+      }));
     }
     let mu = 0;
     if (needs.viscosity === true) {
       mu = waterProperty(() => waterViscosity(t));
       const { a, b: bs, Tstar } = IAPWS_SR6_08;
-      working.push({
+      steps.push(() => ({
         label: `Viscosity of water at ${q(t, 'degC')}`,
         formula: `μ = Σ aᵢ·(T / ${coef(Tstar)} K)^bᵢ μPa·s; a = ${a.map(coef).join(', ')}; b = ${bs.map(coef).join(', ')}`,
         substituted: `T / ${coef(Tstar)} K = ${formatValue(T / Tstar, 6)}`,
         value: mu,
         unit: 'Pa*s',
         source: SR6,
-      });
+      }));
     }
     return {
       id,
@@ -263,38 +265,42 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
       surfaceTension: sigma,
       density: rho,
       viscosity: mu,
-      working,
-      assumption: `Pure, air-free water at ${q(t, 'degC')} and atmospheric pressure, properties from the IAPWS, Tanaka and Kell correlations.`,
+      get working() {
+        return steps.map((f) => f());
+      },
+      get assumption() {
+        return `Pure, air-free water at ${q(t, 'degC')} and atmospheric pressure, properties from the IAPWS, Tanaka and Kell correlations.`;
+      },
     };
   }
   if (id === CUSTOM) {
     const sigma = num(inputs, 'surfaceTension');
-    working.push({
+    steps.push(() => ({
       label: 'Surface tension (entered)',
       formula: 'σ',
       substituted: q(sigma, 'N/m'),
       value: sigma,
       unit: 'N/m',
-    });
+    }));
     const rho = needs.density === true ? num(inputs, 'density') : 0;
     if (needs.density === true) {
-      working.push({
+      steps.push(() => ({
         label: 'Density (entered)',
         formula: 'ρ',
         substituted: q(rho, 'kg/m3'),
         value: rho,
         unit: 'kg/m3',
-      });
+      }));
     }
     const mu = needs.viscosity === true ? num(inputs, 'viscosity') : 0;
     if (needs.viscosity === true) {
-      working.push({
+      steps.push(() => ({
         label: 'Viscosity (entered)',
         formula: 'μ',
         substituted: q(mu, 'Pa*s'),
         value: mu,
         unit: 'Pa*s',
-      });
+      }));
     }
     return {
       id,
@@ -302,14 +308,15 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
       surfaceTension: sigma,
       density: rho,
       viscosity: mu,
-      working,
+      get working() {
+        return steps.map((f) => f());
+      },
       hazard: OTHER_LIQUID_CAUTION,
       assumption: 'The liquid properties as entered, taken as those of the liquid at the temperature of use.',
     };
   }
   const row = getLiquid(id);
   if (row === undefined) throw new Error(`liquid ${id} is offered but not tabulated`);
-  const at = `at ${q(row.temperatureC, 'degC')}`;
   const tableStep = (
     label: string,
     symbol: string,
@@ -317,18 +324,20 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
     unit: UnitId,
     source: string,
   ): WorkingStep => ({
-    label: `${label} of ${row.name.toLowerCase()} ${at}`,
+    label: `${label} of ${row.name.toLowerCase()} at ${q(row.temperatureC, 'degC')}`,
     formula: `${symbol} (table value)`,
     substituted: q(value, unit),
     value,
     unit,
     source,
   });
-  working.push(tableStep('Surface tension', 'σ', row.surfaceTension.value, 'N/m', row.surfaceTension.source));
+  steps.push(() =>
+    tableStep('Surface tension', 'σ', row.surfaceTension.value, 'N/m', row.surfaceTension.source),
+  );
   if (needs.density === true)
-    working.push(tableStep('Density', 'ρ', row.density.value, 'kg/m3', row.density.source));
+    steps.push(() => tableStep('Density', 'ρ', row.density.value, 'kg/m3', row.density.source));
   if (needs.viscosity === true) {
-    working.push(tableStep('Viscosity', 'μ', row.viscosity.value, 'Pa*s', row.viscosity.source));
+    steps.push(() => tableStep('Viscosity', 'μ', row.viscosity.value, 'Pa*s', row.viscosity.source));
   }
   return {
     id,
@@ -336,7 +345,9 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
     surfaceTension: row.surfaceTension.value,
     density: needs.density === true ? row.density.value : 0,
     viscosity: needs.viscosity === true ? row.viscosity.value : 0,
-    working,
+    get working() {
+      return steps.map((f) => f());
+    },
     ...(row.hazard !== undefined
       ? {
           hazard: {
@@ -346,7 +357,9 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
           },
         }
       : {}),
-    assumption: `${row.name} at ${q(row.temperatureC, 'degC')}, pure, with the table's values; at another temperature they differ.`,
+    get assumption() {
+      return `${row.name} at ${q(row.temperatureC, 'degC')}, pure, with the table's values; at another temperature they differ.`;
+    },
   };
 }
 
@@ -409,10 +422,14 @@ export function resolveContactAngle(inputs: InputValues, liquidId: string): Reso
     return {
       angleDeg: a,
       basis: [],
-      assumption: `A contact angle of ${q(a, 'deg')} as entered, taken as the static angle of the liquid on this surface.`,
-      working: [
-        { label: 'Contact angle (entered)', formula: 'θ', substituted: q(a, 'deg'), value: a, unit: 'deg' },
-      ],
+      get assumption() {
+        return `A contact angle of ${q(a, 'deg')} as entered, taken as the static angle of the liquid on this surface.`;
+      },
+      get working(): WorkingStep[] {
+        return [
+          { label: 'Contact angle (entered)', formula: 'θ', substituted: q(a, 'deg'), value: a, unit: 'deg' },
+        ];
+      },
     };
   }
   const preset = getContactAnglePreset(presetId);
@@ -427,7 +444,9 @@ export function resolveContactAngle(inputs: InputValues, liquidId: string): Reso
   const spread = preset.spreadDeg;
   return {
     angleDeg: preset.angleDeg,
-    assumption: `A contact angle of ${q(preset.angleDeg, 'deg')} from the preset "${preset.label}" (${preset.source}, ${preset.basis})${spread === undefined ? '' : `; the likely range spans ${spread.low}–${spread.high}°`}.`,
+    get assumption() {
+      return `A contact angle of ${q(preset.angleDeg, 'deg')} from the preset "${preset.label}" (${preset.source}, ${preset.basis})${spread === undefined ? '' : `; the likely range spans ${spread.low}–${spread.high}°`}.`;
+    },
     basis:
       spread === undefined
         ? []
@@ -439,19 +458,21 @@ export function resolveContactAngle(inputs: InputValues, liquidId: string): Reso
               source: `${preset.label}: ${preset.source} (${preset.basis})`,
             },
           ],
-    working: [
-      {
-        label: `Contact angle, ${preset.label.toLowerCase()}`,
-        formula: 'θ (preset)',
-        substituted:
-          spread === undefined
-            ? q(preset.angleDeg, 'deg')
-            : `${q(preset.angleDeg, 'deg')} (range ${spread.low}–${spread.high}°)`,
-        value: preset.angleDeg,
-        unit: 'deg',
-        source: `${preset.source} (${preset.basis})`,
-      },
-    ],
+    get working(): WorkingStep[] {
+      return [
+        {
+          label: `Contact angle, ${preset.label.toLowerCase()}`,
+          formula: 'θ (preset)',
+          substituted:
+            spread === undefined
+              ? q(preset.angleDeg, 'deg')
+              : `${q(preset.angleDeg, 'deg')} (range ${spread.low}–${spread.high}°)`,
+          value: preset.angleDeg,
+          unit: 'deg',
+          source: `${preset.source} (${preset.basis})`,
+        },
+      ];
+    },
   };
 }
 
@@ -529,12 +550,39 @@ export function capillaryLengthStep(
   };
 }
 
-/** A solution with the liquid's hazard (if it has one) attached to the result's cautions. */
+/** What a solution explains: its working and its assumptions, text built with `fmt`/`q`. */
+export interface Explanation {
+  readonly working: readonly WorkingStep[];
+  readonly assumptions: readonly string[];
+}
+
+/**
+ * A solution with the liquid's hazard (if it has one) attached to the result's cautions. Given
+ * `explain` instead of `working` and `assumptions`, those two are built on first reading only
+ * (`calculate` reads them; `compute` never does, so it formats no number it does not show).
+ */
 export function solved(
-  parts: Omit<Solution, 'hazards'>,
+  parts: Omit<Solution, 'hazards' | 'working' | 'assumptions'> &
+    (Explanation | { readonly explain: () => Explanation }),
   liquid?: { readonly hazard?: Caution } | null,
 ): Solution {
-  return liquid?.hazard !== undefined ? { ...parts, hazards: [liquid.hazard] } : parts;
+  const hazards = liquid?.hazard !== undefined ? { hazards: [liquid.hazard] } : {};
+  if (!('explain' in parts)) return { ...parts, ...hazards };
+  const { explain } = parts;
+  let explained: Explanation | undefined;
+  const read = (): Explanation => (explained ??= explain());
+  return {
+    outputs: parts.outputs,
+    warnings: parts.warnings,
+    band: parts.band,
+    ...hazards,
+    get working() {
+      return read().working;
+    },
+    get assumptions() {
+      return read().assumptions;
+    },
+  };
 }
 
 /** The gravity assumption, naming the value used. */

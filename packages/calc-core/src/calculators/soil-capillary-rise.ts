@@ -1,5 +1,5 @@
 import { capillaryBreakCheck, HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../formulas/soil.js';
-import { bandOver, runner } from './engine.js';
+import { bandOver, computer, runner } from './engine.js';
 import { HAZEN_BASIS, HAZEN_SOURCE, hazenCInput, hazenRiseStep } from './hazen.js';
 import { choice, MM, num, q, quantityInput, warning, solved } from './shared.js';
 import type { CalculatorCore, InputValues, Outputs, Warning, WorkingStep } from './types.js';
@@ -318,3 +318,6 @@ export const calculator: CalculatorCore = {
  * its texts: `calculate` (the registry) gives them.
  */
 export const run = runner(calculator);
+
+/** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
+export const compute = computer(calculator);

@@ -1,6 +1,6 @@
 import { meniscusCorrection } from '../formulas/capillary.js';
 import { ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-reading.js';
-import { runner } from './engine.js';
+import { computer, runner } from './engine.js';
 import {
   capillaryLengthStep,
   choice,
@@ -274,3 +274,6 @@ export const calculator: CalculatorCore = {
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
 export const run = runner(calculator);
+
+/** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
+export const compute = computer(calculator);

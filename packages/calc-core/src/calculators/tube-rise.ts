@@ -1,4 +1,4 @@
-import { runner } from './engine.js';
+import { computer, runner } from './engine.js';
 import { riseHeadline, riseInputs, riseOutputs, riseWarnings, solveRise, TUBE } from './rise-common.js';
 import { MM, quantityInput } from './shared.js';
 import type { CalculatorCore } from './types.js';
@@ -23,3 +23,6 @@ export const calculator: CalculatorCore = {
  * its texts: `calculate` (the registry) gives them.
  */
 export const run = runner(calculator);
+
+/** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
+export const compute = computer(calculator);

@@ -240,6 +240,22 @@ export interface CalculatorTexts {
 /** A whole calculator: its core and its texts, as calc-core's registry joins them. */
 export interface CalculatorDefinition extends CalculatorCore, CalculatorTexts {}
 
+/**
+ * A result's numbers without its working, assumptions or input hash (`compute`): what a widget
+ * needs to show the answer. Its outputs, warnings and band equal `calculate`'s for the same inputs.
+ */
+export interface ComputedResult {
+  readonly calculator: string;
+  /** The inputs actually used (defaults filled in, inputs that do not apply left out). */
+  readonly inputs: InputValues;
+  readonly outputs: Outputs;
+  readonly warnings: readonly Warning[];
+  readonly band: Band | null;
+  /** The liquid's hazard first, then the calculator's own cautions (none from a core without texts). */
+  readonly cautions: readonly Caution[];
+  readonly version: string;
+}
+
 export interface CalculationResult {
   readonly calculator: string;
   /** The inputs actually used (defaults filled in, inputs that do not apply left out). */

@@ -4,8 +4,8 @@ import { CalcInputError } from '../errors.js';
 import { liquids } from '../properties/liquids.js';
 import { waterDensity, waterSurfaceTension, waterViscosity } from '../properties/water.js';
 import { calculate, calculators, getCalculator } from '../registry.js';
-import { arbitraryInputs } from '../../testing/arbitrary.js';
-import type { CalculationResult, CalculatorDefinition, TableRow } from './types.js';
+import { anyInputs } from '../../testing/arbitrary.js';
+import type { CalculationResult } from './types.js';
 
 // What the engine must never do: print a number where its method does not hold. Each case of
 // issue 10 is pinned here, every warning and caution code has a test that fails when the code is
@@ -393,20 +393,6 @@ const signs: Readonly<Record<string, Readonly<Record<string, 'positive' | 'nonNe
     pointsInFit: 'nonNegative',
   },
 };
-
-/** Every choice from its options, every number over its whole range (log-uniform where it spans decades). */
-function anyInputs(def: CalculatorDefinition): fc.Arbitrary<Record<string, number | string | TableRow[]>> {
-  return arbitraryInputs(def, (input) => {
-    if (input.min > 0 && input.max / input.min > 100) {
-      const lo = Math.log(input.min);
-      const hi = Math.log(input.max);
-      return fc
-        .double({ min: 0, max: 1, noNaN: true })
-        .map((u) => Math.min(input.max, Math.max(input.min, Math.exp(lo + u * (hi - lo)))));
-    }
-    return fc.double({ min: input.min, max: input.max, noNaN: true });
-  });
-}
 
 describe('property sweep over every calculator (fast-check)', () => {
   it.each(calculators.map((c) => [c.id, c] as const))(

@@ -8,7 +8,7 @@ import {
   wilhelmyRodSurfaceTension,
   wilhelmySurfaceTension,
 } from '../formulas/tensiometry.js';
-import { runner } from './engine.js';
+import { computer, runner } from './engine.js';
 import {
   choice,
   coef,
@@ -429,3 +429,6 @@ export const calculator: CalculatorCore = {
  * its texts: `calculate` (the registry) gives them.
  */
 export const run = runner(calculator);
+
+/** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
+export const compute = computer(calculator);

@@ -1,6 +1,6 @@
 import { capillaryLength, jurinRise } from '../formulas/capillary.js';
 import { bosanquetTime, gravityRestrainedRiseTime, gravityShape, washburnTime } from '../formulas/wicking.js';
-import { bandOver, runner } from './engine.js';
+import { bandOver, computer, runner } from './engine.js';
 import {
   choice,
   contactAngleInputs,
@@ -341,3 +341,6 @@ export const calculator: CalculatorCore = {
  * its texts: `calculate` (the registry) gives them.
  */
 export const run = runner(calculator);
+
+/** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
+export const compute = computer(calculator);
