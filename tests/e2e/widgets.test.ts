@@ -389,8 +389,16 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(Number(await rise.getAttribute('data-value'))).toBeCloseTo(jurin, 4);
     expect(await widget.locator('[data-caution="firm"]').textContent()).toContain(firmCaution);
     // The calculator's own cautions come with its texts chunk, after first paint, and are listed too.
-    for (const code of ['ESTIMATE_ONLY', 'CLEAN_SURFACES', 'DAMP_DIAGNOSIS'])
+    for (const code of ['CLEAN_SURFACES', 'DAMP_DIAGNOSIS'])
       await widget.locator(`[data-caution="${code}"]`).waitFor({ timeout: 20_000 });
+    // "Results are estimates" is said once, by the standing disclaimer, not again in the notes.
+    expect(await widget.locator('[data-caution="ESTIMATE_ONLY"]').count()).toBe(0);
+    expect(await widget.locator('[data-wickstone="disclaimer"]').textContent()).toContain(
+      'Results are estimates',
+    );
+    expect((await widget.locator('[data-result]').innerText()).match(/results are estimates/gi)).toHaveLength(
+      1,
+    );
     // For looking at (E2E_SCREENSHOTS): the result with its cautions, at desktop and phone widths.
     await screenshot(page, 'widget-result-1280');
     await page.setViewportSize({ width: 390, height: 800 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { formatResult, headline, isSecondaryOutput, practicalDefault, significantFigures } from './answer.js';
 import { inReaderUnits, readWarning, warningTitle } from './wording.js';
-import { runCalculation } from './calculators/engine.js';
+import { runCalculation } from './calculators/run.js';
 import type { CalculatorDefinition } from './calculators/types.js';
 import {
   calculators,

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { soilCapillaryRise as soil, tubeRise as tube, wettingForce as wetting } from './registry.js';
 import type { InputDefinition } from './calculators/types.js';
 import { CalcInputError } from './errors.js';
-import { runCalculation } from './calculators/engine.js';
+import { runCalculation } from './calculators/run.js';
 import {
   displayUnitOf,
   inputApplies,

@@ -107,14 +107,8 @@ export {
 } from './formulas/wicking.js';
 
 export { canonicalJson, sha256Hex, type JsonValue } from './hash.js';
-export {
-  runCalculation,
-  computeCalculation,
-  computer,
-  resolveInputs,
-  hashInputs,
-  resultsAgree,
-} from './calculators/engine.js';
+export { computeCalculation, computer, resolveInputs, resultsAgree } from './calculators/engine.js';
+export { runCalculation, runner, hashInputs } from './calculators/run.js';
 export {
   calculators,
   calculatorIds,

@@ -1,7 +1,8 @@
 import { CalcInputError } from './errors.js';
 import { calculator as absorptionCoefficientCore } from './calculators/absorption-coefficient.js';
 import { texts as absorptionCoefficientTexts } from './calculators/absorption-coefficient.texts.js';
-import { computeCalculation, runCalculation } from './calculators/engine.js';
+import { computeCalculation } from './calculators/engine.js';
+import { runCalculation } from './calculators/run.js';
 import { calculator as contactAngleFromForceCore } from './calculators/contact-angle-from-force.js';
 import { texts as contactAngleFromForceTexts } from './calculators/contact-angle-from-force.texts.js';
 import { calculator as frostScreeningCore } from './calculators/frost-screening.js';

@@ -37,8 +37,10 @@ export const FLIGHT_GOAL = 14 * 1024;
  * Raised to 32 KB when the headline sentence, the five trade calculators and the table input's slot
  * joined (absorption-coefficient 31.2 KB brotli, the largest): the ceiling still stops growth; the
  * goal is unchanged and not met.
+ * Lowered to 31 KB when the first flight began computing with calc-core's `compute` and the full run
+ * (working, input hash) moved to the texts chunk (largest: absorption-coefficient 30.5 KB brotli).
  */
-export const FLIGHT_LIMIT = 32 * 1024;
+export const FLIGHT_LIMIT = 31 * 1024;
 
 const ENGINE = 'virtual:wickstone-engine/';
 const TEXTS = 'virtual:wickstone-texts/';
@@ -52,6 +54,8 @@ export function textsModuleOf(calculatorId) {
     );
   return file;
 }
+/** calc-core's full run (working, assumptions, input hash): with the texts, after first paint. */
+const RUN_MODULE = path.join(calcCoreDist, 'calculators', 'run.js');
 /** A calc-core texts module: never part of a first flight. */
 const TEXTS_MODULE = /[\\/]calc-core[\\/]dist[\\/]calculators[\\/][^\\/]*texts\.js$/;
 /**
@@ -244,12 +248,16 @@ export async function buildChunks(calculatorIds) {
         name: 'wickstone-engines',
         resolveId: (id) => (id.startsWith(ENGINE) || id.startsWith(TEXTS) ? `\0${id}` : null),
         load(id) {
+          // The texts chunk also carries calc-core's full run (working, input hash): the first flight computes only.
           if (id.startsWith(`\0${TEXTS}`))
-            return `export { texts } from ${JSON.stringify(textsModuleOf(id.slice(TEXTS.length + 1)))};\n`;
+            return (
+              `export { texts } from ${JSON.stringify(textsModuleOf(id.slice(TEXTS.length + 1)))};\n` +
+              `export { runCalculation } from ${JSON.stringify(RUN_MODULE)};\n`
+            );
           if (!id.startsWith(`\0${ENGINE}`)) return null;
           const calc = id.slice(ENGINE.length + 1);
           return (
-            `export { calculator, run } from '@wickstone/calc-core/calculators/${calc}';\n` +
+            `export { calculator, compute } from '@wickstone/calc-core/calculators/${calc}';\n` +
             `export { mountWidget } from ${JSON.stringify(path.join(src, 'mount.tsx'))};\n`
           );
         },

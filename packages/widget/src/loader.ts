@@ -65,7 +65,7 @@ function mount(element: Element, first: MountOptions): MountHandle {
       handle = e.mountWidget(
         {
           calculator: e.calculator,
-          run: e.run,
+          compute: e.compute,
           releaseBase,
           defaultApiBase: script ? apiBaseFor(script.src, null) : null,
           texts: load && (() => load(__WICKSTONE_TEXTS__) as Promise<TextsChunk>),

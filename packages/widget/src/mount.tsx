@@ -1,4 +1,9 @@
-import type { CalculationResult, CalculatorCore, CalculatorDefinition } from '@wickstone/calc-core';
+import type {
+  CalculationResult,
+  CalculatorCore,
+  CalculatorDefinition,
+  ComputedResult,
+} from '@wickstone/calc-core';
 import type { TextsChunk } from './engine.js';
 import { render } from 'preact';
 import type { MountHandle, MountOptions } from './global.js';
@@ -62,12 +67,13 @@ function hostIn(element: Element, calculatorId: string): { host: HTMLElement; ma
 export interface Bundle {
   /** The calculator's core; its texts follow (`texts`). A whole definition is taken as it is. */
   readonly calculator: CalculatorCore | CalculatorDefinition;
-  readonly run: (inputs: unknown) => CalculationResult;
+  /** The numbers only: the first result. The full run (working, input hash) comes with the texts. */
+  readonly compute: (inputs: unknown) => ComputedResult;
   /** The release folder this bundle was loaded from (fonts), or null when unknown. */
   readonly releaseBase: string | null;
   /** The server the bundle came from: the default for runs and leads. */
   readonly defaultApiBase: string | null;
-  /** Fetches the calculator's texts (cautions, references); null where there is none to fetch. */
+  /** Fetches the calculator's texts (cautions, references) and the full run; null where there is none to fetch. */
   readonly texts?: (() => Promise<TextsChunk>) | null;
   /** Fetches the extras chunk (working, lead form, run reporter, font); null where there is none to fetch. */
   readonly extras: (() => Promise<ExtrasModule>) | null;
@@ -82,6 +88,8 @@ export interface Bundle {
 export function mountWidget(bundle: Bundle, element: Element, first: MountOptions): MountHandle {
   // Until the texts arrive the calculator has no cautions or references of its own to show.
   let calculator: CalculatorDefinition = { cautions: [], references: [], ...bundle.calculator };
+  // The full run (working, assumptions, input hash: the notes and the run report) follows with the texts.
+  let run: ((inputs: unknown) => CalculationResult) | null = null;
   setTablesFetch(bundle.tables ?? null);
   const { host, made } = hostIn(element, calculator.id);
   host.setAttribute('data-wickstone', 'host');
@@ -133,7 +141,14 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
     host.setAttribute('data-mode', preview ? 'preview' : 'live');
     host.setAttribute('data-state', 'ready');
     render(
-      <App widget={widget} calculator={calculator} run={bundle.run} apiBase={apiBase} reporter={reporter} />,
+      <App
+        widget={widget}
+        calculator={calculator}
+        compute={bundle.compute}
+        run={run}
+        apiBase={apiBase}
+        reporter={reporter}
+      />,
       target,
     );
   };
@@ -144,11 +159,15 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
   if (fetchTexts)
     afterFirstPaint(() => {
       fetchTexts().then(
-        ({ texts }) => {
+        ({ texts, runCalculation }) => {
           calculator = { ...calculator, ...texts };
+          // The core, as the engine computes with: the liquid's hazards, the calculator's cautions from the texts.
+          const core = bundle.calculator;
+          run = (inputs) => runCalculation(core, inputs);
           if (!gone) draw(latest);
         },
-        (err: unknown) => console.warn('Wickstone: the cautions and references could not be loaded', err),
+        (err: unknown) =>
+          console.warn('Wickstone: the cautions, references and working could not be loaded', err),
       );
     });
   const fetchExtras = bundle.extras;

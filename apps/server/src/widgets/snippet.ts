@@ -13,10 +13,19 @@ import type { WidgetSettings } from '@wickstone/contracts';
  */
 const HEAD = 440;
 const FIELD = 100;
+/**
+ * A table input (absorption readings): label, help, the scroll box of rows (at most 22em high), its
+ * buttons and note, as drawn 390 px wide with the default eight rows (567 px). The widget's own
+ * place holds the same from the start (styles.css, `.table-slot`), so its arrival moves nothing.
+ */
+const TABLE = 570;
 const ACTIONS = 100;
 
 /** The inputs a visitor sees before touching anything: not hidden, and applying with the defaults. */
-export function visibleInputs(calc: CalculatorDefinition, settings: WidgetSettings['inputs']): number {
+export function visibleInputs(
+  calc: CalculatorDefinition,
+  settings: WidgetSettings['inputs'],
+): CalculatorDefinition['inputs'] {
   const shown = calc.inputs.filter((i) => settings[i.id]?.mode !== 'hidden');
   const defaults: Record<string, unknown> = {};
   for (const i of calc.inputs) {
@@ -25,16 +34,17 @@ export function visibleInputs(calc: CalculatorDefinition, settings: WidgetSettin
   }
   try {
     const applying = resolveInputs(calc, defaults);
-    return shown.filter((i) => Object.hasOwn(applying, i.id)).length;
+    return shown.filter((i) => Object.hasOwn(applying, i.id));
   } catch {
     // A firm default calc-core refuses: the widget will say so; count what applies unconditionally.
-    return shown.filter((i) => !i.appliesWhen).length;
+    return shown.filter((i) => !i.appliesWhen);
   }
 }
 
-/** The height to hold for a widget before its script has run. */
+/** The height to hold for a widget before its script has run: a table input holds a table's height. */
 export function reservedHeight(calc: CalculatorDefinition, settings: WidgetSettings): number {
-  return HEAD + FIELD * visibleInputs(calc, settings.inputs) + ACTIONS;
+  const inputs = visibleInputs(calc, settings.inputs);
+  return HEAD + inputs.reduce((h, i) => h + (i.kind === 'table' ? TABLE : FIELD), 0) + ACTIONS;
 }
 
 const attr = (s: string) => s.replace(/&/g, '&amp;').replace(/"/g, '&quot;').replace(/</g, '&lt;');

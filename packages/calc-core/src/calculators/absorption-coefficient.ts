@@ -7,7 +7,8 @@ import {
   ROOT_SECONDS_PER_ROOT_HOUR,
   type AbsorptionMethod,
 } from '../formulas/absorption.js';
-import { computer, runner } from './engine.js';
+import { computer } from './engine.js';
+import { runner } from './run.js';
 import { tableIssues } from './table.js';
 import { choice, fmt, num, q, warning } from './shared.js';
 import type {
@@ -378,7 +379,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
-export const compute = computer(calculator);
+export const compute = /* @__PURE__ */ computer(calculator);

@@ -1,6 +1,7 @@
 import { plateForceTerms } from '../formulas/contact-angle.js';
 import { angleOf, ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-reading.js';
-import { computer, runner } from './engine.js';
+import { computer } from './engine.js';
+import { runner } from './run.js';
 import {
   choice,
   fmt,
@@ -291,7 +292,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
-export const compute = computer(calculator);
+export const compute = /* @__PURE__ */ computer(calculator);

@@ -1,13 +1,12 @@
 import { CalcInputError, type FieldIssue } from '../errors.js';
 import { inputApplies, withUnit } from '../display.js';
 import { formatValue } from '../format.js';
-import { canonicalJson, sha256Hex } from '../hash.js';
 import { canonicalUnits } from '../units.js';
 import { VERSION } from '../version.js';
 import type {
   Band,
-  BandBasis,
   CalculationResult,
+  BandBasis,
   CalculatorCore,
   CalculatorTexts,
   Caution,
@@ -133,44 +132,12 @@ function checkSolution(def: CalculatorCore, solution: Solution, withWorking: boo
   }
 }
 
-/** The stable hash of a calculator's resolved inputs: SHA-256 hex of `{ calculator, inputs }`. */
-export function hashInputs(calculatorId: string, inputs: InputValues): string {
-  return sha256Hex(canonicalJson({ calculator: calculatorId, inputs }));
-}
-
-/**
- * Runs one calculator: validates, solves, stamps the version and the input hash. Deterministic
- * and JSON-serialisable, so the server can re-run a visitor's inputs and compare. A core without
- * its texts gives a result whose cautions are the liquid's hazards only.
- * @param raw inputs keyed by input id, canonical units (SI, angles in degrees, temperatures in °C)
- * @throws CalcInputError listing every bad field
- */
-export function runCalculation(
-  def: CalculatorCore & Partial<CalculatorTexts>,
-  raw: unknown,
-): CalculationResult {
-  const inputs = resolveInputs(def, raw);
-  const solution = solveChecked(def, inputs, true);
-  return {
-    calculator: def.id,
-    inputs,
-    outputs: solution.outputs,
-    warnings: solution.warnings,
-    working: solution.working,
-    band: solution.band,
-    assumptions: solution.assumptions,
-    cautions: cautionsOf(def, solution),
-    version: VERSION,
-    inputHash: hashInputs(def.id, inputs),
-  };
-}
-
-function cautionsOf(def: Partial<CalculatorTexts>, solution: Solution): Caution[] {
+export function cautionsOf(def: Partial<CalculatorTexts>, solution: Solution): Caution[] {
   return [...(solution.hazards ?? []), ...(def.cautions ?? [])];
 }
 
-/** Solves resolved inputs; a RangeError from a formula is the visitor's input, not a bug. */
-function solveChecked(def: CalculatorCore, inputs: InputValues, withWorking: boolean): Solution {
+/** Solves resolved inputs and checks the solution; a RangeError from a formula is the visitor's input, not a bug. */
+export function solveChecked(def: CalculatorCore, inputs: InputValues, withWorking: boolean): Solution {
   let solution;
   try {
     solution = def.solve(inputs);
@@ -214,13 +181,6 @@ export function computer(
   def: CalculatorCore & Partial<CalculatorTexts>,
 ): (inputs: unknown) => ComputedResult {
   return (inputs) => computeCalculation(def, inputs);
-}
-
-/** `runCalculation` bound to one definition: the `run` each calculator subpath exports. */
-export function runner(
-  def: CalculatorCore & Partial<CalculatorTexts>,
-): (inputs: unknown) => CalculationResult {
-  return (inputs) => runCalculation(def, inputs);
 }
 
 /**

@@ -7,7 +7,8 @@ import {
   type SoilKind,
 } from '../formulas/frost.js';
 import { hazenCapillaryRise } from '../formulas/soil.js';
-import { bandOver, computer, runner } from './engine.js';
+import { bandOver, computer } from './engine.js';
+import { runner } from './run.js';
 import { HAZEN_BASIS, hazenCInput, hazenRiseStep } from './hazen.js';
 import { choice, fmt, MM, num, q, quantityInput, solved, warning } from './shared.js';
 import type { CalculatorCore, InputValues, Outputs, Solution, Warning, WorkingStep } from './types.js';
@@ -337,7 +338,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
-export const compute = computer(calculator);
+export const compute = /* @__PURE__ */ computer(calculator);

@@ -1,5 +1,6 @@
 import { risingDampSteadyState, STEADY_FRACTION, timeToFraction } from '../formulas/rising-damp.js';
-import { computer, runner } from './engine.js';
+import { computer } from './engine.js';
+import { runner } from './run.js';
 import { choice, fmt, num, q, quantityInput, solved, warning } from './shared.js';
 import type { CalculatorCore, InputValues, Solution, Warning, WorkingStep } from './types.js';
 
@@ -236,7 +237,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
-export const compute = computer(calculator);
+export const compute = /* @__PURE__ */ computer(calculator);

@@ -1,5 +1,6 @@
 import { capillaryBreakCheck, HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../formulas/soil.js';
-import { bandOver, computer, runner } from './engine.js';
+import { bandOver, computer } from './engine.js';
+import { runner } from './run.js';
 import { HAZEN_BASIS, HAZEN_SOURCE, hazenCInput, hazenRiseStep } from './hazen.js';
 import { choice, MM, num, q, quantityInput, warning, solved } from './shared.js';
 import type { CalculatorCore, InputValues, Outputs, Warning, WorkingStep } from './types.js';
@@ -317,7 +318,7 @@ export const calculator: CalculatorCore = {
  * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
  * its texts: `calculate` (the registry) gives them.
  */
-export const run = runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
-export const compute = computer(calculator);
+export const compute = /* @__PURE__ */ computer(calculator);

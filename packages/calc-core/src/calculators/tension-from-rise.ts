@@ -1,6 +1,7 @@
 import { meniscusCorrection } from '../formulas/capillary.js';
 import { ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-reading.js';
-import { computer, runner } from './engine.js';
+import { computer } from './engine.js';
+import { runner } from './run.js';
 import {
   capillaryLengthStep,
   choice,
@@ -273,7 +274,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
-export const compute = computer(calculator);
+export const compute = /* @__PURE__ */ computer(calculator);

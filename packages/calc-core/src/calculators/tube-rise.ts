@@ -1,4 +1,5 @@
-import { computer, runner } from './engine.js';
+import { computer } from './engine.js';
+import { runner } from './run.js';
 import { riseHeadline, riseInputs, riseOutputs, riseWarnings, solveRise, TUBE } from './rise-common.js';
 import { MM, quantityInput } from './shared.js';
 import type { CalculatorCore } from './types.js';
@@ -22,7 +23,7 @@ export const calculator: CalculatorCore = {
  * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
  * its texts: `calculate` (the registry) gives them.
  */
-export const run = runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
-export const compute = computer(calculator);
+export const compute = /* @__PURE__ */ computer(calculator);

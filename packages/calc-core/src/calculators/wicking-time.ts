@@ -1,6 +1,7 @@
 import { capillaryLength, jurinRise } from '../formulas/capillary.js';
 import { bosanquetTime, gravityRestrainedRiseTime, gravityShape, washburnTime } from '../formulas/wicking.js';
-import { bandOver, computer, runner } from './engine.js';
+import { bandOver, computer } from './engine.js';
+import { runner } from './run.js';
 import {
   choice,
   contactAngleInputs,
@@ -340,7 +341,7 @@ export const calculator: CalculatorCore = {
  * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
  * its texts: `calculate` (the registry) gives them.
  */
-export const run = runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
-export const compute = computer(calculator);
+export const compute = /* @__PURE__ */ computer(calculator);

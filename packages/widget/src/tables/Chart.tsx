@@ -7,7 +7,10 @@ import { formatValue } from '@wickstone/calc-core/format';
 
 const W = 320;
 const H = 200;
-const PAD = { left: 44, right: 10, top: 10, bottom: 34 };
+/** Room on the left for the tick labels and, left of them, the vertical axis title with a margin of its own. */
+const PAD = { left: 56, right: 10, top: 10, bottom: 34 };
+/** Where the vertical axis title's baseline runs: its letters (9 px) then stand about 12 px from the edge. */
+const Y_TITLE_X = 20;
 
 /** Round tick steps (1, 2 or 5 × 10ⁿ) giving about four ticks from 0 to `max`. */
 export function ticks(max: number): number[] {
@@ -87,10 +90,10 @@ export function ReadingsChart({ result }: { result: CalculationResult }) {
         </text>
         <text
           class="axis-label"
-          x={12}
+          x={Y_TITLE_X}
           y={(PAD.top + H - PAD.bottom) / 2}
           text-anchor="middle"
-          transform={`rotate(-90 12 ${(PAD.top + H - PAD.bottom) / 2})`}
+          transform={`rotate(-90 ${Y_TITLE_X} ${(PAD.top + H - PAD.bottom) / 2})`}
         >
           Δm/A (kg/m²)
         </text>

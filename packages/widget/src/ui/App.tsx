@@ -2,6 +2,7 @@ import {
   CalcInputError,
   type CalculationResult,
   type CalculatorDefinition,
+  type ComputedResult,
   type FieldIssue,
   type TableRow,
   type UnitSystemId,
@@ -32,7 +33,10 @@ import { ChartSlot, TableSlot } from './TableSlot.js';
 export interface AppProps {
   readonly widget: EmbedWidget;
   readonly calculator: CalculatorDefinition;
-  readonly run: (inputs: unknown) => CalculationResult;
+  /** The numbers only: the answer shown at once. */
+  readonly compute: (inputs: unknown) => ComputedResult;
+  /** The full run (working, assumptions, input hash) once it is here (after first paint), else null. */
+  readonly run: ((inputs: unknown) => CalculationResult) | null;
   /** Where runs and leads go; null in preview, where nothing is sent. */
   readonly apiBase: string | null;
   /** null in preview: runs are not reported and leads not sent. */
@@ -40,7 +44,13 @@ export interface AppProps {
 }
 
 interface Outcome {
-  readonly result: CalculationResult;
+  /** What the visitor sees at once: compute's numbers. */
+  readonly result: ComputedResult;
+  /** The inputs and units it was worked out with, for the full run. */
+  readonly raw: Record<string, unknown>;
+  readonly system: UnitSystemId;
+  /** The same run with its working and input hash, made after the answer is painted; null until then. */
+  readonly full: CalculationResult | null;
   readonly target: LeadTarget | null;
 }
 
@@ -97,7 +107,7 @@ function UnitSwitch({
 }
 
 /** The whole widget: header, inputs, result and lead form for one calculator. */
-export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
+export function App({ widget, calculator, compute, run, apiBase, reporter }: AppProps) {
   const { settings } = widget;
   const inputs = useMemo(
     () => resolveInputSettings(calculator, settings.inputs),
@@ -173,11 +183,40 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
     setForm(reformat(form, inputs, next));
   };
 
+  // The working and the run report need the full run: made once the answer is on screen (and the
+  // full run has arrived with the texts), so typing to answer costs compute's numbers alone.
+  useEffect(() => {
+    if (outcome === null || outcome.full !== null || run === null) return;
+    const id = requestAnimationFrame(() => {
+      let full: CalculationResult;
+      try {
+        full = run(outcome.raw);
+      } catch (err) {
+        console.error('Wickstone: the working could not be made', err);
+        return;
+      }
+      if (reporter === null) {
+        setOutcome((o) => (o === outcome ? { ...o, full } : o));
+        return;
+      }
+      const sent = reporter.report(full, outcome.system);
+      setOutcome((o) =>
+        o === outcome ? { ...o, full, target: { runId: sent.id, stored: sent.stored } } : o,
+      );
+      setReport('pending');
+      void sent.stored.then((ok) =>
+        setReport((current) => (current === 'pending' ? (ok ? 'stored' : 'failed') : current)),
+      );
+    });
+    return () => cancelAnimationFrame(id);
+  }, [outcome, run, reporter]);
+
   const calculate = (e: Event): void => {
     e.preventDefault();
-    let result: CalculationResult;
+    let result: ComputedResult;
+    const raw = collectInputs(inputs, form);
     try {
-      result = run(collectInputs(inputs, form));
+      result = compute(raw);
     } catch (err) {
       // A calc-core bug must not take the host page's script down with it: say so in the form.
       if (!(err instanceof CalcInputError)) console.error('Wickstone: calculation failed', err);
@@ -206,16 +245,8 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
     setAnnouncement(
       `${headline(calculator, result, shownSystem).text}${w.length > 0 ? ` ${w.length === 1 ? 'One warning' : `${w.length} warnings`} below.` : ''}`,
     );
-    if (reporter === null) {
-      setOutcome({ result, target: null });
-      return;
-    }
-    const sent = reporter.report(result, shownSystem);
-    setOutcome({ result, target: { runId: sent.id, stored: sent.stored } });
-    setReport('pending');
-    void sent.stored.then((ok) =>
-      setReport((current) => (current === 'pending' ? (ok ? 'stored' : 'failed') : current)),
-    );
+    setReport(null);
+    setOutcome({ result, raw, system: shownSystem, full: null, target: null });
   };
 
   const preview = reporter === null;
@@ -300,6 +331,7 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
         <Result
           calculator={calculator}
           result={outcome.result}
+          full={outcome.full}
           system={shownSystem}
           stale={stale}
           firmCautions={settings.cautions}
@@ -310,7 +342,9 @@ export function App({ widget, calculator, run, apiBase, reporter }: AppProps) {
           extras={extras}
         />
       )}
-      {outcome && calculator.inputs.some((i) => i.kind === 'table') && <ChartSlot result={outcome.result} />}
+      {outcome?.full && calculator.inputs.some((i) => i.kind === 'table') && (
+        <ChartSlot result={outcome.full} />
+      )}
       {extras && (outcome !== null || preview) && settings.sheet.enabled && (
         <extras.SheetBlock
           publicKey={widget.publicKey}

@@ -1,4 +1,10 @@
-import type { CalculationResult, CalculatorDefinition, UnitId, UnitSystemId } from '@wickstone/calc-core';
+import type {
+  CalculationResult,
+  CalculatorDefinition,
+  ComputedResult,
+  UnitId,
+  UnitSystemId,
+} from '@wickstone/calc-core';
 import { formatResult, headline, isSecondaryOutput } from '@wickstone/calc-core/answer';
 import { outputHelp } from '@wickstone/calc-core/display';
 import { outputUnitFor, toDisplay, unitGap, unitSymbol, withUnit } from '../lib/units.js';
@@ -7,12 +13,29 @@ import type { ExtrasModule } from '../lazy.js';
 export const DISCLAIMER =
   'Results are estimates. They do not replace a site investigation or the judgement of a licensed professional working to local codes.';
 
+/**
+ * Cautions the standing disclaimer already says (a calculator's "results are estimates"): left out
+ * of the notes, so the widget says it once. The record of a run keeps them.
+ */
+const SAID_BY_DISCLAIMER: ReadonlySet<string> = new Set(['ESTIMATE_ONLY']);
+
+/** The cautions the notes list: the result's and its calculator's, less hazards (shown with the figures) and what the disclaimer says. */
+export function noteCautions(
+  calculator: Pick<CalculatorDefinition, 'cautions'>,
+  result: Pick<CalculationResult, 'cautions'>,
+): CalculationResult['cautions'] {
+  return resultCautions(calculator, result).filter((c) => !isHazard(c) && !SAID_BY_DISCLAIMER.has(c.code));
+}
+
 /** A warning's DOM id, so the fields it names can point at it. */
 export const warningId = (code: string): string => `wk-warn-${code}`;
 
 interface ResultProps {
   readonly calculator: CalculatorDefinition;
-  readonly result: CalculationResult;
+  /** The numbers (compute): shown at once. */
+  readonly result: ComputedResult;
+  /** The same run with its working and input hash, once made (after first paint); null until then. */
+  readonly full: CalculationResult | null;
   readonly system: UnitSystemId;
   readonly stale: boolean;
   readonly firmCautions: string;
@@ -78,7 +101,7 @@ export function Readout({
   system,
 }: {
   output: CalculatorDefinition['outputs'][number];
-  result: CalculationResult;
+  result: Pick<CalculationResult, 'outputs' | 'band'>;
   system: UnitSystemId;
 }) {
   const value = result.outputs[output.id] as number;
@@ -106,7 +129,7 @@ export function Readout({
 }
 
 /** The warning that withholds an output, if any: the output is then shown as not defined, with its reason. */
-function withholdingWarning(result: CalculationResult, outputId: string) {
+function withholdingWarning(result: ComputedResult, outputId: string) {
   return result.warnings.find((w) => (w.withholds ?? []).includes(outputId));
 }
 
@@ -114,6 +137,7 @@ function withholdingWarning(result: CalculationResult, outputId: string) {
 export function Result({
   calculator,
   result,
+  full,
   system,
   stale,
   firmCautions,
@@ -149,8 +173,8 @@ export function Result({
         </p>
       )}
       <div class="answer">
-        {extras && (
-          <extras.Picture calculator={calculator} result={result} system={system} output={answer.output} />
+        {extras && full && (
+          <extras.Picture calculator={calculator} result={full} system={system} output={answer.output} />
         )}
         <div class="answer-text">
           <p
@@ -199,10 +223,10 @@ export function Result({
         </div>
       )}
 
-      {extras ? (
+      {extras && full ? (
         <extras.Notes
           calculator={calculator}
-          result={result}
+          result={full}
           system={system}
           name={name}
           firmCautions={firmCautions}
@@ -211,7 +235,7 @@ export function Result({
           warningId={warningId}
         />
       ) : (
-        // Before the extras arrive: calc-core's own warning sentences, so no warning is ever missing.
+        // Before the extras and the full run arrive: calc-core's own warning sentences, so no warning is ever missing.
         result.warnings.length > 0 && (
           <div class="warnings" role="group" aria-label={`${name}: warnings`}>
             {result.warnings.map((w) => (

@@ -3,7 +3,7 @@ import { formatResult, isSecondaryOutput } from '@wickstone/calc-core/answer';
 import { referencesFor } from '@wickstone/calc-core/display';
 import { inReaderUnits, readWarning, warningTitle } from '@wickstone/calc-core/wording';
 import { displayUnitOf, formatValue, outputUnitFor, toDisplay, unitKind, withUnit } from '../lib/units.js';
-import { isHazard, Readout, resultCautions, splitCautions } from './Result.js';
+import { noteCautions, Readout, splitCautions } from './Result.js';
 
 interface WorkingProps {
   readonly calculator: CalculatorDefinition;
@@ -116,7 +116,7 @@ export function Notes(props: NotesProps) {
   const supporting = calculator.outputs.filter(
     (o) => isSecondaryOutput(o) && typeof result.outputs[o.id] === 'number',
   );
-  const general = resultCautions(calculator, result).filter((c) => !isHazard(c));
+  const general = noteCautions(calculator, result);
   return (
     <>
       <Warnings {...props} />
