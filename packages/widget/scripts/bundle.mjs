@@ -37,10 +37,11 @@ export const FLIGHT_GOAL = 14 * 1024;
  * Raised to 32 KB when the headline sentence, the five trade calculators and the table input's slot
  * joined (absorption-coefficient 31.2 KB brotli, the largest): the ceiling still stops growth; the
  * goal is unchanged and not met.
- * Lowered to 31 KB when the first flight began computing with calc-core's `compute` and the full run
- * (working, input hash) moved to the texts chunk (largest: absorption-coefficient 30.5 KB brotli).
+ * Lowered to 31.5 KB when the first flight began computing with calc-core's `compute` and the full run
+ * (working, input hash) moved to the texts chunk (largest: absorption-coefficient 30.6 KB brotli; built
+ * with NODE_ENV=test, as the release tests do, the runtime is about 0.6 KB larger: 31.1 KB).
  */
-export const FLIGHT_LIMIT = 31 * 1024;
+export const FLIGHT_LIMIT = 31.5 * 1024;
 
 const ENGINE = 'virtual:wickstone-engine/';
 const TEXTS = 'virtual:wickstone-texts/';
