@@ -10,7 +10,7 @@ import {
 import { computer } from './engine.js';
 import { runner } from './run.js';
 import { tableIssues } from './table.js';
-import { choice, fmt, num, q, warning } from './shared.js';
+import { choice, fmt, laterWorking, num, q, solved, warning } from './shared.js';
 import type {
   CalculatorCore,
   InputValues,
@@ -19,7 +19,6 @@ import type {
   TableInput,
   TableRow,
   Warning,
-  WorkingStep,
 } from './types.js';
 
 // Water absorption coefficient and sorptivity from a partial-immersion test: the specimen stands
@@ -121,12 +120,13 @@ function solve(inputs: InputValues): Solution {
       : 'every reading after the one at time 0';
   const last = rows[rows.length - 1] as TableRow;
   const lastGain = points[points.length - 1]?.y ?? 0;
-  const working: WorkingStep[] = [
+  const firstMass = rows[0].mass as number;
+  const working = laterWorking(() => [
     {
       id: 'gain',
       label: 'Mass gained per area of the wet face, last reading',
       formula: 'Δm/A = (m_t − m_0) / A',
-      substituted: `(${q(last.mass as number, 'kg', 6)} − ${q(rows[0].mass as number, 'kg', 6)}) / ${q(area, 'm2')}`,
+      substituted: `(${q(last.mass as number, 'kg', 6)} − ${q(firstMass, 'kg', 6)}) / ${q(area, 'm2')}`,
       value: lastGain,
       unit: 'kg/m2',
       source,
@@ -140,14 +140,15 @@ function solve(inputs: InputValues): Solution {
       unit: '1',
       source,
     },
-  ];
+  ]);
   const assumptions = [
     'One face in water, the sides sealed, so water enters through the face area given only.',
     'The mass at time 0 is the specimen before it touched the water; every later mass is weighed after the surface water is wiped off.',
     'Water density as given for the sorptivity; the absorption coefficient does not use it.',
     'The line is fitted by ordinary least squares to Δm/A against √t (every point weighted alike).',
   ];
-  const base = { working, band: null, assumptions };
+  // The working and assumptions are written only when read (`calculate`), never by `compute`.
+  const explain = () => ({ working: working.build(), assumptions });
   const outputs = (values: Partial<Record<(typeof FITTED)[number], number | null>>): Outputs => ({
     ...withheld(),
     ...values,
@@ -155,8 +156,9 @@ function solve(inputs: InputValues): Solution {
   });
 
   if (chosen.length < MIN_POINTS_IN_FIT) {
-    return {
-      ...base,
+    return solved({
+      band: null,
+      explain,
       outputs: outputs({}),
       warnings: [
         warning(
@@ -166,11 +168,11 @@ function solve(inputs: InputValues): Solution {
           { step: 'points', withholds: [...FITTED] },
         ),
       ],
-    };
+    });
   }
   const fit = fitLine(chosen);
   const r = Math.sign(fit.slope) * Math.sqrt(fit.rSquared);
-  working.push(
+  working.add(() => [
     {
       id: 'sums',
       label: 'Sums of the fit (x = √t in √s, y = Δm/A in kg/m²)',
@@ -207,7 +209,7 @@ function solve(inputs: InputValues): Solution {
       unit: '1',
       source: 'Ordinary least squares',
     },
-  );
+  ]);
   const warnings: Warning[] = [];
   if (!(fit.slope > 0)) {
     warnings.push(
@@ -218,7 +220,7 @@ function solve(inputs: InputValues): Solution {
         { step: 'slope', withholds: [...RATES] },
       ),
     );
-    return { ...base, outputs: outputs({ rSquared: fit.rSquared }), warnings };
+    return solved({ band: null, explain, outputs: outputs({ rSquared: fit.rSquared }), warnings });
   }
   if (r < MIN_CORRELATION) {
     warnings.push(
@@ -229,10 +231,10 @@ function solve(inputs: InputValues): Solution {
         { step: 'r-squared', withholds: [...RATES] },
       ),
     );
-    return { ...base, outputs: outputs({ rSquared: fit.rSquared }), warnings };
+    return solved({ band: null, explain, outputs: outputs({ rSquared: fit.rSquared }), warnings });
   }
   const sorptivity = fit.slope / rhoW;
-  working.push(
+  working.add(() => [
     {
       id: 'per-root-hour',
       label: 'Water absorption coefficient per root hour',
@@ -252,7 +254,7 @@ function solve(inputs: InputValues): Solution {
       unit: 'm/s^0.5',
       source: ASTM,
     },
-  );
+  ]);
   if (method === 'en-iso-15148' && (last.time as number) < EN_TEST_DURATION_S) {
     warnings.push(
       warning(
@@ -263,8 +265,9 @@ function solve(inputs: InputValues): Solution {
       ),
     );
   }
-  return {
-    ...base,
+  return solved({
+    band: null,
+    explain,
     outputs: outputs({
       absorptionCoefficient: fit.slope,
       // The same quantity as A_w, kept canonical (per √s); its display unit kg/(m²·√h) shows 60 × the figure.
@@ -274,7 +277,7 @@ function solve(inputs: InputValues): Solution {
       rSquared: fit.rSquared,
     }),
     warnings,
-  };
+  });
 }
 
 export const calculator: CalculatorCore = {

@@ -12,9 +12,10 @@ import {
   q,
   quantityInput,
   solved,
+  laterWorking,
   warning,
 } from './shared.js';
-import type { CalculatorCore, InputValues, Solution, Warning, WorkingStep } from './types.js';
+import type { CalculatorCore, InputValues, Solution, Warning } from './types.js';
 
 const cycle = [{ input: 'readings', values: ['cycle'] }] as const;
 const WILHELMY = 'Wilhelmy 1863, with the buoyancy of the immersed plate';
@@ -50,7 +51,7 @@ function solve(inputs: InputValues): Solution {
   };
   const adv = plateForceTerms({ ...plate, force: F });
 
-  const working: WorkingStep[] = [
+  const working = laterWorking(() => [
     {
       id: 'perimeter',
       label: 'Wetted length of the plate',
@@ -78,19 +79,21 @@ function solve(inputs: InputValues): Solution {
       unit: '1',
       source: WILHELMY,
     },
-  ];
+  ]);
   const warnings: Warning[] = [];
   const angle = angleOf(adv.cosTheta);
   if (angle !== null) {
-    working.push({
-      id: 'angle',
-      label: both ? 'Advancing contact angle' : 'Contact angle',
-      formula: 'θ = arccos(cos θ)',
-      substituted: `arccos(${fmt(adv.cosTheta, 6)})`,
-      value: angle,
-      unit: 'deg',
-      source: WILHELMY,
-    });
+    working.add(() => [
+      {
+        id: 'angle',
+        label: both ? 'Advancing contact angle' : 'Contact angle',
+        formula: 'θ = arccos(cos θ)',
+        substituted: `arccos(${fmt(adv.cosTheta, 6)})`,
+        value: angle,
+        unit: 'deg',
+        source: WILHELMY,
+      },
+    ]);
   } else {
     warnings.push(
       noAngle(adv.cosTheta, both ? 'advancing angle' : 'contact angle', 'force', 'cos', [
@@ -104,27 +107,33 @@ function solve(inputs: InputValues): Solution {
   let recCos: number | null = null;
   if (both) {
     const Fr = num(inputs, 'recedingForce');
-    recCos = plateForceTerms({ ...plate, force: Fr }).cosTheta;
-    working.push({
-      id: 'receding-cos',
-      label: 'Cosine of the receding angle (withdrawal force)',
-      formula: 'cos θ_r = (F_r + B) / (σ·P)',
-      substituted: `(${q(Fr, 'N')} + ${q(adv.buoyancy, 'N')}) / (${q(sigma, 'N/m')} × ${q(adv.perimeter, 'm')})`,
-      value: recCos,
-      unit: '1',
-      source: WILHELMY,
-    });
-    receding = angleOf(recCos);
-    if (receding !== null) {
-      working.push({
-        id: 'receding-angle',
-        label: 'Receding contact angle',
-        formula: 'θ_r = arccos(cos θ_r)',
-        substituted: `arccos(${fmt(recCos, 6)})`,
-        value: receding,
-        unit: 'deg',
+    const rc = plateForceTerms({ ...plate, force: Fr }).cosTheta;
+    recCos = rc;
+    working.add(() => [
+      {
+        id: 'receding-cos',
+        label: 'Cosine of the receding angle (withdrawal force)',
+        formula: 'cos θ_r = (F_r + B) / (σ·P)',
+        substituted: `(${q(Fr, 'N')} + ${q(adv.buoyancy, 'N')}) / (${q(sigma, 'N/m')} × ${q(adv.perimeter, 'm')})`,
+        value: rc,
+        unit: '1',
         source: WILHELMY,
-      });
+      },
+    ]);
+    const rec = angleOf(rc);
+    receding = rec;
+    if (rec !== null) {
+      working.add(() => [
+        {
+          id: 'receding-angle',
+          label: 'Receding contact angle',
+          formula: 'θ_r = arccos(cos θ_r)',
+          substituted: `arccos(${fmt(rc, 6)})`,
+          value: rec,
+          unit: 'deg',
+          source: WILHELMY,
+        },
+      ]);
     } else {
       warnings.push(
         noAngle(recCos, 'receding angle', 'recedingForce', 'receding-cos', [
@@ -147,16 +156,19 @@ function solve(inputs: InputValues): Solution {
         ),
       );
     } else {
-      hysteresis = angle - receding;
-      working.push({
-        id: 'hysteresis',
-        label: 'Contact-angle hysteresis',
-        formula: 'Δθ = θ_a − θ_r',
-        substituted: `${q(angle, 'deg')} − ${q(receding, 'deg')}`,
-        value: hysteresis,
-        unit: 'deg',
-        source: 'definition',
-      });
+      const h = angle - receding;
+      hysteresis = h;
+      working.add(() => [
+        {
+          id: 'hysteresis',
+          label: 'Contact-angle hysteresis',
+          formula: 'Δθ = θ_a − θ_r',
+          substituted: `${q(angle, 'deg')} − ${q(receding, 'deg')}`,
+          value: h,
+          unit: 'deg',
+          source: 'definition',
+        },
+      ]);
     }
   }
 
@@ -177,19 +189,21 @@ function solve(inputs: InputValues): Solution {
       buoyancy: adv.buoyancy,
       wettedLength: adv.perimeter,
     },
-    working,
     warnings,
     band: null,
-    assumptions: [
-      'The force is net of the weight of the plate in air (the balance tared with the plate hanging above the liquid).',
-      'The immersion depth is that of the lower edge below the undisturbed liquid surface when the force was read.',
-      'A thin rectangular plate of the test material, uniform on all four sides, wetted along its whole perimeter 2·(w + t).',
-      both
-        ? 'The immersion force gives the advancing angle and the withdrawal force the receding angle, both read while the plate moves slowly at a steady speed.'
-        : 'A single reading taken as the contact angle of the plate at rest (for a moving plate, the advancing or receding angle).',
-      'The surface tension and density are those of the liquid as used: a clean liquid, air density neglected.',
-      gravityAssumption(g),
-    ],
+    explain: () => ({
+      working: working.build(),
+      assumptions: [
+        'The force is net of the weight of the plate in air (the balance tared with the plate hanging above the liquid).',
+        'The immersion depth is that of the lower edge below the undisturbed liquid surface when the force was read.',
+        'A thin rectangular plate of the test material, uniform on all four sides, wetted along its whole perimeter 2·(w + t).',
+        both
+          ? 'The immersion force gives the advancing angle and the withdrawal force the receding angle, both read while the plate moves slowly at a steady speed.'
+          : 'A single reading taken as the contact angle of the plate at rest (for a moving plate, the advancing or receding angle).',
+        'The surface tension and density are those of the liquid as used: a clean liquid, air density neglected.',
+        gravityAssumption(g),
+      ],
+    }),
   });
 }
 

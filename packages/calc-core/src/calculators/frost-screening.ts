@@ -10,8 +10,8 @@ import { hazenCapillaryRise } from '../formulas/soil.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
 import { HAZEN_BASIS, hazenCInput, hazenRiseStep } from './hazen.js';
-import { choice, fmt, MM, num, q, quantityInput, solved, warning } from './shared.js';
-import type { CalculatorCore, InputValues, Outputs, Solution, Warning, WorkingStep } from './types.js';
+import { choice, fmt, laterWorking, MM, num, q, quantityInput, solved, warning } from './shared.js';
+import type { CalculatorCore, InputValues, Outputs, Solution, Warning } from './types.js';
 
 const CASAGRANDE = 'Casagrande 1931 grain-size criterion (from memory, common practice)';
 const GROUPS = 'frost-design soil groups of US Army Corps of Engineers pavement practice (from memory)';
@@ -72,7 +72,7 @@ function solve(inputs: InputValues): Solution {
   };
 
   const pct = (x: number): string => `${fmt(x * 100)} %`;
-  const working: WorkingStep[] = [
+  const working = laterWorking(() => [
     {
       id: 'casagrande',
       label: `Casagrande criterion: ${crit.gradation} soil, threshold ${pct(crit.threshold)} finer than 0.02 mm`,
@@ -91,31 +91,35 @@ function solve(inputs: InputValues): Solution {
       unit: '1',
       source: GROUPS,
     },
-  ];
+  ]);
   if (fromHazen && !fine) {
-    working.push(hazenRiseStep('rise', 'Capillary rise above the water table', c, e, d10, riseAt(c)));
+    working.add(() => [hazenRiseStep('rise', 'Capillary rise above the water table', c, e, d10, riseAt(c))]);
   } else if (!fromHazen) {
-    working.push({
-      id: 'rise',
-      label: 'Capillary rise above the water table (measured)',
-      formula: 'h_c',
-      substituted: q(riseAt(c), 'm'),
-      value: riseAt(c),
-      unit: 'm',
-      source: 'measured for this soil',
-    });
+    working.add(() => [
+      {
+        id: 'rise',
+        label: 'Capillary rise above the water table (measured)',
+        formula: 'h_c',
+        substituted: q(riseAt(c), 'm'),
+        value: riseAt(c),
+        unit: 'm',
+        source: 'measured for this soil',
+      },
+    ]);
   }
   if (!fine) {
     const gap = nominal.fringeGap ?? 0;
-    working.push({
-      id: 'fringe',
-      label: 'Gap between the frost line and the top of the capillary fringe',
-      formula: 'D_w − h_c − D_f (zero or less: the fringe reaches the frost line)',
-      substituted: `${q(wt, 'm')} − ${q(riseAt(c), 'm')} − ${q(frostDepth, 'm')}`,
-      value: gap,
-      unit: 'm',
-      source: 'depths below the finished surface; the fringe top taken as sharp (common practice)',
-    });
+    working.add(() => [
+      {
+        id: 'fringe',
+        label: 'Gap between the frost line and the top of the capillary fringe',
+        formula: 'D_w − h_c − D_f (zero or less: the fringe reaches the frost line)',
+        substituted: `${q(wt, 'm')} − ${q(riseAt(c), 'm')} − ${q(frostDepth, 'm')}`,
+        value: gap,
+        unit: 'm',
+        source: 'depths below the finished surface; the fringe top taken as sharp (common practice)',
+      },
+    ]);
   }
 
   const band = fromHazen && !fine ? bandOver([HAZEN_BASIS], nominal, (v) => evaluate(v.hazenC ?? c)) : null;
@@ -186,18 +190,20 @@ function solve(inputs: InputValues): Solution {
 
   return solved({
     outputs,
-    working,
     warnings,
     band,
-    assumptions: [
-      "A screen by grain size only: Casagrande's criterion and the frost-design soil groups, both recalled from the published practice, not seen printed here.",
-      'The soil is the one within the frost depth and below it down to the water table; layered ground needs each layer checked.',
-      'A static water table at its highest seasonal level; the top of the capillary fringe taken as a sharp line.',
-      fromHazen
-        ? "The capillary rise by Hazen's empirical formula, with the band over the published range of its constant."
-        : 'The capillary rise as measured for this soil.',
-      'The frost depth as given, from the local code or climate records.',
-    ],
+    explain: () => ({
+      working: working.build(),
+      assumptions: [
+        "A screen by grain size only: Casagrande's criterion and the frost-design soil groups, both recalled from the published practice, not seen printed here.",
+        'The soil is the one within the frost depth and below it down to the water table; layered ground needs each layer checked.',
+        'A static water table at its highest seasonal level; the top of the capillary fringe taken as a sharp line.',
+        fromHazen
+          ? "The capillary rise by Hazen's empirical formula, with the band over the published range of its constant."
+          : 'The capillary rise as measured for this soil.',
+        'The frost depth as given, from the local code or climate records.',
+      ],
+    }),
   });
 }
 

@@ -22,16 +22,9 @@ import {
   warning,
   capillaryLengthStep,
   solved,
+  laterWorking,
 } from './shared.js';
-import type {
-  CalculatorCore,
-  InputValues,
-  Outputs,
-  QuantityInput,
-  Solution,
-  Warning,
-  WorkingStep,
-} from './types.js';
+import type { CalculatorCore, InputValues, Outputs, QuantityInput, Solution, Warning } from './types.js';
 
 type Shape = 'drop' | 'film-bubble' | 'jet' | 'general' | 'pore';
 
@@ -120,12 +113,12 @@ function solve(inputs: InputValues): Solution {
   const outputs: Outputs = flattened ? { pressure: null, pressureHead: null } : computed;
   const p = computed.pressure ?? 0;
 
-  const working: WorkingStep[] = [...liquid.working, ...(angle?.working ?? [])];
+  const working = laterWorking(() => [...liquid.working, ...(angle?.working ?? [])]);
   if (shape === 'drop') {
-    working.push(capillaryLengthStep(sigma, rho, g, lc));
+    working.add(() => [capillaryLengthStep(sigma, rho, g, lc)]);
   }
   if (!flattened) {
-    working.push(
+    working.add(() => [
       {
         id: 'pressure',
         label: shape === 'pore' ? 'Capillary (entry) pressure of the pore' : 'Pressure across the interface',
@@ -144,7 +137,7 @@ function solve(inputs: InputValues): Solution {
         unit: 'm',
         source: 'hydrostatics, p = ρ·g·h',
       },
-    );
+    ]);
   }
 
   const warnings: Warning[] = [];
@@ -181,14 +174,17 @@ function solve(inputs: InputValues): Solution {
     general: 'The two principal radii of curvature as entered, at the point of interest.',
     pore: 'A cylindrical pore of the radius entered, with a hemispherical meniscus at the contact angle.',
   };
-  const assumptions = [
+  const assumptions = (): string[] => [
     ...STATIC_ASSUMPTIONS,
     shapes[shape],
     liquid.assumption,
     ...(angle !== null ? [angle.assumption] : []),
     gravityAssumption(g),
   ];
-  return solved({ outputs, working, warnings, band, assumptions }, liquid);
+  return solved(
+    { outputs, warnings, band, explain: () => ({ working: working.build(), assumptions: assumptions() }) },
+    liquid,
+  );
 }
 
 export const calculator: CalculatorCore = {

@@ -1,8 +1,8 @@
 import { risingDampSteadyState, STEADY_FRACTION, timeToFraction } from '../formulas/rising-damp.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
-import { choice, fmt, num, q, quantityInput, solved, warning } from './shared.js';
-import type { CalculatorCore, InputValues, Solution, Warning, WorkingStep } from './types.js';
+import { choice, fmt, laterWorking, num, q, quantityInput, solved, warning } from './shared.js';
+import type { CalculatorCore, InputValues, Solution, Warning } from './types.js';
 
 const HALL_HOFF = 'Hall & Hoff 2007, Proc. R. Soc. A 463, 1871–1884 (form from memory)';
 const DERIVED = 'sharp-front water balance of Hall & Hoff 2007, derived here';
@@ -29,7 +29,7 @@ function solve(inputs: InputValues): Solution {
   const tSteady = timeToFraction(STEADY_FRACTION, r.timeConstant);
   const pct = fmt(STEADY_FRACTION * 100);
 
-  const working: WorkingStep[] = [
+  const working = laterWorking(() => [
     {
       id: 'steady-height',
       label: 'Steady-state height of the wet front',
@@ -84,7 +84,7 @@ function solve(inputs: InputValues): Solution {
       unit: 's',
       source: DERIVED,
     },
-  ];
+  ]);
 
   const warnings: Warning[] = [];
   if (r.steadyHeight < SHALLOW_RATIO * b) {
@@ -127,16 +127,18 @@ function solve(inputs: InputValues): Solution {
       timeConstant: r.timeConstant,
       residenceTime: r.residenceTime,
     },
-    working,
     warnings,
     band: null,
-    assumptions: [
-      'A sharp wet front: the wall below it is at the wet water content θw, above it dry (Hall & Hoff sharp-front model).',
-      'A uniform wall of one material standing in a permanent water supply at its base; no damp-proof course.',
-      `Evaporation at a steady rate e per unit area from ${both ? 'both faces' : 'one face'} over the whole wet height, none above it.`,
-      'Gravity neglected against capillary suction, and the sorptivity that of the masonry as built (mortar joints included).',
-      'No salts: salts crystallising near the faces change the evaporation and the sorptivity.',
-    ],
+    explain: () => ({
+      working: working.build(),
+      assumptions: [
+        'A sharp wet front: the wall below it is at the wet water content θw, above it dry (Hall & Hoff sharp-front model).',
+        'A uniform wall of one material standing in a permanent water supply at its base; no damp-proof course.',
+        `Evaporation at a steady rate e per unit area from ${both ? 'both faces' : 'one face'} over the whole wet height, none above it.`,
+        'Gravity neglected against capillary suction, and the sorptivity that of the masonry as built (mortar joints included).',
+        'No salts: salts crystallising near the faces change the evaporation and the sorptivity.',
+      ],
+    }),
   });
 }
 

@@ -550,6 +550,28 @@ export function capillaryLengthStep(
   };
 }
 
+type StepMaker = () => WorkingStep | readonly WorkingStep[];
+
+/**
+ * A solve's working recorded as it goes and written only when read: each step is given as a
+ * function that makes it (`working.add(() => ({ ... }))`), called by `build()` from `explain`.
+ */
+export interface LaterWorking {
+  add(...makers: StepMaker[]): void;
+  /** Steps that go before every step added so far. */
+  first(maker: StepMaker): void;
+  build(): WorkingStep[];
+}
+
+export function laterWorking(...makers: StepMaker[]): LaterWorking {
+  const list = [...makers];
+  return {
+    add: (...more) => void list.push(...more),
+    first: (maker) => void list.unshift(maker),
+    build: () => list.flatMap((make) => make()),
+  };
+}
+
 /** What a solution explains: its working and its assumptions, text built with `fmt`/`q`. */
 export interface Explanation {
   readonly working: readonly WorkingStep[];

@@ -2,8 +2,8 @@ import { capillaryBreakCheck, HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../fo
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
 import { HAZEN_BASIS, HAZEN_SOURCE, hazenCInput, hazenRiseStep } from './hazen.js';
-import { choice, MM, num, q, quantityInput, warning, solved } from './shared.js';
-import type { CalculatorCore, InputValues, Outputs, Warning, WorkingStep } from './types.js';
+import { choice, laterWorking, MM, num, q, quantityInput, warning, solved } from './shared.js';
+import type { CalculatorCore, InputValues, Outputs, Warning } from './types.js';
 
 /** IRC R506.2.2: a 4-inch-thick (102 mm) base course under a slab below grade. */
 const CODE_MIN_LAYER_M = 4 * 0.0254;
@@ -51,18 +51,19 @@ function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
   });
   const clearance = check.clearance;
 
-  const working: WorkingStep[] = [];
-  if (!fine) working.push(hazenRiseStep('soil-rise', 'Capillary rise in the soil', c, e, d10, soilRise));
+  const working = laterWorking();
+  if (!fine)
+    working.add(() => [hazenRiseStep('soil-rise', 'Capillary rise in the soil', c, e, d10, soilRise)]);
   const fringe =
     'equilibrium suction ρ·g·z: each material holds water up to its own capillary height (common practice)';
   if (layerRise !== null) {
-    working.push(
+    working.add(() => [
       hazenRiseStep('layer-rise', 'Capillary rise in the granular layer', c, layerE, layerD10, layerRise),
-    );
+    ]);
   }
   if (!fine && layerRise !== null) {
     const base = Math.max(depth - t, 0);
-    working.push(
+    working.add(() => [
       {
         id: 'layer-base',
         label: 'Height of the base of the layer above the water table',
@@ -94,17 +95,19 @@ function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
         unit: 'm',
         source: fringe,
       },
-    );
+    ]);
   } else if (!fine) {
-    working.push({
-      id: 'clearance',
-      label: 'Clearance between the capillary zone and the slab',
-      formula: 'D_w − h_soil',
-      substituted: `${q(depth, 'm')} − ${q(soilRise, 'm')}`,
-      value: clearance,
-      unit: 'm',
-      source: fringe,
-    });
+    working.add(() => [
+      {
+        id: 'clearance',
+        label: 'Clearance between the capillary zone and the slab',
+        formula: 'D_w − h_soil',
+        substituted: `${q(depth, 'm')} − ${q(soilRise, 'm')}`,
+        value: clearance,
+        unit: 'm',
+        source: fringe,
+      },
+    ]);
   }
 
   const band = bandOver([HAZEN_BASIS], outputs, (v) => evaluate(v.hazenC ?? c));
@@ -116,15 +119,17 @@ function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
         .filter(([, v]) => v !== null)
         .map(([k, v]) => `${k} ${q(v ?? 0, 'm')}`)
         .join(', ');
-    working.push({
-      id: 'band',
-      label: "Band over the published range of Hazen's constant: the lowest clearance",
-      formula: 'the same steps at C = 0.1 cm² and C = 0.5 cm²',
-      substituted: `C = 0.1 cm²: ${corner(lo)}; C = 0.5 cm²: ${corner(hi)}`,
-      value: band.outputs.slabClearance?.low ?? band.outputs.layerCapillaryRise?.high ?? 0,
-      unit: 'm',
-      source: HAZEN_SOURCE,
-    });
+    working.add(() => [
+      {
+        id: 'band',
+        label: "Band over the published range of Hazen's constant: the lowest clearance",
+        formula: 'the same steps at C = 0.1 cm² and C = 0.5 cm²',
+        substituted: `C = 0.1 cm²: ${corner(lo)}; C = 0.5 cm²: ${corner(hi)}`,
+        value: band.outputs.slabClearance?.low ?? band.outputs.layerCapillaryRise?.high ?? 0,
+        unit: 'm',
+        source: HAZEN_SOURCE,
+      },
+    ]);
   }
   const worst = band?.outputs.slabClearance?.low ?? clearance;
 
@@ -190,18 +195,20 @@ function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
   }
   return solved({
     outputs,
-    working,
     warnings,
     band,
-    assumptions: [
-      'Hydrostatic equilibrium above a static water table: no evaporation, infiltration or flow.',
-      "Each material is uniform; its capillary height is Hazen's empirical estimate, a sharp top to the capillary fringe.",
-      "Hazen's constant C within its published range of 0.1–0.5 cm² (the band spans all of it).",
-      'Clean water at ordinary ground temperature.',
-      ...(layered
-        ? ['The granular layer lies directly under the slab, over the soil, with no membrane between.']
-        : []),
-    ],
+    explain: () => ({
+      working: working.build(),
+      assumptions: [
+        'Hydrostatic equilibrium above a static water table: no evaporation, infiltration or flow.',
+        "Each material is uniform; its capillary height is Hazen's empirical estimate, a sharp top to the capillary fringe.",
+        "Hazen's constant C within its published range of 0.1–0.5 cm² (the band spans all of it).",
+        'Clean water at ordinary ground temperature.',
+        ...(layered
+          ? ['The granular layer lies directly under the slab, over the soil, with no membrane between.']
+          : []),
+      ],
+    }),
   });
 }
 

@@ -15,9 +15,10 @@ import {
   q,
   quantityInput,
   solved,
+  laterWorking,
   warning,
 } from './shared.js';
-import type { CalculatorCore, InputValues, Solution, Warning, WorkingStep } from './types.js';
+import type { CalculatorCore, InputValues, Solution, Warning } from './types.js';
 
 /**
  * r/ℓc above which Rayleigh's r/3 is more than 2 % of the rise (r²/(6ℓc²) = 0.02), the tube-rise
@@ -60,7 +61,7 @@ function solve(inputs: InputValues): Solution {
   const rho = num(inputs, 'density');
   const g = num(inputs, 'gravity');
   const r = d / 2;
-  const working: WorkingStep[] = [];
+  const working = laterWorking();
   const warnings: Warning[] = [];
   let sigma: number;
   let sigmaOut: number | null = null;
@@ -72,7 +73,7 @@ function solve(inputs: InputValues): Solution {
     const m = meniscusCorrection({ diameter: d, contactAngleDeg: angleIn });
     sigma = (rho * g * r * (h + m)) / (2 * Math.cos((angleIn * Math.PI) / 180));
     sigmaOut = sigma;
-    working.push(
+    working.add(() => [
       {
         id: 'meniscus',
         label: 'Meniscus-weight correction',
@@ -91,7 +92,7 @@ function solve(inputs: InputValues): Solution {
         unit: 'N/m',
         source: RAYLEIGH,
       },
-    );
+    ]);
     if (angleIn > 0) {
       warnings.push(
         warning(
@@ -107,15 +108,17 @@ function solve(inputs: InputValues): Solution {
   } else {
     sigma = num(inputs, 'surfaceTension');
     const wetting = riseFor(sigma, 0, rho, g, d);
-    working.push({
-      id: 'wetting-rise',
-      label: 'Rise of a fully wetting liquid (θ = 0) in this bore',
-      formula: 'h₀ = 4·σ / (ρ·g·d) − r/3',
-      substituted: `4 × ${q(sigma, 'N/m')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(d, 'm')}) − ${q(r, 'm')}/3`,
-      value: wetting,
-      unit: 'm',
-      source: RAYLEIGH,
-    });
+    working.add(() => [
+      {
+        id: 'wetting-rise',
+        label: 'Rise of a fully wetting liquid (θ = 0) in this bore',
+        formula: 'h₀ = 4·σ / (ρ·g·d) − r/3',
+        substituted: `4 × ${q(sigma, 'N/m')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(d, 'm')}) − ${q(r, 'm')}/3`,
+        value: wetting,
+        unit: 'm',
+        source: RAYLEIGH,
+      },
+    ]);
     const angle = angleForRise(h, sigma, rho, g, d);
     if (angle === null) {
       warnings.push(
@@ -128,15 +131,17 @@ function solve(inputs: InputValues): Solution {
       );
     } else {
       angleOut = angle;
-      working.push({
-        id: 'solved',
-        label: 'Contact angle',
-        formula: 'θ such that h = 4·σ·cos θ / (ρ·g·d) − δ(θ), solved by bisection over 0–90°',
-        substituted: `h = ${q(h, 'm')}: θ = ${q(angle, 'deg')}, δ(θ) = ${q(meniscusCorrection({ diameter: d, contactAngleDeg: angle }), 'm')}`,
-        value: angle,
-        unit: 'deg',
-        source: "Jurin's law with Rayleigh's meniscus correction (its geometry for θ > 0 derived here)",
-      });
+      working.add(() => [
+        {
+          id: 'solved',
+          label: 'Contact angle',
+          formula: 'θ such that h = 4·σ·cos θ / (ρ·g·d) − δ(θ), solved by bisection over 0–90°',
+          substituted: `h = ${q(h, 'm')}: θ = ${q(angle, 'deg')}, δ(θ) = ${q(meniscusCorrection({ diameter: d, contactAngleDeg: angle }), 'm')}`,
+          value: angle,
+          unit: 'deg',
+          source: "Jurin's law with Rayleigh's meniscus correction (its geometry for θ > 0 derived here)",
+        },
+      ]);
       const poor = poorlyDetermined(angle, 'rise', ['rise', 'surfaceTension'], 'solved');
       if (poor !== null) warnings.push(poor);
     }
@@ -144,15 +149,18 @@ function solve(inputs: InputValues): Solution {
 
   const lc = Math.sqrt(sigma / (rho * g));
   const ratio = r / lc;
-  working.push(capillaryLengthStep(sigma, rho, g, lc), {
-    id: 'size-ratio',
-    label: 'Bore radius against the capillary length',
-    formula: 'r / ℓc',
-    substituted: `${q(r, 'm')} / ${q(lc, 'm')}`,
-    value: ratio,
-    unit: '1',
-    source: 'Rayleigh 1915 (the first-order correction needs r ≪ ℓc)',
-  });
+  working.add(() => [
+    capillaryLengthStep(sigma, rho, g, lc),
+    {
+      id: 'size-ratio',
+      label: 'Bore radius against the capillary length',
+      formula: 'r / ℓc',
+      substituted: `${q(r, 'm')} / ${q(lc, 'm')}`,
+      value: ratio,
+      unit: '1',
+      source: 'Rayleigh 1915 (the first-order correction needs r ≪ ℓc)',
+    },
+  ]);
   const solvedId = mode === 'surfaceTension' ? 'surfaceTension' : 'contactAngleDeg';
   if (ratio >= 1) {
     warnings.push(
@@ -183,19 +191,21 @@ function solve(inputs: InputValues): Solution {
       capillaryLength: lc,
       radiusToCapillaryLength: ratio,
     },
-    working,
     warnings,
     band: null,
-    assumptions: [
-      'Static equilibrium: the meniscus has stopped moving (read after it has risen and, better, after it has been let fall back to the same height).',
-      'A clean, round, uniform, vertical bore dipping into a reservoir wide enough for its surface to be flat.',
-      'The rise is measured from the flat reservoir surface to the bottom of the meniscus.',
-      mode === 'surfaceTension'
-        ? `A contact angle of ${q(angleIn, 'deg')} between the liquid and the tube, known independently.`
-        : `A surface tension of ${q(sigma, 'N/m')}, measured on the same liquid.`,
-      'Air density neglected against the liquid density.',
-      gravityAssumption(g),
-    ],
+    explain: () => ({
+      working: working.build(),
+      assumptions: [
+        'Static equilibrium: the meniscus has stopped moving (read after it has risen and, better, after it has been let fall back to the same height).',
+        'A clean, round, uniform, vertical bore dipping into a reservoir wide enough for its surface to be flat.',
+        'The rise is measured from the flat reservoir surface to the bottom of the meniscus.',
+        mode === 'surfaceTension'
+          ? `A contact angle of ${q(angleIn, 'deg')} between the liquid and the tube, known independently.`
+          : `A surface tension of ${q(sigma, 'N/m')}, measured on the same liquid.`,
+        'Air density neglected against the liquid density.',
+        gravityAssumption(g),
+      ],
+    }),
   });
 }
 

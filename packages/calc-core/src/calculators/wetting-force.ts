@@ -17,6 +17,7 @@ import {
   fmt,
   gravityAssumption,
   gravityInput,
+  laterWorking,
   liquidInputs,
   MM,
   nearNinety,
@@ -36,7 +37,6 @@ import type {
   QuantityInput,
   Solution,
   Warning,
-  WorkingStep,
 } from './types.js';
 
 type Method = 'plate-force' | 'plate-tension' | 'rod-force' | 'rod-tension' | 'ring';
@@ -58,7 +58,7 @@ const ROD_FIELDS = { diameter: 'rodDiameter' } as const;
 
 function solve(inputs: InputValues): Solution {
   const method = choice(inputs, 'method') as Method;
-  const working: WorkingStep[] = [];
+  const working = laterWorking();
   const warnings: Warning[] = [];
   let liquidAssumption: string | null = null;
   let force: number | null = null;
@@ -85,7 +85,7 @@ function solve(inputs: InputValues): Solution {
     const applies = x.inTableRange && x.factor !== null;
     factor = applies ? x.factor : null;
     sigma = applies && x.factor !== null ? x.factor * x.apparent : null;
-    working.push(
+    working.add(() => [
       {
         id: 'apparent',
         label: 'Apparent surface tension (uncorrected)',
@@ -131,15 +131,16 @@ function solve(inputs: InputValues): Solution {
         unit: '1',
         source: 'Zuidema & Waters 1941 in the form of ASTM D971 (from memory)',
       },
-    );
+    ]);
     if (applies && x.root !== null && x.factor !== null) {
-      working.push(
+      const { root, factor } = x;
+      working.add(() => [
         {
           id: 'ring-factor',
           label: 'Zuidema–Waters correction factor',
           formula: `f = ${coef(base)} + √radicand`,
-          substituted: `${coef(base)} + √${fmt(x.radicand)} = ${coef(base)} + ${fmt(x.root)}`,
-          value: x.factor,
+          substituted: `${coef(base)} + √${fmt(x.radicand)} = ${coef(base)} + ${fmt(root)}`,
+          value: factor,
           unit: '1',
           source: 'Zuidema & Waters 1941 in the form of ASTM D971 (from memory)',
         },
@@ -147,12 +148,12 @@ function solve(inputs: InputValues): Solution {
           id: 'ring-corrected',
           label: 'Surface tension, corrected',
           formula: 'σ = f·σ*',
-          substituted: `${fmt(x.factor)} × ${q(x.apparent, 'N/m')}`,
-          value: x.factor * x.apparent,
+          substituted: `${fmt(factor)} × ${q(x.apparent, 'N/m')}`,
+          value: factor * x.apparent,
           unit: 'N/m',
           source: 'Harkins & Jordan 1930',
         },
-      );
+      ]);
     }
     if (!applies) {
       const why: string[] = [];
@@ -218,33 +219,38 @@ function solve(inputs: InputValues): Solution {
     const t = isPlate ? num(inputs, 'plateThickness') : 0;
     const d = isPlate ? 0 : num(inputs, 'rodDiameter');
     perimeter = isPlate ? platePerimeter(w, t) : Math.PI * d;
-    working.push({
-      id: 'perimeter',
-      source: 'geometry of the probe',
-      label: 'Wetted length',
-      formula: isPlate ? 'P = 2·(w + t)' : 'P = π·d',
-      substituted: isPlate ? `2 × (${q(w, 'm')} + ${q(t, 'm')})` : `π × ${q(d, 'm')}`,
-      value: perimeter,
-      unit: 'm',
-    });
+    working.add(() => [
+      {
+        id: 'perimeter',
+        source: 'geometry of the probe',
+        label: 'Wetted length',
+        formula: isPlate ? 'P = 2·(w + t)' : 'P = π·d',
+        substituted: isPlate ? `2 × (${q(w, 'm')} + ${q(t, 'm')})` : `π × ${q(d, 'm')}`,
+        value: perimeter,
+        unit: 'm',
+      },
+    ]);
     if (method === 'plate-force' || method === 'rod-force') {
       const liquid = resolveLiquid(inputs, {});
-      working.unshift(...liquid.working);
+      working.first(() => liquid.working);
       if (liquid.hazard !== undefined) hazards = [liquid.hazard];
       liquidAssumption = liquid.assumption;
       const s = liquid.surfaceTension;
       force = isPlate
         ? wilhelmyForce({ surfaceTension: s, contactAngleDeg: theta, width: w, thickness: t })
         : wilhelmyRodForce({ surfaceTension: s, contactAngleDeg: theta, diameter: d });
-      working.push({
-        id: 'method',
-        source: 'Wilhelmy 1863',
-        label: 'Wetting force',
-        formula: 'F = σ·P·cos θ',
-        substituted: `${q(s, 'N/m')} × ${q(perimeter, 'm')} × cos ${q(theta, 'deg')}`,
-        value: force,
-        unit: 'N',
-      });
+      const F = force;
+      working.add(() => [
+        {
+          id: 'method',
+          source: 'Wilhelmy 1863',
+          label: 'Wetting force',
+          formula: 'F = σ·P·cos θ',
+          substituted: `${q(s, 'N/m')} × ${q(perimeter, 'm')} × cos ${q(theta, 'deg')}`,
+          value: F,
+          unit: 'N',
+        },
+      ]);
     } else {
       const F = num(inputs, isPlate ? 'force' : 'rodForce');
       sigma = isPlate
@@ -254,15 +260,18 @@ function solve(inputs: InputValues): Solution {
         : withFieldNames({ ...ROD_FIELDS, force: 'rodForce' }, () =>
             wilhelmyRodSurfaceTension({ force: F, contactAngleDeg: theta, diameter: d }),
           );
-      working.push({
-        id: 'method',
-        source: 'Wilhelmy 1863',
-        label: 'Surface tension',
-        formula: 'σ = F / (P·cos θ)',
-        substituted: `${q(F, 'N')} / (${q(perimeter, 'm')} × cos ${q(theta, 'deg')})`,
-        value: sigma,
-        unit: 'N/m',
-      });
+      const found = sigma;
+      working.add(() => [
+        {
+          id: 'method',
+          source: 'Wilhelmy 1863',
+          label: 'Surface tension',
+          formula: 'σ = F / (P·cos θ)',
+          substituted: `${q(F, 'N')} / (${q(perimeter, 'm')} × cos ${q(theta, 'deg')})`,
+          value: found,
+          unit: 'N/m',
+        },
+      ]);
       if (theta > 0) {
         warnings.push(
           warning(
@@ -294,9 +303,12 @@ function solve(inputs: InputValues): Solution {
       correctionFactor: factor,
       wettedLength: perimeter,
     },
-    working,
     warnings,
     band: null,
+    // Written only when read (`calculate`), never by `compute`.
+    get working() {
+      return working.build();
+    },
     assumptions,
     ...(hazards.length > 0 ? { hazards } : {}),
   };

@@ -20,8 +20,9 @@ import {
   warning,
   capillaryLengthStep,
   solved,
+  laterWorking,
 } from './shared.js';
-import type { CalculatorCore, InputValues, Outputs, Solution, Warning, WorkingStep } from './types.js';
+import type { CalculatorCore, InputValues, Outputs, Solution, Warning } from './types.js';
 
 /** Gravity-restrained time over Lucas–Washburn time above which gravity is called not negligible. */
 const GRAVITY_RATIO_LIMIT = 1.05;
@@ -95,11 +96,11 @@ function solve(inputs: InputValues): Solution {
   };
   const outputs = evaluate(angle.angleDeg);
 
-  const working: WorkingStep[] = [
+  const working = laterWorking(() => [
     ...liquid.working,
     ...angle.working,
     capillaryLengthStep(sigma, rho, g, lc, 'Capillary length (the pore must be well below it)'),
-  ];
+  ]);
   const warnings: Warning[] = [];
   if (tooWide) {
     warnings.push(
@@ -110,18 +111,26 @@ function solve(inputs: InputValues): Solution {
         { step: 'capillary-length', withholds: ['time', 'timeWithInertia', 'jurinLimit', 'timeWithGravity'] },
       ),
     );
-    const assumptions = [
+    const assumptions = (): string[] => [
       'Laminar flow of a Newtonian liquid in a uniform cylindrical capillary of the effective radius given.',
       liquid.assumption,
       angle.assumption,
       gravityAssumption(g),
     ];
-    return solved({ outputs, working, warnings, band: null, assumptions }, liquid);
+    return solved(
+      {
+        outputs,
+        warnings,
+        band: null,
+        explain: () => ({ working: working.build(), assumptions: assumptions() }),
+      },
+      liquid,
+    );
   }
   const raw = compute(angle.angleDeg);
   const inertiaRatio = raw.inertial.time / raw.time;
   const inertiaMatters = inertiaRatio > INERTIA_RATIO_LIMIT;
-  working.push(
+  working.add(() => [
     {
       id: 'washburn',
       label: 'Time, Lucas–Washburn (gravity and inertia neglected)',
@@ -151,19 +160,21 @@ function solve(inputs: InputValues): Solution {
       unit: 's',
       source: BOSANQUET,
     },
-  );
+  ]);
   const withheldByInertia = vertical ? ['time', 'timeWithGravity'] : ['time'];
   if (vertical && raw.limit !== null) {
     const limit = raw.limit;
-    working.push({
-      id: 'jurin-limit',
-      label: 'Jurin limit of the rise',
-      formula: 'h_J = 2·σ·cos θ / (ρ·g·r)',
-      substituted: `2 × ${q(sigma, 'N/m')} × cos ${q(angle.angleDeg, 'deg')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(r, 'm')})`,
-      value: limit,
-      unit: 'm',
-      source: "Jurin 1718 (Jurin's law)",
-    });
+    working.add(() => [
+      {
+        id: 'jurin-limit',
+        label: 'Jurin limit of the rise',
+        formula: 'h_J = 2·σ·cos θ / (ρ·g·r)',
+        substituted: `2 × ${q(sigma, 'N/m')} × cos ${q(angle.angleDeg, 'deg')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(r, 'm')})`,
+        value: limit,
+        unit: 'm',
+        source: "Jurin 1718 (Jurin's law)",
+      },
+    ]);
     const tg = raw.withGravity;
     if (tg === null) {
       warnings.push(
@@ -177,7 +188,7 @@ function solve(inputs: InputValues): Solution {
     } else if (!inertiaMatters) {
       const x = L / limit;
       const shape = gravityShape(x);
-      working.push(
+      working.add(() => [
         {
           id: 'gravity-shape',
           label: 'Height against the Jurin limit, and the shape term',
@@ -196,7 +207,7 @@ function solve(inputs: InputValues): Solution {
           unit: 's',
           source: WASHBURN,
         },
-      );
+      ]);
       if (tg / raw.time > GRAVITY_RATIO_LIMIT) {
         warnings.push(
           warning(
@@ -224,7 +235,7 @@ function solve(inputs: InputValues): Solution {
   const near = nearNinety(angle.angleDeg);
   if (near !== null) warnings.push({ ...near, step: 'washburn' });
   const band = bandOver(angle.basis, outputs, (v) => evaluate(v.contactAngleDeg ?? angle.angleDeg));
-  const assumptions = [
+  const assumptions = (): string[] => [
     'Laminar flow of a Newtonian liquid in a uniform cylindrical capillary of the effective radius given.',
     'The static contact angle holds while the liquid moves (no dynamic angle).',
     'Clean liquid and clean surfaces: no surfactant, oil or dirt.',
@@ -236,7 +247,10 @@ function solve(inputs: InputValues): Solution {
     angle.assumption,
     gravityAssumption(g),
   ];
-  return solved({ outputs, working, warnings, band, assumptions }, liquid);
+  return solved(
+    { outputs, warnings, band, explain: () => ({ working: working.build(), assumptions: assumptions() }) },
+    liquid,
+  );
 }
 
 export const calculator: CalculatorCore = {
