@@ -38,8 +38,8 @@ export const FLIGHT_GOAL = 14 * 1024;
  * joined (absorption-coefficient 31.2 KB brotli, the largest): the ceiling still stops growth; the
  * goal is unchanged and not met.
  * Lowered to 31.5 KB when the first flight began computing with calc-core's `compute` and the full run
- * (working, input hash) moved to the texts chunk (largest: absorption-coefficient 30.6 KB brotli; built
- * with NODE_ENV=test, as the release tests do, the runtime is about 0.6 KB larger: 31.1 KB).
+ * (working, input hash) moved to the texts chunk (largest: absorption-coefficient 30.7 KB brotli; built
+ * with NODE_ENV=test, as the release tests do, the runtime is about 0.6 KB larger: 31.2 KB).
  */
 export const FLIGHT_LIMIT = 31.5 * 1024;
 
