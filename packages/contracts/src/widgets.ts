@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { contrastRatio, hexColorPattern, WCAG_AA_TEXT } from './color.js';
 import { emailSchema } from './auth.js';
 import { displayNameSchema, webUrlSchema } from './text.js';
+import { isWidgetKey } from './keys.js';
 
 export const widgetStatuses = ['draft', 'live', 'paused'] as const;
 export type WidgetStatus = (typeof widgetStatuses)[number];
@@ -17,7 +18,7 @@ export type LeadFieldId = (typeof leadFieldIds)[number];
 export const leadFieldModes = ['off', 'optional', 'required'] as const;
 export type LeadFieldMode = (typeof leadFieldModes)[number];
 
-export const publicKeySchema = z.string().regex(/^wk_[a-z0-9]{20}$/, 'Not a widget key');
+export const publicKeySchema = z.string().max(30).refine(isWidgetKey, 'Not a widget key');
 
 /** An exact origin such as https://www.brackenridge-ground.example (no path, query or trailing slash). */
 export const originSchema = z
