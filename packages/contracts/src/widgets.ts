@@ -205,6 +205,12 @@ export const widgetSchema = z.object({
   releasePin: z.string().nullable(),
   logoUrl: z.string().nullable(),
   embed: z.object({ scriptUrl: z.string(), integrity: z.string(), snippet: z.string() }),
+  /** The key the last rotation replaced: served until `validUntil`, refused as replaced after. */
+  previousKey: z
+    .object({ publicKey: z.string(), replacedAt: z.string(), validUntil: z.string(), served: z.boolean() })
+    .nullable(),
+  /** The kind of key a rotation would issue now: releases before 0.3.0 read only older `wk_` keys. */
+  nextKeyKind: z.enum(['reference', 'older']),
   createdAt: z.string(),
   updatedAt: z.string(),
 });
@@ -333,6 +339,31 @@ export const setOriginsBodySchema = z.strictObject({
   origins: z.array(originSchema).max(20, 'At most 20 origins'),
 });
 export type SetOriginsBody = z.infer<typeof setOriginsBodySchema>;
+
+const isoDate = z.iso.date();
+const isoDateTime = z.iso.datetime({ offset: true });
+
+/**
+ * `POST /orgs/:orgId/widgets/:widgetId/key-rotations`: when the replaced key stops being served.
+ * A date alone (`2026-12-20`) means through that day (UTC); a time with its offset is exact.
+ * The server also refuses a moment already past and one more than MAX_KEY_OVERLAP_DAYS ahead.
+ */
+export const keyRotationBodySchema = z.strictObject({
+  oldKeyValidUntil: z
+    .string()
+    .max(40)
+    .refine(
+      (v) => isoDate.safeParse(v).success || isoDateTime.safeParse(v).success,
+      'Not a date: use 2026-12-20 or 2026-12-20T17:00:00Z',
+    ),
+});
+export type KeyRotationBody = z.infer<typeof keyRotationBodySchema>;
+
+/** The moment a rotation's `oldKeyValidUntil` stands for (a date alone: the end of that UTC day). */
+export function keyValidUntil(value: string): Date {
+  if (isoDate.safeParse(value).success) return new Date(Date.parse(`${value}T00:00:00Z`) + 86_400_000);
+  return new Date(value);
+}
 
 /** Refusals (403: origin not allowed) per origin over the last `days` days, most refused first. */
 export const refusedOriginsSchema = z.object({

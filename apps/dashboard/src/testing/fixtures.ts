@@ -16,6 +16,8 @@ export function sampleWidget(over: Partial<Widget> = {}): Widget {
     releasePin: null,
     logoUrl: null,
     embed: { scriptUrl: '', integrity: '', snippet: '' },
+    previousKey: null,
+    nextKeyKind: 'older',
     createdAt: '2026-12-01T10:00:00.000Z',
     updatedAt: '2026-12-01T10:00:00.000Z',
     ...over,
