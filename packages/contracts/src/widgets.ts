@@ -204,7 +204,16 @@ export const widgetSchema = z.object({
   /** What the developer pinned (`0.1.0`, `~0.2`); null when the widget stays on the release it was made with. */
   releasePin: z.string().nullable(),
   logoUrl: z.string().nullable(),
-  embed: z.object({ scriptUrl: z.string(), integrity: z.string(), snippet: z.string() }),
+  embed: z.object({
+    scriptUrl: z.string(),
+    integrity: z.string(),
+    /** The default snippet (the `async` variant). */
+    snippet: z.string(),
+    /** The snippet's variants; `nonce` carries `{{csp-nonce}}` for the page's nonce. */
+    variants: z.object({ plain: z.string(), async: z.string(), nonce: z.string(), heldCss: z.string() }),
+    /** The sources the firm's Content-Security-Policy must allow for the widget, per directive. */
+    csp: z.array(z.object({ directive: z.string(), sources: z.array(z.string()) })),
+  }),
   /** The key the last rotation replaced: served until `validUntil`, refused as replaced after. */
   previousKey: z
     .object({ publicKey: z.string(), replacedAt: z.string(), validUntil: z.string(), served: z.boolean() })

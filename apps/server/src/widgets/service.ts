@@ -1,4 +1,4 @@
-import { embedSnippet, reservedHeight } from './snippet.js';
+import { embedCsp, embedVariants, reservedHeight } from './snippet.js';
 import { randomBytes } from 'node:crypto';
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import semver from 'semver';
@@ -238,16 +238,29 @@ export function createWidgetService(deps: {
 
   function embed(w: Widget): WidgetDto['embed'] {
     const script = releases.script(w.release, w.calculatorId);
-    if (!script) return { scriptUrl: '', integrity: '', snippet: '' };
+    if (!script)
+      return {
+        scriptUrl: '',
+        integrity: '',
+        snippet: '',
+        variants: { plain: '', async: '', nonce: '', heldCss: '' },
+        csp: [],
+      };
     const calc = getCalculator(w.calculatorId);
-    const snippet = embedSnippet({
+    const variants = embedVariants({
       url: script.url,
       integrity: script.integrity,
       publicKey: w.publicKey,
       calculatorId: w.calculatorId,
       height: calc ? reservedHeight(calc, w.settings) : 0,
     });
-    return { scriptUrl: script.url, integrity: script.integrity, snippet };
+    return {
+      scriptUrl: script.url,
+      integrity: script.integrity,
+      snippet: variants.async,
+      variants,
+      csp: embedCsp(new URL(script.url).origin),
+    };
   }
 
   function toDto(w: Widget, logo: string | null = null): WidgetDto {
