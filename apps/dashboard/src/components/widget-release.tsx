@@ -1,6 +1,7 @@
 import { useId, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { can, type Role, type UpgradePreview, type Widget } from '@wickstone/contracts';
+import { isApiError } from '../lib/api';
 import { formatDate, formatDateTime } from '../lib/labels';
 import { orgPath } from '../nav';
 import { refusedOriginsQuery, releasesQuery, upgradePreviewQuery, usePinRelease } from '../queries/releases';
@@ -177,7 +178,7 @@ export function ReleaseSection({ orgId, widget, role }: { orgId: number; widget:
           <LiveMessage
             message={
               pin.isError
-                ? `The pin was not moved: ${pin.error.message}`
+                ? `The pin was not moved: ${(isApiError(pin.error) && pin.error.fields[0]?.message) || pin.error.message}`
                 : pin.isSuccess
                   ? `Pinned to ${pin.data.releasePin}: the embed code now loads ${pin.data.release}.`
                   : null
