@@ -10,6 +10,13 @@ import { LiveMessage, Notice } from './ui';
 
 const DAY = 86_400_000;
 const isoDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
+const utcDay = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeZone: 'UTC' });
+
+/** When a replaced key stops: a day chosen in the date field ends at the next UTC midnight, so say "through" that day. */
+function servedThrough(iso: string): string {
+  const ms = Date.parse(iso);
+  return ms % DAY === 0 ? `through ${utcDay.format(ms - 1)} (UTC)` : `until ${formatDateTime(iso)}`;
+}
 
 /**
  * The widget's key and its replacement. A new key goes into the embed code at once; the replaced
@@ -46,7 +53,7 @@ export function KeysPanel({ orgId, widget, role }: { orgId: number; widget: Widg
               <span className="text-ink-soft">
                 replaced {formatDateTime(previous.replacedAt)};{' '}
                 {previous.served
-                  ? `pages still using it are served until ${formatDateTime(previous.validUntil)}`
+                  ? `pages still using it are served ${servedThrough(previous.validUntil)}`
                   : `refused since ${formatDateTime(previous.validUntil)}`}
               </span>
             </dd>

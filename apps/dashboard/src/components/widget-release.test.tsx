@@ -277,7 +277,7 @@ describe('integration screen: key rotation and snippets', { timeout: 30_000 }, (
     });
     expect(previous.getAttribute('data-previous-key')).toBe('served');
     expect(previous.textContent).toContain('wk_ashgrove000000000001');
-    expect(previous.textContent).toContain('served until 20 Dec 2026');
+    expect(previous.textContent).toContain('served through 19 Dec 2026 (UTC)');
     expect(screen.queryByRole('button', { name: 'Replace the key' })).toBeNull();
   });
 
