@@ -2,7 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser, Locator, Page } from 'playwright-core';
 import type { Widget } from '@wickstone/contracts';
 import { seedOrgWithTeam, type FixtureOrg } from '@wickstone/server/testing';
 import { ApiSession } from '../support/api-session.js';
@@ -17,6 +17,14 @@ import { startApp, type RunningApp } from '../support/server.js';
  */
 
 const STRANGER = 'https://intranet.ashgrove-survey.example';
+
+/** One part of a screen, when screenshots are asked for (E2E_SCREENSHOTS), beside the full pages. */
+async function partShot(part: Locator, name: string): Promise<void> {
+  const asked = process.env.E2E_SCREENSHOTS;
+  if (!asked || asked === '0') return;
+  const dir = asked === '1' ? 'var/screenshots' : asked;
+  await part.screenshot({ path: `${dir}/${name}.png` });
+}
 
 /** What the page under test sends: its body and its Content-Security-Policy header (none when null). */
 interface SitePage {
@@ -175,8 +183,11 @@ describe('embed keys and CSP, as the developer', () => {
     const until = new Date(Date.now() + 10 * 86_400_000).toISOString().slice(0, 10);
     await section.getByLabel(/Keep serving the current key through/).fill(until);
     await section.getByRole('button', { name: 'Replace the key' }).click();
+    await section.locator('[data-widget-keys]').scrollIntoViewIfNeeded();
+    await partShot(section.locator('[data-widget-keys]'), 'keys-rotation-developer-1280-confirm');
     await section.getByRole('button', { name: 'Replace it' }).click();
     await section.locator('[data-previous-key="served"]').waitFor({ timeout: 20_000 });
+    await partShot(section.locator('[data-widget-keys]'), 'keys-rotation-developer-1280-after');
     const newKey = (await section.locator('[data-current-key]').textContent()) ?? '';
     expect(newKey).not.toBe(widget.publicKey);
     expect(newKey).toMatch(/^[0-9A-HJKMNP-TV-Z]{4}(-[0-9A-HJKMNP-TV-Z]{4}){3}-[0-9A-HJKMNP-TV-Z]$/);
@@ -211,14 +222,8 @@ describe('embed keys and CSP, as the developer', () => {
           expect(await section.getByRole('button', { name: 'Replace the key' }).count()).toBe(0);
         await section.scrollIntoViewIfNeeded();
         await screenshot(page, `keys-integration-${role}-${width}`);
-        if (process.env.E2E_SCREENSHOTS && process.env.E2E_SCREENSHOTS !== '0') {
-          await page.locator('#widget-embed').screenshot({
-            path: `${process.env.E2E_SCREENSHOTS === '1' ? 'var/screenshots' : process.env.E2E_SCREENSHOTS}/keys-embed-${role}-${width}-section.png`,
-          });
-          await section.screenshot({
-            path: `${process.env.E2E_SCREENSHOTS === '1' ? 'var/screenshots' : process.env.E2E_SCREENSHOTS}/keys-release-${role}-${width}-section.png`,
-          });
-        }
+        await partShot(page.locator('#widget-embed'), `keys-embed-${role}-${width}-section`);
+        await partShot(section, `keys-release-${role}-${width}-section`);
         await context.close();
       }
     }

@@ -90,7 +90,7 @@ export function KeysPanel({ orgId, widget, role }: { orgId: number; widget: Widg
           </div>
           <ConfirmAction
             label="Replace the key"
-            question={`Pages with the current code keep working through ${until}, then show no widget until their code is updated. Replace the key?`}
+            question={`Pages with the current code keep working through ${until} (UTC), then show no widget until their code is updated. Replace the key?`}
             confirmLabel="Replace it"
             busy={rotate.isPending}
             onConfirm={() => rotate.mutate({ oldKeyValidUntil: until })}
