@@ -1,3 +1,4 @@
+import { QueryTypes } from 'sequelize';
 import { randomUUID } from 'node:crypto';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -62,6 +63,11 @@ describe('releases, as the developer', () => {
       201,
     );
     await owner.json('PATCH', `/orgs/${org.id}/widgets/${created.id}`, { status: 'live' }, 200);
+    // A widget made before reference keys: 0.1.0's loader reads only its older kind of key.
+    await app.db.sequelize.query('UPDATE widgets SET public_key = ? WHERE id = ?', {
+      replacements: ['wk_cellarwallcheck00001', created.id],
+      type: QueryTypes.UPDATE,
+    });
     widget = await owner.json<Widget>(
       'PUT',
       `/orgs/${org.id}/widgets/${created.id}/release`,

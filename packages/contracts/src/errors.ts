@@ -16,6 +16,8 @@ export const errorStatus = {
   csrf_failed: 403,
   not_found: 404,
   conflict: 409,
+  /** A widget key a rotation replaced, past the date it was served until. */
+  key_replaced: 410,
   payload_too_large: 413,
   unsupported_media_type: 415,
   rate_limited: 429,

@@ -4,6 +4,7 @@ export * from './permissions.js';
 export * from './auth.js';
 export * from './color.js';
 export * from './widgets.js';
+export * from './keys.js';
 export * from './usage.js';
 export * from './releases.js';
 export * from './plans.js';

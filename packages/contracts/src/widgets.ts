@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { contrastRatio, hexColorPattern, WCAG_AA_TEXT } from './color.js';
 import { emailSchema } from './auth.js';
 import { displayNameSchema, webUrlSchema } from './text.js';
+import { isWidgetKey } from './keys.js';
 
 export const widgetStatuses = ['draft', 'live', 'paused'] as const;
 export type WidgetStatus = (typeof widgetStatuses)[number];
@@ -17,7 +18,7 @@ export type LeadFieldId = (typeof leadFieldIds)[number];
 export const leadFieldModes = ['off', 'optional', 'required'] as const;
 export type LeadFieldMode = (typeof leadFieldModes)[number];
 
-export const publicKeySchema = z.string().regex(/^wk_[a-z0-9]{20}$/, 'Not a widget key');
+export const publicKeySchema = z.string().max(30).refine(isWidgetKey, 'Not a widget key');
 
 /** An exact origin such as https://www.brackenridge-ground.example (no path, query or trailing slash). */
 export const originSchema = z
@@ -203,7 +204,22 @@ export const widgetSchema = z.object({
   /** What the developer pinned (`0.1.0`, `~0.2`); null when the widget stays on the release it was made with. */
   releasePin: z.string().nullable(),
   logoUrl: z.string().nullable(),
-  embed: z.object({ scriptUrl: z.string(), integrity: z.string(), snippet: z.string() }),
+  embed: z.object({
+    scriptUrl: z.string(),
+    integrity: z.string(),
+    /** The default snippet (the `async` variant). */
+    snippet: z.string(),
+    /** The snippet's variants; `nonce` carries `{{csp-nonce}}` for the page's nonce. */
+    variants: z.object({ plain: z.string(), async: z.string(), nonce: z.string(), heldCss: z.string() }),
+    /** The sources the firm's Content-Security-Policy must allow for the widget, per directive. */
+    csp: z.array(z.object({ directive: z.string(), sources: z.array(z.string()) })),
+  }),
+  /** The key the last rotation replaced: served until `validUntil`, refused as replaced after. */
+  previousKey: z
+    .object({ publicKey: z.string(), replacedAt: z.string(), validUntil: z.string(), served: z.boolean() })
+    .nullable(),
+  /** The kind of key a rotation would issue now: releases before 0.3.0 read only older `wk_` keys. */
+  nextKeyKind: z.enum(['reference', 'older']),
   createdAt: z.string(),
   updatedAt: z.string(),
 });
@@ -332,6 +348,31 @@ export const setOriginsBodySchema = z.strictObject({
   origins: z.array(originSchema).max(20, 'At most 20 origins'),
 });
 export type SetOriginsBody = z.infer<typeof setOriginsBodySchema>;
+
+const isoDate = z.iso.date();
+const isoDateTime = z.iso.datetime({ offset: true });
+
+/**
+ * `POST /orgs/:orgId/widgets/:widgetId/key-rotations`: when the replaced key stops being served.
+ * A date alone (`2026-12-20`) means through that day (UTC); a time with its offset is exact.
+ * The server also refuses a moment already past and one more than MAX_KEY_OVERLAP_DAYS ahead.
+ */
+export const keyRotationBodySchema = z.strictObject({
+  oldKeyValidUntil: z
+    .string()
+    .max(40)
+    .refine(
+      (v) => isoDate.safeParse(v).success || isoDateTime.safeParse(v).success,
+      'Not a date: use 2026-12-20 or 2026-12-20T17:00:00Z',
+    ),
+});
+export type KeyRotationBody = z.infer<typeof keyRotationBodySchema>;
+
+/** The moment a rotation's `oldKeyValidUntil` stands for (a date alone: the end of that UTC day). */
+export function keyValidUntil(value: string): Date {
+  if (isoDate.safeParse(value).success) return new Date(Date.parse(`${value}T00:00:00Z`) + 86_400_000);
+  return new Date(value);
+}
 
 /** Refusals (403: origin not allowed) per origin over the last `days` days, most refused first. */
 export const refusedOriginsSchema = z.object({

@@ -1,6 +1,8 @@
 /** Set on a snippet's script once a widget has been placed for it, so no other bundle run takes it again. */
 export const PLACED_ATTR = 'data-wickstone-placed';
-const KEY = /^wk_[a-z0-9]{20}$/;
+// A widget key: a reference key (four blocks of four Crockford Base32 symbols and a check symbol,
+// from 0.3.0) or an older `wk_` key. The server checks the check symbol; the shape is enough here.
+const KEY = /^(?:wk_[a-z0-9]{20}|[0-9A-HJKMNP-TV-Z]{4}(?:-[0-9A-HJKMNP-TV-Z]{4}){3}-[0-9A-HJKMNP-TV-Z])$/;
 
 /** Whether a script URL is this calculator's bundle (any release, any server). */
 export function isBundleSrc(src: string, calculatorId: string): boolean {

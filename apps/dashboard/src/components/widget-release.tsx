@@ -1,12 +1,16 @@
 import { useId, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { can, type Role, type UpgradePreview, type Widget } from '@wickstone/contracts';
+import { isApiError } from '../lib/api';
 import { formatDate, formatDateTime } from '../lib/labels';
 import { orgPath } from '../nav';
 import { refusedOriginsQuery, releasesQuery, upgradePreviewQuery, usePinRelease } from '../queries/releases';
 import { EmptyState, ErrorState, LoadingState } from './states';
 import { Button, LiveMessage, Notice, TextLink } from './ui';
 import { EditorSection } from './widget-fields';
+import { AllowedOriginsPanel } from './widget-sites';
+import { KeysPanel } from './widget-keys';
+import { useSetOrigins } from '../queries/embed-access';
 
 const percent = (x: number | null) =>
   x === null ? 'no figure to compare' : `${(x * 100).toPrecision(x < 0.001 ? 1 : 3)} %`;
@@ -97,6 +101,8 @@ export function ReleaseSection({ orgId, widget, role }: { orgId: number; widget:
   });
   const refused = useQuery({ ...refusedOriginsQuery(orgId, widget.id), enabled: can(role, 'embed:manage') });
   const pin = usePinRelease(orgId, widget.id);
+  const allow = useSetOrigins(orgId, widget.id);
+  const mayManage = can(role, 'embed:manage');
   const published = releases.data?.items.filter((r) => r.published) ?? [];
   const chosen = candidate ?? published.find((r) => r.version !== widget.release)?.version ?? widget.release;
 
@@ -172,7 +178,7 @@ export function ReleaseSection({ orgId, widget, role }: { orgId: number; widget:
           <LiveMessage
             message={
               pin.isError
-                ? `The pin was not moved: ${pin.error.message}`
+                ? `The pin was not moved: ${(isApiError(pin.error) && pin.error.fields[0]?.message) || pin.error.message}`
                 : pin.isSuccess
                   ? `Pinned to ${pin.data.releasePin}: the embed code now loads ${pin.data.release}.`
                   : null
@@ -221,16 +227,39 @@ export function ReleaseSection({ orgId, widget, role }: { orgId: number; widget:
         ) : (
           <ul className="space-y-1 text-sm" data-refused-origins>
             {refused.data.items.map((o) => (
-              <li key={o.origin}>
+              <li key={o.origin} className="flex flex-wrap items-center gap-2">
                 <code className="font-mono break-all">{o.origin}</code>{' '}
                 <span className="text-ink-soft">
                   refused {o.refusals} {o.refusals === 1 ? 'time' : 'times'}, last on {formatDate(o.lastDay)}
                 </span>
+                {widget.allowedOrigins.includes(o.origin) ? (
+                  <span className="text-ok">allowed now</span>
+                ) : mayManage ? (
+                  <Button
+                    size="sm"
+                    disabled={allow.isPending}
+                    onClick={() => allow.mutate([...widget.allowedOrigins, o.origin])}
+                  >
+                    Allow this origin<span className="sr-only"> ({o.origin})</span>
+                  </Button>
+                ) : null}
               </li>
             ))}
           </ul>
         )}
+        <LiveMessage
+          message={
+            allow.isError
+              ? `The site was not allowed: ${allow.error.message}`
+              : allow.isSuccess
+                ? 'Allowed: its pages get the widget from now on.'
+                : null
+          }
+          tone={allow.isError ? 'bad' : 'ok'}
+        />
       </div>
+      <AllowedOriginsPanel orgId={orgId} widget={widget} role={role} />
+      <KeysPanel orgId={orgId} widget={widget} role={role} />
     </EditorSection>
   );
 }

@@ -1,6 +1,11 @@
+import { useState } from 'react';
+import { can, type Role, type Widget } from '@wickstone/contracts';
 import { checkSite, errorsUnder, lines } from '../lib/widget-draft';
-import { Button } from './ui';
-import { controlClass, TextAreaField } from './form';
+import { isApiError } from '../lib/api';
+import { useSetOrigins } from '../queries/embed-access';
+import { describeError } from './states';
+import { Button, LiveMessage, Notice } from './ui';
+import { controlClass, TextAreaField, TextField } from './form';
 import { EditorSection, type SectionProps } from './widget-fields';
 
 /** The exact origins allowed to embed the widget, one a line, each checked with `originSchema` as typed. */
@@ -79,5 +84,92 @@ export function SitesSection({ draft, onChange, errors, readOnly }: SectionProps
         </ul>
       ) : null}
     </EditorSection>
+  );
+}
+
+/**
+ * The developer's list of allowed sites (`PUT …/origins`): add one, remove one. The server checks
+ * each origin; its refusals are shown on the line they name (`body.origins.2`) or for the list.
+ */
+export function AllowedOriginsPanel({ orgId, widget, role }: { orgId: number; widget: Widget; role: Role }) {
+  const mayEdit = can(role, 'embed:manage');
+  const save = useSetOrigins(orgId, widget.id);
+  const [typed, setTyped] = useState('');
+  const [sent, setSent] = useState<string[] | null>(null);
+  const issues = isApiError(save.error) ? save.error.fields : [];
+  const listIssue = issues.find((f) => f.field === 'body.origins')?.message;
+  const issueAt = (i: number) => issues.find((f) => f.field === `body.origins.${i}`)?.message;
+  const added = sent && sent.length > widget.allowedOrigins.length ? sent.length - 1 : -1;
+  const typedIssue = added >= 0 ? issueAt(added) : undefined;
+  const put = (origins: string[]) => {
+    setSent(origins);
+    save.mutate(origins, { onSuccess: () => setTyped('') });
+  };
+
+  return (
+    <div className="space-y-3" data-allowed-origins>
+      <h3 className="font-semibold">Sites allowed to embed it</h3>
+      {widget.allowedOrigins.length === 0 ? (
+        <p className="text-sm text-ink-soft">No site yet: the widget shows on no page.</p>
+      ) : (
+        <ul className="space-y-1 text-sm">
+          {widget.allowedOrigins.map((o, i) => (
+            <li key={o} className="flex flex-wrap items-center gap-2">
+              <code className="font-mono break-all">{o}</code>
+              {mayEdit ? (
+                <Button
+                  size="sm"
+                  disabled={save.isPending}
+                  onClick={() => put(widget.allowedOrigins.filter((x) => x !== o))}
+                >
+                  Remove<span className="sr-only"> {o}</span>
+                </Button>
+              ) : null}
+              {issueAt(i) ? <span className="font-semibold text-bad">{issueAt(i)}</span> : null}
+            </li>
+          ))}
+        </ul>
+      )}
+      {mayEdit ? (
+        <form
+          className="flex flex-wrap items-end gap-3"
+          onSubmit={(e) => {
+            e.preventDefault();
+            if (typed.trim()) put([...widget.allowedOrigins, typed.trim()]);
+          }}
+        >
+          <div className="min-w-0 flex-1 basis-64">
+            <TextField
+              label="Add a site"
+              name="origin"
+              value={typed}
+              onChange={(e) => setTyped(e.target.value)}
+              placeholder="https://www.brackenridge-ground.example"
+              spellCheck={false}
+              autoCapitalize="off"
+              autoComplete="off"
+              error={typedIssue ?? listIssue}
+              hint="Scheme, host and port only: nothing after them."
+              data-add-origin
+            />
+          </div>
+          <Button type="submit" size="sm" disabled={save.isPending}>
+            Allow this site
+          </Button>
+        </form>
+      ) : (
+        <Notice>Developers, owners and admins change the sites allowed to embed a widget.</Notice>
+      )}
+      <LiveMessage
+        message={
+          save.isError && !issues.length
+            ? `The list was not changed: ${describeError(save.error)}`
+            : save.isSuccess
+              ? `Saved: ${save.data.allowedOrigins.length} ${save.data.allowedOrigins.length === 1 ? 'site' : 'sites'} allowed.`
+              : null
+        }
+        tone={save.isError ? 'bad' : 'ok'}
+      />
+    </div>
   );
 }

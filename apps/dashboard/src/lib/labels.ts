@@ -13,7 +13,7 @@ export const roleSummary: Record<Role, string> = {
   admin: 'Sets up widgets, brand and request forms; manages the team.',
   analyst: 'Reviews usage and answers the enquiries.',
   developer:
-    'Pins widgets to releases after previewing the change, and keeps the sites allowed to embed them.',
+    'Pins widgets to releases after previewing the change, keeps the sites allowed to embed them and replaces their keys.',
 };
 
 export const roleOptions = roles.map((r) => ({ value: r, label: roleLabel[r] }));

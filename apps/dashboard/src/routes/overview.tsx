@@ -1,10 +1,11 @@
-import { useQuery } from '@tanstack/react-query';
+import { useQueries, useQuery } from '@tanstack/react-query';
 import { can, plans } from '@wickstone/contracts';
 import { useOrg } from '../lib/org-context';
 import { formatDate, roleLabel, roleSummary } from '../lib/labels';
 import { utcDay } from '../lib/usage-filters';
 import { leadListQuery, usageSummaryQuery } from '../queries/usage';
 import { widgetListQuery } from '../queries/widgets';
+import { refusedOriginsQuery, releasesQuery } from '../queries/releases';
 import { usePageTitle } from '../lib/use-page-title';
 import { orgPath } from '../nav';
 import { membersQuery } from '../queries/members';
@@ -203,10 +204,17 @@ function RunsThisWeek() {
   );
 }
 
-/** The developer's: which release each widget runs, and (when the server counts them) refused pages. */
+/** The newest published release, for saying which widgets could move. */
+function newestPublished(items: { version: string; published: boolean }[] | undefined): string | null {
+  return items?.find((r) => r.published)?.version ?? null;
+}
+
+/** The developer's: which release each widget runs, and whether a newer published one is ready. */
 function ReleasesInUse() {
   const { orgId } = useOrg();
   const widgets = useQuery(widgetListQuery(orgId, 1, 100));
+  const releases = useQuery(releasesQuery());
+  const newest = newestPublished(releases.data?.items);
   const byRelease = new Map<string, string[]>();
   for (const w of widgets.data?.items ?? [])
     byRelease.set(w.release, [...(byRelease.get(w.release) ?? []), w.name]);
@@ -225,6 +233,22 @@ function ReleasesInUse() {
               <span className="text-ink-soft">
                 · {names.length} {names.length === 1 ? 'widget' : 'widgets'}: {names.join(', ')}
               </span>
+              {newest &&
+              release !== newest &&
+              releases.data?.items.some((r) => r.version === release && r.published) ? (
+                <span className="block text-ink-soft" data-release-status="behind">
+                  Published {newest} is newer: preview it on the widget&rsquo;s page before moving the pin.
+                </span>
+              ) : release === newest ? (
+                <span className="block text-ink-soft" data-release-status="newest">
+                  The newest published release.
+                </span>
+              ) : releases.isSuccess &&
+                !releases.data.items.some((r) => r.version === release && r.published) ? (
+                <span className="block text-ink-soft" data-release-status="unpublished">
+                  Not published yet: this server&rsquo;s own build.
+                </span>
+              ) : null}
             </li>
           ))}
         </ul>
@@ -233,19 +257,64 @@ function ReleasesInUse() {
   );
 }
 
-/*
- * SLOT (developer overview): pages refused because their origin is not allowed, and whether a
- * newer release is ready for each pin. The server does not count refused origins on this branch;
- * the card says so rather than show a figure it does not have.
+/**
+ * The developer's: pages the embed API refused because their site is not allowed, per origin over
+ * the last 30 days, across the organisation's widgets, most refused first.
  */
 function RefusedOrigins() {
+  const { orgId } = useOrg();
+  const widgets = useQuery(widgetListQuery(orgId, 1, 100));
+  const items = widgets.data?.items ?? [];
+  const refused = useQueries({ queries: items.map((w) => refusedOriginsQuery(orgId, w.id)) });
+  const failed = refused.find((q) => q.isError);
+  const rows = new Map<
+    string,
+    { origin: string; refusals: number; widgets: { id: number; name: string }[] }
+  >();
+  refused.forEach((q, i) => {
+    const w = items[i];
+    if (!w || !q.data) return;
+    for (const o of q.data.items) {
+      const row = rows.get(o.origin) ?? { origin: o.origin, refusals: 0, widgets: [] };
+      row.refusals += o.refusals;
+      row.widgets.push({ id: w.id, name: w.name });
+      rows.set(o.origin, row);
+    }
+  });
+  const sorted = [...rows.values()].sort(
+    (a, b) => b.refusals - a.refusals || a.origin.localeCompare(b.origin),
+  );
   return (
-    <Card className="space-y-2 p-5" data-slot="refused-origins">
-      <h2 className={ruleHeading}>Refused pages</h2>
-      <p className="text-sm text-ink-soft">
-        Pages that tried to show a widget from a site it does not allow will be counted here. The server does
-        not count them yet.
-      </p>
+    <Card className="space-y-3 p-5" data-slot="refused-origins">
+      <h2 className={ruleHeading}>Sites refused, last 30 days</h2>
+      {!widgets.isSuccess ? (
+        <Waiting query={widgets} label="Reading the widgets…" />
+      ) : failed ? (
+        <Waiting query={failed} label="" />
+      ) : refused.some((q) => q.isPending) ? (
+        <Waiting query={{ isError: false, error: null }} label="Counting refused pages…" />
+      ) : sorted.length === 0 ? (
+        <p className="text-sm text-ink-soft">No page outside the allowed sites asked for a widget.</p>
+      ) : (
+        <ul className="space-y-2 text-sm" data-refused-summary>
+          {sorted.slice(0, 6).map((r) => (
+            <li key={r.origin}>
+              <Breakable text={r.origin} />{' '}
+              <span className="font-semibold tabular-nums">
+                {r.refusals} {r.refusals === 1 ? 'refusal' : 'refusals'}
+              </span>
+              <span className="block text-ink-soft">
+                {r.widgets.map((w, i) => (
+                  <span key={w.id}>
+                    {i ? ', ' : ''}
+                    <TextLink to={`${orgPath(orgId, `widgets/${w.id}`)}#widget-release`}>{w.name}</TextLink>
+                  </span>
+                ))}
+              </span>
+            </li>
+          ))}
+        </ul>
+      )}
     </Card>
   );
 }

@@ -13,16 +13,19 @@ export interface RefusalCounter {
 
 /**
  * Refused origins counted in MariaDB (one upsert per refusal, so every server process adds to the
- * same row); a key no widget has counts nothing.
+ * same row); a key no widget has counts nothing, a replaced key counts for its widget.
  */
 export function createRefusalCounter(sequelize: Sequelize): RefusalCounter {
   return {
     async count(publicKey, origin) {
       await sequelize.query(
         `INSERT INTO refused_origins (widget_id, origin, day, refusals)
-         SELECT id, ?, CURRENT_DATE(), 1 FROM widgets WHERE public_key = ?
+         SELECT id, ?, CURRENT_DATE(), 1 FROM widgets WHERE public_key = ? OR previous_public_key = ?
          ON DUPLICATE KEY UPDATE refusals = refusals + 1`,
-        { replacements: [origin.toLowerCase().slice(0, 200), publicKey], type: QueryTypes.INSERT },
+        {
+          replacements: [origin.toLowerCase().slice(0, 200), publicKey, publicKey],
+          type: QueryTypes.INSERT,
+        },
       );
     },
     async list(orgId, widgetId) {

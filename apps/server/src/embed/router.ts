@@ -180,15 +180,24 @@ export function embedRouter(
   router.get('/runs/:runId/sheet', sheetsPerIp, async (req, res) => {
     const { runId } = parseRequest(embedSheetParamsSchema, req.params, 'params');
     const { publicKey, ...project } = parseRequest(embedSheetQuerySchema, req.query, 'query');
-    sendSheet(res, await sheets.forVisitor({ runId, publicKey, origin: req.get('origin'), project }));
+    const origin = req.get('origin');
+    sendSheet(
+      res,
+      await service.withKey(publicKey, (key) =>
+        sheets.forVisitor({ runId, publicKey: key, origin, project }),
+      ),
+    );
   });
   // The widget's "Download calculation sheet": the project block typed there is kept with the run.
   router.post('/runs/:runId/sheet', sheetsPerIp, async (req, res) => {
     const { runId } = parseRequest(embedSheetParamsSchema, req.params, 'params');
     const { publicKey, ...project } = parseRequest(embedSheetBodySchema, req.body, 'body');
+    const origin = req.get('origin');
     sendSheet(
       res,
-      await sheets.forVisitor({ runId, publicKey, origin: req.get('origin'), project, store: true }),
+      await service.withKey(publicKey, (key) =>
+        sheets.forVisitor({ runId, publicKey: key, origin, project, store: true }),
+      ),
     );
   });
 

@@ -18,6 +18,7 @@ import { assetUrl } from '../widgets/service.js';
 import { leadNotificationMail, resultCopyMail, type FirmBrand } from './mail.js';
 import { checkWidget, createRunIngest, type RunIngest, type RunReceipt } from './ingest.js';
 import type { SheetService } from '../sheets/service.js';
+import { createReplacedKeys } from './keys.js';
 import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
 
 export interface EmbedService {
@@ -28,6 +29,8 @@ export interface EmbedService {
   /** Whether any live widget lets this origin embed it (for CORS preflight). */
   originKnown(origin: string): Promise<boolean>;
   asset(id: number): Promise<Asset | null>;
+  /** `use(publicKey)`, or with the widget's new key when the page names a replaced key still served. */
+  withKey<T>(publicKey: string, use: (key: string) => Promise<T>): Promise<T>;
 }
 
 const field = (name: string, message: string) =>
@@ -52,6 +55,7 @@ export function createEmbedService(deps: {
 }): EmbedService {
   const { sequelize, mailer, logger, publicUrl, counters, copyLimits, sheets } = deps;
   const afterStored = deps.afterRunsStored;
+  const replacedKeys = createReplacedKeys(sequelize);
   const ingest =
     deps.ingest ??
     createRunIngest(sequelize, {
@@ -78,7 +82,9 @@ export function createEmbedService(deps: {
   }
 
   async function liveWidget(publicKey: string, origin: string | undefined): Promise<Widget> {
-    return checkWidget(await Widget.findOne({ where: { publicKey } }), origin);
+    return replacedKeys.withKey(publicKey, async (key) =>
+      checkWidget(await Widget.findOne({ where: { publicKey: key } }), origin),
+    );
   }
 
   async function recipientsFor(w: Widget): Promise<string[]> {
@@ -131,7 +137,10 @@ export function createEmbedService(deps: {
       };
     },
 
-    recordRun: (body, origin) => ingest.submit(body, origin),
+    recordRun: (body, origin) =>
+      replacedKeys.withKey(body.publicKey, (publicKey) => ingest.submit({ ...body, publicKey }, origin)),
+
+    withKey: (publicKey, use) => replacedKeys.withKey(publicKey, use),
 
     async recordLead(body, origin) {
       const w = await liveWidget(body.publicKey, origin);

@@ -22,6 +22,9 @@ const validBodies: Record<string, unknown> = {
   'PATCH /api/v1/orgs/:orgId/widgets/:widgetId': { name: 'Taken over' },
   'PUT /api/v1/orgs/:orgId/widgets/:widgetId/release': { pin: '0.1.0' },
   'PUT /api/v1/orgs/:orgId/widgets/:widgetId/origins': { origins: ['https://intruder.example'] },
+  'POST /api/v1/orgs/:orgId/widgets/:widgetId/key-rotations': {
+    oldKeyValidUntil: new Date(Date.now() + 7 * 86_400_000).toISOString(),
+  },
   'PATCH /api/v1/orgs/:orgId/leads/:leadId': { status: 'closed' },
   'POST /api/v1/orgs/:orgId/leads/:leadId/notes': { body: 'Taken over' },
   'PATCH /api/v1/orgs/:orgId/settings/retention': { months: 1 },

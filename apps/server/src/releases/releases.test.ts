@@ -1,3 +1,4 @@
+import { QueryTypes } from 'sequelize';
 import { createHash, randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -73,6 +74,14 @@ describe('releases side by side, and pins', () => {
     await developer.login(org.users.developer.email, org.users.developer.password);
     await analyst.login(org.users.analyst.email, org.users.analyst.password);
     widget = await createLiveWidget(owner, org.id, 'Cellar wall check', [SITE]);
+    // A widget made before reference keys: its older key is one 0.1.0's loader reads too (a
+    // reference key could not be pinned there).
+    const olderKey = 'wk_cellarwallcheck00001';
+    await t.db.sequelize.query('UPDATE widgets SET public_key = ? WHERE id = ?', {
+      replacements: [olderKey, widget.id],
+      type: QueryTypes.UPDATE,
+    });
+    widget = { ...widget, publicKey: olderKey };
   }, 300_000);
   afterAll(async () => {
     await t?.close();

@@ -1,5 +1,6 @@
 import {
   createWidgetBodySchema,
+  keyRotationBodySchema,
   orgParamsSchema,
   pageQuerySchema,
   setOriginsBodySchema,
@@ -120,6 +121,21 @@ export function embedAccessRoutes(
         ),
       };
     },
+  );
+
+  routes.post(
+    '/orgs/:orgId/widgets/:widgetId/key-rotations',
+    { access: 'embed:manage', params: widgetParamsSchema, body: keyRotationBodySchema },
+    async ({ org, session, params, body, meta }) => ({
+      status: 201,
+      body: await widgets.rotateKey(
+        org.id,
+        params.widgetId,
+        session.user.id,
+        body.oldKeyValidUntil,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
+    }),
   );
 
   routes.get(

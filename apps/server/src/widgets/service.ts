@@ -1,4 +1,4 @@
-import { embedSnippet, reservedHeight } from './snippet.js';
+import { embedCsp, embedVariants, reservedHeight } from './snippet.js';
 import { randomBytes } from 'node:crypto';
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import semver from 'semver';
@@ -10,6 +10,12 @@ import {
 } from '@wickstone/calc-core';
 import {
   defaultWidgetSettings,
+  isReferenceKey,
+  keyValidUntil,
+  legacyKeyFrom,
+  MAX_KEY_OVERLAP_DAYS,
+  REFERENCE_KEYS_SINCE,
+  referenceKeyFrom,
   type Widget as WidgetDto,
   type WidgetRevision as WidgetRevisionDto,
   type WidgetSettings,
@@ -74,15 +80,42 @@ export interface WidgetService {
     actorId: number,
     trail?: AuditTrail,
   ): Promise<WidgetDto>;
+  /**
+   * Issue the widget a new key; the old one is served until `oldKeyValidUntil` (400 naming
+   * `body.oldKeyValidUntil` when past or more than MAX_KEY_OVERLAP_DAYS ahead; 409 while an earlier
+   * replaced key is still served). Audited.
+   */
+  rotateKey(
+    orgId: number,
+    widgetId: number,
+    actorId: number,
+    oldKeyValidUntil: string,
+    trail?: AuditTrail,
+  ): Promise<WidgetDto>;
   toDto(widget: Widget): WidgetDto;
 }
 
-function newPublicKey(): string {
-  // 20 characters of [a-z0-9]: about 103 bits, unguessable, safe in a URL and an HTML attribute.
-  const alphabet = 'abcdefghijklmnopqrstuvwxyz0123456789';
-  const bytes = randomBytes(20);
-  return `wk_${Array.from(bytes, (b) => alphabet[b % 36]).join('')}`;
+/** Whether a release's loader reads reference keys (0.1.0 and 0.2.0, published, read only `wk_` keys). */
+export function readsReferenceKeys(release: string): boolean {
+  const v = semver.valid(release);
+  return v !== null && semver.gte(v, REFERENCE_KEYS_SINCE);
 }
+
+/**
+ * A new key for a widget on `release`: a reference key when its loader reads them, else an
+ * older-style key, so a widget pinned to a published older release keeps a key its loader accepts.
+ */
+function newPublicKey(release: string): string {
+  return readsReferenceKeys(release) ? referenceKeyFrom(randomBytes(16)) : legacyKeyFrom(randomBytes(20));
+}
+
+/** Whether a widget's replaced key is still served (its overlap has not ended). */
+const previousServed = (w: Widget): boolean =>
+  w.previousPublicKey !== null &&
+  w.previousKeyValidUntil !== null &&
+  w.previousKeyValidUntil.getTime() > Date.now();
+
+const day = (d: Date) => d.toISOString().slice(0, 10);
 
 export function assetUrl(publicUrl: string, asset: { id: number; sha256: string }): string {
   return `${publicUrl.replace(/\/$/, '')}/api/v1/embed/assets/${asset.id}/${asset.sha256.slice(0, 16)}`;
@@ -205,16 +238,29 @@ export function createWidgetService(deps: {
 
   function embed(w: Widget): WidgetDto['embed'] {
     const script = releases.script(w.release, w.calculatorId);
-    if (!script) return { scriptUrl: '', integrity: '', snippet: '' };
+    if (!script)
+      return {
+        scriptUrl: '',
+        integrity: '',
+        snippet: '',
+        variants: { plain: '', async: '', nonce: '', heldCss: '' },
+        csp: [],
+      };
     const calc = getCalculator(w.calculatorId);
-    const snippet = embedSnippet({
+    const variants = embedVariants({
       url: script.url,
       integrity: script.integrity,
       publicKey: w.publicKey,
       calculatorId: w.calculatorId,
       height: calc ? reservedHeight(calc, w.settings) : 0,
     });
-    return { scriptUrl: script.url, integrity: script.integrity, snippet };
+    return {
+      scriptUrl: script.url,
+      integrity: script.integrity,
+      snippet: variants.async,
+      variants,
+      csp: embedCsp(new URL(script.url).origin),
+    };
   }
 
   function toDto(w: Widget, logo: string | null = null): WidgetDto {
@@ -230,6 +276,16 @@ export function createWidgetService(deps: {
       releasePin: w.releasePin ?? null,
       logoUrl: logo,
       embed: embed(w),
+      previousKey:
+        w.previousPublicKey && w.keyReplacedAt && w.previousKeyValidUntil
+          ? {
+              publicKey: w.previousPublicKey,
+              replacedAt: w.keyReplacedAt.toISOString(),
+              validUntil: w.previousKeyValidUntil.toISOString(),
+              served: w.previousKeyValidUntil.getTime() > Date.now(),
+            }
+          : null,
+      nextKeyKind: readsReferenceKeys(w.release) ? 'reference' : 'older',
       createdAt: w.createdAt.toISOString(),
       updatedAt: w.updatedAt.toISOString(),
     };
@@ -291,6 +347,13 @@ export function createWidgetService(deps: {
       return sequelize.transaction(async (transaction) => {
         const w = await findForUpdate(orgId, widgetId, transaction);
         const release = resolvePin(pin, w.calculatorId);
+        const served = [w.publicKey, ...(previousServed(w) ? [w.previousPublicKey as string] : [])];
+        const unread = served.find((k) => isReferenceKey(k));
+        if (unread && !readsReferenceKeys(release))
+          throw fieldError(
+            'body.pin',
+            `Release ${release}'s loader reads only older wk_ keys, and this widget's key ${unread} is a reference key: pin ${REFERENCE_KEYS_SINCE} or later`,
+          );
         const before = { release: w.release, releasePin: w.releasePin ?? null };
         const after = { release, releasePin: pin };
         const changes = diff(before, after);
@@ -320,6 +383,50 @@ export function createWidgetService(deps: {
 
     followPins: () => followReleasePins(releases),
 
+    async rotateKey(orgId, widgetId, actorId, oldKeyValidUntil, trail) {
+      const until = keyValidUntil(oldKeyValidUntil);
+      const now = Date.now();
+      if (until.getTime() <= now)
+        throw fieldError(
+          'body.oldKeyValidUntil',
+          'Choose a moment after now: the old key must be served a while',
+        );
+      if (until.getTime() > now + MAX_KEY_OVERLAP_DAYS * 86_400_000)
+        throw fieldError(
+          'body.oldKeyValidUntil',
+          `At most ${MAX_KEY_OVERLAP_DAYS} days ahead: the old key is served for at most ${MAX_KEY_OVERLAP_DAYS} days`,
+        );
+      return sequelize.transaction(async (transaction) => {
+        const w = await findForUpdate(orgId, widgetId, transaction);
+        if (previousServed(w))
+          throw new AppError(
+            'conflict',
+            `The key replaced on ${day(w.keyReplacedAt as Date)} is still served until ${(w.previousKeyValidUntil as Date).toISOString()}: rotate again after that`,
+            { previousKeyValidUntil: (w.previousKeyValidUntil as Date).toISOString() },
+          );
+        const oldKey = w.publicKey;
+        const newKey = newPublicKey(w.release);
+        await w.update(
+          {
+            publicKey: newKey,
+            previousPublicKey: oldKey,
+            keyReplacedAt: new Date(now),
+            previousKeyValidUntil: until,
+          },
+          { transaction },
+        );
+        await trail?.(
+          {
+            type: 'widget.key_rotated',
+            subject: w.name,
+            details: { widgetId: w.id, oldKey, newKey, oldKeyValidUntil: until.toISOString() },
+          },
+          transaction,
+        );
+        return dto(w);
+      });
+    },
+
     async list(orgId, page, pageSize) {
       const { rows, count } = await Widget.findAndCountAll({
         where: { organizationId: orgId },
@@ -343,12 +450,13 @@ export function createWidgetService(deps: {
       checkInputSettings(calc, settings, 'body.settings');
       await checkLogo(orgId, settings, 'body.settings');
       const release = releases.latest()?.version ?? deps.widgetVersion;
+      const publicKey = newPublicKey(release);
       const w = await sequelize.transaction(async (transaction) => {
         await assertWidgetRoom(orgId, transaction);
         const created = await Widget.create(
           {
             organizationId: orgId,
-            publicKey: newPublicKey(),
+            publicKey,
             name: body.name,
             calculatorId: calc.id,
             status: 'draft',

@@ -62,3 +62,50 @@ export function embedSnippet(args: {
     `data-wickstone-key="${attr(args.publicKey)}"></script>`
   );
 }
+
+/** Stands in a snippet for the nonce the firm's server makes for each page it sends. */
+export const NONCE_PLACEHOLDER = '{{csp-nonce}}';
+
+/**
+ * The three ways to paste a widget: `async` (the default snippet: the page never waits for it),
+ * `plain` (runs where it stands, the page waits for it) and `nonce`, for a site whose
+ * Content-Security-Policy allows scripts by nonce: the script carries the page's nonce, and the
+ * placeholder has no inline style (a strict `style-src` refuses style attributes), so the held
+ * height goes in the site's own stylesheet (`heldCss`).
+ */
+export function embedVariants(args: Parameters<typeof embedSnippet>[0]): {
+  plain: string;
+  async: string;
+  nonce: string;
+  heldCss: string;
+} {
+  const async = embedSnippet(args);
+  const script = (extra: string) =>
+    `<script${extra} src="${attr(args.url)}" integrity="${attr(args.integrity)}" crossorigin="anonymous" ` +
+    `data-wickstone-key="${attr(args.publicKey)}"></script>`;
+  const bare = `<wickstone-widget data-calculator="${attr(args.calculatorId)}"></wickstone-widget>\n`;
+  return {
+    async,
+    plain: async.replace('<script async ', '<script '),
+    nonce: bare + script(` async nonce="${NONCE_PLACEHOLDER}"`),
+    heldCss: `wickstone-widget[data-calculator="${args.calculatorId}"] { display: block; min-height: ${args.height}px; }`,
+  };
+}
+
+/**
+ * What a firm's Content-Security-Policy must allow for the widget, from what the loader loads: its
+ * loader and chunks are scripts from the app (`script-src`, by nonce for the snippet's own tag); it
+ * fetches its settings and sends runs, leads and sheet requests to the embed API (`connect-src`);
+ * it loads the Manrope face from the release folder with the FontFace API (`font-src`); a firm's
+ * logo is an image from the embed API (`img-src`). Its styles are constructed style sheets in its
+ * shadow root, which `style-src` does not govern. tests/e2e/csp.test.ts runs a widget under exactly
+ * this policy in Chromium and fails on any violation.
+ */
+export function embedCsp(appOrigin: string): { directive: string; sources: string[] }[] {
+  return [
+    { directive: 'script-src', sources: [`'nonce-${NONCE_PLACEHOLDER}'`, appOrigin] },
+    { directive: 'connect-src', sources: [appOrigin] },
+    { directive: 'font-src', sources: [appOrigin] },
+    { directive: 'img-src', sources: [appOrigin] },
+  ];
+}

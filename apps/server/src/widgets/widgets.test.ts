@@ -1,5 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { defaultWidgetSettings, errorBodySchema, widgetSchema, type Widget } from '@wickstone/contracts';
+import {
+  defaultWidgetSettings,
+  errorBodySchema,
+  isReferenceKey,
+  widgetSchema,
+  type Widget,
+} from '@wickstone/contracts';
 import {
   createTestApp,
   seedOrgWithTeam,
@@ -47,7 +53,7 @@ describe('widgets API', () => {
       status: 'draft',
       allowedOrigins: [],
     });
-    expect(w.publicKey).toMatch(/^wk_[a-z0-9]{20}$/);
+    expect(isReferenceKey(w.publicKey)).toBe(true);
     expect(w.settings).toEqual(defaultWidgetSettings());
     expect(w.embed.snippet).toContain(`data-wickstone-key="${w.publicKey}"`);
     // A placeholder before the script holds the widget's place: tube-rise shows five inputs by default

@@ -19,6 +19,10 @@ export class Widget extends Model<InferAttributes<Widget>, InferCreationAttribut
   declare settings: WidgetSettings;
   declare release: string;
   declare releasePin: CreationOptional<string | null>;
+  /** The key a rotation replaced, served until `previousKeyValidUntil` (then refused as replaced). */
+  declare previousPublicKey: CreationOptional<string | null>;
+  declare keyReplacedAt: CreationOptional<Date | null>;
+  declare previousKeyValidUntil: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -35,6 +39,9 @@ export class Widget extends Model<InferAttributes<Widget>, InferCreationAttribut
         settings: { type: DataTypes.JSON, allowNull: false },
         release: { type: DataTypes.STRING(40), allowNull: false },
         releasePin: { type: DataTypes.STRING(40), allowNull: true, defaultValue: null },
+        previousPublicKey: { type: DataTypes.CHAR(23), allowNull: true, defaultValue: null, unique: true },
+        keyReplacedAt: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
+        previousKeyValidUntil: { type: DataTypes.DATE(3), allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },
