@@ -318,7 +318,7 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
   it('puts back an earlier revision from the editor, as a new revision the audit names', async () => {
     const page = await freshPage(1280);
     const home = await signIn(page, 'admin');
-    await page.goto(`${app.url}${home}/widgets/${tubeId}`);
+    await page.goto(`${app.url}${home}/widgets/${tubeId}?section=revisions`);
     const first = page.locator('[data-revision]').last();
     await first.getByRole('button', { name: 'Restore revision 1' }).click();
     await first.getByRole('button', { name: 'Restore', exact: true }).click();
@@ -358,14 +358,41 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
           .locator('nav[aria-label="Main"] a')
           .evaluateAll((links) => links.map((a) => (a as HTMLAnchorElement).pathname));
         expect(navLinks.length).toBeGreaterThan(3);
+        // The widget editor, one section at a time: what this role works through or reads.
+        const sections =
+          role === 'owner' || role === 'admin'
+            ? [
+                'name',
+                'inputs',
+                'units',
+                'look',
+                'cautions',
+                'requests',
+                'sheet',
+                'sites',
+                'embed',
+                'release',
+                'revisions',
+              ]
+            : ['settings', 'embed', 'release', 'revisions'];
+        const editor = sections.map((s) => `${home}/widgets/${tubeId}?section=${s}`);
         const extra = [
           `${home}/widgets/${tubeId}`,
+          ...editor,
           `${home}/usage/runs/${runId}`,
           ...(role === 'developer' ? [] : [`${home}/leads/${leadId}`]),
           ...(role === 'owner' || role === 'admin' ? [`${home}/widgets/new`] : []),
         ];
-        for (const p of [...navLinks, ...extra])
+        for (const p of [...navLinks, ...extra]) {
           await check(page, `${app.url}${p}`, `${role} ${p} (${width})`);
+          const section = /[?&]section=([a-z]+)/.exec(p)?.[1];
+          // The editor's sections as owner (every one) and analyst (the summary), to look at.
+          if (section && (role === 'owner' || role === 'analyst')) {
+            await page.locator(`[data-editor-section="${section}"]`).waitFor();
+            await screenshot(page, `screens-editor-${role}-${section}-${width}`);
+          }
+          if (p.includes('/usage/runs/') && role === 'owner') await screenshot(page, `screens-run-${width}`);
+        }
         if (width === 390) {
           // The folded contents on a phone: one button names where you are, and opens every page.
           await page.goto(`${app.url}${home}`);
