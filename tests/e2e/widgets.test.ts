@@ -70,6 +70,7 @@ interface MailItem {
   to: string[];
   subject: string;
   text: string;
+  html: string;
 }
 
 async function mailTo(address: string): Promise<MailItem[]> {
@@ -445,6 +446,8 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await expect.poll(() => result.getAttribute('data-run-id')).not.toBe(firstRunId);
     await widget.locator('[data-result][data-report="stored"]').waitFor({ timeout: 20_000 });
     const secondRunId = await result.getAttribute('data-run-id');
+    const sentence = (await widget.locator('[data-wickstone="headline"]').innerText()).trim();
+    expect(sentence).toMatch(/\d mm\b/);
 
     await widget.locator('[data-lead-field="name"]').fill(visitor.name);
     await widget.locator('[data-lead-field="email"]').fill(visitor.email);
@@ -488,6 +491,9 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await expect.poll(async () => (await mailTo(visitor.email)).length, { timeout: 20_000 }).toBe(1);
     const [copy] = await mailTo(visitor.email);
     expect(copy?.text).toContain('Bore (inside diameter): 3 mm');
+    // The widget's headline, word for word, in the visitor's units, in both parts of the copy.
+    expect(copy?.text).toContain(`\n${sentence}\n`);
+    expect(copy?.html).toContain(sentence.replace(/&/g, '&amp;').replace(/'/g, '&#39;'));
     expect(copy?.text).toContain(firmCaution);
 
     firstReport = reports.find((body) => body.includes(firstRunId!)) ?? null;
