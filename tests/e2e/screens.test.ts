@@ -386,8 +386,8 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
         for (const p of [...navLinks, ...extra]) {
           await check(page, `${app.url}${p}`, `${role} ${p} (${width})`);
           const section = /[?&]section=([a-z]+)/.exec(p)?.[1];
-          // The editor's sections as owner (every one) and analyst (the summary), to look at.
-          if (section && (role === 'owner' || role === 'analyst')) {
+          // The editor's sections as admin (every one) and analyst (the summary), to look at.
+          if (section && (role === 'admin' || role === 'analyst')) {
             await page.locator(`[data-editor-section="${section}"]`).waitFor();
             await screenshot(page, `screens-editor-${role}-${section}-${width}`);
           }

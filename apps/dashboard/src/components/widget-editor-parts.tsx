@@ -60,7 +60,9 @@ export function SectionContents({
       />
       <ol
         id="editor-contents"
-        className={`${open ? 'grid' : 'hidden'} border-l border-line @3xl:grid @3xl:grid-cols-3 @5xl:grid-cols-4`}
+        className={`${open ? 'grid' : 'hidden'} border-l border-line @3xl:grid ${
+          sections.length <= 4 ? '@3xl:grid-cols-4' : '@3xl:grid-cols-3 @5xl:grid-cols-4'
+        }`}
       >
         {sections.map((s, i) => {
           const state = stateOf(s);
@@ -141,8 +143,8 @@ export function SectionTitleBlock({
           </div>
         ) : (
           <div className={`${cell} flex-1`}>
-            <dt className={cellLabel}>Kind</dt>
-            <dd className="font-semibold">Saved on its own</dd>
+            <dt className={cellLabel}>Saving</dt>
+            <dd className="font-semibold">{current.saving}</dd>
           </div>
         )}
       </dl>

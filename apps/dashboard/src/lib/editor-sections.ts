@@ -29,13 +29,16 @@ export interface EditorSectionInfo {
   anchor: string;
   /** Whether the section edits the draft (and so has a changed / has-errors state). */
   edits: boolean;
+  /** For one that does not: how its changes are made, for its title block. */
+  saving?: string;
 }
 
-const section = (id: EditorSectionId, label: string, anchor: string, edits = true): EditorSectionInfo => ({
+const section = (id: EditorSectionId, label: string, anchor: string, saving?: string): EditorSectionInfo => ({
   id,
   label,
   anchor,
-  edits,
+  edits: saving === undefined,
+  ...(saving === undefined ? {} : { saving }),
 });
 
 /** What an owner or admin works through, in order. */
@@ -48,14 +51,14 @@ export const editingSections: readonly EditorSectionInfo[] = [
   section('requests', 'Request form', 'widget-lead-form'),
   section('sheet', 'Calculation sheet', 'widget-sheet'),
   section('sites', 'Sites', 'widget-sites'),
-  section('embed', 'Embed code', 'widget-embed', false),
-  section('release', 'Release', 'widget-release', false),
-  section('revisions', 'Revisions', 'widget-history', false),
+  section('embed', 'Embed code', 'widget-embed', 'Nothing to save: copy it'),
+  section('release', 'Release', 'widget-release', 'Pinned here, on its own'),
+  section('revisions', 'Revisions', 'widget-history', 'Restored here, on their own'),
 ];
 
 /** What a reader sees: the readable summary, then the same last three. */
 export const readingSections: readonly EditorSectionInfo[] = [
-  section('settings', 'What it is set to', 'summary-basics', false),
+  section('settings', 'What it is set to', 'summary-basics', 'Read only'),
   ...editingSections.filter((s) => !s.edits),
 ];
 
