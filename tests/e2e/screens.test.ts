@@ -407,6 +407,34 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
           }
           findings.push(...(await axeFindings(page, `${role} contents opened (390)`)));
           await screenshot(page, `screens-${role}-contents-390`);
+
+          // The editor's sections fold the same way on a phone; the preview is one link away.
+          await page.goto(`${app.url}${home}/widgets/${tubeId}?section=${sections[1]}`);
+          const fold = page.locator('button[aria-controls="editor-contents"]');
+          // The button names the section shown and how many there are.
+          expect(await fold.textContent()).toMatch(/^Sections · 02 of \d+/);
+          await fold.click();
+          expect(await fold.getAttribute('aria-expanded')).toBe('true');
+          for (const s of sections) {
+            expect(
+              await page.locator(`[data-section-link="${s}"]`).isVisible(),
+              `${s} visible on a phone`,
+            ).toBe(true);
+          }
+          findings.push(...(await axeFindings(page, `${role} editor sections opened (390)`)));
+          await screenshot(page, `screens-editor-${role}-contents-390`);
+          await page.locator(`[data-section-link="${sections[0]}"]`).click();
+          await page.locator(`[data-editor-section="${sections[0]}"]`).waitFor();
+          expect(await fold.getAttribute('aria-expanded')).toBe('false');
+          await page.getByRole('link', { name: 'Preview ↓' }).click();
+          await expect
+            .poll(() =>
+              page.locator('#widget-preview').evaluate((el) => {
+                const top = el.getBoundingClientRect().top;
+                return top >= -1 && top < window.innerHeight / 2;
+              }),
+            )
+            .toBe(true);
         }
       }
     });
