@@ -189,29 +189,32 @@ describe('the visitor’s answer in Chromium: headline, warning titles and locks
       await page.getByLabel('Password', { exact: true }).fill(org.users.admin.password);
       await page.getByRole('button', { name: 'Sign in', exact: true }).click();
       await page.waitForURL(/\/orgs\/\d+$/);
-      await page.goto(`${app.url}/orgs/${org.id}/widgets/${widgetIds.get('/tube')}`);
+      await page.goto(`${app.url}/orgs/${org.id}/widgets/${widgetIds.get('/tube')}?section=inputs`);
       const offered = page.locator('[data-offered-options="contactAnglePreset"]');
       await offered.waitFor();
       await screenshot(page, `answer-editor-${width === 390 ? 'phone' : 'desktop'}`);
+      const dir = `${import.meta.dirname}/../../var/screenshots`;
       if (process.env.E2E_SCREENSHOTS) {
         // The two new controls up close, to look at.
-        const dir = `${import.meta.dirname}/../../var/screenshots`;
         await page
           .locator('[data-input-row="contactAnglePreset"]')
           .screenshot({ path: `${dir}/answer-editor-options-${width}.png` });
-        await page
-          .getByLabel('Show supporting figures')
-          .locator('xpath=ancestor::section[1]')
-          .screenshot({
-            path: `${dir}/answer-editor-units-${width}.png`,
-          });
+      }
+      if (width !== 390) await offered.locator('[data-option="mercury-glass"]').uncheck();
+      // The next section, Units, keeps the draft: both changes go in one save.
+      await page.getByRole('link', { name: /Next →/ }).click();
+      const figures = page.getByLabel('Show supporting figures');
+      await figures.waitFor();
+      if (process.env.E2E_SCREENSHOTS) {
+        await figures.locator('xpath=ancestor::section[1]').screenshot({
+          path: `${dir}/answer-editor-units-${width}.png`,
+        });
       }
       if (width === 390) {
         await context.close();
         continue;
       }
-      await offered.locator('[data-option="mercury-glass"]').uncheck();
-      await page.getByLabel('Show supporting figures').uncheck();
+      await figures.uncheck();
       await page.getByRole('button', { name: 'Save changes' }).click();
       await expect
         .poll(async () => {

@@ -125,7 +125,7 @@ describe('releases, as the developer', () => {
       await page.getByLabel('Password', { exact: true }).fill(org.users.developer.password);
       await page.getByRole('button', { name: 'Sign in', exact: true }).click();
       await page.waitForURL(/\/orgs\/\d+$/);
-      await page.goto(`${app.url}/orgs/${org.id}/widgets/${widget.id}`);
+      await page.goto(`${app.url}/orgs/${org.id}/widgets/${widget.id}?section=release`);
       const section = page.locator('#widget-release');
       await section.waitFor();
       await section.scrollIntoViewIfNeeded();

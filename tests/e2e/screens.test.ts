@@ -318,7 +318,7 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
   it('puts back an earlier revision from the editor, as a new revision the audit names', async () => {
     const page = await freshPage(1280);
     const home = await signIn(page, 'admin');
-    await page.goto(`${app.url}${home}/widgets/${tubeId}`);
+    await page.goto(`${app.url}${home}/widgets/${tubeId}?section=revisions`);
     const first = page.locator('[data-revision]').last();
     await first.getByRole('button', { name: 'Restore revision 1' }).click();
     await first.getByRole('button', { name: 'Restore', exact: true }).click();
@@ -358,14 +358,41 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
           .locator('nav[aria-label="Main"] a')
           .evaluateAll((links) => links.map((a) => (a as HTMLAnchorElement).pathname));
         expect(navLinks.length).toBeGreaterThan(3);
+        // The widget editor, one section at a time: what this role works through or reads.
+        const sections =
+          role === 'owner' || role === 'admin'
+            ? [
+                'name',
+                'inputs',
+                'units',
+                'look',
+                'cautions',
+                'requests',
+                'sheet',
+                'sites',
+                'embed',
+                'release',
+                'revisions',
+              ]
+            : ['settings', 'embed', 'release', 'revisions'];
+        const editor = sections.map((s) => `${home}/widgets/${tubeId}?section=${s}`);
         const extra = [
           `${home}/widgets/${tubeId}`,
+          ...editor,
           `${home}/usage/runs/${runId}`,
           ...(role === 'developer' ? [] : [`${home}/leads/${leadId}`]),
           ...(role === 'owner' || role === 'admin' ? [`${home}/widgets/new`] : []),
         ];
-        for (const p of [...navLinks, ...extra])
+        for (const p of [...navLinks, ...extra]) {
           await check(page, `${app.url}${p}`, `${role} ${p} (${width})`);
+          const section = /[?&]section=([a-z]+)/.exec(p)?.[1];
+          // The editor's sections as admin (every one) and analyst (the summary), to look at.
+          if (section && (role === 'admin' || role === 'analyst')) {
+            await page.locator(`[data-editor-section="${section}"]`).waitFor();
+            await screenshot(page, `screens-editor-${role}-${section}-${width}`);
+          }
+          if (p.includes('/usage/runs/') && role === 'owner') await screenshot(page, `screens-run-${width}`);
+        }
         if (width === 390) {
           // The folded contents on a phone: one button names where you are, and opens every page.
           await page.goto(`${app.url}${home}`);
@@ -380,6 +407,34 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
           }
           findings.push(...(await axeFindings(page, `${role} contents opened (390)`)));
           await screenshot(page, `screens-${role}-contents-390`);
+
+          // The editor's sections fold the same way on a phone; the preview is one link away.
+          await page.goto(`${app.url}${home}/widgets/${tubeId}?section=${sections[1]}`);
+          const fold = page.locator('button[aria-controls="editor-contents"]');
+          // The button names the section shown and how many there are.
+          expect(await fold.textContent()).toMatch(/^Sections · 02 of \d+/);
+          await fold.click();
+          expect(await fold.getAttribute('aria-expanded')).toBe('true');
+          for (const s of sections) {
+            expect(
+              await page.locator(`[data-section-link="${s}"]`).isVisible(),
+              `${s} visible on a phone`,
+            ).toBe(true);
+          }
+          findings.push(...(await axeFindings(page, `${role} editor sections opened (390)`)));
+          await screenshot(page, `screens-editor-${role}-contents-390`);
+          await page.locator(`[data-section-link="${sections[0]}"]`).click();
+          await page.locator(`[data-editor-section="${sections[0]}"]`).waitFor();
+          expect(await fold.getAttribute('aria-expanded')).toBe('false');
+          await page.getByRole('link', { name: 'Preview ↓' }).click();
+          await expect
+            .poll(() =>
+              page.locator('#widget-preview').evaluate((el) => {
+                const top = el.getBoundingClientRect().top;
+                return top >= -1 && top < window.innerHeight / 2;
+              }),
+            )
+            .toBe(true);
         }
       }
     });

@@ -7,7 +7,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
 import {
   calculate,
   displayUnitOf,
@@ -18,7 +18,7 @@ import {
 } from '@wickstone/calc-core';
 import { formatResult } from '@wickstone/calc-core/answer';
 import { seedOrgWithTeam, type FixtureOrg } from '@wickstone/server/testing';
-import { launchBrowser, screenshot } from '../support/browser.js';
+import { launchBrowser, screenshot, signInThroughForm } from '../support/browser.js';
 import { startApp, type RunningApp } from '../support/server.js';
 import { ApiSession } from '../support/api-session.js';
 
@@ -95,6 +95,20 @@ describe('calculation sheet from the demo site in Chromium: download, read, veri
     page.on('pageerror', (err) => pageErrors.push(err.message));
   });
 
+  /** Downloads the sheet from a widget (or its sheet block): the run it names, the file and its text. */
+  async function downloadSheet(on: Page, within: Locator, name: string) {
+    const [download] = await Promise.all([
+      on.waitForEvent('download'),
+      within.locator('[data-wickstone="sheet-download"]').click(),
+    ]);
+    const runId = /^calculation-sheet-([0-9a-f-]{36})\.pdf$/.exec(download.suggestedFilename())?.[1];
+    expect(runId).toBeDefined();
+    const file = path.join(dir, name);
+    await download.saveAs(file);
+    const text = collapse(execFileSync('pdftotext', ['-enc', 'UTF-8', file, '-'], { encoding: 'utf8' }));
+    return { runId: runId!, file, text };
+  }
+
   afterAll(async () => {
     await browser?.close();
     site?.closeAllConnections();
@@ -116,15 +130,7 @@ describe('calculation sheet from the demo site in Chromium: download, read, veri
     await sheet.locator('[data-sheet-field="preparedFor"]').fill(project.preparedFor);
     await sheet.locator('[data-sheet-field="note"]').fill(project.note);
     await screenshot(page, 'sheet-block-desktop');
-    const [download] = await Promise.all([
-      page.waitForEvent('download'),
-      sheet.locator('[data-wickstone="sheet-download"]').click(),
-    ]);
-    const runId = /^calculation-sheet-([0-9a-f-]{36})\.pdf$/.exec(download.suggestedFilename())?.[1];
-    expect(runId).toBeDefined();
-    const file = path.join(dir, 'sheet.pdf');
-    await download.saveAs(file);
-    const text = collapse(execFileSync('pdftotext', ['-enc', 'UTF-8', file, '-'], { encoding: 'utf8' }));
+    const { runId, text } = await downloadSheet(page, sheet, 'sheet.pdf');
 
     // What the server stored for this run, recomputed here with the engine the test imports.
     const [row] = await app.db.sequelize.query<{ inputs: string | object; sheet_project: string | object }>(
@@ -155,6 +161,43 @@ describe('calculation sheet from the demo site in Chromium: download, read, veri
     await expect(page.getByText('The engine agrees').isVisible()).resolves.toBe(true);
     await screenshot(page, 'sheet-verify-desktop');
     expect(pageErrors).toEqual([]);
+  });
+
+  it('writes the widget’s headline, in the visitor’s units, on the sheet and the run’s page', async () => {
+    const visitor = await context.newPage();
+    await visitor.goto(siteOrigin);
+    const widget = visitor.locator('wickstone-widget').first();
+    // The widget opens in metric; this visitor switches to US units before working it out.
+    await widget.locator('[data-wickstone="root"]').waitFor({ timeout: 20_000 });
+    await widget.locator('input[data-unit="us"]').check();
+    await expect.poll(() => widget.locator('[data-wickstone="root"]').getAttribute('data-system')).toBe('us');
+    await widget.locator('[data-wickstone="calculate"]').click();
+    await widget.locator('[data-wickstone="result"][data-report="stored"]').waitFor();
+    const sentence = collapse((await widget.locator('[data-wickstone="headline"]').innerText()).trim());
+    // In inches, as the visitor saw it, not the widget's metric.
+    expect(sentence).toMatch(/\d in\b/);
+    expect(sentence).not.toMatch(/\bmm\b/);
+    const { runId, text, file } = await downloadSheet(visitor, widget, 'sheet-us.pdf');
+    expect(text).toContain(sentence);
+    if (process.env.E2E_SCREENSHOTS) {
+      // The sheet's first page as an image, to look at.
+      const out = path.resolve(import.meta.dirname, '..', '..', 'var', 'screenshots', 'sheet-headline-page');
+      execFileSync('pdftoppm', ['-png', '-r', '80', '-f', '1', '-l', '1', '-singlefile', file, out]);
+    }
+    await visitor.close();
+
+    // The run's page in the dashboard: the same sentence, from the stored result.
+    const firm = await context.newPage();
+    await signInThroughForm(firm, app.url, org.users.owner);
+    await firm.goto(`${app.url}/orgs/${org.id}/usage/runs/${runId}`);
+    const shown = firm.locator('[data-run-headline]');
+    await shown.waitFor();
+    expect(collapse((await shown.innerText()).trim())).toBe(sentence);
+    expect(await firm.locator('[data-visitor-units]').getAttribute('data-visitor-units')).toBe('us');
+    await screenshot(firm, 'run-headline-1280');
+    await firm.setViewportSize({ width: 390, height: 844 });
+    await screenshot(firm, 'run-headline-390');
+    await firm.close();
   });
 
   it('fits a phone: the sheet block and its download on a 390 px screen', async () => {

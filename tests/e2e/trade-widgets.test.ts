@@ -95,10 +95,13 @@ describe('trade calculators in the widget editor and on a firm’s page', () => 
     const preview = page.locator('[data-widget-preview] wickstone-widget[data-wickstone="host"]');
     await preview.locator('[data-wickstone="root"]').waitFor();
     // A 450 mm wall by default, typed in the widget's metric units and stored in metres; faces locked.
+    await page.locator('[data-section-link="inputs"]').click();
     await editor.getByLabel('Default of Wall thickness, unit: millimetre').fill('450');
     await editor.getByLabel('For visitors: The wall dries from', { exact: true }).selectOption('locked');
     await expect.poll(() => preview.locator('[data-input="wallThickness"]').inputValue()).toBe('450');
+    await page.locator('[data-section-link="sites"]').click();
     await editor.getByLabel('Allowed origins').fill(site.origin);
+    await page.locator('[data-section-link="name"]').click();
     await editor.getByRole('radio', { name: /^In service/ }).check();
     await page.getByRole('button', { name: 'Save changes' }).click();
     await page.locator('[data-status="live"]').waitFor();
@@ -112,6 +115,7 @@ describe('trade calculators in the widget editor and on a firm’s page', () => 
     };
     expect(settings.inputs.wallThickness?.default).toBeCloseTo(0.45, 12);
     expect(settings.inputs.dryingFaces?.mode).toBe('locked');
+    await page.goto(`${app.url}/orgs/${org.id}/widgets/${widgetId}?section=embed`);
     snippet = await editor.locator('[data-embed-snippet]').inputValue();
     expect(snippet).toContain('wickstone-rising-damp-height');
   });

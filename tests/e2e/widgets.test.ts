@@ -70,6 +70,7 @@ interface MailItem {
   to: string[];
   subject: string;
   text: string;
+  html: string;
 }
 
 async function mailTo(address: string): Promise<MailItem[]> {
@@ -177,6 +178,13 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     const preview = widgetIn(page.locator('[data-widget-preview]'));
     await preview.locator('[data-wickstone="root"]').waitFor();
     expect(await preview.getAttribute('data-mode')).toBe('preview');
+    // One section at a time, each at its own address; the draft is kept across them.
+    const open = async (section: string) => {
+      await page.locator(`[data-section-link="${section}"]`).click();
+      await page.locator(`[data-editor-section="${section}"]`).waitFor();
+    };
+
+    await open('cautions');
 
     // The calculator's own cautions are listed, read-only, beside the firm's.
     expect(await editor.locator('[data-builtin-caution]').count()).toBeGreaterThanOrEqual(3);
@@ -184,6 +192,7 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
       await editor.locator('[data-builtin-caution] input, [data-builtin-caution] textarea').count(),
     ).toBe(0);
 
+    await open('look');
     // A failing pair: its ratio is shown at once, the preview already shows it, and Save refuses it.
     await editor.getByLabel('Background colour', { exact: true }).fill(brand.background);
     await editor.getByLabel('Text colour', { exact: true }).fill(failingText);
@@ -227,10 +236,14 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
       .toBe(160);
 
     // US units; the bore's default is then typed in inches and stored in metres.
+    await open('units');
     await editor.getByRole('radio', { name: /^US customary/ }).check();
+    await open('inputs');
     await editor.getByLabel('Default of Bore (inside diameter), unit: inch').fill('0.04');
     await editor.getByLabel('For visitors: Liquid', { exact: true }).selectOption('locked');
+    await open('cautions');
     await editor.getByLabel("The firm's own cautions").fill(firmCaution);
+    await open('requests');
     await editor.getByLabel('Who in the firm is told of each request').fill(notifyAddress);
     await expect
       .poll(() => preview.locator('[data-wickstone="root"]').getAttribute('data-system'))
@@ -238,13 +251,21 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(await preview.locator('[data-input="diameter"]').inputValue()).toBe('0.04');
 
     // Sites are checked as typed: a page address is not an origin, and its origin is offered.
+    await open('sites');
     const origins = editor.getByLabel('Allowed origins');
     await origins.fill(`${site.origin}/damp-advice`);
     await editor.locator('[data-site-check="bad"]').waitFor();
     await editor.getByRole('button', { name: `Use ${site.origin}` }).click();
     await expect.poll(() => origins.inputValue()).toBe(site.origin);
     expect(await editor.locator('[data-site-check="ok"]').textContent()).toContain(site.origin);
+    await open('name');
     await editor.getByRole('radio', { name: /^In service/ }).check();
+    // The contents say which sections hold unsaved changes.
+    for (const changed of ['name', 'inputs', 'units', 'look', 'cautions', 'requests', 'sites'])
+      expect(await page.locator(`[data-section-link="${changed}"]`).getAttribute('data-section-state')).toBe(
+        'changed',
+      );
+    expect(await page.locator('[data-section-link="sheet"]').getAttribute('data-section-state')).toBe('open');
 
     // A save that never reaches the server loses nothing: the form stays as typed, and saving again works.
     let dropped = 0;
@@ -259,8 +280,11 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await page.getByRole('button', { name: 'Save changes' }).click();
     await page.getByText(/Not saved: .*Your changes are still here/).waitFor();
     expect(dropped).toBe(1);
+    await open('look');
     expect(await editor.getByLabel('Text colour', { exact: true }).inputValue()).toBe(brand.text);
+    await open('cautions');
     expect(await editor.getByLabel("The firm's own cautions").inputValue()).toBe(firmCaution);
+    await open('sites');
     expect(await origins.inputValue()).toBe(site.origin);
     const [unsaved] = await q<{ status: string }>('SELECT status FROM widgets WHERE id = ?', [widgetId]);
     expect(unsaved?.status).toBe('draft');
@@ -301,6 +325,7 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(settings.look.logoAssetId).toBe(asset?.id);
 
     // The save is in the history with what changed.
+    await open('revisions');
     const latest = editor.locator('[data-revision]').first();
     await latest.locator('[data-change="settings.units.system"]').waitFor();
     expect(await latest.locator('[data-change="settings.units.system"]').textContent()).toMatch(
@@ -314,6 +339,7 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(await latest.textContent()).toContain(org.users.admin.name);
 
     // Copied from the page, as a person would.
+    await open('embed');
     await page.getByRole('button', { name: 'Copy the code' }).click();
     await page.getByText(/^Copied\./).waitFor();
     snippet = await page.evaluate(() => navigator.clipboard.readText());
@@ -323,6 +349,7 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(snippet).toContain(`data-wickstone-key="${publicKey}"`);
 
     // Leaving with unsaved changes asks first; staying keeps them, discarding brings back what is saved.
+    await open('name');
     const name = editor.getByRole('textbox', { name: 'Name', exact: true });
     await name.fill('Rising damp check, second thoughts');
     await page.getByRole('link', { name: '← All widgets' }).click();
@@ -352,6 +379,9 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(await editor.locator('[data-summary="allowedOrigins"]').textContent()).toContain(site.origin);
     expect(await editor.locator('[data-summary="settings.units.system"]').textContent()).toBe('US customary');
     expect(await editor.getByLabel(/Upload a logo/).count()).toBe(0);
+    await page.locator('[data-section-link="embed"]').click();
+    await page.locator('[data-editor-section="embed"]').waitFor();
+    expect(await editor.locator('input, select, textarea:not([data-embed-snippet])').count()).toBe(0);
     expect(await editor.locator('[data-embed-snippet]').inputValue()).toBe(snippet);
   });
 
@@ -424,6 +454,8 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await expect.poll(() => result.getAttribute('data-run-id')).not.toBe(firstRunId);
     await widget.locator('[data-result][data-report="stored"]').waitFor({ timeout: 20_000 });
     const secondRunId = await result.getAttribute('data-run-id');
+    const sentence = (await widget.locator('[data-wickstone="headline"]').innerText()).trim();
+    expect(sentence).toMatch(/\d mm\b/);
 
     await widget.locator('[data-lead-field="name"]').fill(visitor.name);
     await widget.locator('[data-lead-field="email"]').fill(visitor.email);
@@ -467,6 +499,9 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await expect.poll(async () => (await mailTo(visitor.email)).length, { timeout: 20_000 }).toBe(1);
     const [copy] = await mailTo(visitor.email);
     expect(copy?.text).toContain('Bore (inside diameter): 3 mm');
+    // The widget's headline, word for word, in the visitor's units, in both parts of the copy.
+    expect(copy?.text).toContain(`\n${sentence}\n`);
+    expect(copy?.html).toContain(sentence.replace(/&/g, '&amp;').replace(/'/g, '&#39;'));
     expect(copy?.text).toContain(firmCaution);
 
     firstReport = reports.find((body) => body.includes(firstRunId!)) ?? null;

@@ -31,3 +31,16 @@ export async function screenshot(page: Page, name: string): Promise<void> {
   mkdirSync(dir, { recursive: true });
   await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: true });
 }
+
+/** Signs in through the dashboard's own form and waits for the organisation's overview. */
+export async function signInThroughForm(
+  page: Page,
+  appUrl: string,
+  user: { email: string; password: string },
+): Promise<void> {
+  await page.goto(`${appUrl}/login`);
+  await page.getByLabel('E-mail address').fill(user.email);
+  await page.getByLabel('Password', { exact: true }).fill(user.password);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await page.waitForURL(/\/orgs\/\d+$/);
+}

@@ -1,4 +1,12 @@
-import { fromCanonical, getCalculator, units, type UnitId, type UnitSystemId } from '@wickstone/calc-core';
+import {
+  fromCanonical,
+  getCalculator,
+  units,
+  type CalculationResult,
+  type UnitId,
+  type UnitSystemId,
+} from '@wickstone/calc-core';
+import { headline } from '@wickstone/calc-core/answer';
 import { displayUnitOf, unitGap, unitSymbol, withUnit } from '@wickstone/calc-core/display';
 import { formatValue } from '@wickstone/calc-core/format';
 import type { RunDetail, ShownValue } from '@wickstone/contracts';
@@ -106,11 +114,26 @@ function storedWarnings(run: RunDetail): StoredWarning[] {
   return codes.map((code) => ({ code, title: titleOf(code), message: messages.get(code) ?? '' }));
 }
 
+/**
+ * The headline sentence the visitor read, written by calc-core's `headline` from the stored result
+ * in the visitor's units, as the widget writes it; null when the result was not stored or this
+ * dashboard does not know the calculator.
+ */
+export function runHeadline(run: RunDetail): string | null {
+  const calc = getCalculator(run.calculator.id);
+  const r = run.serverResult;
+  const record = (v: unknown) => typeof v === 'object' && v !== null && !Array.isArray(v);
+  if (!calc || !r || !record(r.inputs) || !record(r.outputs) || !Array.isArray(r.warnings)) return null;
+  const result = r as unknown as Pick<CalculationResult, 'inputs' | 'outputs' | 'warnings'>;
+  return headline(calc, result, run.visitorUnitSystem).text;
+}
+
 /** A run as the firm reviews it: what the visitor saw, in their units, then the stored working step by step. */
 export function RunRecord({ run }: { run: RunDetail }) {
   const system = run.visitorUnitSystem;
   const steps = storedSteps(run.serverResult, system);
   const warnings = storedWarnings(run);
+  const sentence = runHeadline(run);
   return (
     <div className="space-y-4">
       <p className="text-sm text-ink-soft">
@@ -125,6 +148,16 @@ export function RunRecord({ run }: { run: RunDetail }) {
           : ''}
         .
       </p>
+      {sentence ? (
+        <Card className="p-4">
+          <h3 className="text-sm font-semibold tracking-wider text-ink-soft uppercase">
+            The answer the visitor read
+          </h3>
+          <p className="mt-1 text-lg font-bold" data-run-headline>
+            {sentence}
+          </p>
+        </Card>
+      ) : null}
       {run.agreed ? (
         <Notice tone="ok">The server recomputed this run from its inputs and reached the same result.</Notice>
       ) : (

@@ -198,3 +198,52 @@ export function Breakable({ text }: { text: string }) {
     </>
   );
 }
+
+/** The number of an entry in a numbered contents (`03`), filled for the one shown. */
+export function NumberBadge({ n, current }: { n: number; current: boolean }) {
+  return (
+    <span
+      aria-hidden="true"
+      className={`inline-flex h-6 w-7 shrink-0 items-center justify-center rounded-sm text-xs tabular-nums ${
+        current ? 'bg-brand text-card' : 'border border-line-strong text-ink-soft'
+      }`}
+    >
+      {String(n).padStart(2, '0')}
+    </span>
+  );
+}
+
+/** On a phone, a numbered contents folds behind one button naming where you are and how many entries there are. */
+export function ContentsToggle({
+  open,
+  onToggle,
+  controls,
+  kicker,
+  here,
+  className,
+}: {
+  open: boolean;
+  onToggle: () => void;
+  controls: string;
+  kicker: string;
+  here: string;
+  className: string;
+}) {
+  return (
+    <button
+      type="button"
+      aria-expanded={open}
+      aria-controls={controls}
+      onClick={onToggle}
+      className={`flex w-full items-center justify-between gap-3 text-left ${className}`}
+    >
+      <span className="min-w-0">
+        <span className="block text-xs font-semibold tracking-wider text-ink-soft uppercase">{kicker}</span>
+        <span className="block truncate font-bold">{here}</span>
+      </span>
+      <span aria-hidden="true" className="shrink-0 rounded-sm border border-line-strong px-2 py-0.5 text-sm">
+        {open ? 'Close ▴' : 'All ▾'}
+      </span>
+    </button>
+  );
+}

@@ -1,83 +1,220 @@
-import type { Ref } from 'react';
+import { useState, type Ref } from 'react';
+import { Link, type Blocker } from 'react-router';
 import { UpgradeHint } from './upgrade-hint';
-import type { Blocker } from 'react-router';
 import type { CalculatorDefinition } from '@wickstone/calc-core';
 import type { EmbedWidget, Widget } from '@wickstone/contracts';
+import {
+  sectionOfKey,
+  sectionStateLabel,
+  type EditorSectionId,
+  type EditorSectionInfo,
+  type SectionState,
+} from '../lib/editor-sections';
 import type { FieldErrors } from '../lib/form';
 import type { SaveOutcome } from '../lib/use-widget-editor';
 import { ConfirmAction } from './confirm';
-import { Button, Card } from './ui';
+import { Button, Card, ContentsToggle, NumberBadge } from './ui';
 import { changeLabel } from './widget-history';
 import { WidgetPreview } from './widget-preview';
 
-/* The widget editor's frame: its section links, the error summary, the preview and the save bar. */
+/* The widget editor's frame: its contents, the section's title block and steps, the error summary, the preview and the save bar. */
 
-const sections = [
-  ['widget-status', 'Name and status'],
-  ['widget-inputs', 'Inputs'],
-  ['widget-units', 'Units'],
-  ['widget-look', 'Look'],
-  ['widget-cautions', 'Cautions'],
-  ['widget-lead-form', 'Request form'],
-  ['widget-sheet', 'Calculation sheet'],
-  ['widget-sites', 'Sites'],
-  ['widget-embed', 'Embed code'],
-  ['widget-history', 'Revisions'],
-] as const;
+const stateMark: Record<SectionState, string> = { errors: '!', changed: '●', here: '▸', done: '✓', open: '' };
+const stateTone: Record<SectionState, string> = {
+  errors: 'text-bad',
+  changed: 'text-warn',
+  here: 'text-ink',
+  done: 'text-ok',
+  open: 'text-ink-soft',
+};
 
-/** The section an error key belongs to, for the summary's links. */
-function sectionOf(key: string): string {
-  if (key.startsWith('allowedOrigins')) return 'widget-sites';
-  if (key.startsWith('settings.inputs')) return 'widget-inputs';
-  if (key.startsWith('settings.units')) return 'widget-units';
-  if (key.startsWith('settings.look')) return 'widget-look';
-  if (key.startsWith('settings.cautions')) return 'widget-cautions';
-  if (key.startsWith('settings.leadForm')) return 'widget-lead-form';
-  if (key.startsWith('settings.sheet')) return 'widget-sheet';
-  return 'widget-status';
-}
+const number = (i: number) => String(i + 1).padStart(2, '0');
+const sectionLink = (id: EditorSectionId) => ({ search: `?section=${id}` });
 
-/** What a reader sees instead of the form (widget-summary), then the same last two sections. */
-const summarySections = [
-  ['summary-basics', 'Name, status and units'],
-  ['summary-inputs', 'Inputs'],
-  ['summary-look', 'Look'],
-  ['summary-visitors', 'Cautions, requests and sheets'],
-  ['widget-embed', 'Embed code'],
-  ['widget-history', 'Revisions'],
-] as const;
-
-export function EditorNav({ summary = false }: { summary?: boolean }) {
+/**
+ * The editor's contents: a ruled register of its sections, numbered like the sheets of a report,
+ * each with where it stands. On a phone it folds behind one button naming the section shown.
+ */
+export function SectionContents({
+  sections,
+  current,
+  stateOf,
+  onOpen,
+}: {
+  sections: readonly EditorSectionInfo[];
+  current: EditorSectionId;
+  stateOf: (s: EditorSectionInfo) => SectionState;
+  onOpen: (id: EditorSectionId) => void;
+}) {
+  const [open, setOpen] = useState(false);
+  const at = sections.findIndex((s) => s.id === current);
   return (
-    <nav aria-label="Editor sections" className="flex flex-wrap gap-x-1 gap-y-1 text-sm">
-      {(summary ? summarySections : sections).map(([id, label]) => (
-        <a
-          key={id}
-          href={`#${id}`}
-          className="rounded-md px-2 py-1 font-semibold text-brand hover:bg-brand-tint"
-        >
-          {label}
-        </a>
-      ))}
-      <a
-        href="#widget-preview"
-        className="rounded-md px-2 py-1 font-semibold text-brand hover:bg-brand-tint @4xl:hidden"
+    <nav aria-label="Editor sections" className="border-t-2 border-ink bg-card" data-editor-contents>
+      <ContentsToggle
+        open={open}
+        onToggle={() => setOpen((o) => !o)}
+        controls="editor-contents"
+        kicker={`Sections · ${number(at)} of ${sections.length}`}
+        here={sections[at]?.label ?? ''}
+        className="border-b border-line px-3 py-2 @3xl:hidden"
+      />
+      <ol
+        id="editor-contents"
+        className={`${open ? 'grid' : 'hidden'} border-l border-line @3xl:grid ${
+          sections.length <= 4 ? '@3xl:grid-cols-4' : '@3xl:grid-cols-3 @5xl:grid-cols-4'
+        }`}
       >
-        Preview
-      </a>
+        {sections.map((s, i) => {
+          const state = stateOf(s);
+          const here = s.id === current;
+          return (
+            <li key={s.id} className="border-r border-b border-line">
+              <Link
+                to={sectionLink(s.id)}
+                aria-current={here ? 'step' : undefined}
+                data-section-link={s.id}
+                data-section-state={state}
+                onClick={() => {
+                  setOpen(false);
+                  onOpen(s.id);
+                }}
+                className={`flex h-full items-center gap-3 px-3 py-2 text-sm ${
+                  here
+                    ? 'bg-brand-tint font-bold text-ink'
+                    : 'font-semibold text-ink-soft hover:bg-paper-deep hover:text-ink'
+                }`}
+              >
+                <NumberBadge n={i + 1} current={here} />
+                <span className="min-w-0">
+                  <span className="block">{s.label}</span>
+                  {s.edits ? (
+                    <span className={`block text-xs font-semibold ${stateTone[state]}`}>
+                      <span aria-hidden="true">{stateMark[state]} </span>
+                      {sectionStateLabel[state]}
+                    </span>
+                  ) : null}
+                </span>
+              </Link>
+            </li>
+          );
+        })}
+      </ol>
     </nav>
   );
 }
 
-/** Every problem of a refused save, each linked to its section; focused when nothing else is. */
+const cell = 'flex min-w-0 flex-col justify-center px-3 py-1.5';
+const cellLabel = 'text-xs font-semibold tracking-wider text-ink-soft uppercase';
+
+/** The title block above the section shown: which sheet of how many, and where it stands. */
+export function SectionTitleBlock({
+  sections,
+  current,
+  state,
+  ref,
+}: {
+  sections: readonly EditorSectionInfo[];
+  current: EditorSectionInfo;
+  state: SectionState;
+  ref: Ref<HTMLDivElement>;
+}) {
+  const at = sections.indexOf(current);
+  return (
+    <div
+      ref={ref}
+      tabIndex={-1}
+      aria-label={`Section ${at + 1} of ${sections.length}: ${current.label}`}
+      className="flex flex-wrap items-stretch border border-line bg-card"
+      data-section-title-block={current.id}
+    >
+      <dl className="flex min-w-0 flex-1">
+        <div className={`${cell} flex-none border-r border-line`}>
+          <dt className={cellLabel}>Section</dt>
+          <dd className="font-bold tabular-nums">
+            {number(at)} <span className="font-semibold text-ink-soft">of {sections.length}</span>
+          </dd>
+        </div>
+        {current.edits ? (
+          <div className={`${cell} flex-1`}>
+            <dt className={cellLabel}>State</dt>
+            <dd className={`font-semibold ${stateTone[state]}`} data-current-state={state}>
+              {sectionStateLabel[state]}
+            </dd>
+          </div>
+        ) : (
+          <div className={`${cell} flex-1`}>
+            <dt className={cellLabel}>Saving</dt>
+            <dd className="font-semibold">{current.saving}</dd>
+          </div>
+        )}
+      </dl>
+      <a
+        href="#widget-preview"
+        className="flex items-center border-l border-line px-3 text-sm font-semibold text-brand underline decoration-brand/30 underline-offset-4 @4xl:hidden"
+      >
+        Preview ↓
+      </a>
+    </div>
+  );
+}
+
+/** Previous and next, each naming the section it opens. */
+export function SectionSteps({
+  sections,
+  current,
+  onOpen,
+}: {
+  sections: readonly EditorSectionInfo[];
+  current: EditorSectionInfo;
+  onOpen: (id: EditorSectionId) => void;
+}) {
+  const at = sections.indexOf(current);
+  const prev = sections[at - 1];
+  const next = sections[at + 1];
+  const step = 'flex min-w-0 flex-col px-3 py-2 text-sm hover:bg-paper-deep';
+  return (
+    <nav aria-label="Previous and next section" className="grid grid-cols-2 border border-line bg-card">
+      {prev ? (
+        <Link to={sectionLink(prev.id)} onClick={() => onOpen(prev.id)} className={step} rel="prev">
+          <span className={cellLabel}>← Previous</span>
+          <span className="font-semibold text-brand">
+            {number(at - 1)} {prev.label}
+          </span>
+        </Link>
+      ) : (
+        <span />
+      )}
+      {next ? (
+        <Link
+          to={sectionLink(next.id)}
+          onClick={() => onOpen(next.id)}
+          className={`${step} border-l border-line text-right`}
+          rel="next"
+        >
+          <span className={cellLabel}>Next →</span>
+          <span className="font-semibold text-brand">
+            {number(at + 1)} {next.label}
+          </span>
+        </Link>
+      ) : (
+        <span className="border-l border-line" />
+      )}
+    </nav>
+  );
+}
+
+/** Every problem of a refused save, each linked to its section and field; focused when nothing else is. */
 export function ErrorSummary({
   errors,
   calc,
   ref,
+  onJump,
 }: {
   errors: FieldErrors;
   calc: CalculatorDefinition;
   ref: Ref<HTMLDivElement>;
+  /** Opens the key's section and moves focus to its field. */
+  onJump: (key: string) => void;
 }) {
   const entries = Object.entries(errors);
   if (entries.length === 0) return null;
@@ -92,9 +229,13 @@ export function ErrorSummary({
       <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
         {entries.map(([key, message]) => (
           <li key={key}>
-            <a href={`#${sectionOf(key)}`} className="font-semibold underline underline-offset-2">
+            <Link
+              to={sectionLink(sectionOfKey(key))}
+              onClick={() => onJump(key)}
+              className="font-semibold underline underline-offset-2"
+            >
               {changeLabel(key.replace(/\.\d+$/, ''), calc)}
-            </a>
+            </Link>
             : {message}
           </li>
         ))}

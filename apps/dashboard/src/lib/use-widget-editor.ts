@@ -40,13 +40,14 @@ export interface SaveOutcome {
 /**
  * The widget editor's state: the draft against what is saved, the errors shown (the draft's own
  * once a save was attempted, the server's until their value changes), the preview, and save and
- * discard. `onProblem` is called when a save is refused, so the page can move focus.
+ * discard. `onProblem` is called with the keys of the fields named when a save is refused, so the
+ * page can open their section and move focus to the field.
  */
 export function useWidgetEditor(
   widget: Widget,
   calc: CalculatorDefinition,
   editable: boolean,
-  onProblem: () => void,
+  onProblem: (keys: string[]) => void,
 ) {
   const { orgId } = useOrg();
   const update = useUpdateWidget(orgId, widget.id);
@@ -94,7 +95,7 @@ export function useWidgetEditor(
         tone: 'bad',
         text: `Not saved: ${n === 1 ? 'one setting needs' : `${n} settings need`} attention.`,
       });
-      onProblem();
+      onProblem(Object.keys(checked.errors));
       return;
     }
     const sent = body;
@@ -122,7 +123,7 @@ export function useWidgetEditor(
               ? `Not saved: the server refused ${n === 1 ? 'one setting' : `${n} settings`}. Your changes are still here.`
               : `Not saved: ${describeError(error)} Your changes are still here; try again.`,
         });
-        if (n > 0) onProblem();
+        if (n > 0) onProblem(Object.keys(fields));
       },
     });
   };
@@ -144,6 +145,7 @@ export function useWidgetEditor(
 
   return {
     draft,
+    saved,
     dirty,
     errors,
     attempted,

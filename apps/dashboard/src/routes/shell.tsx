@@ -9,7 +9,7 @@ import { orgNav, orgPath } from '../nav';
 import { meQuery, sessionChanged, useLogout } from '../queries/session';
 import { LoadingState } from '../components/states';
 import { OrgSwitcher } from '../components/org-switcher';
-import { BrandLink, LiveMessage } from '../components/ui';
+import { BrandLink, ContentsToggle, LiveMessage, NumberBadge } from '../components/ui';
 import type { NoticeState } from './login';
 
 /* A register of the firm's pages: ruled rows, each numbered like the sheets of a report. */
@@ -143,26 +143,14 @@ export function AppShell() {
       <div className="mx-auto max-w-7xl md:grid md:grid-cols-[14rem_1fr] md:gap-8 md:px-6">
         <nav aria-label="Main" className="border-b border-line bg-paper md:border-b-0 md:py-8">
           {/* On a phone the contents fold behind one button that names where you are and how many pages there are. */}
-          <button
-            type="button"
-            aria-expanded={navOpen}
-            aria-controls="main-contents"
-            onClick={() => setNavOpen((o) => !o)}
-            className="flex w-full items-center justify-between gap-3 px-4 py-3 text-left md:hidden"
-          >
-            <span className="min-w-0">
-              <span className="block text-xs font-semibold tracking-wider text-ink-soft uppercase">
-                Contents · {links.length} pages
-              </span>
-              <span className="block truncate font-bold">{here?.label ?? 'Choose a page'}</span>
-            </span>
-            <span
-              aria-hidden="true"
-              className="shrink-0 rounded-sm border border-line-strong px-2 py-0.5 text-sm"
-            >
-              {navOpen ? 'Close ▴' : 'All ▾'}
-            </span>
-          </button>
+          <ContentsToggle
+            open={navOpen}
+            onToggle={() => setNavOpen((o) => !o)}
+            controls="main-contents"
+            kicker={`Contents · ${links.length} pages`}
+            here={here?.label ?? 'Choose a page'}
+            className="px-4 py-3 md:hidden"
+          />
           <p className="hidden px-3 pb-2 text-xs font-semibold tracking-wider text-ink-soft uppercase md:block">
             Contents
           </p>
@@ -175,14 +163,7 @@ export function AppShell() {
                 <NavLink to={l.to} end={l.end} className={navLinkClass} onClick={() => setNavOpen(false)}>
                   {({ isActive }) => (
                     <>
-                      <span
-                        aria-hidden="true"
-                        className={`inline-flex h-6 w-7 shrink-0 items-center justify-center rounded-sm text-xs tabular-nums ${
-                          isActive ? 'bg-brand text-card' : 'border border-line-strong text-ink-soft'
-                        }`}
-                      >
-                        {String(i + 1).padStart(2, '0')}
-                      </span>
+                      <NumberBadge n={i + 1} current={isActive} />
                       {l.label}
                     </>
                   )}

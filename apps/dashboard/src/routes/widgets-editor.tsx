@@ -1,9 +1,19 @@
-import { useEffect, useRef, type KeyboardEvent } from 'react';
+import { useEffect, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { useBlocker, useParams } from 'react-router';
+import { useBlocker, useParams, useSearchParams } from 'react-router';
 import { getCalculator, type CalculatorDefinition } from '@wickstone/calc-core';
 import { can, type Widget } from '@wickstone/contracts';
 import { ApiError } from '../lib/api';
+import {
+  editingSections,
+  firstErrorKey,
+  readingSections,
+  sectionFromParam,
+  sectionOfKey,
+  sectionState,
+  type EditorSectionId,
+  type EditorSectionInfo,
+} from '../lib/editor-sections';
 import { formatDateTime } from '../lib/labels';
 import { useOrg } from '../lib/org-context';
 import { usePageTitle } from '../lib/use-page-title';
@@ -12,7 +22,14 @@ import { orgPath } from '../nav';
 import { widgetQuery } from '../queries/widgets';
 import { ErrorState, LoadingState } from '../components/states';
 import { Notice, TextLink } from '../components/ui';
-import { EditorNav, ErrorSummary, PreviewPanel, SaveBar } from '../components/widget-editor-parts';
+import {
+  ErrorSummary,
+  PreviewPanel,
+  SaveBar,
+  SectionContents,
+  SectionSteps,
+  SectionTitleBlock,
+} from '../components/widget-editor-parts';
 import {
   CautionsSection,
   SheetSection,
@@ -44,6 +61,23 @@ function useLeaveGuard(dirty: boolean) {
   return blocker;
 }
 
+/** Where focus goes once a section is shown: its title block, or the field an error names. */
+interface FocusTarget {
+  section: EditorSectionId;
+  key?: string;
+}
+
+/** The control an error is about: the invalid one whose own message is that error's, else the first invalid one. */
+function fieldFor(root: HTMLElement, message: string | undefined): HTMLElement | null {
+  const invalid = [...root.querySelectorAll<HTMLElement>('[aria-invalid="true"]')];
+  const named = invalid.find((el) =>
+    (el.getAttribute('aria-describedby') ?? '')
+      .split(' ')
+      .some((id) => id && message && document.getElementById(id)?.textContent?.includes(message)),
+  );
+  return named ?? invalid[0] ?? null;
+}
+
 export function Editor({
   widget,
   calc,
@@ -54,15 +88,41 @@ export function Editor({
   editable: boolean;
 }) {
   const { orgId, role } = useOrg();
+  const [params, setParams] = useSearchParams();
+  const sections = editable ? editingSections : readingSections;
+  const current = sectionFromParam(params.get('section'), sections);
   const summaryRef = useRef<HTMLDivElement>(null);
   const formRef = useRef<HTMLDivElement>(null);
-  const focusFirstProblem = () =>
-    requestAnimationFrame(() => {
-      const bad = formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]');
-      (bad ?? summaryRef.current)?.focus();
-    });
-  const editor = useWidgetEditor(widget, calc, editable, focusFirstProblem);
+  const blockRef = useRef<HTMLDivElement>(null);
+  const [focusTarget, setFocusTarget] = useState<FocusTarget | null>(null);
+  // Sections opened in this visit: left with nothing to fix, they count as done.
+  const [seen, setSeen] = useState<ReadonlySet<EditorSectionId>>(() => new Set());
+  if (!seen.has(current.id)) setSeen(new Set([...seen, current.id]));
+
+  /** A refused save opens the section of the earliest field named and puts focus on that field. */
+  const onProblem = (keys: string[]) => {
+    const key = firstErrorKey(keys);
+    if (key === undefined) return;
+    const section = sectionOfKey(key);
+    if (section !== current.id) setParams({ section });
+    setFocusTarget({ section, key });
+  };
+  const editor = useWidgetEditor(widget, calc, editable, onProblem);
   const blocker = useLeaveGuard(editor.dirty);
+
+  useEffect(() => {
+    if (!focusTarget || focusTarget.section !== current.id) return;
+    const frame = requestAnimationFrame(() => {
+      const root = formRef.current;
+      const target =
+        focusTarget.key !== undefined && root
+          ? (fieldFor(root, editor.errors[focusTarget.key]) ?? summaryRef.current)
+          : blockRef.current;
+      target?.focus();
+      setFocusTarget(null);
+    });
+    return () => cancelAnimationFrame(frame);
+  }, [focusTarget, current.id, editor.errors]);
 
   const onKeyDown = (e: KeyboardEvent<HTMLDivElement>) => {
     if ((e.ctrlKey || e.metaKey) && e.key.toLowerCase() === 's') {
@@ -78,6 +138,50 @@ export function Editor({
     readOnly: !editable,
     calc,
   };
+  const stateOf = (s: EditorSectionInfo) =>
+    sectionState(s, {
+      draft: editor.draft,
+      saved: editor.saved,
+      errors: editor.errors,
+      seen,
+      current: current.id,
+    });
+  const open = (section: EditorSectionId) => setFocusTarget({ section });
+
+  // Each section's component, mounted only while it is the one shown.
+  const render: Record<EditorSectionId, () => ReactNode> = {
+    name: () => <StatusSection {...props} />,
+    inputs: () => <InputsSection {...props} />,
+    units: () => <UnitsSection {...props} />,
+    look: () => <LookSection {...props} fallbackColors={editor.fallbackColors} />,
+    cautions: () => <CautionsSection {...props} />,
+    requests: () => <LeadFormSection {...props} />,
+    sheet: () => <SheetSection {...props} />,
+    sites: () => <SitesSection {...props} />,
+    settings: () => <WidgetSummary widget={widget} calc={calc} />,
+    embed: () => <EmbedCodeSection widget={widget} dirty={editor.dirty} />,
+    release: () => <ReleaseSection orgId={orgId} widget={widget} role={role} />,
+    revisions: () => (
+      <HistorySection
+        orgId={orgId}
+        widgetId={widget.id}
+        calc={calc}
+        system={widget.settings.units.system}
+        restore={
+          editable
+            ? {
+                allowed: !editor.dirty,
+                onRestored: (w, n) =>
+                  editor.adopt(
+                    w,
+                    `Revision ${n} restored at ${formatDateTime(w.updatedAt)}, as a new revision.`,
+                  ),
+              }
+            : undefined
+        }
+      />
+    ),
+  };
 
   return (
     <div className="space-y-5" onKeyDown={onKeyDown}>
@@ -87,44 +191,30 @@ export function Editor({
         </Notice>
       ) : null}
       <div className="@container space-y-5">
-        <EditorNav summary={!editable} />
+        <SectionContents sections={sections} current={current.id} stateOf={stateOf} onOpen={open} />
         <div className="grid items-start gap-6 @4xl:grid-cols-[minmax(0,1fr)_26rem]">
-          <div ref={formRef} className="min-w-0 space-y-5" data-widget-editor>
-            {editor.attempted ? <ErrorSummary ref={summaryRef} errors={editor.errors} calc={calc} /> : null}
-            {editable ? (
-              <>
-                <StatusSection {...props} />
-                <InputsSection {...props} />
-                <UnitsSection {...props} />
-                <LookSection {...props} fallbackColors={editor.fallbackColors} />
-                <CautionsSection {...props} />
-                <LeadFormSection {...props} />
-                <SheetSection {...props} />
-                <SitesSection {...props} />
-              </>
-            ) : (
-              <WidgetSummary widget={widget} calc={calc} />
-            )}
-            <EmbedCodeSection widget={widget} dirty={editor.dirty} />
-            <ReleaseSection orgId={orgId} widget={widget} role={role} />
-            <HistorySection
-              orgId={orgId}
-              widgetId={widget.id}
-              calc={calc}
-              system={widget.settings.units.system}
-              restore={
-                editable
-                  ? {
-                      allowed: !editor.dirty,
-                      onRestored: (w, n) =>
-                        editor.adopt(
-                          w,
-                          `Revision ${n} restored at ${formatDateTime(w.updatedAt)}, as a new revision.`,
-                        ),
-                    }
-                  : undefined
-              }
+          <div
+            ref={formRef}
+            className="min-w-0 space-y-4"
+            data-widget-editor
+            data-editor-section={current.id}
+          >
+            {editor.attempted ? (
+              <ErrorSummary
+                ref={summaryRef}
+                errors={editor.errors}
+                calc={calc}
+                onJump={(key) => setFocusTarget({ section: sectionOfKey(key), key })}
+              />
+            ) : null}
+            <SectionTitleBlock
+              ref={blockRef}
+              sections={sections}
+              current={current}
+              state={stateOf(current)}
             />
+            {render[current.id]()}
+            <SectionSteps sections={sections} current={current} onOpen={open} />
           </div>
           <PreviewPanel widget={widget} preview={editor.preview} dirty={editor.dirty} />
         </div>

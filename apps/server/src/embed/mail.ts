@@ -1,4 +1,5 @@
 import type { CalculationResult, CalculatorDefinition, UnitSystemId } from '@wickstone/calc-core';
+import { headline } from '@wickstone/calc-core/answer';
 import type { Lead } from '../db/models/index.js';
 import type { OutgoingMail } from '../mail/mailer.js';
 import { escapeHtml, oneLine } from '../mail/templates.js';
@@ -207,6 +208,8 @@ export function resultCopyMail(p: {
     `in the ${oneLine(p.widgetName)} calculator on ${p.origin}. If that was not you, you can ignore it: ` +
     'nothing else will be sent to you.';
   const cautions = cautionsOf(p.result, p.firmCautions);
+  // The answer in one sentence, in the visitor's units, exactly as the widget wrote it.
+  const answer = headline(p.calc, p.result, p.system).text;
   const lines = resultLines(p.calc, p.result, p.system, {
     hide: new Set(p.hiddenInputs),
     codes: false,
@@ -216,6 +219,8 @@ export function resultCopyMail(p: {
     greeting,
     '',
     thanks,
+    '',
+    answer,
     '',
     ...lines,
     '',
@@ -238,6 +243,7 @@ export function resultCopyMail(p: {
       [
         para(escapeHtml(greeting)),
         para(escapeHtml(thanks)),
+        para(escapeHtml(answer), ';font-size:18px;font-weight:bold;margin-top:16px'),
         sectionsOf(lines),
         heading('Before relying on this'),
         `<ul style="margin:0 0 14px;padding-left:20px;font-size:14px">${cautions.map((c) => `<li style="margin:0 0 6px">${escapeHtml(c)}</li>`).join('')}</ul>`,

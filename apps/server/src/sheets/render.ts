@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
+import { headline } from '@wickstone/calc-core/answer';
 import { formatValue } from '@wickstone/calc-core/format';
 import { withUnit } from '@wickstone/calc-core/display';
 import { showTable } from '@wickstone/calc-core/table';
@@ -187,6 +188,9 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
   rows(inputs);
 
   heading('Result');
+  // The answer in one sentence, in the visitor's units, exactly as the widget wrote it.
+  para(headline(calc, result, system).text, { font: 'bold', size: 11 });
+  doc.moveDown(0.3);
   const outputs: [string, string][] = [];
   for (const out of calc.outputs) {
     const v = result.outputs[out.id];
