@@ -1,36 +1,14 @@
-// Input hashing: SHA-256 (FIPS 180-4) over canonical JSON, so the browser and the server get the
-// same digest for the same inputs. The browser's SubtleCrypto is async (and absent from some embed
-// contexts), so the browser uses a small synchronous SHA-256 in plain JS here; under Node, whose
-// `process.getBuiltinModule` hands over node:crypto synchronously (Node 20.16+), Node's own hash
-// is used, which is faster. Every calculation hashes its inputs once, so the plain-JS hash avoids
-// per-call allocation: the message is written straight into a reused byte buffer, the schedule
-// lives in one reused array, hex digits come from a table.
+// Input hashing without Node's crypto or the browser's SubtleCrypto (which is async and absent
+// from some embed contexts): a small synchronous SHA-256 (FIPS 180-4) over canonical JSON, so the
+// browser and the server get the same digest for the same inputs. Every calculation hashes its
+// inputs once, so the hash allocates nothing per call but its answer: the message goes straight
+// into a reused byte buffer and the schedule lives in one reused array. Node's own SHA-256 (which
+// Node 20.16+ would hand over synchronously) is still several times faster on these inputs
+// (`apps/server/bench/input-hash.ts` prints both), but a second path would add bytes to every
+// widget's first flight for a few microseconds per calculation on the server.
 
 export type JsonValue =
   null | boolean | number | string | readonly JsonValue[] | { readonly [key: string]: JsonValue };
-
-function canonical(value: JsonValue): string {
-  if (typeof value === 'number') {
-    if (!Number.isFinite(value)) throw new TypeError('canonicalJson: numbers must be finite');
-    // For a finite number JSON's form is the language's shortest round-trip form, as String gives.
-    return String(value);
-  }
-  if (value === null || typeof value === 'boolean' || typeof value === 'string') return JSON.stringify(value);
-  let out: string;
-  if (Array.isArray(value)) {
-    out = '[';
-    for (let i = 0; i < value.length; i++) out += (i > 0 ? ',' : '') + canonical(value[i] as JsonValue);
-    return out + ']';
-  }
-  const obj = value as { readonly [key: string]: JsonValue };
-  const keys = Object.keys(obj).sort();
-  out = '{';
-  for (let i = 0; i < keys.length; i++) {
-    const k = keys[i] as string;
-    out += (i > 0 ? ',' : '') + JSON.stringify(k) + ':' + canonical(obj[k] as JsonValue);
-  }
-  return out + '}';
-}
 
 /**
  * JSON with object keys sorted at every level and no white space. Numbers use JavaScript's
@@ -38,7 +16,15 @@ function canonical(value: JsonValue): string {
  * @throws TypeError for non-finite numbers, which JSON cannot carry
  */
 export function canonicalJson(value: JsonValue): string {
-  return canonical(value);
+  if (value === null || typeof value === 'boolean' || typeof value === 'string') return JSON.stringify(value);
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) throw new TypeError('canonicalJson: numbers must be finite');
+    return JSON.stringify(value);
+  }
+  if (Array.isArray(value)) return `[${value.map((v: JsonValue) => canonicalJson(v)).join(',')}]`;
+  const obj = value as { readonly [key: string]: JsonValue };
+  const keys = Object.keys(obj).sort();
+  return `{${keys.map((k) => `${JSON.stringify(k)}:${canonicalJson(obj[k] as JsonValue)}`).join(',')}}`;
 }
 
 // FIPS 180-4 §4.2.2 and §5.3.3 define the constants as the first 32 bits of the fractional parts of
@@ -55,6 +41,12 @@ function firstPrimes(count: number): number[] {
   return primes;
 }
 
+/**
+ * The part of TextEncoder used here: every browser and Node have it, but calc-core's types know no
+ * host (no DOM, no Node), so it is declared for this file alone.
+ */
+declare const TextEncoder: new () => { encodeInto(text: string, into: Uint8Array): { written: number } };
+
 interface State {
   k: Int32Array;
   h0: Int32Array;
@@ -62,8 +54,7 @@ interface State {
   w: Int32Array;
   /** The padded message, grown when a longer one comes. */
   bytes: Uint8Array;
-  /** Two hex digits per byte value. */
-  hex: string[];
+  encoder: InstanceType<typeof TextEncoder>;
 }
 let state: State | undefined;
 function setUp(): State {
@@ -74,7 +65,7 @@ function setUp(): State {
       h0: Int32Array.from(primes.slice(0, 8), (p) => fractionBits(Math.sqrt(p))),
       w: new Int32Array(64),
       bytes: new Uint8Array(256),
-      hex: Array.from({ length: 256 }, (_, i) => (i < 16 ? '0' : '') + i.toString(16)),
+      encoder: new TextEncoder(),
     };
   }
   return state;
@@ -82,49 +73,28 @@ function setUp(): State {
 
 /**
  * Writes the UTF-8 bytes of `text` into `s.bytes` (grown when needed) and returns their count. A
- * lone surrogate has no UTF-8 form: it becomes U+FFFD, as TextEncoder and Node do.
+ * lone surrogate has no UTF-8 form: TextEncoder writes U+FFFD for it, as Node does.
  */
 function utf8Into(s: State, text: string): number {
   // At most 3 bytes per UTF-16 unit, plus the padding's 72 at most.
   const need = text.length * 3 + 72;
   if (s.bytes.length < need) s.bytes = new Uint8Array(Math.max(need, s.bytes.length * 2));
-  const out = s.bytes;
-  let n = 0;
+  // Inputs are nearly always ASCII: copied directly, TextEncoder only for the rest.
+  const bytes = s.bytes;
   for (let i = 0; i < text.length; i++) {
-    let cp = text.charCodeAt(i);
-    if (cp < 0x80) {
-      out[n++] = cp;
-      continue;
-    }
-    if (cp >= 0xd800 && cp <= 0xdbff && i + 1 < text.length) {
-      const low = text.charCodeAt(i + 1);
-      if (low >= 0xdc00 && low <= 0xdfff) {
-        cp = 0x10000 + ((cp - 0xd800) << 10) + (low - 0xdc00);
-        i++;
-      }
-    }
-    if (cp >= 0xd800 && cp <= 0xdfff) cp = 0xfffd;
-    if (cp < 0x800) {
-      out[n++] = 0xc0 | (cp >> 6);
-      out[n++] = 0x80 | (cp & 63);
-    } else if (cp < 0x10000) {
-      out[n++] = 0xe0 | (cp >> 12);
-      out[n++] = 0x80 | ((cp >> 6) & 63);
-      out[n++] = 0x80 | (cp & 63);
-    } else {
-      out[n++] = 0xf0 | (cp >> 18);
-      out[n++] = 0x80 | ((cp >> 12) & 63);
-      out[n++] = 0x80 | ((cp >> 6) & 63);
-      out[n++] = 0x80 | (cp & 63);
-    }
+    const c = text.charCodeAt(i);
+    if (c > 127) return s.encoder.encodeInto(text, bytes).written;
+    bytes[i] = c;
   }
-  return n;
+  return text.length;
 }
 
-/** SHA-256 of the UTF-8 bytes of `text`, as 64 lower-case hex digits, in plain JS (any engine). */
-export function sha256HexPlain(text: string): string {
+const rotr = (x: number, n: number): number => (x >>> n) | (x << (32 - n));
+
+/** SHA-256 of the UTF-8 bytes of `text`, as 64 lower-case hex digits. */
+export function sha256Hex(text: string): string {
   const s = setUp();
-  const { k, w, hex } = s;
+  const { k, w } = s;
   const length = utf8Into(s, text);
   const bytes = s.bytes;
   // Padding (FIPS 180-4 §5.1.1): 0x80, zeros, then the length in bits as 64 bits big-endian;
@@ -160,8 +130,8 @@ export function sha256HexPlain(text: string): string {
     for (let i = 16; i < 64; i++) {
       const x = w[i - 15] as number;
       const y = w[i - 2] as number;
-      const s0 = ((x >>> 7) | (x << 25)) ^ ((x >>> 18) | (x << 14)) ^ (x >>> 3);
-      const s1 = ((y >>> 17) | (y << 15)) ^ ((y >>> 19) | (y << 13)) ^ (y >>> 10);
+      const s0 = rotr(x, 7) ^ rotr(x, 18) ^ (x >>> 3);
+      const s1 = rotr(y, 17) ^ rotr(y, 19) ^ (y >>> 10);
       w[i] = ((w[i - 16] as number) + s0 + (w[i - 7] as number) + s1) | 0;
     }
     let a = h0a;
@@ -173,9 +143,9 @@ export function sha256HexPlain(text: string): string {
     let g = h6;
     let h = h7;
     for (let i = 0; i < 64; i++) {
-      const S1 = ((e >>> 6) | (e << 26)) ^ ((e >>> 11) | (e << 21)) ^ ((e >>> 25) | (e << 7));
+      const S1 = rotr(e, 6) ^ rotr(e, 11) ^ rotr(e, 25);
       const t1 = (h + S1 + ((e & f) ^ (~e & g)) + (k[i] as number) + (w[i] as number)) | 0;
-      const S0 = ((a >>> 2) | (a << 30)) ^ ((a >>> 13) | (a << 19)) ^ ((a >>> 22) | (a << 10));
+      const S0 = rotr(a, 2) ^ rotr(a, 13) ^ rotr(a, 22);
       const t2 = (S0 + ((a & b) ^ (a & c) ^ (b & c))) | 0;
       h = g;
       g = f;
@@ -195,31 +165,6 @@ export function sha256HexPlain(text: string): string {
     h6 = (h6 + g) | 0;
     h7 = (h7 + h) | 0;
   }
-  const word = (x: number): string =>
-    (hex[x >>> 24] as string) +
-    (hex[(x >>> 16) & 0xff] as string) +
-    (hex[(x >>> 8) & 0xff] as string) +
-    (hex[x & 0xff] as string);
+  const word = (x: number): string => (x >>> 0).toString(16).padStart(8, '0');
   return word(h0a) + word(h1) + word(h2) + word(h3) + word(h4) + word(h5) + word(h6) + word(h7);
 }
-
-interface NodeHash {
-  update(text: string, encoding: 'utf8'): NodeHash;
-  digest(encoding: 'hex'): string;
-}
-type CreateHash = (algorithm: 'sha256') => NodeHash;
-
-/** Node's createHash when the host hands it over synchronously; undefined in a browser. */
-function nodeCreateHash(): CreateHash | undefined {
-  const host = (globalThis as { process?: { getBuiltinModule?: (id: string) => unknown } }).process;
-  if (typeof host?.getBuiltinModule !== 'function') return undefined;
-  const crypto = host.getBuiltinModule('node:crypto') as { createHash?: CreateHash } | undefined;
-  return typeof crypto?.createHash === 'function' ? crypto.createHash : undefined;
-}
-const createHash = nodeCreateHash();
-
-/** SHA-256 of the UTF-8 bytes of `text`, as 64 lower-case hex digits. */
-export const sha256Hex: (text: string) => string =
-  createHash === undefined
-    ? sha256HexPlain
-    : (text) => createHash('sha256').update(text, 'utf8').digest('hex');

@@ -4,6 +4,7 @@ import type { UpgradePreview } from '@wickstone/contracts';
 import { Widget } from '../db/models/index.js';
 import { AppError, fieldError } from '../errors.js';
 import { answersOf, type Answer, type AnswerEngine } from './answers.js';
+import { answersSpread } from './parallel.js';
 import type { ReleaseService } from './service.js';
 
 /** The most runs a preview re-runs: the widget's latest. */
@@ -85,6 +86,26 @@ export function distinctInputs(runs: readonly Pick<PreviewRun, 'inputs'>[]): { t
   return { texts, index };
 }
 
+/**
+ * Both engines' answers, the candidate's spread over worker threads when its distinct inputs are
+ * many (`answersSpread`; `toPath` is its module for the workers to load).
+ */
+export async function engineAnswersSpread(
+  from: AnswerEngine,
+  to: AnswerEngine,
+  toPath: string | null,
+  calculatorId: string,
+  runs: readonly PreviewRun[],
+  threads?: number,
+): Promise<EngineAnswers> {
+  const fromSide = fromAnswers(from, calculatorId, runs);
+  const started = performance.now();
+  const { texts, index } = distinctInputs(runs);
+  const distinct = await answersSpread(to, toPath, calculatorId, texts, threads);
+  const after = Array.from(index, (k) => distinct[k] as Answer | null);
+  return { ...fromSide, after, distinct: texts.length, toMs: performance.now() - started };
+}
+
 /** Both engines' answers on one thread. */
 export function engineAnswers(
   from: AnswerEngine,
@@ -133,10 +154,10 @@ export function compareAnswers(
     }
     let score = -1;
     const moved: { id: string; from: number | null; to: number | null }[] = [];
-    for (const id of new Set([...Object.keys(a.outputs), ...Object.keys(b.outputs)])) {
+    const check = (id: string) => {
       const x = a.outputs[id] ?? null;
       const y = b.outputs[id] ?? null;
-      if (same(x, y)) continue;
+      if (same(x, y)) return;
       const o = outputs.get(id) ?? { runsChanged: 0, largest: null, withheldNow: 0, shownNow: 0 };
       o.runsChanged += 1;
       let rel = 1;
@@ -148,11 +169,16 @@ export function compareAnswers(
       outputs.set(id, o);
       moved.push({ id, from: x, to: y });
       score = Math.max(score, rel);
-    }
-    const codesA = new Set(a.warnings);
-    const codesB = new Set(b.warnings);
-    const added = [...codesB].filter((c) => !codesA.has(c));
-    const removed = [...codesA].filter((c) => !codesB.has(c));
+    };
+    for (const id in a.outputs) check(id);
+    for (const id in b.outputs) if (!(id in a.outputs)) check(id);
+    // Most runs keep the same warnings in the same order: no sets to build for them.
+    const sameWarnings =
+      a.warnings.length === b.warnings.length && a.warnings.every((c, k) => c === b.warnings[k]);
+    const codesA = sameWarnings ? null : new Set(a.warnings);
+    const codesB = sameWarnings ? null : new Set(b.warnings);
+    const added = codesA && codesB ? [...codesB].filter((c) => !codesA.has(c)) : [];
+    const removed = codesA && codesB ? [...codesA].filter((c) => !codesB.has(c)) : [];
     const tally = (code: string) => {
       const found = warnings.get(code);
       if (found) return found;
@@ -216,7 +242,7 @@ export function compareEngines(
   return summarise(from, to, calculatorId, runs, answers);
 }
 
-function summarise(
+export function summarise(
   from: AnswerEngine,
   to: AnswerEngine,
   calculatorId: string,
@@ -308,7 +334,8 @@ export function createUpgradePreview(deps: { sequelize: Sequelize; releases: Rel
     const readStarted = performance.now();
     const runs = await readPreviewRuns(deps.sequelize, orgId, widgetId);
     const readMs = performance.now() - readStarted;
-    const cmp = compareEngines(fromEngine, toEngine, w.calculatorId, runs);
+    const answers = await engineAnswersSpread(fromEngine, toEngine, deps.releases.enginePath(to), w.calculatorId, runs);
+    const cmp = summarise(fromEngine, toEngine, w.calculatorId, runs, answers);
     return {
       from: { version: w.release, engineVersion: fromEngine.VERSION },
       to: { version: to, engineVersion: toEngine.VERSION },
