@@ -118,6 +118,19 @@ export const upgradePreviewSchema = z.object({
   warnings: z.array(upgradeWarningChangeSchema),
   /** The runs that change most, largest first (at most 20). */
   topRuns: z.array(upgradeRunChangeSchema),
+  /**
+   * Where the current engine's answers come from: `recorded`, the runs whose stored server result
+   * was computed at ingest by this very engine version (that result is its answer, so it is not
+   * computed again); `rerun`, the runs it is run for (made on another release, or no stored result).
+   */
+  fromSide: z.object({ recorded: z.number().int(), rerun: z.number().int() }),
+  /** Distinct stored inputs the candidate engine ran (each once, however many runs share it). */
+  distinctInputs: z.number().int(),
+  /** Engine time: the current engine's re-runs plus the candidate engine's runs, in ms. */
   engineMs: z.number(),
+  /** Time reading the runs from the database, in ms. */
+  readMs: z.number(),
+  /** How the preview was made, in a sentence for the reader. */
+  note: z.string(),
 });
 export type UpgradePreview = z.infer<typeof upgradePreviewSchema>;

@@ -200,6 +200,12 @@ describe('releases side by side, and pins', () => {
     expect(new Set(preview.topRuns.map((r) => r.runId))).toEqual(new Set(changed.map((m) => m.id)));
     expect(preview.topRuns[0]?.largestRelativeChange).toBe(preview.outputs[0]?.largestRelativeChange);
     expect(preview.refused).toBe(0);
+    // The older engine's answers are the ones it recorded at ingest; the run the newer release made
+    // (its stored result is the newer engine's) is run again with the older engine.
+    const otherRelease = stored.filter((r) => r.release !== rel.older).length;
+    expect(otherRelease).toBeGreaterThan(0);
+    expect(preview.fromSide).toEqual({ recorded: stored.length - otherRelease, rerun: otherRelease });
+    expect(preview.note).toMatch(/^The current engine's answers are the ones recorded/);
     // The same release changes nothing; an unknown one is a 400 naming the query; the analyst may not look.
     const none = upgradePreviewSchema.parse(
       (await developer.get(`/orgs/${org.id}/widgets/${widget.id}/upgrade-preview?to=${rel.older}`).expect(200)).body,

@@ -51,6 +51,8 @@ export interface ReleaseService {
    * server's calc-core for the development build. Null for a release the server does not have.
    */
   engine(version: string): RunEngine | null;
+  /** Where that engine's module lives, for a worker thread to load it itself; null as for `engine`. */
+  enginePath(version: string): string | null;
   /** The newest published release a range pin (`~0.2`) allows, never a pre-release; null when none. */
   resolve(pin: string): string | null;
   summaries(): ReleaseSummary[];
@@ -148,6 +150,11 @@ export function createReleaseService(dir: string, publicUrl: string, publishedDi
         engines.set(version, engine);
       }
       return engine;
+    },
+    enginePath(version) {
+      const e = entry(version);
+      if (!e) return null;
+      return e.published ? path.join(e.folder, version, e.published.engine) : nodeRequire.resolve('@wickstone/calc-core');
     },
     resolve(pin) {
       // Only published releases: a development build is never picked by a range.
