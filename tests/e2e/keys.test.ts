@@ -167,11 +167,15 @@ describe('embed keys and CSP, as the developer', () => {
     // The overview: refused sites and the release status.
     await page.locator('[data-refused-summary]').waitFor({ timeout: 20_000 });
     expect(await page.locator('[data-refused-summary]').textContent()).toContain('3 refusals');
-    await page.goto(`${app.url}/orgs/${org.id}/widgets/${widget.id}`);
+    // The editor shows one section at a time: the embed code first, then the release and sites.
+    const widgetPage = `${app.url}/orgs/${org.id}/widgets/${widget.id}`;
+    await page.goto(`${widgetPage}?section=embed`);
+    const code = page.locator('[data-embed-snippet]');
+    await code.waitFor();
+    expect(await code.inputValue()).toBe(oldSnippet);
+    await page.goto(`${widgetPage}?section=release`);
     const section = page.locator('#widget-release');
     await section.locator('[data-current-key]').waitFor();
-    const code = page.locator('[data-embed-snippet]');
-    expect(await code.inputValue()).toBe(oldSnippet);
     // The refused site, one click from allowed (and back off again: it is not the firm's).
     const refused = section.locator('[data-refused-origins]');
     expect(await refused.textContent()).toContain(STRANGER);
@@ -192,6 +196,7 @@ describe('embed keys and CSP, as the developer', () => {
     expect(newKey).not.toBe(widget.publicKey);
     expect(newKey).toMatch(/^[0-9A-HJKMNP-TV-Z]{4}(-[0-9A-HJKMNP-TV-Z]{4}){3}-[0-9A-HJKMNP-TV-Z]$/);
     expect(await section.locator('[data-previous-key]').textContent()).toContain(widget.publicKey);
+    await page.goto(`${widgetPage}?section=embed`);
     await expect.poll(() => code.inputValue()).toContain(`data-wickstone-key="${newKey}"`);
     await context.close();
 
@@ -215,14 +220,17 @@ describe('embed keys and CSP, as the developer', () => {
         await page.locator('main').waitFor();
         if (role === 'developer') await page.locator('[data-refused-summary]').waitFor({ timeout: 20_000 });
         await screenshot(page, `keys-overview-${role}-${width}`);
-        await page.goto(`${app.url}/orgs/${org.id}/widgets/${widget.id}`);
+        const widgetPage = `${app.url}/orgs/${org.id}/widgets/${widget.id}`;
+        await page.goto(`${widgetPage}?section=embed`);
+        await page.locator('#widget-embed [data-embed-snippet]').waitFor();
+        await partShot(page.locator('#widget-embed'), `keys-embed-${role}-${width}-section`);
+        await page.goto(`${widgetPage}?section=release`);
         const section = page.locator('#widget-release');
         await section.locator('[data-current-key]').waitFor();
         if (role === 'analyst')
           expect(await section.getByRole('button', { name: 'Replace the key' }).count()).toBe(0);
         await section.scrollIntoViewIfNeeded();
         await screenshot(page, `keys-integration-${role}-${width}`);
-        await partShot(page.locator('#widget-embed'), `keys-embed-${role}-${width}-section`);
         await partShot(section, `keys-release-${role}-${width}-section`);
         await context.close();
       }

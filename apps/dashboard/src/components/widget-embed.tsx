@@ -131,7 +131,7 @@ export function EmbedCodeSection({ widget, dirty }: { widget: Widget; dirty: boo
               <code className="font-mono">&lt;body&gt;</code>. Site builders call this an HTML or code block.
             </li>
             <li>
-              The page&rsquo;s origin must be one of the sites above, and the widget must be in service.
+              The page&rsquo;s origin must be one of the widget&rsquo;s allowed sites, and the widget must be in service.
               Release <strong className="text-ink">{widget.release}</strong>; the{' '}
               <code className="font-mono">integrity</code> hash makes the browser refuse a changed file.
             </li>
