@@ -120,7 +120,7 @@ describe('embed keys and CSP, as the developer', () => {
     await w.locator('[data-wickstone="calculate"]').click();
     await w.locator('[data-result][data-report="stored"]').waitFor({ timeout: 30_000 });
     // The texts chunk (cautions) arrives after first paint: wait for it too.
-    await w.locator('[data-caution="ESTIMATE_ONLY"]').waitFor({ timeout: 30_000 });
+    await w.locator('[data-caution="CLEAN_SURFACES"]').waitFor({ timeout: 30_000 });
     await tab.evaluate(() => document.fonts.ready);
     await context.close();
     return violations;

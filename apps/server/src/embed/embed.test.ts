@@ -1,7 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { getCalculator } from '@wickstone/calc-core';
+import { calculate, getCalculator } from '@wickstone/calc-core';
+import { headline } from '@wickstone/calc-core/answer';
 import { embedWidgetSchema, errorBodySchema, widgetSchema, type Widget } from '@wickstone/contracts';
 import {
   createTestApp,
@@ -296,6 +297,10 @@ describe('public embed API', () => {
       const [firmMail] = await mailbox(t.db.config.mail.fakeApiUrl, notify);
       expect(firmMail?.subject).toContain('Hester Quayle');
       expect(firmMail?.links.some((l) => l.endsWith(`/orgs/${org.id}/leads/${lead?.id}`))).toBe(true);
+      // The firm reads the answer the visitor read: the widget's headline, in the visitor's units.
+      const read = headline(getCalculator('tube-rise')!, calculate('tube-rise', run.inputs), 'si').text;
+      expect(firmMail?.text).toContain(`The visitor read: ${read}`);
+      expect(firmMail?.html).toContain('What the visitor read');
       const [copy] = await mailbox(t.db.config.mail.fakeApiUrl, visitor);
       expect(copy?.subject).toContain('Tube rise');
       expect(copy?.text).toMatch(/Rise/i);

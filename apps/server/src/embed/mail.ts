@@ -141,6 +141,8 @@ export function leadNotificationMail(p: {
   ).filter((e): e is [string, string] => Boolean(e[1]));
   // The firm's own copy keeps the warning codes: its analysts see the same codes in the dashboard.
   const result = p.calc && p.result ? resultLines(p.calc, p.result, p.system) : [];
+  // The answer the visitor read, in their units, as the widget wrote it.
+  const answer = p.calc && p.result ? headline(p.calc, p.result, p.system).text : '';
   const replyHint = p.lead.email ? 'Reply to this e-mail to answer the visitor directly.' : '';
   const text = [
     title,
@@ -149,6 +151,7 @@ export function leadNotificationMail(p: {
     '',
     `Open the request: ${p.link}`,
     ...(replyHint ? ['', replyHint] : []),
+    ...(answer ? ['', `The visitor read: ${answer}`] : []),
     '',
     ...result,
   ].join('\n');
@@ -170,6 +173,7 @@ export function leadNotificationMail(p: {
           ';margin-top:8px',
         ),
         ...(replyHint ? [para(escapeHtml(replyHint), ';font-size:13px;color:#4b5d66')] : []),
+        ...(answer ? [heading('What the visitor read'), para(escapeHtml(answer), ';font-weight:bold')] : []),
         sectionsOf(result),
       ],
       'Sent by Wickstone for your firm: a visitor asked for a site assessment through one of your calculators.',
