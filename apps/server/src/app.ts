@@ -175,6 +175,7 @@ export function createApp(deps: AppDeps): Express {
     counters,
     copyLimits: config.embed.copies,
     sheets,
+    engineOf: (release) => releases.engine(release),
   });
   const billing = createBillingService({
     sequelize,
@@ -184,7 +185,7 @@ export function createApp(deps: AppDeps): Express {
     publicUrl: config.publicUrl,
   });
   const reads = deps.reads ?? sequelize;
-  const runs = createRunService({ sequelize, reads });
+  const runs = createRunService({ sequelize, reads, engineOf: (release) => releases.engine(release) });
   const refusals = createRefusalCounter(sequelize);
   const usage = createUsageService({ sequelize: reads });
   const leads = createLeadService({ sequelize, runs });

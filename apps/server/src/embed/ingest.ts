@@ -5,6 +5,7 @@ import { canonicalJson, type CalculationResult, type JsonValue } from '@wickston
 import type { EmbedRunBody, WidgetSettings } from '@wickstone/contracts';
 import { AppError } from '../errors.js';
 import { isCalcInputError } from '../releases/service.js';
+import { storedCalculation } from '../runs/working.js';
 import { insertRunStatements, isDuplicateKey, retryOnDeadlock, type RunRow } from '../runs/store.js';
 import { addRunsStatements, jsonValue, type Statement } from '../usage/rollups.js';
 import {
@@ -298,7 +299,8 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
             unitSystem: body.unitSystem,
             inputs: body.inputs,
             clientResult: body.result,
-            serverResult: server as unknown as Record<string, unknown>,
+            // The figures and warnings, not the working: that is made again where it is shown.
+            serverResult: storedCalculation(server) as unknown as Record<string, unknown>,
             warningCodes: server.warnings.map((x) => x.code),
             hasWarning: server.warnings.length > 0,
             agreed: mismatch === null,

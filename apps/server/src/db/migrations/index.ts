@@ -12,6 +12,7 @@ import * as leadNotes from './20261202130000-lead-notes.js';
 import * as widgetReleasePins from './20261202150000-widget-release-pins.js';
 import * as refusedOrigins from './20261202150100-refused-origins.js';
 import * as runsSheetProject from './20261202180000-runs-sheet-project.js';
+import * as runsWithoutWorking from './20261202190000-runs-without-working.js';
 
 /**
  * Every migration, in order, listed explicitly so the same list runs from the TypeScript sources
@@ -32,4 +33,5 @@ export const migrations = [
   { name: '20261202150000-widget-release-pins', ...widgetReleasePins },
   { name: '20261202150100-refused-origins', ...refusedOrigins },
   { name: '20261202180000-runs-sheet-project', ...runsSheetProject },
+  { name: '20261202190000-runs-without-working', ...runsWithoutWorking },
 ];
