@@ -12,6 +12,7 @@ import {
   accountsStatement,
   allowancesOf,
   monthOf,
+  pastAllowance,
   runsInMonthOf,
   runsInMonthStatement,
   type AccountRow,
@@ -425,9 +426,27 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         ? {
             allowances: allowancesOf(orgsOf(fresh), results[results.length - 2] as AccountRow[]),
             runs: runsInMonthOf(results[results.length - 1] as RunsInMonthRow[]),
+            marked: true,
           }
         : { allowances: new Map(), runs: new Map() };
-      await conn.query(stale.length ? 'ROLLBACK' : 'COMMIT');
+      if (stale.length) await conn.query('ROLLBACK');
+      else {
+        // Runs past the plan's allowance are marked in their own transaction, in the round trip
+        // that commits it: no run is ever seen unmarked, and marking costs no commit of its own.
+        const over = orgsOf(fresh).flatMap((org) =>
+          pastAllowance(
+            fresh.filter((r) => r.organizationId === org),
+            allowance.runs.get(org) ?? 0,
+            allowance.allowances.get(org) ?? Infinity,
+          ).map((r) => r.id),
+        );
+        if (over.length)
+          await conn.query(
+            `UPDATE runs SET over_allowance = 1 WHERE id IN (${inList(over.length)});\nCOMMIT`,
+            over,
+          );
+        else await conn.query('COMMIT');
+      }
       giveBack(conn);
       return { known, stale, allowance };
     } catch (e) {
