@@ -21,7 +21,7 @@ export interface StoredCalculation {
   inputHash: string;
 }
 
-export function storedCalculation(r: CalculationResult): StoredCalculation {
+export function storedCalculation(r: StoredCalculation): StoredCalculation {
   return {
     calculator: r.calculator,
     outputs: r.outputs,
