@@ -17,7 +17,11 @@ describe('request log modes', () => {
     const lines: string[] = [];
     const logger = createLogger({ logLevel: 'info' }, { write: (l: string) => void lines.push(l) });
     const app = createApp({ config: { ...db.config, requestLog: mode }, sequelize: db.sequelize, logger });
-    await request(app).get('/api/v1/no-such-route').set('User-Agent', 'log-probe/1.0').expect(404);
+    await request(app)
+      .get('/api/v1/no-such-route')
+      .set('User-Agent', 'log-probe/1.0')
+      .set('Origin', 'https://www.log-probe.example')
+      .expect(404);
     return lines;
   }
 
@@ -26,6 +30,16 @@ describe('request log modes', () => {
     expect(lines).toHaveLength(1);
     expect(lines[0]).toContain('"statusCode":404');
     expect(lines[0]).toContain('"url":"/api/v1/no-such-route"');
+    // Which request it was, and no header beyond the origin.
+    const { req } = JSON.parse(lines[0]!) as { req: Record<string, unknown> };
+    expect(req).toEqual({
+      id: expect.anything(),
+      method: 'GET',
+      url: '/api/v1/no-such-route',
+      origin: 'https://www.log-probe.example',
+      remoteAddress: expect.stringMatching(/127\.0\.0\.1/),
+    });
+    expect(lines[0]).not.toContain('log-probe/1.0');
   });
 
   it('line: one short line per request, no headers', async () => {

@@ -89,11 +89,13 @@ export async function requestAssessment(
   runId: string,
   fields: Record<string, string>,
   origin = SITE,
+  /** Ask for a copy of the result by e-mail (to `fields.email`). */
+  sendCopy = false,
 ): Promise<number> {
   const res = await request(app)
     .post('/api/v1/embed/leads')
     .set('Origin', origin)
-    .send({ runId, publicKey: w.publicKey, fields, consent: true });
+    .send({ runId, publicKey: w.publicKey, fields, consent: true, ...(sendCopy ? { sendCopy } : {}) });
   if (res.status !== 201) throw new Error(`lead answered ${res.status}: ${res.text}`);
   return (res.body as { id: number }).id;
 }

@@ -91,6 +91,17 @@ export function allowancesOf(orgIds: readonly number[], rows: readonly AccountRo
 export interface AllowanceFacts {
   runs: ReadonlyMap<number, number>;
   allowances: ReadonlyMap<number, number>;
+  /** The runs past the allowance were marked by the transaction that stored them (`pastAllowance`). */
+  marked?: boolean;
+}
+
+/**
+ * Of one organisation's runs just counted (in the order they were stored), those past its monthly
+ * allowance: the last `used - allowance` of them, `used` being the month's runs with these counted.
+ */
+export function pastAllowance<R>(runs: readonly R[], used: number, allowance: number): R[] {
+  const over = Math.min(runs.length, used - allowance);
+  return over > 0 ? runs.slice(runs.length - over) : [];
 }
 
 export const runsInMonthOf = (rows: readonly RunsInMonthRow[]): Map<number, number> =>
@@ -169,10 +180,10 @@ export function createRunAllowance(deps: {
       const allowance = known?.allowances.get(orgId) ?? (await standingFor(orgId)).plan.limits.runsPerMonth;
       const used = known?.runs.get(orgId) ?? (await runsInMonth(sequelize, orgId, month));
       const before = used - batch.length;
-      const over = Math.min(batch.length, used - allowance);
-      if (over > 0) {
+      const over = pastAllowance(batch, used, allowance);
+      if (over.length && !known?.marked) {
         await sequelize.query('UPDATE runs SET over_allowance = 1 WHERE id IN (?)', {
-          replacements: [batch.slice(batch.length - over).map((r) => r.id)],
+          replacements: [over.map((r) => r.id)],
           type: QueryTypes.UPDATE,
         });
       }

@@ -5,12 +5,14 @@ import { canonicalJson, type CalculationResult, type JsonValue } from '@wickston
 import type { EmbedRunBody, WidgetSettings } from '@wickstone/contracts';
 import { AppError } from '../errors.js';
 import { isCalcInputError } from '../releases/service.js';
+import { storedCalculation } from '../runs/working.js';
 import { insertRunStatements, isDuplicateKey, retryOnDeadlock, type RunRow } from '../runs/store.js';
 import { addRunsStatements, jsonValue, type Statement } from '../usage/rollups.js';
 import {
   accountsStatement,
   allowancesOf,
   monthOf,
+  pastAllowance,
   runsInMonthOf,
   runsInMonthStatement,
   type AccountRow,
@@ -66,7 +68,30 @@ export interface IngestOptions {
 export interface RunEngine {
   calculate: typeof currentEngine.calculate;
   getCalculator: typeof currentEngine.getCalculator;
+  /**
+   * The numbers alone (outputs, warnings, band, version: `calculate`'s, without the working, the
+   * assumptions or the input hash), in engines that have it (calc-core from 0.3): feature-detected.
+   */
+  compute?: (
+    id: string,
+    inputs: unknown,
+  ) => Pick<CalculationResult, 'calculator' | 'inputs' | 'outputs' | 'warnings' | 'band' | 'version'>;
 }
+
+/** What the server's recomputation of a report gives: what is compared, flagged and stored. */
+export type ServerCalculation = Pick<
+  CalculationResult,
+  'calculator' | 'outputs' | 'warnings' | 'band' | 'version' | 'inputHash'
+>;
+
+/**
+ * calc-core's input hash (SHA-256 of the canonical JSON of calculator and inputs used) with Node's
+ * native SHA-256: the same digest the engines make in plain script for the browser.
+ */
+export const inputHashOf = (calculator: string, inputs: CalculationResult['inputs']): string =>
+  createHash('sha256')
+    .update(canonicalJson({ calculator, inputs } as unknown as JsonValue))
+    .digest('hex');
 
 /** What a report needs of its widget: read once per batch with plain SQL, no model instances. */
 interface WidgetFacts {
@@ -117,7 +142,7 @@ function close(a: number, b: number): boolean {
 /** Where the client's result and the server's recomputation differ; null when they agree. */
 export function compareResults(
   client: EmbedRunBody['result'],
-  server: CalculationResult,
+  server: ServerCalculation,
 ): Record<string, unknown> | null {
   const problems: Record<string, unknown> = {};
   if (client.version !== server.version)
@@ -164,7 +189,7 @@ export function recompute(
   w: Pick<WidgetFacts, 'id' | 'calculatorId' | 'settings'>,
   body: EmbedRunBody,
   engine: RunEngine = currentEngine,
-): CalculationResult {
+): ServerCalculation {
   const calc = engine.getCalculator(w.calculatorId);
   if (!calc) throw new AppError('internal', `widget ${w.id} names a calculator this server lacks`);
   // A locked or hidden input is the firm's choice: a visitor's report may not change it.
@@ -175,7 +200,12 @@ export function recompute(
       throw field(`body.inputs.${id}`, 'This input is fixed by the widget');
   }
   try {
-    return engine.calculate(w.calculatorId, body.inputs);
+    // The working is never needed here (runs do not store it): the engine's numbers alone where it
+    // can give them, with the input hash made natively.
+    if (!engine.compute) return engine.calculate(w.calculatorId, body.inputs);
+    const r = engine.compute(w.calculatorId, body.inputs);
+    const { calculator, outputs, warnings, band, version } = r;
+    return { calculator, outputs, warnings, band, version, inputHash: inputHashOf(calculator, r.inputs) };
   } catch (e) {
     if (!isCalcInputError(e)) throw e;
     const fields = e.issues.map((i) => ({ field: `body.inputs.${i.field}`, message: i.message }));
@@ -298,7 +328,8 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
             unitSystem: body.unitSystem,
             inputs: body.inputs,
             clientResult: body.result,
-            serverResult: server as unknown as Record<string, unknown>,
+            // The figures and warnings, not the working: that is made again where it is shown.
+            serverResult: storedCalculation(server) as unknown as Record<string, unknown>,
             warningCodes: server.warnings.map((x) => x.code),
             hasWarning: server.warnings.length > 0,
             agreed: mismatch === null,
@@ -423,9 +454,27 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         ? {
             allowances: allowancesOf(orgsOf(fresh), results[results.length - 2] as AccountRow[]),
             runs: runsInMonthOf(results[results.length - 1] as RunsInMonthRow[]),
+            marked: true,
           }
         : { allowances: new Map(), runs: new Map() };
-      await conn.query(stale.length ? 'ROLLBACK' : 'COMMIT');
+      if (stale.length) await conn.query('ROLLBACK');
+      else {
+        // Runs past the plan's allowance are marked in their own transaction, in the round trip
+        // that commits it: no run is ever seen unmarked, and marking costs no commit of its own.
+        const over = orgsOf(fresh).flatMap((org) =>
+          pastAllowance(
+            fresh.filter((r) => r.organizationId === org),
+            allowance.runs.get(org) ?? 0,
+            allowance.allowances.get(org) ?? Infinity,
+          ).map((r) => r.id),
+        );
+        if (over.length)
+          await conn.query(
+            `UPDATE runs SET over_allowance = 1 WHERE id IN (${inList(over.length)});\nCOMMIT`,
+            over,
+          );
+        else await conn.query('COMMIT');
+      }
       giveBack(conn);
       return { known, stale, allowance };
     } catch (e) {

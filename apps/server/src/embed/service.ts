@@ -19,6 +19,7 @@ import { leadNotificationMail, resultCopyMail, type FirmBrand } from './mail.js'
 import { checkWidget, createRunIngest, type RunIngest, type RunReceipt } from './ingest.js';
 import type { SheetService } from '../sheets/service.js';
 import { createReplacedKeys } from './keys.js';
+import { wholeResult, type EngineOf } from '../runs/working.js';
 import { countLeads, ROLLUP_COLUMNS, rollupRunOf, type RollupColumnsRow } from '../usage/rollups.js';
 
 export interface EmbedService {
@@ -52,6 +53,8 @@ export function createEmbedService(deps: {
   /** The group-commit ingest of run reports; one per process. */
   ingest?: RunIngest;
   sheets: SheetService;
+  /** Release engines: the e-mailed working is made again with the engine of the run's release. */
+  engineOf?: EngineOf;
 }): EmbedService {
   const { sequelize, mailer, logger, publicUrl, counters, copyLimits, sheets } = deps;
   const afterStored = deps.afterRunsStored;
@@ -212,7 +215,14 @@ export function createEmbedService(deps: {
       const brand = await brandOf(w, org?.name ?? '');
       const notify = await recipientsFor(w);
       const calc = getCalculator(w.calculatorId);
-      const result = run.serverResult as unknown as CalculationResult | null;
+      // The lead is stored whatever happens here: a working that cannot be made again sends the
+      // notification without the result, never an error to the visitor.
+      let result: CalculationResult | null = null;
+      try {
+        result = wholeResult(run, deps.engineOf);
+      } catch (err) {
+        logger.error({ err, runId: run.id }, 'the working of a run could not be made again for its mail');
+      }
       const link = `${publicUrl.replace(/\/$/, '')}/orgs/${w.organizationId}/leads/${lead.id}`;
       for (const to of notify) {
         await sendSafely(

@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { calculate, plainInputs, type CalculationResult } from '@wickstone/calc-core';
 import type { WidgetSettings } from '@wickstone/contracts';
 import type { RunRow } from './store.js';
+import { storedCalculation } from './working.js';
 
 /** The parts of a widget an invented run is made for. */
 export interface RunWidget {
@@ -64,7 +65,7 @@ export function runRowFrom(w: RunWidget, result: CalculationResult, run: Invente
     unitSystem: run.unitSystem ?? w.settings.units.system,
     inputs: plainInputs(result.inputs),
     clientResult: { outputs, warnings, inputHash: result.inputHash, version: result.version },
-    serverResult: result as unknown as Record<string, unknown>,
+    serverResult: storedCalculation(result) as unknown as Record<string, unknown>,
     warningCodes: warnings,
     hasWarning: warnings.length > 0,
     agreed,

@@ -6,6 +6,7 @@ import { keysetCsv } from '../export/csv.js';
 import { jsonValue } from '../usage/rollups.js';
 import { nextDay } from '../usage/days.js';
 import { runPrinter, showRun, valuesCell, type RunPrinter } from './present.js';
+import { wholeResult, type EngineOf } from './working.js';
 
 export interface RunService {
   /** One page of an organisation's runs; `total` counts every run the filters match. */
@@ -125,7 +126,12 @@ function rollupCount(orgId: number, f: RunFilters): Where {
  * visitors' reports added, so a replica's lag only delays new runs), else the primary. A run's own
  * page (`get`) reads the primary, as every other read does.
  */
-export function createRunService(deps: { sequelize: Sequelize; reads?: Sequelize }): RunService {
+export function createRunService(deps: {
+  sequelize: Sequelize;
+  reads?: Sequelize;
+  /** Release engines: a run's working is made again with the engine of the release that made it. */
+  engineOf?: EngineOf;
+}): RunService {
   const { sequelize } = deps;
   const reads = deps.reads ?? sequelize;
 
@@ -232,7 +238,8 @@ export function createRunService(deps: { sequelize: Sequelize; reads?: Sequelize
         inputHash: run.inputHash,
         sentInputs: run.inputs,
         clientResult: run.clientResult,
-        serverResult: run.serverResult,
+        // The working, made again from the inputs where the row does not hold it.
+        serverResult: wholeResult(run, deps.engineOf) as unknown as Record<string, unknown> | null,
         mismatch: run.mismatch,
         lead: lead
           ? {

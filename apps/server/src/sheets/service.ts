@@ -11,6 +11,7 @@ import { AppError } from '../errors.js';
 import { shown } from '../embed/format.js';
 import { renderSheet } from './render.js';
 import type { ReleaseService } from '../releases/service.js';
+import { wholeResult } from '../runs/working.js';
 
 export interface Sheet {
   pdf: Buffer;
@@ -75,7 +76,8 @@ export function createSheetService(deps: {
 
   async function render(run: Run, w: Widget, project: SheetProject): Promise<Sheet> {
     const calc = calculatorOf(run);
-    const result = run.serverResult as unknown as CalculationResult | null;
+    // The working is printed from the engine of the run's release when the row does not hold it.
+    const result = wholeResult(run, deps.releases && ((release) => deps.releases!.engine(release)));
     if (!result) throw noRun();
     const org = await Organization.findByPk(run.organizationId, { attributes: ['id', 'name'] });
     let logo: Buffer | null = null;

@@ -12,6 +12,7 @@ import * as leadNotes from './20261202130000-lead-notes.js';
 import * as widgetReleasePins from './20261202150000-widget-release-pins.js';
 import * as refusedOrigins from './20261202150100-refused-origins.js';
 import * as runsSheetProject from './20261202180000-runs-sheet-project.js';
+import * as runsWithoutWorking from './20261202190100-runs-without-working.js';
 import * as widgetKeyRotation from './20261202190000-widget-key-rotation.js';
 
 /**
@@ -34,4 +35,5 @@ export const migrations = [
   { name: '20261202150100-refused-origins', ...refusedOrigins },
   { name: '20261202180000-runs-sheet-project', ...runsSheetProject },
   { name: '20261202190000-widget-key-rotation', ...widgetKeyRotation },
+  { name: '20261202190100-runs-without-working', ...runsWithoutWorking },
 ];

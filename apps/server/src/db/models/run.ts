@@ -8,7 +8,7 @@ import {
 } from 'sequelize';
 import { unitSystems, type SheetProject, type UnitSystem } from '@wickstone/contracts';
 
-/** What calc-core gave, kept as JSON: outputs, warning codes, working, band, version, input hash. */
+/** What calc-core gave, kept as JSON: outputs, warnings, band, version, input hash; rows stored before runs dropped the working also hold it (see runs/working.ts). */
 export type StoredResult = Record<string, unknown>;
 
 export class Run extends Model<InferAttributes<Run>, InferCreationAttributes<Run>> {
