@@ -131,8 +131,8 @@ export function EmbedCodeSection({ widget, dirty }: { widget: Widget; dirty: boo
               <code className="font-mono">&lt;body&gt;</code>. Site builders call this an HTML or code block.
             </li>
             <li>
-              The page&rsquo;s origin must be one of the widget&rsquo;s allowed sites, and the widget must be in service.
-              Release <strong className="text-ink">{widget.release}</strong>; the{' '}
+              The page&rsquo;s origin must be one of the widget&rsquo;s allowed sites, and the widget must be
+              in service. Release <strong className="text-ink">{widget.release}</strong>; the{' '}
               <code className="font-mono">integrity</code> hash makes the browser refuse a changed file.
             </li>
             <li>Settings you save later reach the page without changing the code.</li>
