@@ -197,14 +197,17 @@ export function RunRecord({ run }: { run: RunDetail }) {
       </Card>
       <section aria-labelledby={`working-${run.id}`} className="space-y-2">
         <h3 id={`working-${run.id}`} className="text-lg font-bold tracking-tight">
-          Working, as stored
+          Working
         </h3>
         <p className="text-sm text-ink-soft">
-          Worked in SI, as the formulas are written; each value is repeated in the visitor&apos;s units where
-          they differ.
+          Made again from the stored inputs by the engine of release {run.release}, which gave the stored
+          figures. Worked in SI, as the formulas are written; each value is repeated in the visitor&apos;s
+          units where they differ.
         </p>
         {steps.length === 0 ? (
-          <p className="text-sm text-ink-soft">No working was stored for this run.</p>
+          <p className="text-sm text-ink-soft">
+            No working for this run: its engine could not make it again.
+          </p>
         ) : (
           <ol className="space-y-2">
             {steps.map((s, i) => (
