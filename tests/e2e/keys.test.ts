@@ -30,6 +30,8 @@ async function partShot(part: Locator, name: string): Promise<void> {
 interface SitePage {
   html: string;
   csp: string | null;
+  /** The widget has a table input (the tables chunk, its styles and the readings chart load too). */
+  table?: boolean;
 }
 
 /** The policy the dashboard lists, with the page's nonce in place of the placeholder. */
@@ -49,6 +51,18 @@ describe('embed keys and CSP, as the developer', () => {
   let served: SitePage = { html: '', csp: null };
   let widget: Widget;
 
+  /** A live widget the owner makes, allowed on the test site. */
+  async function liveWidget(name: string, calculatorId: string): Promise<Widget> {
+    const owner = await ApiSession.signedIn(app.url, org.users.owner);
+    const created = await owner.json<Widget>(
+      'POST',
+      `/orgs/${org.id}/widgets`,
+      { name, calculatorId, allowedOrigins: [site.origin] },
+      201,
+    );
+    return owner.json<Widget>('PATCH', `/orgs/${org.id}/widgets/${created.id}`, { status: 'live' }, 200);
+  }
+
   beforeAll(async () => {
     app = await startApp();
     org = await seedOrgWithTeam('Ashgrove Survey & Damp');
@@ -65,19 +79,7 @@ describe('embed keys and CSP, as the developer', () => {
     });
     await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
     site = { origin: `http://127.0.0.1:${(server.address() as AddressInfo).port}`, server };
-    const owner = await ApiSession.signedIn(app.url, org.users.owner);
-    const created = await owner.json<Widget>(
-      'POST',
-      `/orgs/${org.id}/widgets`,
-      { name: 'Rising damp check', calculatorId: 'tube-rise', allowedOrigins: [site.origin] },
-      201,
-    );
-    widget = await owner.json<Widget>(
-      'PATCH',
-      `/orgs/${org.id}/widgets/${created.id}`,
-      { status: 'live' },
-      200,
-    );
+    widget = await liveWidget('Rising damp check', 'tube-rise');
     // A page on a site nobody allowed asks for the widget: the developer sees it refused.
     for (let i = 0; i < 3; i++) {
       const res = await fetch(`${app.url}/api/v1/embed/widgets/${widget.publicKey}`, {
@@ -117,10 +119,28 @@ describe('embed keys and CSP, as the developer', () => {
     await tab.goto(`${site.origin}/`);
     const w = tab.locator('wickstone-widget[data-wickstone="host"]');
     await w.locator('[data-wickstone="root"]').waitFor({ timeout: 30_000 });
+    // A table input comes with the tables chunk and its styles: wait for the table to be here.
+    if (page.table) await w.locator('[data-wickstone="table"]').waitFor({ timeout: 30_000 });
     await w.locator('[data-wickstone="calculate"]').click();
     await w.locator('[data-result][data-report="stored"]').waitFor({ timeout: 30_000 });
-    // The texts chunk (cautions) arrives after first paint: wait for it too.
-    await w.locator('[data-caution="CLEAN_SURFACES"]').waitFor({ timeout: 30_000 });
+    if (page.table) {
+      // The readings chart is drawn with the tables chunk's styles, as the table is.
+      const chart = w.locator('[data-wickstone="chart"]');
+      await chart.waitFor({ timeout: 30_000 });
+      // The tables chunk's styles did arrive, as a constructed sheet the policy does not govern.
+      expect(
+        await w.evaluate(
+          (host) =>
+            host.shadowRoot?.adoptedStyleSheets.some((s) =>
+              [...s.cssRules].some((r) => r instanceof CSSStyleRule && r.selectorText === '.table-field'),
+            ) ?? false,
+        ),
+      ).toBe(true);
+    }
+    // The texts chunk (cautions) arrives after first paint: wait for it too ("results are estimates"
+    // is the standing disclaimer's, so a caution of the calculator's own).
+    const caution = page.table ? 'LABORATORY_RESULT' : 'CLEAN_SURFACES';
+    await w.locator(`[data-caution="${caution}"]`).waitFor({ timeout: 30_000 });
     await tab.evaluate(() => document.fonts.ready);
     await context.close();
     return violations;
@@ -137,6 +157,12 @@ describe('embed keys and CSP, as the developer', () => {
       'img-src',
     ]);
     expect(await runOnSite({ html, csp: policyOf(widget, nonce) })).toEqual([]);
+
+    // A widget with a table input under the same listed directives: its tables chunk's styles go in
+    // as the main styles do, so there is no violation either.
+    const tableWidget = await liveWidget('Brick absorption', 'absorption-coefficient');
+    const tableHtml = tableWidget.embed.variants.nonce.replaceAll('{{csp-nonce}}', nonce);
+    expect(await runOnSite({ html: tableHtml, csp: policyOf(tableWidget, nonce), table: true })).toEqual([]);
 
     // The check itself can fail: leave connect-src out and the widget's settings request is refused.
     served = { html, csp: policyOf(widget, nonce, ['connect-src']) };

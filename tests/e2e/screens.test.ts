@@ -213,6 +213,7 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
     await phoneWidget.locator('[data-wickstone="calculate"]').click();
     await phoneWidget.locator('[data-result][data-report="stored"]').waitFor({ timeout: 20_000 });
     findings.push(...(await axeFindings(phone, 'demo site after a run (390)')));
+    await screenshot(phone, 'screens-demo-site-390');
   });
 
   it('reports a serious finding when there is one (the check itself can fail)', async () => {

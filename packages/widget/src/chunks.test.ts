@@ -105,6 +105,46 @@ describe('chunk loader', () => {
     expect(added.filter((s) => s.src.endsWith('runtime-a.js'))).toHaveLength(2);
   });
 
+  it('takes the chunks an engine file registers beside its own (the build bundles them) without fetching them, and runs each once', async () => {
+    const order: string[] = [];
+    const served = chunks(order);
+    // Two engine files that each carry shared-b.js, as two calculators' engines sharing a formula chunk do.
+    const engineFile = (name: string, calculator: string) => ({
+      hash: `sha384-${name}`,
+      body: (g: ChunkRegistry) => {
+        served['shared-b.js'].body(g);
+        g._d(`0.2.0/${name}`, (r) => {
+          const shared = r('shared-b.js'); // a chunk's imports come first
+          order.push(calculator);
+          return { shared, calculator };
+        });
+      },
+    });
+    const { g, doc, added } = fakePage({
+      'runtime-a.js': served['runtime-a.js'],
+      'engine-d.js': engineFile('engine-d.js', 'tube-rise'),
+      'engine-e.js': engineFile('engine-e.js', 'slot-rise'),
+    });
+    const bundled: ChunkTable = {
+      'runtime-a.js': table['runtime-a.js']!,
+      'shared-b.js': table['shared-b.js']!,
+      'engine-d.js': ['sha384-engine-d.js', ['runtime-a.js']],
+      'engine-e.js': ['sha384-engine-e.js', ['runtime-a.js']],
+    };
+    const load = chunkLoader(g, '0.2.0', BASE, bundled, doc);
+    const d = (await load('engine-d.js')) as { shared: unknown };
+    const e = (await load('engine-e.js')) as { shared: unknown };
+    expect(e.shared).toBe(d.shared);
+    expect(order).toEqual(['runtime', 'shared', 'tube-rise', 'slot-rise']);
+    // A later chunk importing the shared one finds it here.
+    expect(await load('shared-b.js')).toBe(d.shared);
+    expect(added.map((s) => s.src.slice(BASE.length)).sort()).toEqual([
+      'engine-d.js',
+      'engine-e.js',
+      'runtime-a.js',
+    ]);
+  });
+
   it('will not load a file its table does not list', async () => {
     const { g, doc } = fakePage({});
     await expect(chunkLoader(g, '0.2.0', BASE, table, doc)('elsewhere.js')).rejects.toThrow(/no chunk/);

@@ -14,35 +14,7 @@ import { deferredReporter, loadExtras, withExtras, type ExtrasModule } from './l
 import { setTablesFetch, type TablesModule } from './lazy-tables.js';
 import { HOST_TAG } from './placement.js';
 import css from './ui/styles.css?inline';
-
-let sheet: CSSStyleSheet | null = null;
-let extrasSheet: CSSStyleSheet | null = null;
-
-/**
- * Styles go into the shadow root only. A constructed sheet is shared by every widget of this
- * bundle on the page (parsed once) and is not an inline style a page's CSP would block; where
- * that API is missing, a <style> inside the shadow root.
- */
-function adoptStyles(root: ShadowRoot, text: string, kind: 'styles' | 'extras'): void {
-  if ('adoptedStyleSheets' in root && typeof CSSStyleSheet.prototype.replaceSync === 'function') {
-    let s = kind === 'styles' ? sheet : extrasSheet;
-    if (s === null) {
-      s = new CSSStyleSheet();
-      s.replaceSync(text);
-      if (kind === 'styles') sheet = s;
-      else extrasSheet = s;
-    }
-    if (!root.adoptedStyleSheets.includes(s)) root.adoptedStyleSheets = [...root.adoptedStyleSheets, s];
-    return;
-  }
-  if (root.querySelector(`style[data-wickstone="${kind}"]`) === null) {
-    const style = document.createElement('style');
-    style.setAttribute('data-wickstone', kind);
-    style.textContent = text;
-    if (kind === 'styles') root.prepend(style);
-    else root.querySelector('style[data-wickstone="styles"]')?.after(style);
-  }
-}
+import { adoptStyles } from './lib/sheets.js';
 
 /** Fetches the extras once the browser has painted the widget (and had a moment to spare). */
 function afterFirstPaint(then: () => void): void {

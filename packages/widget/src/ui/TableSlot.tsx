@@ -1,21 +1,17 @@
 import type { CalculationResult, TableInput, TableRow, UnitSystemId } from '@wickstone/calc-core';
 import { useEffect, useRef } from 'preact/hooks';
 import { useTables, type TablesModule } from '../lazy-tables.js';
+import { adoptStyles } from '../lib/sheets.js';
 
 // Where a table input and its chart sit in the form and under the result: a placeholder until the
 // tables chunk is here (the first flight stays the same for every calculator), then its parts.
 
-/** The chunk, with its styles put once into the shadow root `ref` is in. */
+/** The chunk, with its styles adopted once into the shadow root `ref` is in (as the main styles are). */
 function useTablesIn(ref: { current: HTMLElement | null }): TablesModule | null {
   const tables = useTables();
   useEffect(() => {
     const root = ref.current?.getRootNode();
-    if (!tables || !(root instanceof ShadowRoot) || root.querySelector('style[data-wickstone="tables"]'))
-      return;
-    const style = document.createElement('style');
-    style.setAttribute('data-wickstone', 'tables');
-    style.textContent = tables.css;
-    root.append(style);
+    if (tables && root instanceof ShadowRoot) adoptStyles(root, tables.css, 'tables');
   }, [tables, ref]);
   return tables;
 }
