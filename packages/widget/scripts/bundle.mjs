@@ -45,8 +45,9 @@ export const FLIGHT_GOAL = 14 * 1024;
  * Lowered to 30.25 KB when the calc-core every engine imports joined the runtime and each engine
  * became one file with the formula chunks it shares with other engines (largest:
  * absorption-coefficient 30.2 KB brotli, 30,919 bytes; loader, runtime and one engine file).
+ * 30.5 KB when the runtime's liquid resolution began keeping its answers (largest: 31,012 bytes).
  */
-export const FLIGHT_LIMIT = 30.25 * 1024;
+export const FLIGHT_LIMIT = 30.5 * 1024;
 
 const ENGINE = 'virtual:wickstone-engine/';
 const TEXTS = 'virtual:wickstone-texts/';

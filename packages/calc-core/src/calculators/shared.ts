@@ -200,11 +200,30 @@ function waterProperty<T>(compute: () => T): T {
   }
 }
 
+/** The most liquids `resolveLiquid` keeps: the oldest goes first. */
+const RESOLVED_LIQUIDS_KEPT = 256;
+const resolvedLiquids = new Map<string, ResolvedLiquid>();
+
 /**
  * σ, ρ and μ for the chosen liquid, with one working line each for what the calculator uses.
  * Values not asked for are NaN-free placeholders (0) and carry no working.
  */
 export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): ResolvedLiquid {
+  // A liquid is resolved from these inputs alone, and what comes back is read-only (its working is
+  // made on each read), so the same inputs share one answer: a re-run of many runs that differ only
+  // in their geometry (an upgrade preview, a server re-checking reports) resolves each liquid once.
+  const key = `${String(inputs.liquid)}|${String(inputs.temperatureC)}|${String(inputs.surfaceTension)}|${String(inputs.density)}|${String(inputs.viscosity)}|${needs.density === true}|${needs.viscosity === true}`;
+  let found = resolvedLiquids.get(key);
+  if (found === undefined) {
+    found = resolveLiquidAfresh(inputs, needs);
+    if (resolvedLiquids.size >= RESOLVED_LIQUIDS_KEPT)
+      resolvedLiquids.delete(resolvedLiquids.keys().next().value!);
+    resolvedLiquids.set(key, found);
+  }
+  return found;
+}
+
+function resolveLiquidAfresh(inputs: InputValues, needs: LiquidNeeds): ResolvedLiquid {
   const id = choice(inputs, 'liquid');
   // Each working line is made only when the working is read (`calculate`), never by `compute`.
   const steps: (() => WorkingStep)[] = [];

@@ -1,0 +1,40 @@
+import { describe, expect, it } from 'vitest';
+import { waterSurfaceTension } from '../properties/water.js';
+import { resolveLiquid } from './shared.js';
+
+describe('resolveLiquid keeps what it resolved', () => {
+  it('gives the same answer for the same inputs, and another for another temperature', () => {
+    const at = (t: number) => resolveLiquid({ liquid: 'water', temperatureC: t }, { density: true });
+    const a = at(20);
+    expect(at(20)).toBe(a);
+    const b = at(35);
+    expect(b).not.toBe(a);
+    // The values are the correlation's at each temperature, not the first one kept (IAPWS R1-76 via waterSurfaceTension).
+    expect(a.surfaceTension).toBe(waterSurfaceTension(20));
+    expect(b.surfaceTension).toBe(waterSurfaceTension(35));
+    // Its working is made on each read: a reader that changes one copy changes no other.
+    expect(a.working).not.toBe(a.working);
+    expect(a.working).toEqual(at(20).working);
+  });
+
+  it('tells apart what the liquid is resolved from: needs, entered properties', () => {
+    const custom = (sigma: number) =>
+      resolveLiquid({ liquid: 'custom', surfaceTension: sigma, density: 900 }, { density: true });
+    expect(custom(0.03).surfaceTension).toBe(0.03);
+    expect(custom(0.04).surfaceTension).toBe(0.04);
+    const withDensity = resolveLiquid({ liquid: 'water', temperatureC: 20 }, { density: true });
+    const without = resolveLiquid({ liquid: 'water', temperatureC: 20 }, {});
+    expect(withDensity.density).toBeGreaterThan(990);
+    expect(without.density).toBe(0);
+  });
+
+  it('keeps a bounded number and answers the same after one was dropped', () => {
+    const first = resolveLiquid({ liquid: 'water', temperatureC: 1 }, { density: true });
+    for (let i = 0; i < 400; i++)
+      resolveLiquid({ liquid: 'water', temperatureC: 2 + i / 10 }, { density: true });
+    const again = resolveLiquid({ liquid: 'water', temperatureC: 1 }, { density: true });
+    expect(again).not.toBe(first);
+    expect(again.surfaceTension).toBe(first.surfaceTension);
+    expect(again.density).toBe(first.density);
+  });
+});
