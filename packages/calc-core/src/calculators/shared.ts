@@ -200,9 +200,10 @@ function waterProperty<T>(compute: () => T): T {
   }
 }
 
-/** The most liquids `resolveLiquid` keeps: the oldest goes first. */
-const RESOLVED_LIQUIDS_KEPT = 256;
+/** The most answers `resolveLiquid` and `resolveContactAngle` each keep: the oldest goes first. */
+const RESOLVED_KEPT = 256;
 const resolvedLiquids = new Map<string, ResolvedLiquid>();
+const resolvedAngles = new Map<string, ResolvedAngle>();
 
 /**
  * σ, ρ and μ for the chosen liquid, with one working line each for what the calculator uses.
@@ -216,8 +217,7 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
   let found = resolvedLiquids.get(key);
   if (found === undefined) {
     found = resolveLiquidAfresh(inputs, needs);
-    if (resolvedLiquids.size >= RESOLVED_LIQUIDS_KEPT)
-      resolvedLiquids.delete(resolvedLiquids.keys().next().value!);
+    if (resolvedLiquids.size >= RESOLVED_KEPT) resolvedLiquids.delete(resolvedLiquids.keys().next().value!);
     resolvedLiquids.set(key, found);
   }
   return found;
@@ -435,6 +435,18 @@ export interface ResolvedAngle {
 
 /** The contact angle from the preset or the typed value; a preset for another liquid is refused. */
 export function resolveContactAngle(inputs: InputValues, liquidId: string): ResolvedAngle {
+  // As with liquids: read-only answers from these inputs alone, kept for the same inputs.
+  const key = `${String(inputs.contactAnglePreset)}|${String(inputs.contactAngleDeg)}|${liquidId}`;
+  let found = resolvedAngles.get(key);
+  if (found === undefined) {
+    found = resolveContactAngleAfresh(inputs, liquidId);
+    if (resolvedAngles.size >= RESOLVED_KEPT) resolvedAngles.delete(resolvedAngles.keys().next().value!);
+    resolvedAngles.set(key, found);
+  }
+  return found;
+}
+
+function resolveContactAngleAfresh(inputs: InputValues, liquidId: string): ResolvedAngle {
   const presetId = choice(inputs, 'contactAnglePreset');
   if (presetId === CUSTOM) {
     const a = num(inputs, 'contactAngleDeg');

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { waterSurfaceTension } from '../properties/water.js';
-import { resolveLiquid } from './shared.js';
+import { resolveContactAngle, resolveLiquid } from './shared.js';
 
-describe('resolveLiquid keeps what it resolved', () => {
+describe('resolveLiquid and resolveContactAngle keep what they resolved', () => {
   it('gives the same answer for the same inputs, and another for another temperature', () => {
     const at = (t: number) => resolveLiquid({ liquid: 'water', temperatureC: t }, { density: true });
     const a = at(20);
@@ -36,5 +36,19 @@ describe('resolveLiquid keeps what it resolved', () => {
     expect(again).not.toBe(first);
     expect(again.surfaceTension).toBe(first.surfaceTension);
     expect(again.density).toBe(first.density);
+  });
+
+  it('a contact angle: the same answer for the same preset, angle and liquid, another otherwise', () => {
+    const typed = (deg: number) =>
+      resolveContactAngle({ contactAnglePreset: 'custom', contactAngleDeg: deg }, 'water');
+    expect(typed(20)).toBe(typed(20));
+    expect(typed(20).angleDeg).toBe(20);
+    expect(typed(30).angleDeg).toBe(30);
+    const preset = resolveContactAngle({ contactAnglePreset: 'water-clean-glass' }, 'water');
+    expect(preset).toBe(resolveContactAngle({ contactAnglePreset: 'water-clean-glass' }, 'water'));
+    expect(preset.angleDeg).toBe(0);
+    // A preset of another liquid is refused every time, never kept.
+    expect(() => resolveContactAngle({ contactAnglePreset: 'water-clean-glass' }, 'ethanol')).toThrow();
+    expect(() => resolveContactAngle({ contactAnglePreset: 'water-clean-glass' }, 'ethanol')).toThrow();
   });
 });
