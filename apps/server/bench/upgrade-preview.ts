@@ -210,14 +210,13 @@ try {
     console.log(
       `    total                                                ${ms(readMs + engineMs + compareMs)}`,
     );
-    console.log(
-      `    ENGINE TIME (from + to side)                         ${ms(engineMs)}  goal 1 s: ${engineMs <= 1000 ? 'met' : 'missed'}`,
-    );
+    console.log(`    engine time on one thread (from + to side)           ${ms(engineMs)}`);
     console.log(
       `    baseline, bare JSON.parse of the same ${runs.length.toLocaleString('en')} input texts ${ms(parseMs)}  (engine time ${(engineMs / parseMs).toFixed(1)}x that)`,
     );
     // The candidate's share spread over this thread and worker threads (what the route does from
     // ${PARALLEL_MIN_INPUTS} distinct inputs up): the first call starts the workers, the second finds them running.
+    let routeMs = engineMs;
     if (a.distinct >= PARALLEL_MIN_INPUTS) {
       for (const when of ['workers starting', 'workers running']) {
         const s = await engineAnswersSpread(current, candidate, candidatePath, 'tube-rise', runs, 2);
@@ -225,8 +224,13 @@ try {
           `    to side over 2 threads (${when})`.padEnd(55) +
             `${ms(s.toMs)}  (${(a.toMs / s.toMs).toFixed(2)}x one thread)`,
         );
+        // The route's own figure: the first preview after a start pays for starting the workers.
+        if (when === 'workers starting') routeMs = a.fromMs + s.toMs;
       }
     }
+    console.log(
+      `    ENGINE TIME as the route runs it (from + to side)    ${ms(routeMs)}  goal 1 s: ${routeMs <= 1000 ? 'met' : 'missed'}`,
+    );
   }
 } finally {
   await endAnswerWorkers();
