@@ -4,6 +4,7 @@
 import { createServer } from 'node:http';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
+import { demoPage } from './lib/demo-page.mjs';
 
 const port = Number(process.env.DEMO_SITE_PORT ?? 5181);
 const root = new URL('..', import.meta.url).pathname;
@@ -12,13 +13,7 @@ const snippetsFile = process.env.DEMO_SITE_SNIPPETS ?? path.join(root, 'var', 'd
 
 function page() {
   const { widgets } = JSON.parse(readFileSync(snippetsFile, 'utf8'));
-  // {{WIDGET_ABSORPTION}} is the seed's absorption widget; {{WIDGET_n}} the n-th widget it wrote.
-  return template
-    .replace(
-      '{{WIDGET_ABSORPTION}}',
-      widgets.find((w) => w.calculatorId === 'absorption-coefficient')?.snippet ?? '',
-    )
-    .replace(/\{\{WIDGET_(\d+)\}\}/g, (_, n) => widgets[Number(n) - 1]?.snippet ?? '');
+  return demoPage(template, widgets);
 }
 
 const server = createServer((req, res) => {

@@ -8,7 +8,7 @@ import { createPaymentsClient } from '../billing/provider.js';
 import { initModels, Membership, Organization, User } from '../db/models/index.js';
 import { demoSiteOrigins, seedDemoWidgets } from '../db/seed/demo-widgets.js';
 import { createReleaseService } from '../releases/service.js';
-import { defaultReleasesDir } from '../releases/paths.js';
+import { releaseDirsOf } from '../releases/paths.js';
 import { createWidgetService } from '../widgets/service.js';
 import { serverVersion } from '../version.js';
 
@@ -34,7 +34,10 @@ try {
         config.publicUrl,
       ),
     );
-    const releases = createReleaseService(config.releasesDir ?? defaultReleasesDir, config.publicUrl);
+    // The releases as the app serves them: the published ones first, then this build's, so a demo
+    // widget pinned to a published release gets that release's script and SRI hash.
+    const releaseDirs = releaseDirsOf(config);
+    const releases = createReleaseService(releaseDirs.build, config.publicUrl, releaseDirs.published);
     const widgets = createWidgetService({
       sequelize,
       releases,
@@ -48,7 +51,13 @@ try {
       writeFileSync(
         config.demo.snippetsFile,
         JSON.stringify(
-          { widgets: demo.widgets.map((w) => ({ name: w.name, snippet: w.embed.snippet })) },
+          {
+            widgets: demo.widgets.map((w) => ({
+              name: w.name,
+              calculatorId: w.calculatorId,
+              snippet: w.embed.snippet,
+            })),
+          },
           null,
           2,
         ),
