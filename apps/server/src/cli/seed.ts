@@ -52,11 +52,7 @@ try {
         config.demo.snippetsFile,
         JSON.stringify(
           {
-            widgets: demo.widgets.map((w) => ({
-              name: w.name,
-              calculatorId: w.calculatorId,
-              snippet: w.embed.snippet,
-            })),
+            widgets: demo.widgets.map((w) => ({ name: w.name, snippet: w.embed.snippet })),
           },
           null,
           2,

@@ -205,6 +205,17 @@ const RESOLVED_KEPT = 256;
 const resolvedLiquids = new Map<string, ResolvedLiquid>();
 const resolvedAngles = new Map<string, ResolvedAngle>();
 
+/** The answer `kept` holds for `key`, else `make()`'s, kept (dropping the oldest past RESOLVED_KEPT). */
+function keptOr<T>(kept: Map<string, T>, key: string, make: () => T): T {
+  let found = kept.get(key);
+  if (found === undefined) {
+    found = make();
+    if (kept.size >= RESOLVED_KEPT) kept.delete(kept.keys().next().value!);
+    kept.set(key, found);
+  }
+  return found;
+}
+
 /**
  * σ, ρ and μ for the chosen liquid, with one working line each for what the calculator uses.
  * Values not asked for are NaN-free placeholders (0) and carry no working.
@@ -214,13 +225,7 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
   // made on each read), so the same inputs share one answer: a re-run of many runs that differ only
   // in their geometry (an upgrade preview, a server re-checking reports) resolves each liquid once.
   const key = `${String(inputs.liquid)}|${String(inputs.temperatureC)}|${String(inputs.surfaceTension)}|${String(inputs.density)}|${String(inputs.viscosity)}|${needs.density === true}|${needs.viscosity === true}`;
-  let found = resolvedLiquids.get(key);
-  if (found === undefined) {
-    found = resolveLiquidAfresh(inputs, needs);
-    if (resolvedLiquids.size >= RESOLVED_KEPT) resolvedLiquids.delete(resolvedLiquids.keys().next().value!);
-    resolvedLiquids.set(key, found);
-  }
-  return found;
+  return keptOr(resolvedLiquids, key, () => resolveLiquidAfresh(inputs, needs));
 }
 
 function resolveLiquidAfresh(inputs: InputValues, needs: LiquidNeeds): ResolvedLiquid {
@@ -437,13 +442,7 @@ export interface ResolvedAngle {
 export function resolveContactAngle(inputs: InputValues, liquidId: string): ResolvedAngle {
   // As with liquids: read-only answers from these inputs alone, kept for the same inputs.
   const key = `${String(inputs.contactAnglePreset)}|${String(inputs.contactAngleDeg)}|${liquidId}`;
-  let found = resolvedAngles.get(key);
-  if (found === undefined) {
-    found = resolveContactAngleAfresh(inputs, liquidId);
-    if (resolvedAngles.size >= RESOLVED_KEPT) resolvedAngles.delete(resolvedAngles.keys().next().value!);
-    resolvedAngles.set(key, found);
-  }
-  return found;
+  return keptOr(resolvedAngles, key, () => resolveContactAngleAfresh(inputs, liquidId));
 }
 
 function resolveContactAngleAfresh(inputs: InputValues, liquidId: string): ResolvedAngle {
