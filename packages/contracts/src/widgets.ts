@@ -388,3 +388,20 @@ export const refusedOriginsSchema = z.object({
   ),
 });
 export type RefusedOrigins = z.infer<typeof refusedOriginsSchema>;
+
+/**
+ * `GET /orgs/:orgId/refused-origins`: the same refusals across the organisation's widgets, per
+ * origin (most refused first), each with the widgets it asked for and how often.
+ */
+export const orgRefusedOriginsSchema = z.object({
+  days: z.number().int(),
+  items: z.array(
+    z.object({
+      origin: z.string(),
+      refusals: z.number().int(),
+      lastDay: z.string(),
+      widgets: z.array(z.object({ id: z.number().int(), name: z.string(), refusals: z.number().int() })),
+    }),
+  ),
+});
+export type OrgRefusedOrigins = z.infer<typeof orgRefusedOriginsSchema>;

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import {
+  orgRefusedOriginsSchema,
   refusedOriginsSchema,
   releaseListSchema,
   upgradePreviewSchema,
@@ -29,6 +30,13 @@ export const refusedOriginsQuery = (orgId: number, widgetId: number) =>
     queryKey: [...widgetsKey(orgId), widgetId, 'refused-origins'],
     queryFn: async () =>
       refusedOriginsSchema.parse(await apiFetch(`/orgs/${orgId}/widgets/${widgetId}/refused-origins`)),
+  });
+
+/** Every widget's refused sites in one answer (the overview's card). */
+export const orgRefusedOriginsQuery = (orgId: number) =>
+  queryOptions({
+    queryKey: [...widgetsKey(orgId), 'refused-origins'],
+    queryFn: async () => orgRefusedOriginsSchema.parse(await apiFetch(`/orgs/${orgId}/refused-origins`)),
   });
 
 /** Moving the pin changes the widget (its snippet and SRI) and its history. */

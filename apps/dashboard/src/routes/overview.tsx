@@ -1,11 +1,11 @@
-import { useQueries, useQuery } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { can, plans } from '@wickstone/contracts';
 import { useOrg } from '../lib/org-context';
 import { formatDate, roleLabel, roleSummary } from '../lib/labels';
 import { utcDay } from '../lib/usage-filters';
 import { leadListQuery, usageSummaryQuery } from '../queries/usage';
 import { widgetListQuery } from '../queries/widgets';
-import { refusedOriginsQuery, releasesQuery } from '../queries/releases';
+import { orgRefusedOriginsQuery, releasesQuery } from '../queries/releases';
 import { usePageTitle } from '../lib/use-page-title';
 import { orgPath } from '../nav';
 import { membersQuery } from '../queries/members';
@@ -263,36 +263,13 @@ function ReleasesInUse() {
  */
 function RefusedOrigins() {
   const { orgId } = useOrg();
-  const widgets = useQuery(widgetListQuery(orgId, 1, 100));
-  const items = widgets.data?.items ?? [];
-  const refused = useQueries({ queries: items.map((w) => refusedOriginsQuery(orgId, w.id)) });
-  const failed = refused.find((q) => q.isError);
-  const rows = new Map<
-    string,
-    { origin: string; refusals: number; widgets: { id: number; name: string }[] }
-  >();
-  refused.forEach((q, i) => {
-    const w = items[i];
-    if (!w || !q.data) return;
-    for (const o of q.data.items) {
-      const row = rows.get(o.origin) ?? { origin: o.origin, refusals: 0, widgets: [] };
-      row.refusals += o.refusals;
-      row.widgets.push({ id: w.id, name: w.name });
-      rows.set(o.origin, row);
-    }
-  });
-  const sorted = [...rows.values()].sort(
-    (a, b) => b.refusals - a.refusals || a.origin.localeCompare(b.origin),
-  );
+  const refused = useQuery(orgRefusedOriginsQuery(orgId));
+  const sorted = refused.data?.items ?? [];
   return (
     <Card className="space-y-3 p-5" data-slot="refused-origins">
       <h2 className={ruleHeading}>Sites refused, last 30 days</h2>
-      {!widgets.isSuccess ? (
-        <Waiting query={widgets} label="Reading the widgets…" />
-      ) : failed ? (
-        <Waiting query={failed} label="" />
-      ) : refused.some((q) => q.isPending) ? (
-        <Waiting query={{ isError: false, error: null }} label="Counting refused pages…" />
+      {!refused.isSuccess ? (
+        <Waiting query={refused} label="Counting refused pages…" />
       ) : sorted.length === 0 ? (
         <p className="text-sm text-ink-soft">No page outside the allowed sites asked for a widget.</p>
       ) : (
@@ -308,6 +285,7 @@ function RefusedOrigins() {
                   <span key={w.id}>
                     {i ? ', ' : ''}
                     <TextLink to={`${orgPath(orgId, `widgets/${w.id}`)}#widget-release`}>{w.name}</TextLink>
+                    {r.widgets.length > 1 && <span className="tabular-nums"> ({w.refusals})</span>}
                   </span>
                 ))}
               </span>

@@ -1,5 +1,5 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
-import type { RefusedOrigins } from '@wickstone/contracts';
+import type { OrgRefusedOrigins, RefusedOrigins } from '@wickstone/contracts';
 
 /** The days of refusals a developer sees. */
 export const REFUSAL_DAYS = 30;
@@ -9,7 +9,12 @@ export interface RefusalCounter {
   count(publicKey: string, origin: string): Promise<void>;
   /** A widget's refusals over the last REFUSAL_DAYS days, per origin. */
   list(orgId: number, widgetId: number): Promise<RefusedOrigins>;
+  /** The organisation's refusals over the last REFUSAL_DAYS days, per origin across its widgets: one query. */
+  listForOrg(orgId: number): Promise<OrgRefusedOrigins>;
 }
+
+const dayOf = (d: string | Date): string =>
+  typeof d === 'string' ? d.slice(0, 10) : d.toISOString().slice(0, 10);
 
 /**
  * Refused origins counted in MariaDB (one upsert per refusal, so every server process adds to the
@@ -38,7 +43,7 @@ export function createRefusalCounter(sequelize: Sequelize): RefusalCounter {
       );
       const byOrigin = new Map<string, RefusedOrigins['items'][number]>();
       for (const r of rows) {
-        const day = typeof r.day === 'string' ? r.day.slice(0, 10) : r.day.toISOString().slice(0, 10);
+        const day = dayOf(r.day);
         const item = byOrigin.get(r.origin) ?? { origin: r.origin, refusals: 0, lastDay: day, byDay: [] };
         item.refusals += Number(r.refusals);
         item.lastDay = day;
@@ -48,6 +53,37 @@ export function createRefusalCounter(sequelize: Sequelize): RefusalCounter {
       const items = [...byOrigin.values()].sort(
         (a, b) => b.refusals - a.refusals || a.origin.localeCompare(b.origin),
       );
+      return { days: REFUSAL_DAYS, items };
+    },
+    async listForOrg(orgId) {
+      const rows = await sequelize.query<{
+        origin: string;
+        widget_id: number;
+        name: string;
+        refusals: number | string;
+        last_day: string | Date;
+      }>(
+        `SELECT r.origin, w.id AS widget_id, w.name, SUM(r.refusals) AS refusals, MAX(r.day) AS last_day
+         FROM refused_origins r JOIN widgets w ON w.id = r.widget_id
+         WHERE w.organization_id = ? AND r.day > CURRENT_DATE() - INTERVAL ? DAY
+         GROUP BY r.origin, w.id, w.name`,
+        { replacements: [orgId, REFUSAL_DAYS], type: QueryTypes.SELECT },
+      );
+      const byOrigin = new Map<string, OrgRefusedOrigins['items'][number]>();
+      for (const r of rows) {
+        const refusals = Number(r.refusals);
+        const lastDay = dayOf(r.last_day);
+        const item = byOrigin.get(r.origin) ?? { origin: r.origin, refusals: 0, lastDay, widgets: [] };
+        item.refusals += refusals;
+        if (lastDay > item.lastDay) item.lastDay = lastDay;
+        item.widgets.push({ id: Number(r.widget_id), name: r.name, refusals });
+        byOrigin.set(r.origin, item);
+      }
+      const items = [...byOrigin.values()].sort(
+        (a, b) => b.refusals - a.refusals || a.origin.localeCompare(b.origin),
+      );
+      for (const item of items)
+        item.widgets.sort((a, b) => b.refusals - a.refusals || a.name.localeCompare(b.name) || a.id - b.id);
       return { days: REFUSAL_DAYS, items };
     },
   };

@@ -87,6 +87,7 @@ describe('the route table', () => {
       'GET /api/v1/orgs/:orgId/widgets/:widgetId/upgrade-preview': 'releases:pin',
       'PUT /api/v1/orgs/:orgId/widgets/:widgetId/origins': 'embed:manage',
       'GET /api/v1/orgs/:orgId/widgets/:widgetId/refused-origins': 'embed:manage',
+      'GET /api/v1/orgs/:orgId/refused-origins': 'embed:manage',
       'POST /api/v1/orgs/:orgId/widgets/:widgetId/key-rotations': 'embed:manage',
     };
     const declared = Object.fromEntries(routes.map((r) => [routeKey(r), r.access]));

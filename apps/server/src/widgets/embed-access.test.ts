@@ -1,7 +1,13 @@
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { errorBodySchema, refusedOriginsSchema, widgetSchema, type Widget } from '@wickstone/contracts';
+import {
+  errorBodySchema,
+  orgRefusedOriginsSchema,
+  refusedOriginsSchema,
+  widgetSchema,
+  type Widget,
+} from '@wickstone/contracts';
 import {
   createLiveWidget,
   createTestApp,
@@ -64,6 +70,39 @@ describe('embed access: allowed origins and refused ones', () => {
     ]);
     expect(refused.items[0]?.byDay).toHaveLength(1);
     await analyst.get(`/orgs/${org.id}/widgets/${widget.id}/refused-origins`).expect(403);
+  });
+
+  it('sums the refusals per origin across the organisation’s widgets in one answer, naming each widget', async () => {
+    const owner = new TestClient(t.app);
+    await owner.login(org.users.owner.email, org.users.owner.password);
+    const other = await createLiveWidget(owner, org.id, 'Render wicking', [SITE]);
+    await request(t.app).get(`/api/v1/embed/widgets/${other.publicKey}`).set('Origin', STRANGER).expect(403);
+    await request(t.app).get(`/api/v1/embed/widgets/${other.publicKey}`).set('Origin', STRANGER).expect(403);
+    // Another organisation's refusals are not this one's.
+    const stranger = await seedOrgWithTeam();
+    const theirOwner = new TestClient(t.app);
+    await theirOwner.login(stranger.users.owner.email, stranger.users.owner.password);
+    const theirs = await createLiveWidget(theirOwner, stranger.id, 'Their widget', [SITE]);
+    await request(t.app)
+      .get(`/api/v1/embed/widgets/${theirs.publicKey}`)
+      .set('Origin', FORGOTTEN)
+      .expect(403);
+
+    const all = orgRefusedOriginsSchema.parse(
+      (await developer.get(`/orgs/${org.id}/refused-origins`).expect(200)).body,
+    );
+    // FORGOTTEN: 3 on the first widget; STRANGER: 1 on the first, 2 on the other (most first).
+    expect(all.items.map((i) => [i.origin, i.refusals])).toEqual([
+      [STRANGER, 3],
+      [FORGOTTEN, 3],
+    ]);
+    expect(all.items[0]?.widgets.map((w) => [w.name, w.refusals])).toEqual([
+      ['Render wicking', 2],
+      ['Basement moisture', 1],
+    ]);
+    expect(all.items[1]?.widgets.map((w) => w.id)).toEqual([widget.id]);
+    expect(all.items[0]?.lastDay).toMatch(/^\d{4}-\d{2}-\d{2}$/);
+    await analyst.get(`/orgs/${org.id}/refused-origins`).expect(403);
   });
 
   it('the developer adds the forgotten site; it is then served', async () => {

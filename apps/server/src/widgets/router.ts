@@ -138,6 +138,15 @@ export function embedAccessRoutes(
     }),
   );
 
+  // The overview's card: every widget's refusals in one answer, however many widgets there are.
+  routes.get(
+    '/orgs/:orgId/refused-origins',
+    { access: 'embed:manage', params: orgParamsSchema },
+    async ({ org }) => ({
+      body: await refusals.listForOrg(org.id),
+    }),
+  );
+
   routes.get(
     '/orgs/:orgId/widgets/:widgetId/refused-origins',
     { access: 'embed:manage', params: widgetParamsSchema },
