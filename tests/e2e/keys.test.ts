@@ -187,6 +187,7 @@ describe('embed keys and CSP, as the developer', () => {
 
   it('the developer replaces the key: the code changes, both keys show, the old page keeps working', async () => {
     const oldSnippet = widget.embed.snippet;
+    const oldKey = widget.publicKey;
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
     await signIn(page, org.users.developer);
@@ -232,6 +233,23 @@ describe('embed keys and CSP, as the developer', () => {
     widget = await developer.json<Widget>('GET', `/orgs/${org.id}/widgets/${widget.id}`, undefined, 200);
     expect(widget.publicKey).toBe(newKey);
     expect(await runOnSite({ html: widget.embed.snippet, csp: null })).toEqual([]);
+
+    // The old key leaked after all: the developer stops serving it now, with a confirm step.
+    const again = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const tab = await again.newPage();
+    await signIn(tab, org.users.developer);
+    await tab.goto(`${widgetPage}?section=release`);
+    const keys = tab.locator('#widget-release [data-widget-keys]');
+    await keys.locator('[data-previous-key="served"]').waitFor();
+    await keys.getByRole('button', { name: 'Stop serving the replaced key now' }).click();
+    await partShot(keys, 'keys-end-overlap-developer-1280-confirm');
+    await keys.getByRole('button', { name: 'Stop it now' }).click();
+    await keys.locator('[data-previous-key="refused"]').waitFor({ timeout: 20_000 });
+    await expect.poll(() => keys.textContent()).toContain(`${oldKey} is refused from now on.`);
+    await partShot(keys, 'keys-end-overlap-developer-1280-after');
+    // The key may be replaced again at once.
+    expect(await keys.getByRole('button', { name: 'Replace the key' }).count()).toBe(1);
+    await again.close();
   });
 
   it('screens for looking at: the integration screen and the overview, as developer and analyst', async () => {

@@ -143,6 +143,7 @@ export const auditEventTypes = [
   'widget.updated',
   'widget.release_pinned',
   'widget.key_rotated',
+  'widget.key_overlap_ended',
   'lead.updated',
   'lead.note_added',
   'lead.erased',

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { can, MAX_KEY_OVERLAP_DAYS, type Role, type Widget } from '@wickstone/contracts';
 import { isApiError } from '../lib/api';
 import { formatDateTime } from '../lib/labels';
-import { useRotateKey } from '../queries/embed-access';
+import { useEndKeyOverlap, useRotateKey } from '../queries/embed-access';
 import { describeError } from './states';
 import { ConfirmAction } from './confirm';
 import { TextField } from './form';
@@ -26,6 +26,7 @@ function servedThrough(iso: string): string {
 export function KeysPanel({ orgId, widget, role }: { orgId: number; widget: Widget; role: Role }) {
   const mayRotate = can(role, 'embed:manage');
   const rotate = useRotateKey(orgId, widget.id);
+  const endOverlap = useEndKeyOverlap(orgId, widget.id);
   // The day the panel opened: the date field's limits (a re-render must not move them).
   const [today] = useState(() => Date.now());
   const [until, setUntil] = useState(() => isoDay(today + 14 * DAY));
@@ -60,12 +61,37 @@ export function KeysPanel({ orgId, widget, role }: { orgId: number; widget: Widg
           </>
         ) : null}
       </dl>
+      <LiveMessage
+        message={
+          endOverlap.isSuccess && !previous?.served
+            ? `${endOverlap.data.previousKey?.publicKey ?? 'The replaced key'} is refused from now on.`
+            : null
+        }
+      />
       {!mayRotate ? (
         <Notice>Developers, owners and admins replace a widget&rsquo;s key.</Notice>
       ) : previous?.served ? (
-        <p className="text-sm text-ink-soft">
-          The key can be replaced again once the replaced key&rsquo;s time is over.
-        </p>
+        <div className="space-y-2" data-end-overlap>
+          <p className="text-sm text-ink-soft">
+            The key can be replaced again once the replaced key&rsquo;s time is over. If the replaced key was
+            leaked, or every page already carries the new code, stop serving it now.
+          </p>
+          <ConfirmAction
+            label="Stop serving the replaced key now"
+            question={`Pages still carrying ${previous.publicKey} show no widget from this moment. Stop serving it?`}
+            confirmLabel="Stop it now"
+            busy={endOverlap.isPending}
+            onConfirm={() => endOverlap.mutate()}
+          />
+          <LiveMessage
+            message={
+              endOverlap.isError
+                ? `The replaced key is still served: ${describeError(endOverlap.error)}`
+                : null
+            }
+            tone="bad"
+          />
+        </div>
       ) : (
         <div className="space-y-2">
           {widget.nextKeyKind === 'older' ? (

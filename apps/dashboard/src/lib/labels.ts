@@ -32,6 +32,7 @@ export const auditLabel: Record<AuditEntry['type'], string> = {
   'widget.updated': 'Widget changed',
   'widget.release_pinned': 'Widget release pin moved',
   'widget.key_rotated': 'Widget embed key replaced',
+  'widget.key_overlap_ended': 'Replaced embed key stopped early',
   'lead.updated': 'Enquiry updated',
   'lead.note_added': 'Note added to an enquiry',
   'lead.erased': 'Enquirer’s personal data erased',

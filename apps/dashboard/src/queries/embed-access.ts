@@ -32,3 +32,18 @@ export function useRotateKey(orgId: number, widgetId: number) {
     },
   });
 }
+
+/** Stop serving the replaced key now: pages still carrying it show no widget from this moment. */
+export function useEndKeyOverlap(orgId: number, widgetId: number) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: async () =>
+      widgetSchema.parse(
+        await apiFetch(`/orgs/${orgId}/widgets/${widgetId}/key-rotations/end-overlap`, { method: 'POST' }),
+      ),
+    onSuccess: async (widget) => {
+      client.setQueryData([...widgetsKey(orgId), widgetId], widget);
+      await client.invalidateQueries({ queryKey: widgetsKey(orgId) });
+    },
+  });
+}

@@ -89,6 +89,7 @@ describe('the route table', () => {
       'GET /api/v1/orgs/:orgId/widgets/:widgetId/refused-origins': 'embed:manage',
       'GET /api/v1/orgs/:orgId/refused-origins': 'embed:manage',
       'POST /api/v1/orgs/:orgId/widgets/:widgetId/key-rotations': 'embed:manage',
+      'POST /api/v1/orgs/:orgId/widgets/:widgetId/key-rotations/end-overlap': 'embed:manage',
     };
     const declared = Object.fromEntries(routes.map((r) => [routeKey(r), r.access]));
     for (const [key, access] of Object.entries(issue4)) expect(declared[key], key).toBe(access);

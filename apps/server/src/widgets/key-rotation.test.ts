@@ -190,6 +190,43 @@ describe('widget key rotation', () => {
     expect(next.previousKey?.validUntil).toBe(new Date(Date.parse(`${day}T00:00:00Z`) + DAY).toISOString());
   });
 
+  it('stops serving the replaced key at once when the developer ends the overlap (a leaked key): 410 from then on', async () => {
+    const shown = widgetSchema.parse(
+      (await developer.get(`/orgs/${org.id}/widgets/${widget.id}`).expect(200)).body,
+    );
+    const replaced = shown.previousKey!.publicKey;
+    expect(shown.previousKey?.served).toBe(true);
+    await settings(replaced).expect(200);
+    const end = () => developer.post(`/orgs/${org.id}/widgets/${widget.id}/key-rotations/end-overlap`, {});
+    // Only those who manage embedding may, and nothing changes when they may not.
+    const before = await snapshotTables(t.db.sequelize);
+    await analyst.post(`/orgs/${org.id}/widgets/${widget.id}/key-rotations/end-overlap`, {}).expect(403);
+    expect(await snapshotTables(t.db.sequelize)).toEqual(before);
+
+    const ended = widgetSchema.parse((await end().expect(200)).body);
+    expect(ended.publicKey).toBe(shown.publicKey);
+    expect(ended.previousKey).toMatchObject({ publicKey: replaced, served: false });
+    expect(Date.parse(ended.previousKey!.validUntil)).toBeLessThan(Date.parse(shown.previousKey!.validUntil));
+    expect(errorOf((await settings(replaced).expect(410)).body).code).toBe('key_replaced');
+    expect(errorOf((await report(replaced).expect(410)).body).code).toBe('key_replaced');
+    await settings(ended.publicKey).expect(200);
+
+    const audit = auditResponseSchema.parse((await owner.get(`/orgs/${org.id}/audit`).expect(200)).body);
+    const entry = audit.items.find((e) => e.type === 'widget.key_overlap_ended');
+    expect(entry?.actor?.email).toBe(org.users.developer.email);
+    expect(entry?.details).toEqual({
+      widgetId: widget.id,
+      oldKey: replaced,
+      plannedUntil: shown.previousKey!.validUntil,
+      endedAt: ended.previousKey!.validUntil,
+    });
+    // Nothing left to stop: a 409 that changes nothing; and the key may be replaced again now.
+    const after = await snapshotTables(t.db.sequelize);
+    expect(errorOf((await end().expect(409)).body).message).toMatch(/nothing to stop/);
+    expect(await snapshotTables(t.db.sequelize)).toEqual(after);
+    await rotate(widget, new Date(Date.now() + DAY).toISOString()).expect(201);
+  });
+
   it('keeps a widget on a published release before 0.3.0 on keys its loader reads', async () => {
     const pinned = await createLiveWidget(owner, org.id, 'Older loader', [SITE]);
     // A reference key cannot go onto 0.2.0: its loader would not place the widget.

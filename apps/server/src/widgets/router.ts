@@ -138,6 +138,20 @@ export function embedAccessRoutes(
     }),
   );
 
+  // A leaked key, or every page already updated: the replaced key is refused from now on.
+  routes.post(
+    '/orgs/:orgId/widgets/:widgetId/key-rotations/end-overlap',
+    { access: 'embed:manage', params: widgetParamsSchema },
+    async ({ org, session, params, meta }) => ({
+      body: await widgets.endKeyOverlap(
+        org.id,
+        params.widgetId,
+        session.user.id,
+        auditTrail(audit, org.id, session.user.id, meta),
+      ),
+    }),
+  );
+
   // The overview's card: every widget's refusals in one answer, however many widgets there are.
   routes.get(
     '/orgs/:orgId/refused-origins',

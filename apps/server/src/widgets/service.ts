@@ -1,6 +1,6 @@
 import { embedCsp, embedVariants, reservedHeight } from './snippet.js';
 import { randomBytes } from 'node:crypto';
-import { Op, type Sequelize, type Transaction } from 'sequelize';
+import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import semver from 'semver';
 import {
   CalcInputError,
@@ -92,6 +92,11 @@ export interface WidgetService {
     oldKeyValidUntil: string,
     trail?: AuditTrail,
   ): Promise<WidgetDto>;
+  /**
+   * Stops serving the key the last rotation replaced, now (a leaked key, or every page already
+   * updated): from this moment it is answered 410 as replaced. A 409 when no replaced key is served.
+   */
+  endKeyOverlap(orgId: number, widgetId: number, actorId: number, trail?: AuditTrail): Promise<WidgetDto>;
   toDto(widget: Widget): WidgetDto;
 }
 
@@ -420,6 +425,39 @@ export function createWidgetService(deps: {
             type: 'widget.key_rotated',
             subject: w.name,
             details: { widgetId: w.id, oldKey, newKey, oldKeyValidUntil: until.toISOString() },
+          },
+          transaction,
+        );
+        return dto(w);
+      });
+    },
+
+    async endKeyOverlap(orgId, widgetId, _actorId, trail) {
+      return sequelize.transaction(async (transaction) => {
+        const w = await findForUpdate(orgId, widgetId, transaction);
+        if (!previousServed(w))
+          throw new AppError(
+            'conflict',
+            'No replaced key of this widget is being served: there is nothing to stop',
+          );
+        const plannedUntil = (w.previousKeyValidUntil as Date).toISOString();
+        // The database's clock, as the embed API's check of a replaced key uses.
+        const [row] = await sequelize.query<{ now: Date }>('SELECT NOW(3) AS now', {
+          type: QueryTypes.SELECT,
+          transaction,
+        });
+        const now = new Date(row!.now);
+        await w.update({ previousKeyValidUntil: now }, { transaction });
+        await trail?.(
+          {
+            type: 'widget.key_overlap_ended',
+            subject: w.name,
+            details: {
+              widgetId: w.id,
+              oldKey: w.previousPublicKey,
+              plannedUntil,
+              endedAt: now.toISOString(),
+            },
           },
           transaction,
         );
