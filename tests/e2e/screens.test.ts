@@ -12,6 +12,7 @@ import { seedOrgWithTeam, type FixtureOrg } from '@wickstone/server/testing';
 import { launchBrowser, screenshot } from '../support/browser.js';
 import { mailEnv, startApp, type RunningApp } from '../support/server.js';
 import { ApiSession } from '../support/api-session.js';
+import { demoPage } from '../../scripts/lib/demo-page.mjs';
 
 /*
  * Every screen as each person sees it, checked by axe-core inside Chromium: the public pages, the
@@ -133,8 +134,12 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
       }
       res
         .writeHead(200, { 'content-type': 'text/html; charset=utf-8' })
+        // The demo's own composition: every slot filled or left empty, none printed as a placeholder.
         .end(
-          demoTemplate.replace('{{WIDGET_1}}', snippets[0] ?? '').replace('{{WIDGET_2}}', snippets[1] ?? ''),
+          demoPage(
+            demoTemplate,
+            snippets.map((snippet) => ({ snippet })),
+          ),
         );
     });
     await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
@@ -186,6 +191,8 @@ describe('every screen, each role, desktop and phone: axe-core finds nothing ser
     const widget = page.locator('wickstone-widget').first();
     const root = widget.locator('[data-wickstone="root"]');
     await root.waitFor({ timeout: 20_000 });
+    // The firm's page shows no unfilled slot of its template.
+    expect(await page.locator('body').innerText()).not.toContain('{{');
     expect(await root.getAttribute('data-system')).toBe('us');
     // The visitor switches to metric and tries a 3 mm bore: wide enough to raise the bore warning.
     await widget.locator('[data-unit="si"]').check();
