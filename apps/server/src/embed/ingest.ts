@@ -44,7 +44,10 @@ export interface RunIngest {
 export interface IngestOptions {
   /** Reports per batch at most. */
   maxBatch?: number;
-  /** Batches being stored at once: while one commits, the next is recomputed. */
+  /**
+   * Batches being stored at once (1 by default: reports that arrive while one is stored wait for the
+   * next, so batches grow with the load and the work per report shrinks).
+   */
   maxInFlight?: number;
   /**
    * Called once per committed batch with the runs it newly stored (the plan's run allowance marks
@@ -282,7 +285,7 @@ type Known = Map<string, { bodyHash: string; agreed: boolean }>;
 
 export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {}): RunIngest {
   const maxBatch = options.maxBatch ?? 500;
-  const maxInFlight = options.maxInFlight ?? 2;
+  const maxInFlight = options.maxInFlight ?? 1;
   const queue: Pending[] = [];
   let inFlight = 0;
   let scheduled = false;
@@ -370,10 +373,18 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
     const manager = sequelize.connectionManager as unknown as {
       connect(config: unknown): Promise<LaneConnection>;
     };
-    return manager.connect({
+    const conn = await manager.connect({
       ...config,
       dialectOptions: { ...config.dialectOptions, multipleStatements: true },
     });
+    // Once per lane: every batch on it is then a transaction of its own, ended by COMMIT or ROLLBACK.
+    try {
+      await conn.query('SET autocommit = 0');
+    } catch (e) {
+      closeLane(conn);
+      throw e;
+    }
+    return conn;
   }
   function giveBack(conn: LaneConnection): void {
     const lane: { conn: LaneConnection; timer?: NodeJS.Timeout } = { conn };
@@ -414,7 +425,6 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
           : [];
       const attempt = async (fresh: RunRow[]): Promise<unknown[]> => {
         const statements: Statement[] = [
-          { sql: 'SET autocommit = 0', values: [] },
           {
             sql: `SELECT public_key, ${WIDGET_VERSION} FROM widgets WHERE public_key IN (${inList(keys.length)}) LOCK IN SHARE MODE`,
             values: keys,
@@ -423,10 +433,12 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
           ...addRunsStatements(fresh.map((r) => ({ ...r, led: false }))),
           ...counting(fresh),
         ];
-        return (await conn.query(
+        const results = await conn.query(
           statements.map((st) => st.sql).join(';\n'),
           statements.flatMap((st) => st.values),
-        )) as unknown[];
+        );
+        // One result per statement; a lone statement (no run left to store) answers its rows alone.
+        return statements.length === 1 ? [results] : (results as unknown[]);
       };
       let fresh = rows.map((p) => p.row);
       let results: unknown[];
@@ -447,7 +459,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         results = await attempt(fresh);
       }
       const current = new Map(
-        (results[1] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
+        (results[0] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
       );
       const stale = keys.filter((k) => current.get(k) !== widgetCache.get(k)?.version);
       const allowance: AllowanceFacts = fresh.length
