@@ -398,6 +398,29 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
   }
 
   /**
+   * Each organisation's runs in a month and its allowance as the last committed batch read them:
+   * the next batch's runs past the allowance are predicted from it, so that they are inserted
+   * marked instead of updated after (every run of a firm past its allowance would be written twice).
+   */
+  const usage = new Map<number, { month: string; runs: number; allowance: number }>();
+  function predictedOver(fresh: readonly RunRow[]): Set<string> {
+    const over = new Set<string>();
+    if (usage.size > 10_000) usage.clear();
+    const byOrg = new Map<number, RunRow[]>();
+    for (const r of fresh) {
+      const mine = byOrg.get(r.organizationId);
+      if (mine) mine.push(r);
+      else byOrg.set(r.organizationId, [r]);
+    }
+    for (const [org, mine] of byOrg) {
+      const last = usage.get(org);
+      if (!last || last.month !== monthOf(mine[0]!.createdAt)) continue;
+      for (const r of pastAllowance(mine, last.runs + mine.length, last.allowance)) over.add(r.id);
+    }
+    return over;
+  }
+
+  /**
    * Store the rows in one transaction. Returns, per run id already stored before this batch, its
    * stored body hash and flag: those reports are answered as duplicates or conflicts, not inserted.
    *
@@ -423,13 +446,15 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
               runsInMonthStatement(orgsOf(fresh), monthOf(fresh[0]!.createdAt)),
             ]
           : [];
+      let predicted = new Set<string>();
       const attempt = async (fresh: RunRow[]): Promise<unknown[]> => {
+        predicted = predictedOver(fresh);
         const statements: Statement[] = [
           {
             sql: `SELECT public_key, ${WIDGET_VERSION} FROM widgets WHERE public_key IN (${inList(keys.length)}) LOCK IN SHARE MODE`,
             values: keys,
           },
-          ...insertRunStatements(fresh),
+          ...insertRunStatements(fresh, predicted),
           ...addRunsStatements(fresh.map((r) => ({ ...r, led: false }))),
           ...counting(fresh),
         ];
@@ -471,21 +496,50 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         : { allowances: new Map(), runs: new Map() };
       if (stale.length) await conn.query('ROLLBACK');
       else {
-        // Runs past the plan's allowance are marked in their own transaction, in the round trip
-        // that commits it: no run is ever seen unmarked, and marking costs no commit of its own.
-        const over = orgsOf(fresh).flatMap((org) =>
-          pastAllowance(
-            fresh.filter((r) => r.organizationId === org),
-            allowance.runs.get(org) ?? 0,
-            allowance.allowances.get(org) ?? Infinity,
-          ).map((r) => r.id),
+        // Runs past the plan's allowance are marked in their own transaction: inserted marked as
+        // predicted, and where the counts read after the insert say otherwise (another process's
+        // runs, a new plan, a new month) put right in the round trip that commits it. No run is
+        // ever seen marked wrongly, and marking costs no commit of its own.
+        const over = new Set(
+          orgsOf(fresh).flatMap((org) =>
+            pastAllowance(
+              fresh.filter((r) => r.organizationId === org),
+              allowance.runs.get(org) ?? 0,
+              allowance.allowances.get(org) ?? Infinity,
+            ).map((r) => r.id),
+          ),
         );
-        if (over.length)
-          await conn.query(
-            `UPDATE runs SET over_allowance = 1 WHERE id IN (${inList(over.length)});\nCOMMIT`,
-            over,
-          );
-        else await conn.query('COMMIT');
+        const mark = [...over].filter((id) => !predicted.has(id));
+        const unmark = [...predicted].filter((id) => !over.has(id));
+        const fixes: Statement[] = [
+          ...(mark.length
+            ? [
+                {
+                  sql: `UPDATE runs SET over_allowance = 1 WHERE id IN (${inList(mark.length)})`,
+                  values: mark,
+                },
+              ]
+            : []),
+          ...(unmark.length
+            ? [
+                {
+                  sql: `UPDATE runs SET over_allowance = 0 WHERE id IN (${inList(unmark.length)})`,
+                  values: unmark,
+                },
+              ]
+            : []),
+          { sql: 'COMMIT', values: [] },
+        ];
+        await conn.query(
+          fixes.map((st) => st.sql).join(';\n'),
+          fixes.flatMap((st) => st.values),
+        );
+        for (const org of orgsOf(fresh))
+          usage.set(org, {
+            month: monthOf(fresh[0]!.createdAt),
+            runs: allowance.runs.get(org) ?? 0,
+            allowance: allowance.allowances.get(org) ?? Infinity,
+          });
       }
       giveBack(conn);
       return { known, stale, allowance };
