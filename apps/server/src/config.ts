@@ -40,7 +40,7 @@ const envSchema = z.object({
    * Run reports stored per transaction at most (group commit), and such transactions at once per
    * process. One at a time makes the batches as large as the load (reports that arrive while one is
    * stored all join the next), and the database's work per report smallest (`bench/ingest.ts`: 24
-   * reports per transaction against 9 with 4 in flight, a third less CPU per report).
+   * reports per transaction against 9–10 with 4 in flight, about half the database's CPU per report).
    */
   INGEST_MAX_BATCH: z.coerce.number().int().min(1).max(5_000).default(500),
   INGEST_BATCHES_IN_FLIGHT: z.coerce.number().int().min(1).max(32).default(1),
