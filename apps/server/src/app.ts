@@ -4,7 +4,14 @@ import { fileURLToPath } from 'node:url';
 import express, { type Express } from 'express';
 import cookieParser from 'cookie-parser';
 import { pinoHttp } from 'pino-http';
-import { errorLine, quickRequestLog, requestLevel, requestRecord, successLine } from './http/request-log.js';
+import {
+  errorLine,
+  nextRequestId,
+  quickRequestLog,
+  requestLevel,
+  requestRecord,
+  successLine,
+} from './http/request-log.js';
 import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config.js';
@@ -97,6 +104,7 @@ export function createApp(deps: AppDeps): Express {
   const line = config.requestLog === 'line';
   const requestLog = pinoHttp({
     logger,
+    genReqId: nextRequestId,
     customLogLevel: (_req, res, err) => requestLevel(res, err),
     autoLogging: config.requestLog === 'off' ? false : { ignore: (req) => req.url === '/api/v1/health' },
     // A request's line says which request it was and how it ended, not every header both ways:

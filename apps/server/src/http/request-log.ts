@@ -31,8 +31,9 @@ export const successLine = (req: IncomingMessage, res: ServerResponse, ms: numbe
 export const errorLine = (req: IncomingMessage, res: ServerResponse) =>
   `${req.method} ${req.url} ${res.statusCode}`;
 
-/** Request ids of this process's hot-path requests: their own sequence, after pino-http's style. */
-let nextId = 0;
+let lastId = 0;
+/** Request ids, one sequence per process for every route (pino-http's and `quickRequestLog`'s). */
+export const nextRequestId = (): number => (lastId = (lastId % 2147483646) + 1);
 
 /**
  * The request log for one route, with the records pino-http writes for the others (same fields,
@@ -41,7 +42,7 @@ let nextId = 0;
 export function quickRequestLog(logger: Logger, mode: Mode) {
   const line = mode === 'line';
   return function requestLog(req: Request, res: Response, next: NextFunction): void {
-    const id = (nextId = (nextId + 1) % 2147483647);
+    const id = nextRequestId();
     const started = Date.now();
     (req as { id: unknown }).id = id;
     let child: Logger | undefined;
