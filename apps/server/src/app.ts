@@ -3,8 +3,15 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import express, { type Express } from 'express';
 import cookieParser from 'cookie-parser';
-import type { IncomingMessage } from 'node:http';
 import { pinoHttp } from 'pino-http';
+import {
+  errorLine,
+  nextRequestId,
+  quickRequestLog,
+  requestLevel,
+  requestRecord,
+  successLine,
+} from './http/request-log.js';
 import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config.js';
@@ -95,38 +102,30 @@ export function createApp(deps: AppDeps): Express {
   // Every request gets `req.log` (errors are logged through it in every mode); what is written per
   // request follows REQUEST_LOG: the whole record, one short line, or nothing (`npm start`'s default).
   const line = config.requestLog === 'line';
-  app.use(
-    pinoHttp({
-      logger,
-      customLogLevel: (_req, res, err) =>
-        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
-      autoLogging: config.requestLog === 'off' ? false : { ignore: (req) => req.url === '/api/v1/health' },
-      // A request's line says which request it was and how it ended, not every header both ways:
-      // a short line is cheap on the run-report hot path, and browser details stay out of the log.
-      ...(line
-        ? {
-            quietReqLogger: true,
-            serializers: { req: () => undefined, res: () => undefined },
-            customSuccessMessage: (req, res, ms) => `${req.method} ${req.url} ${res.statusCode} ${ms} ms`,
-            customErrorMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
-          }
-        : {
-            // Read straight from Node's request: the standard serializers would first copy every
-            // header of every request only for these five fields to be picked out of the copy.
-            wrapSerializers: false,
-            serializers: {
-              req: (req: IncomingMessage & { id: unknown }) => ({
-                id: req.id,
-                method: req.method,
-                url: req.url,
-                origin: req.headers.origin,
-                remoteAddress: req.socket.remoteAddress,
-              }),
-              res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
-            },
-          }),
-    }),
-  );
+  const requestLog = pinoHttp({
+    logger,
+    genReqId: nextRequestId,
+    customLogLevel: (_req, res, err) => requestLevel(res, err),
+    autoLogging: config.requestLog === 'off' ? false : { ignore: (req) => req.url === '/api/v1/health' },
+    // A request's line says which request it was and how it ended, not every header both ways:
+    // a short line is cheap, and browser details stay out of the log.
+    ...(line
+      ? {
+          quietReqLogger: true,
+          serializers: { req: () => undefined, res: () => undefined },
+          customSuccessMessage: successLine,
+          customErrorMessage: errorLine,
+        }
+      : {
+          // Read straight from Node's request: the standard serializers would first copy every
+          // header of every request only for these five fields to be picked out of the copy.
+          wrapSerializers: false,
+          serializers: {
+            req: requestRecord,
+            res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+          },
+        }),
+  });
 
   const mailer = deps.mailer ?? createSmtpMailer(config.mail);
   const csrf = createCsrf(config);
@@ -209,9 +208,16 @@ export function createApp(deps: AppDeps): Express {
   if (config.mail.fakeApiUrl) devMailRoutes(routes, createDevMailService(config.mail.fakeApiUrl));
   registries.set(app, routes.records);
 
+  // The run-report hot path first, with a request log of its own (the same records): every visitor's
+  // calculation comes here, so it skips the layers other requests pass (pino-http's child logger
+  // per request, the routers before the embed API's).
+  const embedApi = embedRouter(embed, sheets, config.embed, counters, refusals);
+  app.post(`${API_BASE}/embed/runs`, quickRequestLog(logger, config.requestLog), ...embedApi.runs);
+  app.use(requestLog);
+
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
   app.use('/releases', releasesRouter(releases.dirs));
-  app.use(`${API_BASE}/embed`, embedRouter(embed, sheets, config.embed, counters, refusals));
+  app.use(`${API_BASE}/embed`, embedApi.router);
   // The payments provider's signed events: raw bytes for the signature check, no session, no CSRF.
   app.use(`${API_BASE}/billing/webhook`, billingWebhookRouter(billing));
 

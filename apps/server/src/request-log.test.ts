@@ -13,15 +13,19 @@ describe('request log modes', () => {
   });
   afterAll(() => db.drop());
 
-  async function logOf(mode: Config['requestLog']): Promise<string[]> {
+  async function logOf(mode: Config['requestLog'], route: 'other' | 'runs' = 'other'): Promise<string[]> {
     const lines: string[] = [];
     const logger = createLogger({ logLevel: 'info' }, { write: (l: string) => void lines.push(l) });
     const app = createApp({ config: { ...db.config, requestLog: mode }, sequelize: db.sequelize, logger });
-    await request(app)
-      .get('/api/v1/no-such-route')
-      .set('User-Agent', 'log-probe/1.0')
-      .set('Origin', 'https://www.log-probe.example')
-      .expect(404);
+    const probe = (r: request.Test) =>
+      r.set('User-Agent', 'log-probe/1.0').set('Origin', 'https://www.log-probe.example');
+    if (route === 'other') await probe(request(app).get('/api/v1/no-such-route')).expect(404);
+    // The run-report route has a request log of its own: the same records.
+    else
+      await probe(request(app).post('/api/v1/embed/runs'))
+        .set('Content-Type', 'text/plain')
+        .send('{"id": 1}')
+        .expect(400);
     return lines;
   }
 
@@ -54,5 +58,31 @@ describe('request log modes', () => {
 
   it('off: nothing for an ordinary request', async () => {
     expect(await logOf('off')).toEqual([]);
+  });
+
+  it('the run-report route: the same record, line and silence', async () => {
+    const [json, ...more] = await logOf('json', 'runs');
+    expect(more).toEqual([]);
+    const record = JSON.parse(json!) as Record<string, unknown>;
+    expect(record).toMatchObject({ level: 40, res: { statusCode: 400 }, msg: 'request completed' });
+    expect(record.responseTime).toEqual(expect.any(Number));
+    expect(record.req).toEqual({
+      id: expect.anything(),
+      method: 'POST',
+      url: '/api/v1/embed/runs',
+      origin: 'https://www.log-probe.example',
+      remoteAddress: expect.stringMatching(/127\.0\.0\.1/),
+    });
+    expect(json).not.toContain('log-probe/1.0');
+
+    const lines = await logOf('line', 'runs');
+    expect(lines).toHaveLength(1);
+    expect((JSON.parse(lines[0]!) as { msg: string }).msg).toMatch(
+      /^POST \/api\/v1\/embed\/runs 400 \d+ ms$/,
+    );
+    expect(lines[0]).not.toContain('log-probe');
+    expect(lines[0]).not.toContain('"req":');
+
+    expect(await logOf('off', 'runs')).toEqual([]);
   });
 });

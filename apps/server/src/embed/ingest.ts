@@ -44,7 +44,10 @@ export interface RunIngest {
 export interface IngestOptions {
   /** Reports per batch at most. */
   maxBatch?: number;
-  /** Batches being stored at once: while one commits, the next is recomputed. */
+  /**
+   * Batches being stored at once (1 by default: reports that arrive while one is stored wait for the
+   * next, so batches grow with the load and the work per report shrinks).
+   */
   maxInFlight?: number;
   /**
    * Called once per committed batch with the runs it newly stored (the plan's run allowance marks
@@ -282,7 +285,7 @@ type Known = Map<string, { bodyHash: string; agreed: boolean }>;
 
 export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {}): RunIngest {
   const maxBatch = options.maxBatch ?? 500;
-  const maxInFlight = options.maxInFlight ?? 2;
+  const maxInFlight = options.maxInFlight ?? 1;
   const queue: Pending[] = [];
   let inFlight = 0;
   let scheduled = false;
@@ -370,10 +373,18 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
     const manager = sequelize.connectionManager as unknown as {
       connect(config: unknown): Promise<LaneConnection>;
     };
-    return manager.connect({
+    const conn = await manager.connect({
       ...config,
       dialectOptions: { ...config.dialectOptions, multipleStatements: true },
     });
+    // Once per lane: every batch on it is then a transaction of its own, ended by COMMIT or ROLLBACK.
+    try {
+      await conn.query('SET autocommit = 0');
+    } catch (e) {
+      closeLane(conn);
+      throw e;
+    }
+    return conn;
   }
   function giveBack(conn: LaneConnection): void {
     const lane: { conn: LaneConnection; timer?: NodeJS.Timeout } = { conn };
@@ -384,6 +395,29 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
     }, LANE_IDLE_MS);
     lane.timer.unref();
     idleLanes.push(lane);
+  }
+
+  /**
+   * Each organisation's runs in a month and its allowance as the last committed batch read them:
+   * the next batch's runs past the allowance are predicted from it, so that they are inserted
+   * marked instead of updated after (every run of a firm past its allowance would be written twice).
+   */
+  const usage = new Map<number, { month: string; runs: number; allowance: number }>();
+  function predictedOver(fresh: readonly RunRow[]): Set<string> {
+    const over = new Set<string>();
+    if (usage.size > 10_000) usage.clear();
+    const byOrg = new Map<number, RunRow[]>();
+    for (const r of fresh) {
+      const mine = byOrg.get(r.organizationId);
+      if (mine) mine.push(r);
+      else byOrg.set(r.organizationId, [r]);
+    }
+    for (const [org, mine] of byOrg) {
+      const last = usage.get(org);
+      if (!last || last.month !== monthOf(mine[0]!.createdAt)) continue;
+      for (const r of pastAllowance(mine, last.runs + mine.length, last.allowance)) over.add(r.id);
+    }
+    return over;
   }
 
   /**
@@ -412,21 +446,24 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
               runsInMonthStatement(orgsOf(fresh), monthOf(fresh[0]!.createdAt)),
             ]
           : [];
+      let predicted = new Set<string>();
       const attempt = async (fresh: RunRow[]): Promise<unknown[]> => {
+        predicted = predictedOver(fresh);
         const statements: Statement[] = [
-          { sql: 'SET autocommit = 0', values: [] },
           {
             sql: `SELECT public_key, ${WIDGET_VERSION} FROM widgets WHERE public_key IN (${inList(keys.length)}) LOCK IN SHARE MODE`,
             values: keys,
           },
-          ...insertRunStatements(fresh),
+          ...insertRunStatements(fresh, predicted),
           ...addRunsStatements(fresh.map((r) => ({ ...r, led: false }))),
           ...counting(fresh),
         ];
-        return (await conn.query(
+        const results = await conn.query(
           statements.map((st) => st.sql).join(';\n'),
           statements.flatMap((st) => st.values),
-        )) as unknown[];
+        );
+        // One result per statement; a lone statement (no run left to store) answers its rows alone.
+        return statements.length === 1 ? [results] : (results as unknown[]);
       };
       let fresh = rows.map((p) => p.row);
       let results: unknown[];
@@ -447,7 +484,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         results = await attempt(fresh);
       }
       const current = new Map(
-        (results[1] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
+        (results[0] as { public_key: string; version: string }[]).map((r) => [r.public_key, r.version]),
       );
       const stale = keys.filter((k) => current.get(k) !== widgetCache.get(k)?.version);
       const allowance: AllowanceFacts = fresh.length
@@ -459,21 +496,50 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         : { allowances: new Map(), runs: new Map() };
       if (stale.length) await conn.query('ROLLBACK');
       else {
-        // Runs past the plan's allowance are marked in their own transaction, in the round trip
-        // that commits it: no run is ever seen unmarked, and marking costs no commit of its own.
-        const over = orgsOf(fresh).flatMap((org) =>
-          pastAllowance(
-            fresh.filter((r) => r.organizationId === org),
-            allowance.runs.get(org) ?? 0,
-            allowance.allowances.get(org) ?? Infinity,
-          ).map((r) => r.id),
+        // Runs past the plan's allowance are marked in their own transaction: inserted marked as
+        // predicted, and where the counts read after the insert say otherwise (another process's
+        // runs, a new plan, a new month) put right in the round trip that commits it. No run is
+        // ever seen marked wrongly, and marking costs no commit of its own.
+        const over = new Set(
+          orgsOf(fresh).flatMap((org) =>
+            pastAllowance(
+              fresh.filter((r) => r.organizationId === org),
+              allowance.runs.get(org) ?? 0,
+              allowance.allowances.get(org) ?? Infinity,
+            ).map((r) => r.id),
+          ),
         );
-        if (over.length)
-          await conn.query(
-            `UPDATE runs SET over_allowance = 1 WHERE id IN (${inList(over.length)});\nCOMMIT`,
-            over,
-          );
-        else await conn.query('COMMIT');
+        const mark = [...over].filter((id) => !predicted.has(id));
+        const unmark = [...predicted].filter((id) => !over.has(id));
+        const fixes: Statement[] = [
+          ...(mark.length
+            ? [
+                {
+                  sql: `UPDATE runs SET over_allowance = 1 WHERE id IN (${inList(mark.length)})`,
+                  values: mark,
+                },
+              ]
+            : []),
+          ...(unmark.length
+            ? [
+                {
+                  sql: `UPDATE runs SET over_allowance = 0 WHERE id IN (${inList(unmark.length)})`,
+                  values: unmark,
+                },
+              ]
+            : []),
+          { sql: 'COMMIT', values: [] },
+        ];
+        await conn.query(
+          fixes.map((st) => st.sql).join(';\n'),
+          fixes.flatMap((st) => st.values),
+        );
+        for (const org of orgsOf(fresh))
+          usage.set(org, {
+            month: monthOf(fresh[0]!.createdAt),
+            runs: allowance.runs.get(org) ?? 0,
+            allowance: allowance.allowances.get(org) ?? Infinity,
+          });
       }
       giveBack(conn);
       return { known, stale, allowance };

@@ -1,5 +1,12 @@
 import compression from 'compression';
-import express, { type NextFunction, type Request, type Response, type Router } from 'express';
+import express, {
+  type ErrorRequestHandler,
+  type NextFunction,
+  type Request,
+  type RequestHandler,
+  type Response,
+  type Router,
+} from 'express';
 import { z } from 'zod';
 import {
   embedLeadBodySchema,
@@ -66,6 +73,17 @@ function allowOrigin(res: Response, origin: string): void {
   res.set('Access-Control-Expose-Headers', 'Retry-After');
 }
 
+/** The embed API's routers: `router` for `/api/v1/embed`, and `runs`, the run-report route's handlers. */
+export interface EmbedRoutes {
+  router: Router;
+  /**
+   * `POST /api/v1/embed/runs`, the platform's hot path, as handlers the app mounts on that exact
+   * path ahead of its other middleware: the same CORS answer, body parsing, validation and refusal
+   * counting as the rest of the embed API, without the layers every other request passes.
+   */
+  runs: (RequestHandler | ErrorRequestHandler)[];
+}
+
 /**
  * `/api/v1/embed`: what widgets on the firms' sites call. No cookies and no CSRF token: a browser
  * may read an answer only when the page's origin is one a live widget allows (CORS), and each
@@ -77,44 +95,86 @@ export function embedRouter(
   limits: EmbedLimits,
   counters: Counters,
   refusals?: RefusalCounter,
-): Router {
+): EmbedRoutes {
   const router = express.Router();
   const known = new Map<string, { ok: boolean; until: number }>();
 
-  async function originAllowed(origin: string): Promise<boolean> {
+  /** Whether a live widget allows this origin: from the last 5 s's answer when there is one. */
+  function originAllowed(origin: string): boolean | Promise<boolean> {
     const now = Date.now();
     const hit = known.get(origin);
     if (hit && hit.until > now) return hit.ok;
-    const ok = await service.originKnown(origin);
-    if (known.size > 10_000) known.clear();
-    known.set(origin, { ok, until: now + 5_000 });
-    return ok;
+    return service.originKnown(origin).then((ok) => {
+      if (known.size > 10_000) known.clear();
+      known.set(origin, { ok, until: now + 5_000 });
+      return ok;
+    });
   }
 
-  router.use(async (req, res, next) => {
+  function preflight(req: Request, res: Response, next: NextFunction): void {
+    if (req.method !== 'OPTIONS') return next();
+    if (res.get('Access-Control-Allow-Origin')) {
+      res.set('Access-Control-Allow-Methods', 'GET, POST');
+      res.set('Access-Control-Allow-Headers', 'Content-Type');
+      res.set('Access-Control-Max-Age', '600');
+    }
+    res.status(204).end();
+  }
+
+  /**
+   * The CORS answer of every embed route. Synchronous while the origin's answer is cached (every
+   * run report but the first few from a site): the hot path awaits nothing here.
+   */
+  function cors(req: Request, res: Response, next: NextFunction): void | Promise<void> {
     res.set('Cache-Control', 'no-store');
     res.vary('Origin');
     const origin = req.get('origin');
-    try {
-      if (origin && (await originAllowed(origin.toLowerCase()))) allowOrigin(res, origin);
-    } catch (e) {
-      // While the database is down the origin cannot be checked; the 503 carries no data, so the
-      // widget may read it and its Retry-After.
-      if (origin && isDatabaseUnavailable(e)) allowOrigin(res, origin);
-      throw e;
+    if (!origin) return preflight(req, res, next);
+    const allowed = originAllowed(origin.toLowerCase());
+    if (typeof allowed === 'boolean') {
+      if (allowed) allowOrigin(res, origin);
+      return preflight(req, res, next);
     }
-    if (req.method === 'OPTIONS') {
-      if (res.get('Access-Control-Allow-Origin')) {
-        res.set('Access-Control-Allow-Methods', 'GET, POST');
-        res.set('Access-Control-Allow-Headers', 'Content-Type');
-        res.set('Access-Control-Max-Age', '600');
-      }
-      res.status(204).end();
-      return;
+    return allowed.then(
+      (ok) => {
+        if (ok) allowOrigin(res, origin);
+        preflight(req, res, next);
+      },
+      (e: unknown) => {
+        // While the database is down the origin cannot be checked; the 503 carries no data, so the
+        // widget may read it and its Retry-After.
+        if (isDatabaseUnavailable(e)) allowOrigin(res, origin);
+        throw e;
+      },
+    );
+  }
+  const textBody = express.text({ type: ['text/plain', 'application/json'], limit: '32kb' });
+
+  // A request refused because its page's origin is not allowed is counted for the widget it named,
+  // so the developer sees a site missing from the list. Counting never changes the answer.
+  async function countRefusal(err: unknown, req: Request, _res: Response, next: NextFunction): Promise<void> {
+    const origin = req.get('origin');
+    if (refusals && origin && err instanceof AppError && err.code === 'forbidden' && refusedFor(err)) {
+      const key = keyOf(req);
+      if (key) await refusals.count(key, origin).catch(() => undefined);
     }
-    next();
-  });
-  router.use(express.text({ type: ['text/plain', 'application/json'], limit: '32kb' }), jsonBody);
+    next(err);
+  }
+
+  const runs: EmbedRoutes['runs'] = [
+    cors,
+    textBody,
+    jsonBody,
+    async (req: Request, res: Response) => {
+      const body = parseRequest(embedRunBodySchema, req.body, 'body');
+      const result = await service.recordRun(body, req.get('origin'));
+      res.status(result.duplicate ? 200 : 201).json(result);
+    },
+    countRefusal,
+  ];
+
+  router.use(cors);
+  router.use(textBody, jsonBody);
 
   // Only accepted requests count (a 4xx or 5xx answer gives its hit back): a visitor's mistakes, or
   // another firm's widget, never use up what one widget allows. Counters are shared by all processes.
@@ -147,12 +207,6 @@ export function embedRouter(
     const widget = await service.widgetFor(publicKey, req.get('origin'));
     res.set('Cache-Control', 'private, no-cache');
     res.json(widget);
-  });
-
-  router.post('/runs', async (req, res) => {
-    const body = parseRequest(embedRunBodySchema, req.body, 'body');
-    const result = await service.recordRun(body, req.get('origin'));
-    res.status(result.duplicate ? 200 : 201).json(result);
   });
 
   router.post(
@@ -215,18 +269,9 @@ export function embedRouter(
     res.send(asset.data);
   });
 
-  // A request refused because its page's origin is not allowed is counted for the widget it named,
-  // so the developer sees a site missing from the list. Counting never changes the answer.
-  router.use(async (err: unknown, req: Request, _res: Response, next: NextFunction) => {
-    const origin = req.get('origin');
-    if (refusals && origin && err instanceof AppError && err.code === 'forbidden' && refusedFor(err)) {
-      const key = keyOf(req);
-      if (key) await refusals.count(key, origin).catch(() => undefined);
-    }
-    next(err);
-  });
+  router.use(countRefusal);
 
-  return router;
+  return { router, runs };
 }
 
 /** A refusal of the page's origin (other 403s, a lead form turned off, are not counted). */

@@ -25,7 +25,7 @@ export async function storeRuns(
 
 const RUN_COLUMNS =
   'id, organization_id, widget_id, calculator_id, origin, page_url, `release`, calc_version, unit_system, inputs, ' +
-  'client_result, server_result, warning_codes, has_warning, agreed, mismatch, input_hash, body_hash, created_at';
+  'client_result, server_result, warning_codes, has_warning, agreed, mismatch, input_hash, body_hash, created_at, over_allowance';
 const RUN_TUPLE = `(${RUN_COLUMNS.split(',')
   .map(() => '?')
   .join(',')})`;
@@ -34,7 +34,7 @@ const INSERT_ROWS = 500;
 
 const json = (v: unknown): string | null => (v === null || v === undefined ? null : JSON.stringify(v));
 
-function runValues(r: RunRow): unknown[] {
+function runValues(r: RunRow, over: boolean): unknown[] {
   return [
     r.id,
     r.organizationId,
@@ -55,21 +55,26 @@ function runValues(r: RunRow): unknown[] {
     r.inputHash,
     r.bodyHash,
     r.createdAt,
+    over,
   ];
 }
 
 /**
  * Multi-row INSERTs of runs with `?` values, built directly (no model instances: the ingest's hot
  * path sends them on a connection of its own). A duplicate id fails the whole statement
- * (ER_DUP_ENTRY) and InnoDB rolls back just that statement.
+ * (ER_DUP_ENTRY) and InnoDB rolls back just that statement. Runs whose id is in `overAllowance` are
+ * stored marked as past their plan's monthly allowance.
  */
-export function insertRunStatements(rows: readonly RunRow[]): Statement[] {
+export function insertRunStatements(
+  rows: readonly RunRow[],
+  overAllowance: ReadonlySet<string> = new Set(),
+): Statement[] {
   const out: Statement[] = [];
   for (let i = 0; i < rows.length; i += INSERT_ROWS) {
     const chunk = rows.slice(i, i + INSERT_ROWS);
     out.push({
       sql: `INSERT INTO runs (${RUN_COLUMNS}) VALUES ${chunk.map(() => RUN_TUPLE).join(',')}`,
-      values: chunk.flatMap(runValues),
+      values: chunk.flatMap((r) => runValues(r, overAllowance.has(r.id))),
     });
   }
   return out;
