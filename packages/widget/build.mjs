@@ -1,9 +1,9 @@
 // Builds the widget release dist/releases/<version>/: a small loader per calculator (what snippets
-// point at), the shared runtime, an engine per calculator, each calculator's texts and the extras
-// that follow first paint, the Manrope variable font, a brotli and a gzip copy of every script, and
-// manifest.json (file names, SRI hashes, sizes). Fails when any calculator's first flight (its
-// loader, the runtime and its engine, compressed) is over FLIGHT_LIMIT, or carries texts, printing
-// every figure. Only this version's folder is ever
+// point at), the shared runtime (the first view), an engine per calculator, and what follows first
+// paint: the full widget (app), each calculator's texts, the extras and the tables; the Manrope
+// variable font, a brotli and a gzip copy of every script, and manifest.json (file names, SRI
+// hashes, sizes). Fails when any calculator's first flight (its loader, the runtime and its engine,
+// brotli) is over FLIGHT_LIMIT (14 KB), carries texts or Preact, printing every figure. Only this version's folder is ever
 // written: earlier releases stay byte-for-byte as published (embed snippets pin them by SRI hash).
 import {
   copyFileSync,
@@ -20,6 +20,8 @@ import { calculators, VERSION as calcCoreVersion } from '@wickstone/calc-core';
 import {
   buildChunks,
   buildLoader,
+  laterTable,
+  sealEngine,
   hasTableInput,
   checkContents,
   closure,
@@ -66,7 +68,27 @@ const files = {};
 const chunkFigures = {};
 console.log(`Wickstone widget ${widgetVersion} (calc-core ${calcCoreVersion})`);
 try {
-  const { files: chunks, engines, texts, extras, tables } = await buildChunks(calculators.map((c) => c.id));
+  const {
+    files: chunks,
+    engines,
+    texts,
+    extras,
+    tables,
+    app,
+  } = await buildChunks(calculators.map((c) => c.id));
+  /** What each calculator's loader and engine name: its first flight and the chunks after it. */
+  const parts = Object.fromEntries(
+    calculators.map((calc) => {
+      const engine = engines[calc.id];
+      if (!engine) throw new Error(`no engine chunk for ${calc.id}`);
+      return [
+        calc.id,
+        { engine, texts: texts[calc.id], extras, app, tables: hasTableInput(calc) ? tables : null },
+      ];
+    }),
+  );
+  for (const calc of calculators)
+    sealEngine(chunks, parts[calc.id].engine, laterTable(chunks, parts[calc.id]));
   for (const [name, chunk] of chunks) {
     const m = emit(name, chunk.code);
     chunkFigures[name] = {
@@ -84,24 +106,23 @@ try {
     );
 
   console.log(
-    `\nfirst flight per calculator (loader + every chunk its engine imports), compressed; goal ${kb(FLIGHT_GOAL)}, build fails above ${kb(FLIGHT_LIMIT)}`,
+    `\nfirst flight per calculator (loader + runtime + engine: the first view, usable), compressed; goal ${kb(FLIGHT_GOAL)}, build fails above ${kb(FLIGHT_LIMIT)}`,
   );
   console.log(
     `${'calculator'.padEnd(24)}${'loader'.padStart(8)}${'gzip'.padStart(9)}${'brotli'.padStart(9)}${'vs goal'.padStart(9)}   chunks`,
   );
   for (const calc of calculators) {
-    const engine = engines[calc.id];
-    if (!engine) throw new Error(`no engine chunk for ${calc.id}`);
+    const { engine } = parts[calc.id];
     const file = `wickstone-${calc.id}.js`;
-    const tablesFile = hasTableInput(calc) ? tables : null;
-    const loader = emit(
-      file,
-      await buildLoader(calc.id, calcCoreVersion, chunks, engine, texts[calc.id], extras, tablesFile),
-    );
+    const loader = emit(file, await buildLoader(calc.id, calcCoreVersion, chunks, parts[calc.id]));
     const flight = [...closure(chunks, engine)];
     for (const f of flight.filter((x) => chunks.get(x).hasTexts))
       failures.push(
         `${f}, in ${calc.id}'s first flight, carries a calculator's texts: import them only from <id>.texts.ts`,
+      );
+    for (const f of flight.filter((x) => chunks.get(x).hasPreact))
+      failures.push(
+        `${f}, in ${calc.id}'s first flight, carries Preact: the first view is plain DOM (src/first/)`,
       );
     const gzip = loader.gzipBytes + flight.reduce((s, f) => s + chunkFigures[f].gzipBytes, 0);
     const brotli = loader.brotliBytes + flight.reduce((s, f) => s + chunkFigures[f].brotliBytes, 0);

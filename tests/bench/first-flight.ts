@@ -2,7 +2,8 @@
 // with the CPU slowed four times: for one widget of each calculator and for the demo firm's page
 // with two widgets, the requests and compressed bytes the app sent before the calculator could be
 // used, the bytes after the page went quiet, the time to usable, the cumulative layout shift and
-// the time from typing a value to seeing its result, how many runtimes the page fetched and whether
+// the time from typing a value to seeing its result, when the full widget had taken over from the
+// first view, how many runtimes the page fetched and whether
 // the shipped font came before or after the calculator was usable. The baseline, measured in the same run under
 // the same profile, is the firm's page with no widget on it.
 //
@@ -51,6 +52,8 @@ interface Figures {
   totalRequests: number;
   totalBytes: number;
   usableMs: number;
+  /** When the full widget (the app chunk) had taken over every first view; null if it never did. */
+  fullMs: number | null;
   cls: number;
   typingMs: number | null;
   runtimeLoads: number;
@@ -98,6 +101,14 @@ const pageProbe = (expected: number) => `
     } else requestAnimationFrame(tick);
   };
   requestAnimationFrame(tick);
+  window.__fullAt = null;
+  const full = () => {
+    const hosts = [...document.querySelectorAll('wickstone-widget')];
+    if (${expected} > 0 && hosts.length === ${expected} && hosts.every((h) => h.shadowRoot && h.shadowRoot.querySelector('div[data-wickstone="mount"][data-view="full"]')))
+      window.__fullAt = performance.now();
+    else if (${expected} > 0) requestAnimationFrame(full);
+  };
+  requestAnimationFrame(full);
 `;
 
 /** Types into the first widget, presses Calculate and resolves with the milliseconds until the new result is painted. */
@@ -190,6 +201,7 @@ async function measure(browser: Browser, path: string, expected: number, typing:
   const heights = await page.evaluate(() =>
     ((window as unknown as { __heights?: string[] }).__heights ?? []).join(' '),
   );
+  const fullMs = await page.evaluate(() => (window as unknown as { __fullAt: number | null }).__fullAt);
   const total = fromApp();
   await context.close();
   const sum = (list: (readonly [string, number])[]) => list.reduce((s, [, n]) => s + n, 0);
@@ -199,6 +211,7 @@ async function measure(browser: Browser, path: string, expected: number, typing:
     totalRequests: total.length,
     totalBytes: sum(total),
     usableMs,
+    fullMs,
     cls,
     typingMs,
     runtimeLoads: total.filter(([u]) => /runtime/.test(u)).length,
@@ -275,37 +288,50 @@ try {
   );
   console.log(`baseline: the firm's page with no widget, loaded in ${ms(base.usableMs)}`);
   console.log(
-    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'CLS'.padStart(8)}${'type→result'.padStart(13)}${'runtimes'.padStart(10)}${'font'.padStart(8)}   shown/held px`,
+    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'full'.padStart(9)}${'CLS'.padStart(8)}${'type→result'.padStart(13)}${'runtimes'.padStart(10)}${'font'.padStart(8)}   shown/held px`,
   );
   const row = (name: string, f: Figures) =>
     console.log(
-      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${f.cls.toFixed(3).padStart(8)}${ms(f.typingMs).padStart(13)}${String(f.runtimeLoads).padStart(10)}${f.font.padStart(8)}   ${f.heights}`,
+      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${ms(f.fullMs).padStart(9)}${f.cls.toFixed(3).padStart(8)}${ms(f.typingMs).padStart(13)}${String(f.runtimeLoads).padStart(10)}${f.font.padStart(8)}   ${f.heights}`,
     );
   for (const name of snippets.keys())
     row(name, await measure(browser, `/one/${encodeURIComponent(name)}`, 1, true));
   row('two widgets (demo page)', await measure(browser, '/', 2, true));
 
-  // BENCH_SHOTS=<dir>: the demo page at desktop and phone widths, unthrottled, once settled.
+  // BENCH_SHOTS=<dir>: the demo page at desktop and phone widths, unthrottled: demo-<width>-first.png
+  // with the first view only (the full widget's chunk held back), demo-<width>.png once the full
+  // widget has taken over and the page settled. Nothing should move between the two.
   if (process.env.BENCH_SHOTS) {
     for (const width of [1280, 390]) {
-      const context = await browser.newContext({ viewport: { width, height: 900 } });
-      const page = await context.newPage();
-      await page.goto(`${siteOrigin}/`);
-      await page.waitForFunction(() => {
-        const hosts = [...document.querySelectorAll('wickstone-widget')];
-        return hosts.length === 2 && hosts.every((h) => h.getAttribute('data-state') === 'ready');
-      });
-      await page.evaluate(() => document.fonts.ready.then(() => undefined));
-      await page.waitForTimeout(1000);
-      const heights = await page.evaluate(() =>
-        [...document.querySelectorAll<HTMLElement>('wickstone-widget')].map(
-          (h) =>
-            `${Math.round(h.shadowRoot!.querySelector('[data-wickstone="root"] > .body')!.getBoundingClientRect().bottom - h.getBoundingClientRect().top)}/${h.style.minHeight}`,
-        ),
-      );
-      console.log(`${width} px: form bottom / held: ${heights.join(' ')}`);
-      await page.screenshot({ path: `${process.env.BENCH_SHOTS}/demo-${width}.png`, fullPage: true });
-      await context.close();
+      for (const view of ['first', 'full'] as const) {
+        const context = await browser.newContext({ viewport: { width, height: 900 } });
+        const page = await context.newPage();
+        if (view === 'first') await page.route('**/releases/**/app-*.js', (route) => route.abort());
+        await page.goto(`${siteOrigin}/`);
+        await page.waitForFunction((wanted) => {
+          const hosts = [...document.querySelectorAll('wickstone-widget')];
+          return (
+            hosts.length === 2 &&
+            hosts.every(
+              (h) =>
+                h.getAttribute('data-state') === 'ready' &&
+                h.shadowRoot?.querySelector(`div[data-wickstone="mount"][data-view="${wanted}"]`),
+            )
+          );
+        }, view);
+        await page.evaluate(() => document.fonts.ready.then(() => undefined));
+        await page.waitForTimeout(1000);
+        const heights = await page.evaluate(() =>
+          [...document.querySelectorAll<HTMLElement>('wickstone-widget')].map(
+            (h) =>
+              `${Math.round(h.shadowRoot!.querySelector('[data-wickstone="root"] > .body')!.getBoundingClientRect().bottom - h.getBoundingClientRect().top)}/${h.style.minHeight}`,
+          ),
+        );
+        console.log(`${width} px, ${view} view: form bottom / held: ${heights.join(' ')}`);
+        const name = view === 'first' ? `demo-${width}-first.png` : `demo-${width}.png`;
+        await page.screenshot({ path: `${process.env.BENCH_SHOTS}/${name}`, fullPage: true });
+        await context.close();
+      }
     }
   }
 } finally {

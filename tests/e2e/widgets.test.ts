@@ -590,8 +590,16 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await hosts.nth(1).locator('[data-wickstone="calculate"]').click();
     await hosts.nth(1).locator('[data-result]').waitFor();
     expect(await hosts.nth(0).locator('[data-result]').count()).toBe(0);
+    // The full widget follows first paint and takes over each first view, fetched once for both.
+    for (const i of [0, 1])
+      await hosts
+        .nth(i)
+        .locator('div[data-wickstone="mount"][data-view="full"]')
+        .waitFor({ timeout: 20_000 });
+    expect(await hosts.nth(1).locator('[data-result]').count()).toBe(1);
     const runtimes = fetched.filter((f) => /^runtime-.*\.js$/.test(f));
     expect(runtimes).toHaveLength(1);
+    expect(fetched.filter((f) => /^app-.*\.js$/.test(f))).toHaveLength(1);
     expect(fetched.filter((f) => /^engine-tube-rise-.*\.js$/.test(f))).toHaveLength(1);
     // Every chunk the loader added carries its hash and is fetched in CORS mode.
     const tags = await page.evaluate(() =>
@@ -634,6 +642,40 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     ).toBeUndefined();
     expect(await host.locator('[data-wickstone="root"]').count()).toBe(0);
     expect(messages.some((m) => /integrity/i.test(m) && m.includes('runtime-'))).toBe(true);
+  });
+
+  it('refuses a later chunk whose bytes differ from the hash the engine carries, and keeps the first view working', async () => {
+    expect(snippet).not.toBe('');
+    const page = await freshPage();
+    const messages: string[] = [];
+    page.on('console', (m) => messages.push(m.text()));
+    let tampered = '';
+    // The full widget's chunk: its hash is not in the loader but in the engine the loader checked.
+    await page.route('**/releases/**/app-*.js', async (route) => {
+      const original = await route.fetch();
+      tampered = route.request().url();
+      await route.fulfill({
+        response: original,
+        body: `${await original.text()}\nwindow.__tampered = true;\n`,
+      });
+    });
+    await page.goto(`${site.origin}/`);
+    const host = widgetIn(page);
+    await host.locator('div[data-wickstone="mount"][data-view="first"] [data-wickstone="root"]').waitFor({
+      timeout: 20_000,
+    });
+    await expect.poll(() => tampered, { timeout: 20_000 }).not.toBe('');
+    await expect
+      .poll(() => messages.some((m) => /integrity/i.test(m) && m.includes('app-')), { timeout: 20_000 })
+      .toBe(true);
+    expect(
+      await page.evaluate(() => (window as unknown as { __tampered?: boolean }).__tampered),
+    ).toBeUndefined();
+    // The first view stays, and still works out an answer.
+    await host.locator('[data-wickstone="calculate"]').click();
+    await host.locator('[data-result]').waitFor();
+    expect(await host.locator('[data-wickstone="headline"]').textContent()).not.toBe('');
+    expect(await host.locator('div[data-wickstone="mount"][data-view="full"]').count()).toBe(0);
   });
 
   it('gives a site that is not allowed no widget and stores nothing it sends', async () => {

@@ -1,11 +1,16 @@
-// Builds the widget release in memory with Vite's JS API, as five kinds of classic scripts:
-//   wickstone-<id>.js  the loader a snippet points at (one per calculator, carries the SRI hashes)
-//   runtime-<hash>.js  Preact, the widget's UI, the calc-core it uses and the calc-core every engine
-//                      uses (liquids, shared inputs): one per release, shared
-//   engine-<id>-<hash>.js  one calculator's core, with the chunks it shares only with other engines (one file)
+// Builds the widget release in memory with Vite's JS API, as six kinds of classic scripts:
+//   wickstone-<id>.js  the loader a snippet points at (one per calculator, carries the SRI hashes of
+//                      the first flight: the runtime and its engine)
+//   runtime-<hash>.js  the first view (plain DOM: fields, "Work it out", the answer and its warnings),
+//                      its styles, the calc-core it uses and the calc-core every engine uses (liquids,
+//                      shared inputs): one per release, shared, no Preact
+//   engine-<id>-<hash>.js  one calculator's core, with the chunks it shares only with other engines (one
+//                      file), and the SRI hashes of every chunk that follows first paint for it
+//   app-<hash>.js      Preact and the whole widget (App), after first paint: it takes over from the first view
 //   texts-<id>-<hash>.js   that calculator's cautions and references (`<id>.texts.ts`), after first paint
 //   extras-<hash>.js   the working, the lead form, the run reporter, the font and their styles, after first paint
-// The chunks come from one code-split ES build (entries: each engine, each texts, and the extras) and are
+// The chunks come from one code-split ES build (entries: each engine, each texts, the app, the extras
+// and the tables) and are
 // wrapped into `Wickstone._d(key, factory)` (see src/chunks.ts), so each can be loaded with
 // `integrity` and linked without module scripts.
 // Shared by build.mjs (writes the release) and bench.mjs (prints what each part weighs).
@@ -30,24 +35,18 @@ export const MANROPE_FILE = 'manrope-latin-wght-normal.woff2';
 /** The first-flight goal: the loader, runtime and engine of one calculator, compressed, in one TCP initial window. */
 export const FLIGHT_GOAL = 14 * 1024;
 /**
- * Where the build fails today: the goal is not reached yet (see README), so this ceiling keeps the
- * first flight from growing while the work towards the goal goes on. Lower it as the flight shrinks.
- * Lowered from 32 to 30 KB when the calculators' cautions and references (their texts modules) and
- * the run reporter left the first flight (largest: wetting-force 28.3 KB brotli); the rest of a
- * kilobyte is room for the result's headline and picture being added beside this change.
- * Raised to 32 KB when the headline sentence, the five trade calculators and the table input's slot
- * joined (absorption-coefficient 31.2 KB brotli, the largest): the ceiling still stops growth; the
- * goal is unchanged and not met.
- * Lowered to 31.5 KB when the first flight began computing with calc-core's `compute` and the full run
- * (working, input hash) moved to the texts chunk (largest: absorption-coefficient 30.7 KB brotli). A
- * build under NODE_ENV=test, as the release tests make, is now the same bytes (the JSX transform is
- * pinned to production), so the ceiling is 31 KB.
- * Lowered to 30.25 KB when the calc-core every engine imports joined the runtime and each engine
- * became one file with the formula chunks it shares with other engines (largest:
- * absorption-coefficient 30.2 KB brotli, 30,919 bytes; loader, runtime and one engine file).
- * 30.5 KB when the runtime's liquid resolution began keeping its answers (largest: 31,012 bytes).
+ * Where the build fails: a ceiling that keeps the first flight from growing until it reaches the
+ * goal (see README). History: 32 KB, then 30 KB when the texts and the reporter left the first
+ * flight, 32 KB when the trade calculators joined, 31.5, 31, 30.25 and 30.5 KB as the engines and
+ * the runtime were reshaped (largest then: absorption-coefficient, 31,012 bytes).
+ * 24.5 KB when the first view became plain DOM and Preact with the full widget (the app chunk)
+ * left the first flight, the loader began carrying only the first flight's SRI hashes (the engine
+ * carries the later chunks'), and calc-core's full run (input hash) left the runtime for the texts
+ * chunks (largest: absorption-coefficient, 24,638 bytes). The goal is not met: calc-core's code
+ * (the shared inputs and the working's text in `calculators/shared.js`, the units table, the
+ * headline and the solving helpers) is about half of what is left, then the first view and its styles.
  */
-export const FLIGHT_LIMIT = 30.5 * 1024;
+export const FLIGHT_LIMIT = 24.5 * 1024;
 
 const ENGINE = 'virtual:wickstone-engine/';
 const TEXTS = 'virtual:wickstone-texts/';
@@ -73,6 +72,13 @@ const CALC_CORE_INDEX = /[\\/]calc-core[\\/]dist[\\/]index\.js$/;
 const CALCULATOR_MODULE =
   /[\\/]calc-core[\\/]dist[\\/](registry\.js|calculators[\\/](?!engine\.js|types\.js)[^\\/]+\.js)$/;
 const src = path.join(widgetDir, 'src') + path.sep;
+/** The first view's mount: what it reaches is the first flight's runtime. */
+const FIRST_ENTRY = path.join(src, 'first', 'mount.ts');
+/** The full widget's entry (Preact, App): after first paint. */
+const APP_ENTRY = path.join(src, 'app.ts');
+const PREACT = /[\\/]node_modules[\\/]preact[\\/]/;
+/** Stands in an engine for the table of the chunks after first paint (`sealEngine` writes it). */
+export const LATER_CHUNKS = '__WICKSTONE_LATER_CHUNKS__';
 /** Widget modules only the extras chunk uses: left out of the runtime. */
 const EXTRAS_ONLY = new Set(
   [
@@ -222,17 +228,28 @@ export async function buildChunks(calculatorIds) {
   const input = {
     ...Object.fromEntries(calculatorIds.map((id) => [`engine-${id}`, ENGINE + id])),
     ...Object.fromEntries(calculatorIds.map((id) => [`texts-${id}`, TEXTS + id])),
+    app: APP_ENTRY,
     extras: path.join(src, 'extras.ts'),
     tables: TABLES_ENTRY,
   };
+  /** The first view and everything it imports (not through calc-core's index, not Preact): the runtime. */
+  let first = null;
+  const inFirst = (id, getModuleInfo) => {
+    first ??= reachable(
+      getModuleInfo,
+      FIRST_ENTRY,
+      (next) => !CALC_CORE_INDEX.test(next) && !PREACT.test(next),
+    );
+    return first.has(id) || everyEngineUses(id, getModuleInfo);
+  };
   const runtimeMemo = new Map();
-  /** A module the first paint needs: Preact, the widget's own code, and what they import from calc-core. */
-  const inRuntime = (id, getModuleInfo, seen = new Set()) => {
+  /** A module of the full widget: Preact, the widget's own code, and what they import from calc-core. */
+  const inApp = (id, getModuleInfo, seen = new Set()) => {
     if (runtimeMemo.has(id)) return runtimeMemo.get(id);
     if (seen.has(id)) return false;
     seen.add(id);
     let yes = false;
-    if (/[\\/]node_modules[\\/]preact[\\/]/.test(id)) yes = true;
+    if (PREACT.test(id)) yes = true;
     else if (id.startsWith(src))
       yes =
         !EXTRAS_ONLY.has(id.split('?')[0]) &&
@@ -245,9 +262,9 @@ export async function buildChunks(calculatorIds) {
       yes =
         CALC_CORE_INDEX.test(id) ||
         (getModuleInfo(id)?.importers ?? []).some(
-          (i) => !CALC_CORE_INDEX.test(i) && inRuntime(i, getModuleInfo, seen),
+          (i) => !CALC_CORE_INDEX.test(i) && inApp(i, getModuleInfo, seen),
         );
-    runtimeMemo.set(id, yes || everyEngineUses(id, getModuleInfo));
+    runtimeMemo.set(id, yes);
     return runtimeMemo.get(id);
   };
   /**
@@ -258,19 +275,14 @@ export async function buildChunks(calculatorIds) {
   let universal = null;
   const everyEngineUses = (id, getModuleInfo) => {
     if (universal === null) {
-      const reach = (start) => {
-        const out = new Set();
-        const todo = [start];
-        while (todo.length > 0) {
-          const m = todo.pop();
-          if (out.has(m)) continue;
-          out.add(m);
-          for (const next of getModuleInfo(m)?.importedIds ?? [])
-            // Not through the widget's own code nor calc-core's index (which re-exports every calculator).
-            if (!next.startsWith(src) && !CALC_CORE_INDEX.test(next)) todo.push(next);
-        }
-        return out;
-      };
+      // Not through the widget's own code, calc-core's index (which re-exports every calculator) nor its
+      // full run (working, input hash): an engine tree-shakes the run away, the texts chunks carry it.
+      const reach = (start) =>
+        reachable(
+          getModuleInfo,
+          start,
+          (next) => !next.startsWith(src) && !CALC_CORE_INDEX.test(next) && next !== RUN_MODULE,
+        );
       const sets = calculatorIds.map((c) => reach(`\0${ENGINE}${c}`));
       universal = new Set(
         [...sets[0]].filter(
@@ -300,7 +312,8 @@ export async function buildChunks(calculatorIds) {
           const calc = id.slice(ENGINE.length + 1);
           return (
             `export { calculator, compute } from '@wickstone/calc-core/calculators/${calc}';\n` +
-            `export { mountWidget } from ${JSON.stringify(path.join(src, 'mount.tsx'))};\n`
+            `export { mountFirst } from ${JSON.stringify(FIRST_ENTRY)};\n` +
+            `export const chunks = ${LATER_CHUNKS};\n`
           );
         },
       },
@@ -309,12 +322,20 @@ export async function buildChunks(calculatorIds) {
       ...buildOptions,
       rollupOptions: {
         input,
-        preserveEntrySignatures: 'strict',
+        preserveEntrySignatures: 'allow-extension',
         output: {
           format: 'es',
           entryFileNames: '[name]-[hash].js',
           chunkFileNames: '[name]-[hash].js',
-          manualChunks: (id, { getModuleInfo }) => (inRuntime(id, getModuleInfo) ? 'runtime' : undefined),
+          // Two groups, the first view's before the full widget's: a module both use stays in the
+          // runtime; modules in neither (each calculator's own, what only texts or extras use) are split as usual.
+          codeSplitting: {
+            includeDependenciesRecursively: false,
+            groups: [
+              { name: (id, c) => (inFirst(id, (m) => c.getModuleInfo(m)) ? 'runtime' : null), priority: 2 },
+              { name: (id, c) => (inApp(id, (m) => c.getModuleInfo(m)) ? 'app' : null), priority: 1 },
+            ],
+          },
         },
       },
     },
@@ -324,6 +345,7 @@ export async function buildChunks(calculatorIds) {
   const texts = {};
   let extras = null;
   let tables = null;
+  let app = null;
   for (const o of outputsOf(result)) {
     if (o.type !== 'chunk') throw new Error(`unexpected asset ${o.fileName} in the release build`);
     if (process.env.WICKSTONE_CHUNK_MODULES)
@@ -335,16 +357,19 @@ export async function buildChunks(calculatorIds) {
       code: wrapChunk(o),
       imports: o.imports.map((f) => path.posix.basename(f)),
       hasTexts: Object.keys(o.modules).some((id) => TEXTS_MODULE.test(id)),
+      hasPreact: Object.keys(o.modules).some((id) => PREACT.test(id)),
     });
     if (o.isEntry && o.name === 'extras') extras = o.fileName;
+    else if (o.isEntry && o.name === 'app') app = o.fileName;
     else if (o.isEntry && o.name.startsWith('texts-')) texts[o.name.slice('texts-'.length)] = o.fileName;
     else if (o.isEntry && o.name === 'tables') tables = o.fileName;
     else if (o.isEntry) engines[o.name.slice('engine-'.length)] = o.fileName;
   }
   if (extras === null) throw new Error('no extras chunk was built');
   if (tables === null) throw new Error('no tables chunk was built');
+  if (app === null) throw new Error('no app chunk was built');
   bundleEngines(files, engines);
-  return { files, engines, texts, extras, tables };
+  return { files, engines, texts, extras, tables, app };
 }
 
 /**
@@ -366,10 +391,24 @@ function bundleEngines(files, engines) {
         code: parts.map((p) => p.code).join(''),
         imports: [...new Set(parts.flatMap((p) => p.imports))].filter((f) => !own.includes(f)),
         hasTexts: parts.some((p) => p.hasTexts),
+        hasPreact: parts.some((p) => p.hasPreact),
       },
     ];
   });
   for (const [engine, file] of merged) files.set(engine, file);
+}
+
+/** The modules `start` reaches through static imports, following only those `follow` allows. */
+function reachable(getModuleInfo, start, follow) {
+  const out = new Set();
+  const todo = [start];
+  while (todo.length > 0) {
+    const m = todo.pop();
+    if (out.has(m)) continue;
+    out.add(m);
+    for (const next of getModuleInfo(m)?.importedIds ?? []) if (follow(next)) todo.push(next);
+  }
+  return out;
 }
 
 /** Every chunk `file` reaches through static imports (itself included), in load order. */
@@ -381,30 +420,54 @@ export function closure(files, file, out = new Set()) {
 }
 
 /**
- * One calculator's loader: an IIFE carrying the table of the chunks it may load (SRI hash and
- * static imports of each), so every file the snippet's script brings in is checked.
+ * The chunks that follow first paint for one calculator (the app, its texts, the extras, the tables
+ * when it has a table input, and what they import), each with its SRI hash and static imports.
+ */
+export function laterTable(files, { engine, texts, extras, app, tables = null }) {
+  const first = closure(files, engine);
+  const reach = [...closure(files, app), ...closure(files, texts), ...closure(files, extras)];
+  if (tables !== null) reach.push(...closure(files, tables));
+  const table = {};
+  for (const f of new Set(reach))
+    if (!first.has(f)) table[f] = [measure(files.get(f).code).integrity, files.get(f).imports];
+  return table;
+}
+
+/**
+ * Writes the table of the later chunks into an engine (in place of `LATER_CHUNKS`): the loader
+ * trusts it because it checked the engine's own hash, so every file is still checked and the
+ * loader, in the first flight, carries two hashes rather than every chunk's.
+ */
+export function sealEngine(files, engine, table) {
+  const chunk = files.get(engine);
+  const parts = chunk.code.split(LATER_CHUNKS);
+  if (parts.length !== 2)
+    throw new Error(`${engine}: expected one ${LATER_CHUNKS}, found ${parts.length - 1}`);
+  files.set(engine, { ...chunk, code: parts.join(JSON.stringify(table)) });
+}
+
+/**
+ * One calculator's loader: an IIFE carrying the SRI hash and static imports of its first flight's
+ * chunks (the runtime and its engine); the engine carries the rest (`sealEngine`).
  */
 export async function buildLoader(
   calculatorId,
   calcCoreVersion,
   files,
-  engineFile,
-  textsFile,
-  extrasFile,
-  tablesFile = null,
+  { engine, texts, extras, app, tables = null },
 ) {
   const table = {};
-  const reach = [...closure(files, engineFile), ...closure(files, textsFile), ...closure(files, extrasFile)];
-  if (tablesFile !== null) reach.push(...closure(files, tablesFile));
-  for (const f of new Set(reach)) table[f] = [measure(files.get(f).code).integrity, files.get(f).imports];
+  for (const f of closure(files, engine))
+    table[f] = [measure(files.get(f).code).integrity, files.get(f).imports];
   const result = await build({
     ...common({
       __WICKSTONE_CALCULATOR__: JSON.stringify(calculatorId),
       __WICKSTONE_CALC_CORE_VERSION__: JSON.stringify(calcCoreVersion),
-      __WICKSTONE_ENGINE__: JSON.stringify(engineFile),
-      __WICKSTONE_TEXTS__: JSON.stringify(textsFile),
-      __WICKSTONE_EXTRAS__: JSON.stringify(extrasFile),
-      __WICKSTONE_TABLES__: JSON.stringify(tablesFile),
+      __WICKSTONE_ENGINE__: JSON.stringify(engine),
+      __WICKSTONE_TEXTS__: JSON.stringify(texts),
+      __WICKSTONE_EXTRAS__: JSON.stringify(extras),
+      __WICKSTONE_APP__: JSON.stringify(app),
+      __WICKSTONE_TABLES__: JSON.stringify(tables),
       __WICKSTONE_CHUNKS__: JSON.stringify(table),
     }),
     build: {

@@ -149,4 +149,38 @@ describe('chunk loader', () => {
     const { g, doc } = fakePage({});
     await expect(chunkLoader(g, '0.2.0', BASE, table, doc)('elsewhere.js')).rejects.toThrow(/no chunk/);
   });
+
+  it('loads a later chunk with the hash an engine carried for it, once the loader took the table of the engine it checked (a chain of trust)', async () => {
+    const order: string[] = [];
+    const served = chunks(order);
+    const app = (hash: string) => ({
+      hash,
+      body: (g: ChunkRegistry) =>
+        g._d('0.2.0/app-d.js', (r) => {
+          order.push('app');
+          return { runtime: (r('runtime-a.js') as { mount: string }).mount };
+        }),
+    });
+    for (const [servedHash, ok] of [
+      ['sha384-app', true],
+      ['sha384-app-changed', false],
+    ] as const) {
+      order.length = 0;
+      const { g, doc } = fakePage({ ...served, 'app-d.js': app(servedHash) });
+      // The loader's own table: the first flight only.
+      const own: Record<string, ChunkTable[string]> = { ...table };
+      const load = chunkLoader(g, '0.2.0', BASE, own, doc);
+      await expect(load('app-d.js')).rejects.toThrow(/no chunk app-d\.js/);
+      await load('engine-c.js');
+      // What the checked engine carries for the chunks after first paint.
+      Object.assign(own, { 'app-d.js': ['sha384-app', ['runtime-a.js']] });
+      if (ok) {
+        await expect(load('app-d.js')).resolves.toEqual({ runtime: 'the runtime' });
+        expect(order).toEqual(['runtime', 'shared', 'engine', 'app']);
+      } else {
+        await expect(load('app-d.js')).rejects.toThrow(/app-d\.js .*integrity/);
+        expect(order).not.toContain('app');
+      }
+    }
+  });
 });

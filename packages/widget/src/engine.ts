@@ -4,18 +4,23 @@ import type {
   CalculatorTexts,
   ComputedResult,
 } from '@wickstone/calc-core';
-import type { mountWidget } from './mount.js';
+import type { ChunkTable } from './chunks.js';
+import type { mountFirst } from './first/mount.js';
 
 /**
  * What a calculator's engine chunk exports (the build makes one per calculator from its calc-core
- * subpath): the calculator's core (no texts), its `compute` and the runtime's `mountWidget`, which it imports from the shared
- * runtime chunk, so loading the engine loads the runtime once for every widget of the release.
+ * subpath): the calculator's core (no texts), its `compute` and the first view's `mountFirst`, which
+ * it imports from the shared runtime chunk, so loading the engine loads the runtime once for every
+ * widget of the release; and the SRI table of every chunk that follows first paint for this
+ * calculator (the loader carries only the first flight's), trusted because the engine's own
+ * integrity was checked.
  */
 export interface Engine {
   readonly calculator: CalculatorCore;
   /** The numbers only (calc-core's `compute`): what the first result shows. */
   readonly compute: (inputs: unknown) => ComputedResult;
-  readonly mountWidget: typeof mountWidget;
+  readonly mountFirst: typeof mountFirst;
+  readonly chunks: ChunkTable;
 }
 
 /**

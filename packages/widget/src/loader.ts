@@ -1,14 +1,16 @@
 // The snippet's script: one small classic script per calculator. It registers the calculator on
 // the shared `window.Wickstone`, reserves the widget's place right after its tag, asks for the
-// widget's settings while it fetches the runtime (shared by every widget of the release on the
-// page) and this calculator's engine, each checked against the SRI hash this file carries, then
-// renders. Everything else (the calculator's cautions and references, working, the lead form, the
-// run reporter, fonts) is fetched after first paint.
+// widget's settings while it fetches the runtime (the first view, shared by every widget of the
+// release on the page) and this calculator's engine, each checked against the SRI hash this file
+// carries, then renders the first view. Everything else (the full widget, the calculator's cautions
+// and references, working, the lead form, the run reporter, fonts) is fetched after first paint,
+// each checked against the hash the engine carries for it (a chain: the engine's own was checked).
 // It exports nothing, so the IIFE defines no global of its own.
 import { chunkLoader, installRegistry, type ChunkRegistry, type ChunkTable } from './chunks.js';
 import { installGlobal, type MountHandle, type MountOptions } from './global.js';
 import { isEmbedWidget } from './lib/shape.js';
 import type { Engine, TextsChunk } from './engine.js';
+import type { AppChunk } from './first/mount.js';
 import type { ExtrasModule } from './lazy.js';
 import type { TablesModule } from './lazy-tables.js';
 import {
@@ -26,11 +28,13 @@ declare const __WICKSTONE_CALC_CORE_VERSION__: string;
 declare const __WICKSTONE_ENGINE__: string;
 /** This calculator's texts chunk (cautions, references): follows first paint. */
 declare const __WICKSTONE_TEXTS__: string;
+/** The full widget (Preact, the App): follows first paint and takes over from the first view. */
+declare const __WICKSTONE_APP__: string;
 /** The extras chunk: what follows first paint. */
 declare const __WICKSTONE_EXTRAS__: string;
 /** The tables chunk (table input, CSV, chart) for a calculator with a table input, else null. */
 declare const __WICKSTONE_TABLES__: string | null;
-/** Every chunk this loader may fetch, with its SRI hash and static imports. */
+/** The first flight's chunks (runtime, engine), with their SRI hashes and static imports; the engine carries the rest. */
 declare const __WICKSTONE_CHUNKS__: ChunkTable;
 
 const calculatorId = __WICKSTONE_CALCULATOR__;
@@ -43,12 +47,16 @@ const g = installGlobal(window, version, {
   calcCoreVersion: __WICKSTONE_CALC_CORE_VERSION__,
   mount,
 }) as ReturnType<typeof installGlobal> & Partial<ChunkRegistry>;
-const load =
-  releaseBase === null ? null : chunkLoader(installRegistry(g), version, releaseBase, __WICKSTONE_CHUNKS__);
+const table: Record<string, ChunkTable[string]> = { ...__WICKSTONE_CHUNKS__ };
+const load = releaseBase === null ? null : chunkLoader(installRegistry(g), version, releaseBase, table);
 
 function engine(): Promise<Engine> {
   if (load === null) return Promise.reject(new Error('Wickstone: the release folder is unknown'));
-  return load(__WICKSTONE_ENGINE__) as Promise<Engine>;
+  return (load(__WICKSTONE_ENGINE__) as Promise<Engine>).then((e) => {
+    // The later chunks' hashes, from the engine the browser has just checked against ours.
+    for (const [file, entry] of Object.entries(e.chunks)) table[file] ??= entry;
+    return e;
+  });
 }
 
 /**
@@ -62,12 +70,13 @@ function mount(element: Element, first: MountOptions): MountHandle {
   engine().then(
     (e) => {
       if (gone) return;
-      handle = e.mountWidget(
+      handle = e.mountFirst(
         {
           calculator: e.calculator,
           compute: e.compute,
           releaseBase,
           defaultApiBase: script ? apiBaseFor(script.src, null) : null,
+          app: load && (() => load(__WICKSTONE_APP__) as Promise<AppChunk>),
           texts: load && (() => load(__WICKSTONE_TEXTS__) as Promise<TextsChunk>),
           extras: load && (() => load(__WICKSTONE_EXTRAS__) as Promise<ExtrasModule>),
           tables:

@@ -5,36 +5,19 @@ import type {
   ComputedResult,
 } from '@wickstone/calc-core';
 import type { TextsChunk } from './engine.js';
-import { render } from 'preact';
+import { hydrate, render } from 'preact';
 import type { MountHandle, MountOptions } from './global.js';
 import type { Reporter } from './lib/reporter.js';
 import { newRunId } from './lib/run-id.js';
 import { App } from './ui/App.js';
 import { deferredReporter, loadExtras, withExtras, type ExtrasModule } from './lazy.js';
 import { setTablesFetch, type TablesModule } from './lazy-tables.js';
-import { HOST_TAG } from './placement.js';
+import { hostIn } from './first/mount.js';
+import { afterFirstPaint } from './lib/paint.js';
+import { restoreFocus, saveFocus } from './lib/focus.js';
+import type { ViewState } from './lib/view.js';
 import css from './ui/styles.css?inline';
 import { adoptStyles } from './lib/sheets.js';
-
-/** Fetches the extras once the browser has painted the widget (and had a moment to spare). */
-function afterFirstPaint(then: () => void): void {
-  requestAnimationFrame(() => setTimeout(then, 0));
-}
-
-/** The host element to render into: `element` itself when it is one of ours, else one made inside it. */
-function hostIn(element: Element, calculatorId: string): { host: HTMLElement; made: boolean } {
-  if (element.localName === HOST_TAG && element instanceof HTMLElement) return { host: element, made: false };
-  const existing = [...element.children].find(
-    (c): c is HTMLElement => c.localName === HOST_TAG && c instanceof HTMLElement,
-  );
-  // Another calculator's bundle rendered here before: its runtime owns that tree, so start afresh.
-  if (existing && existing.getAttribute('data-calculator') === calculatorId)
-    return { host: existing, made: false };
-  existing?.remove();
-  const host = document.createElement(HOST_TAG);
-  element.append(host);
-  return { host, made: true };
-}
 
 export interface Bundle {
   /** The calculator's core; its texts follow (`texts`). A whole definition is taken as it is. */
@@ -53,11 +36,25 @@ export interface Bundle {
   readonly tables?: (() => Promise<TablesModule>) | null;
 }
 
+/** The first view giving way to the full widget: its state and the element it rendered into (its listeners stopped). */
+export interface Handoff {
+  readonly state: ViewState;
+  readonly container: HTMLElement;
+}
+
 /**
  * Renders a widget into a shadow root on `element` (or on a host made inside it). Rendering again
- * into the same element updates it in place, keeping what the visitor typed.
+ * into the same element updates it in place, keeping what the visitor typed. With `handoff`, it
+ * takes over from the first view: the App starts from the first view's state and adopts the first
+ * view's elements (Preact's `hydrate`: the markup is the same), so nothing moves, the focused control
+ * keeps its focus and caret, and no keystroke is lost.
  */
-export function mountWidget(bundle: Bundle, element: Element, first: MountOptions): MountHandle {
+export function mountWidget(
+  bundle: Bundle,
+  element: Element,
+  first: MountOptions,
+  handoff?: Handoff,
+): MountHandle {
   // Until the texts arrive the calculator has no cautions or references of its own to show.
   let calculator: CalculatorDefinition = { cautions: [], references: [], ...bundle.calculator };
   // The full run (working, assumptions, input hash: the notes and the run report) follows with the texts.
@@ -69,18 +66,21 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
   const shadow = host.shadowRoot ?? host.attachShadow({ mode: 'open' });
   adoptStyles(shadow, css, 'styles');
   const stopWaiting = withExtras((extras) => adoptStyles(shadow, extras.css, 'extras'));
-  let container = shadow.querySelector<HTMLElement>('div[data-wickstone="mount"]');
+  let container = handoff?.container ?? shadow.querySelector<HTMLElement>('div[data-wickstone="mount"]');
   if (container === null) {
     container = document.createElement('div');
     container.setAttribute('data-wickstone', 'mount');
     shadow.append(container);
   }
   const target = container;
+  target.setAttribute('data-view', 'full');
 
   let reporter: Reporter | null = null;
   let reporterKey = '';
   let latest = first;
   let gone = false;
+  // Taking over from the first view: the App adopts its elements (same markup) rather than replacing them.
+  let adopt = handoff !== undefined;
   const draw = (options: MountOptions): void => {
     latest = options;
     const { widget } = options;
@@ -112,7 +112,8 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
       withExtras((extras) => extras.registerManrope(document.fonts, releaseBase, host, shadow));
     host.setAttribute('data-mode', preview ? 'preview' : 'live');
     host.setAttribute('data-state', 'ready');
-    render(
+    const focus = adopt ? saveFocus(shadow) : null;
+    (adopt ? hydrate : render)(
       <App
         widget={widget}
         calculator={calculator}
@@ -120,9 +121,15 @@ export function mountWidget(bundle: Bundle, element: Element, first: MountOption
         run={run}
         apiBase={apiBase}
         reporter={reporter}
+        initial={handoff?.state}
       />,
       target,
     );
+    if (adopt) {
+      // The focused control is the same element, caret and all; were one made afresh, focus follows it.
+      restoreFocus(shadow, focus);
+      adopt = false;
+    }
   };
   draw(first);
   // The calculator's texts, the working, the lead form, the reporter and the font follow first

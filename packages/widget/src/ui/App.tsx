@@ -13,7 +13,6 @@ import {
   applicable,
   collectInputs,
   initialForm,
-  issueMessage,
   offeredOptions,
   reformat,
   settleChoices,
@@ -23,11 +22,22 @@ import {
 import { lookVariables } from '../lib/look.js';
 import type { Reporter } from '../lib/reporter.js';
 import { resolveInputSettings, type ResolvedInput } from '../lib/settings.js';
-import { headline } from '@wickstone/calc-core/answer';
-import { controlId, Field } from './Field.js';
+import {
+  answerAnnouncement,
+  controlId,
+  FAILED_ISSUE,
+  issuesAnnouncement,
+  placeIssues,
+  safeLogoUrl,
+  UNIT_OPTIONS,
+  warnedFields,
+  type ShownOutcome,
+  type ViewState,
+} from '../lib/view.js';
+import { Field } from './Field.js';
 import { useExtras } from '../lazy.js';
 import type { LeadTarget } from './LeadForm.js';
-import { Result, warningId } from './Result.js';
+import { Result } from './Result.js';
 import { ChartSlot, TableSlot } from './TableSlot.js';
 
 export interface AppProps {
@@ -41,29 +51,14 @@ export interface AppProps {
   readonly apiBase: string | null;
   /** null in preview: runs are not reported and leads not sent. */
   readonly reporter: Reporter | null;
+  /** The first view's state when the App takes over from it (typed texts, units, problems, answer). */
+  readonly initial?: ViewState | undefined;
 }
 
-interface Outcome {
-  /** What the visitor sees at once: compute's numbers. */
-  readonly result: ComputedResult;
-  /** The inputs and units it was worked out with, for the full run. */
-  readonly raw: Record<string, unknown>;
-  readonly system: UnitSystemId;
+interface Outcome extends ShownOutcome {
   /** The same run with its working and input hash, made after the answer is painted; null until then. */
   readonly full: CalculationResult | null;
   readonly target: LeadTarget | null;
-}
-
-/** A logo URL the widget will show: http(s), or a blob/data image the dashboard's preview made. */
-export function safeLogoUrl(url: string | null, base: string): string | null {
-  if (url === null || url === '') return null;
-  try {
-    const u = new URL(url, base);
-    if (u.protocol === 'https:' || u.protocol === 'http:' || u.protocol === 'blob:') return u.href;
-    return u.protocol === 'data:' && /^data:image\/(png|jpeg|webp);/i.test(url) ? url : null;
-  } catch {
-    return null;
-  }
 }
 
 /**
@@ -79,16 +74,12 @@ function UnitSwitch({
   system: UnitSystemId;
   onChange: (s: UnitSystemId) => void;
 }) {
-  const options: readonly [UnitSystemId, string, string][] = [
-    ['si', 'metric', 'Metric (SI) units'],
-    ['us', 'US', 'US customary units'],
-  ];
   return (
     <div class="units" role="radiogroup" aria-label={`${name}: units`} data-wickstone="unit-switch">
       <span class="units-lead" aria-hidden="true">
         Figures in
       </span>
-      {options.map(([value, text, title]) => (
+      {UNIT_OPTIONS.map(([value, text, title]) => (
         <label key={value} title={title}>
           <input
             type="radio"
@@ -107,19 +98,23 @@ function UnitSwitch({
 }
 
 /** The whole widget: header, inputs, result and lead form for one calculator. */
-export function App({ widget, calculator, compute, run, apiBase, reporter }: AppProps) {
+export function App({ widget, calculator, compute, run, apiBase, reporter, initial }: AppProps) {
   const { settings } = widget;
   const inputs = useMemo(
     () => resolveInputSettings(calculator, settings.inputs),
     [calculator, settings.inputs],
   );
-  const [system, setSystem] = useState<UnitSystemId>(settings.units.system);
-  const [form, setForm] = useState<FormState>(() => initialForm(inputs, settings.units.system));
-  const [issues, setIssues] = useState<readonly FieldIssue[]>([]);
-  const [outcome, setOutcome] = useState<Outcome | null>(null);
-  const [stale, setStale] = useState(false);
+  const [system, setSystem] = useState<UnitSystemId>(initial?.system ?? settings.units.system);
+  const [form, setForm] = useState<FormState>(
+    () => initial?.form ?? initialForm(inputs, settings.units.system),
+  );
+  const [issues, setIssues] = useState<readonly FieldIssue[]>(initial?.issues ?? []);
+  const [outcome, setOutcome] = useState<Outcome | null>(() =>
+    initial?.outcome ? { ...initial.outcome, full: null, target: null } : null,
+  );
+  const [stale, setStale] = useState(initial?.stale ?? false);
   const [report, setReport] = useState<'pending' | 'stored' | 'failed' | null>(null);
-  const [announcement, setAnnouncement] = useState('');
+  const [announcement, setAnnouncement] = useState(initial?.announcement ?? '');
   const rootRef = useRef<HTMLDivElement>(null);
   // The working and the lead form arrive after first paint (the extras chunk).
   const extras = useExtras();
@@ -140,34 +135,8 @@ export function App({ widget, calculator, compute, run, apiBase, reporter }: App
   const shownSystem: UnitSystemId = settings.units.visitorMaySwitch ? system : settings.units.system;
   const visible = applicable(inputs, form).filter((i) => i.mode !== 'hidden');
   const byId = new Map(inputs.map((i) => [i.def.id, i] as const));
-  const fieldErrors = new Map<string, string>();
-  const otherErrors: string[] = [];
-  for (const issue of issues) {
-    // A cell of a table input (`readings.2.mass`): the table names it beside the cell itself.
-    if (issue.field.includes('.') && byId.get(issue.field.split('.')[0] ?? '')?.def.kind === 'table')
-      continue;
-    const input = byId.get(issue.field);
-    if (input && input.mode !== 'hidden' && visible.includes(input)) {
-      const note = input.mode === 'locked' ? ' (a value set by the firm)' : '';
-      if (!fieldErrors.has(issue.field))
-        fieldErrors.set(issue.field, issueMessage(issue, input, shownSystem) + note);
-    } else {
-      // Hidden inputs and whole-calculation problems have no field to sit beside.
-      const label = input ? `${input.def.label}: ` : '';
-      otherErrors.push(
-        label +
-          issueMessage(issue, input, shownSystem) +
-          (input?.mode === 'hidden' ? ' (a value set by the firm)' : ''),
-      );
-    }
-  }
-
-  const warnedFields = new Map<string, string[]>();
-  if (outcome && !stale) {
-    for (const w of outcome.result.warnings) {
-      for (const f of w.fields) warnedFields.set(f, [...(warnedFields.get(f) ?? []), warningId(w.code)]);
-    }
-  }
+  const { fieldErrors, otherErrors } = placeIssues(issues, inputs, visible, shownSystem);
+  const warned = warnedFields(outcome && !stale ? outcome.result : null);
 
   const edit = (next: FormState): void => {
     setForm(next);
@@ -220,31 +189,16 @@ export function App({ widget, calculator, compute, run, apiBase, reporter }: App
     } catch (err) {
       // A calc-core bug must not take the host page's script down with it: say so in the form.
       if (!(err instanceof CalcInputError)) console.error('Wickstone: calculation failed', err);
-      const found: readonly FieldIssue[] =
-        err instanceof CalcInputError
-          ? err.issues
-          : [
-              {
-                field: 'inputs',
-                code: 'FAILED',
-                message: 'The calculation could not be completed with these inputs.',
-              },
-            ];
+      const found: readonly FieldIssue[] = err instanceof CalcInputError ? err.issues : [FAILED_ISSUE];
       setIssues(found);
-      const n = found.length;
-      setAnnouncement(
-        `${n === 1 ? 'One input needs' : `${n} inputs need`} attention: ${found.map((i) => issueMessage(i, byId.get(i.field), shownSystem)).join('; ')}`,
-      );
+      setAnnouncement(issuesAnnouncement(found, inputs, shownSystem));
       const first = found.find((i) => byId.get(i.field)?.mode === 'editable');
       if (first) rootRef.current?.querySelector<HTMLElement>(`#${controlId(first.field)}`)?.focus();
       return;
     }
     setIssues([]);
     setStale(false);
-    const w = result.warnings;
-    setAnnouncement(
-      `${headline(calculator, result, shownSystem).text}${w.length > 0 ? ` ${w.length === 1 ? 'One warning' : `${w.length} warnings`} below.` : ''}`,
-    );
+    setAnnouncement(answerAnnouncement(calculator, result, shownSystem));
     setReport(null);
     setOutcome({ result, raw, system: shownSystem, full: null, target: null });
   };
@@ -301,7 +255,7 @@ export function App({ widget, calculator, compute, run, apiBase, reporter }: App
                 system={shownSystem}
                 error={fieldErrors.get(input.def.id)}
                 options={offeredOptions(input, inputs, form)}
-                warningIds={warnedFields.get(input.def.id) ?? []}
+                warningIds={warned.get(input.def.id) ?? []}
                 onText={onText}
                 onChoice={onChoice}
               />

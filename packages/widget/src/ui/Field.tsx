@@ -2,6 +2,7 @@ import type { ChoiceInput, ChoiceOption, QuantityInput, UnitSystemId } from '@wi
 import type { FieldState } from '../lib/form.js';
 import type { ResolvedInput } from '../lib/settings.js';
 import { displayUnitOf, unitSymbol } from '../lib/units.js';
+import { controlId } from '../lib/view.js';
 
 export interface FieldProps {
   readonly input: ResolvedInput;
@@ -16,8 +17,7 @@ export interface FieldProps {
   readonly onChoice: (input: ResolvedInput, value: string) => void;
 }
 
-/** The DOM id of an input's control (unique within the widget's shadow root). */
-export const controlId = (id: string): string => `wk-in-${id}`;
+export { controlId } from '../lib/view.js';
 
 /** One calculator input: label with its unit, the control, help, lock note and error tied to it. */
 export function Field({ input, state, system, error, options, warningIds, onText, onChoice }: FieldProps) {

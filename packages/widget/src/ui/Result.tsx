@@ -9,9 +9,9 @@ import { formatResult, headline, isSecondaryOutput } from '@wickstone/calc-core/
 import { outputHelp } from '@wickstone/calc-core/display';
 import { outputUnitFor, toDisplay, unitGap, unitSymbol, withUnit } from '../lib/units.js';
 import type { ExtrasModule } from '../lazy.js';
+import { DISCLAIMER, isHazard, resultCautions, warningId, withheldOutputs } from '../lib/view.js';
 
-export const DISCLAIMER =
-  'Results are estimates. They do not replace a site investigation or the judgement of a licensed professional working to local codes.';
+export { DISCLAIMER, isHazard, resultCautions, warningId } from '../lib/view.js';
 
 /**
  * Cautions the standing disclaimer already says (a calculator's "results are estimates"): left out
@@ -26,9 +26,6 @@ export function noteCautions(
 ): CalculationResult['cautions'] {
   return resultCautions(calculator, result).filter((c) => !isHazard(c) && !SAID_BY_DISCLAIMER.has(c.code));
 }
-
-/** A warning's DOM id, so the fields it names can point at it. */
-export const warningId = (code: string): string => `wk-warn-${code}`;
 
 interface ResultProps {
   readonly calculator: CalculatorDefinition;
@@ -67,24 +64,6 @@ function Figure({ value, unit }: { value: number; unit: UnitId }) {
     </span>
   );
 }
-
-/**
- * A result's cautions: its own (the chosen liquid's hazard first), then the calculator's from its
- * texts, which follow first paint (the widget's engine computes without them).
- */
-export function resultCautions(
-  calculator: Pick<CalculatorDefinition, 'cautions'>,
-  result: Pick<CalculationResult, 'cautions'>,
-): CalculationResult['cautions'] {
-  return [
-    ...result.cautions,
-    ...calculator.cautions.filter((c) => !result.cautions.some((r) => r.code === c.code)),
-  ];
-}
-
-/** A caution about the liquid itself, shown beside the figures rather than in the notes. */
-export const isHazard = (c: { code: string }): boolean =>
-  c.code.startsWith('HAZARD_') || c.code === 'OTHER_LIQUID_HAZARD';
 
 /** The firm's own cautions: one per paragraph or line, blank lines ignored. */
 export function splitCautions(text: string): string[] {
@@ -128,11 +107,6 @@ export function Readout({
   );
 }
 
-/** The warning that withholds an output, if any: the output is then shown as not defined, with its reason. */
-function withholdingWarning(result: ComputedResult, outputId: string) {
-  return result.warnings.find((w) => (w.withholds ?? []).includes(outputId));
-}
-
 /** The result of the last calculation: figures, band, warnings, working, cautions and the standing disclaimer. */
 export function Result({
   calculator,
@@ -151,10 +125,7 @@ export function Result({
   const figures = calculator.outputs.filter((o) => typeof result.outputs[o.id] === 'number');
   const main = figures.filter((o) => !isSecondaryOutput(o));
   // Outputs the method cannot give for these inputs: named, with the reason, never a figure.
-  const withheld = calculator.outputs.flatMap((o) => {
-    const w = result.outputs[o.id] === null ? withholdingWarning(result, o.id) : undefined;
-    return w ? [{ output: o, warning: w }] : [];
-  });
+  const withheld = withheldOutputs(calculator, result);
   const inputLabel = (id: string): string => calculator.inputs.find((i) => i.id === id)?.label ?? id;
   const hazards = resultCautions(calculator, result).filter(isHazard);
   return (
