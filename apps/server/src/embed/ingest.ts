@@ -187,11 +187,47 @@ export function checkWidget<W extends Pick<WidgetFacts, 'status' | 'allowedOrigi
   return w;
 }
 
+/**
+ * The calculations an engine made lately, by calculator and inputs (`JSON.stringify` of the inputs
+ * as sent: the same inputs in another key order are only a second entry). An engine is a pure
+ * function of those, so a report whose inputs another report had (a widget's defaults, a firm's
+ * locked inputs, a visitor trying the same figures again) reuses its result instead of running the
+ * engine again; a release's engine without `compute` builds the whole working on every call.
+ */
+export class RecentCalculations {
+  private readonly byEngine = new WeakMap<RunEngine, Map<string, ServerCalculation>>();
+  constructor(private readonly keep = 2_000) {}
+
+  of(
+    engine: RunEngine,
+    calculatorId: string,
+    inputs: unknown,
+    make: () => ServerCalculation,
+  ): ServerCalculation {
+    let recent = this.byEngine.get(engine);
+    if (!recent) this.byEngine.set(engine, (recent = new Map()));
+    const key = `${calculatorId}\n${JSON.stringify(inputs)}`;
+    const hit = recent.get(key);
+    if (hit) {
+      // Least recently used first: a hit moves to the end.
+      recent.delete(key);
+      recent.set(key, hit);
+      return hit;
+    }
+    const made = make();
+    if (recent.size >= this.keep) recent.delete(recent.keys().next().value as string);
+    // Shared by every report with these inputs: nobody may change it.
+    recent.set(key, Object.freeze(made));
+    return made;
+  }
+}
+
 /** The server's own calculation of a report; a 400 naming the input when it cannot be made. */
 export function recompute(
   w: Pick<WidgetFacts, 'id' | 'calculatorId' | 'settings'>,
   body: EmbedRunBody,
   engine: RunEngine = currentEngine,
+  recent?: RecentCalculations,
 ): ServerCalculation {
   const calc = engine.getCalculator(w.calculatorId);
   if (!calc) throw new AppError('internal', `widget ${w.id} names a calculator this server lacks`);
@@ -202,13 +238,16 @@ export function recompute(
     if (sent !== undefined && sent !== s.default)
       throw field(`body.inputs.${id}`, 'This input is fixed by the widget');
   }
-  try {
+  const make = (): ServerCalculation => {
     // The working is never needed here (runs do not store it): the engine's numbers alone where it
     // can give them, with the input hash made natively.
-    if (!engine.compute) return engine.calculate(w.calculatorId, body.inputs);
+    if (!engine.compute) return storedCalculation(engine.calculate(w.calculatorId, body.inputs));
     const r = engine.compute(w.calculatorId, body.inputs);
     const { calculator, outputs, warnings, band, version } = r;
     return { calculator, outputs, warnings, band, version, inputHash: inputHashOf(calculator, r.inputs) };
+  };
+  try {
+    return recent ? recent.of(engine, w.calculatorId, body.inputs, make) : make();
   } catch (e) {
     if (!isCalcInputError(e)) throw e;
     const fields = e.issues.map((i) => ({ field: `body.inputs.${i.field}`, message: i.message }));
@@ -291,6 +330,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
   let scheduled = false;
   /** Live facts of widgets seen lately, checked again inside every batch's transaction. */
   const widgetCache = new Map<string, CachedWidget>();
+  const recent = new RecentCalculations();
 
   /**
    * Turn a batch's reports into rows: the widget checks and recomputation per report (a refusal
@@ -315,7 +355,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
         const release = body.release ?? w.release;
         const engine = options.engineOf ? options.engineOf(release) : currentEngine;
         if (!engine) throw field('body.release', `No widget release ${release} on this server`);
-        const server = recompute(w, body, engine);
+        const server = recompute(w, body, engine, recent);
         const mismatch = compareResults(body.result, server);
         const p: Prepared = {
           item,
@@ -332,7 +372,7 @@ export function createRunIngest(sequelize: Sequelize, options: IngestOptions = {
             inputs: body.inputs,
             clientResult: body.result,
             // The figures and warnings, not the working: that is made again where it is shown.
-            serverResult: storedCalculation(server) as unknown as Record<string, unknown>,
+            serverResult: server as unknown as Record<string, unknown>,
             warningCodes: server.warnings.map((x) => x.code),
             hasWarning: server.warnings.length > 0,
             agreed: mismatch === null,

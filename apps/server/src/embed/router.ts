@@ -168,7 +168,12 @@ export function embedRouter(
     async (req: Request, res: Response) => {
       const body = parseRequest(embedRunBodySchema, req.body, 'body');
       const result = await service.recordRun(body, req.get('origin'));
-      res.status(result.duplicate ? 200 : 201).json(result);
+      // Written as it is: an acknowledgement needs none of `res.json`'s ETag or charset work.
+      const text = JSON.stringify(result);
+      res.statusCode = result.duplicate ? 200 : 201;
+      res.setHeader('Content-Type', 'application/json; charset=utf-8');
+      res.setHeader('Content-Length', Buffer.byteLength(text));
+      res.end(text);
     },
     countRefusal,
   ];

@@ -32,7 +32,18 @@ const RUN_TUPLE = `(${RUN_COLUMNS.split(',')
 /** Rows per INSERT: a few hundred kilobytes at most, well under max_allowed_packet. */
 const INSERT_ROWS = 500;
 
-const json = (v: unknown): string | null => (v === null || v === undefined ? null : JSON.stringify(v));
+/**
+ * A frozen object's JSON, made once: the ingest's recomputations are shared (frozen) by every
+ * report with the same inputs, and so is the text of their `server_result`.
+ */
+const frozenJson = new WeakMap<object, string>();
+function json(v: unknown): string | null {
+  if (v === null || v === undefined) return null;
+  if (typeof v !== 'object' || !Object.isFrozen(v)) return JSON.stringify(v);
+  let text = frozenJson.get(v);
+  if (text === undefined) frozenJson.set(v, (text = JSON.stringify(v)));
+  return text;
+}
 
 function runValues(r: RunRow, over: boolean): unknown[] {
   return [

@@ -47,8 +47,14 @@ function group(
 ): { daily: DailyDelta[]; warnings: WarningDelta[] } {
   const daily = new Map<string, DailyDelta>();
   const warnings = new Map<string, WarningDelta>();
+  // A batch's runs mostly share their time (the ingest gives a batch one): its day is made once.
+  let lastTime = NaN;
+  let day = '';
   for (const r of runs) {
-    const day = utcDay(r.createdAt);
+    if (r.createdAt.getTime() !== lastTime) {
+      lastTime = r.createdAt.getTime();
+      day = utcDay(r.createdAt);
+    }
     const dk: DailyDelta['key'] = [r.organizationId, day, r.widgetId, r.calculatorId, r.origin];
     const ds = JSON.stringify(dk);
     let d = daily.get(ds);
