@@ -1,15 +1,11 @@
 import { CalcInputError } from '../errors.js';
-import { contactAnglePresets, getContactAnglePreset } from '../properties/contactAngles.js';
-import { getLiquid, liquids } from '../properties/liquids.js';
 import {
-  IAPWS_R1_76,
-  IAPWS_SR6_08,
-  KELL_1975,
-  TANAKA_2001,
-  waterDensity,
-  waterSurfaceTension,
-  waterViscosity,
-} from '../properties/water.js';
+  type ContactAnglePreset,
+  contactAnglePresets,
+  getContactAnglePreset,
+} from '../properties/contactAngles.js';
+import { type Liquid, getLiquid, liquids } from '../properties/liquids.js';
+import { type WaterDensity, waterDensity, waterSurfaceTension, waterViscosity } from '../properties/water.js';
 import { withUnit } from '../display.js';
 import { formatValue } from '../format.js';
 import { STANDARD_GRAVITY, type UnitId } from '../units.js';
@@ -40,9 +36,6 @@ import type {
 
 /** Working and warnings print numbers with the one formatter people see everywhere (`format.ts`). */
 export { formatValue as fmt } from '../format.js';
-
-/** Superscript digits, for the powers of t in a printed polynomial (Kell 1975). */
-const SUPERSCRIPT: Readonly<Record<string, string>> = { '2': '²', '3': '³', '4': '⁴', '5': '⁵' };
 
 /** A number with its unit symbol, spaced by the one rule (`display.ts`): `0.07274 N/m`, `20 °C`, `0°`. */
 export function q(value: number, unit: UnitId, digits = 4): string {
@@ -182,8 +175,56 @@ export interface ResolvedLiquid {
   readonly assumption: string;
 }
 
-const IAPWS_ST = 'IAPWS R1-76(2014)';
-const SR6 = 'IAPWS SR6-08 (2011)';
+/**
+ * What a resolved liquid's working and assumption are written from: the numbers `compute` already
+ * has (a property not asked for is null), and for a table liquid its row.
+ */
+export type LiquidFacts =
+  | {
+      readonly kind: 'water';
+      readonly t: number;
+      readonly sigma: number;
+      readonly density: WaterDensity | null;
+      readonly viscosity: number | null;
+    }
+  | {
+      readonly kind: typeof CUSTOM;
+      readonly sigma: number;
+      readonly density: number | null;
+      readonly viscosity: number | null;
+    }
+  | { readonly kind: 'table'; readonly row: Liquid; readonly density: boolean; readonly viscosity: boolean };
+
+/** What a resolved contact angle's working and assumption are written from. */
+export type AngleFacts =
+  | { readonly kind: typeof CUSTOM; readonly angleDeg: number }
+  | { readonly kind: 'preset'; readonly preset: ContactAnglePreset };
+
+/** The text of the shared inputs' working and assumptions (`shared-working.ts`). */
+export interface SharedWriters {
+  liquidWorking(facts: LiquidFacts): WorkingStep[];
+  liquidAssumption(facts: LiquidFacts): string;
+  angleWorking(facts: AngleFacts): WorkingStep[];
+  angleAssumption(facts: AngleFacts): string;
+}
+
+let boundWriters: SharedWriters | null = null;
+
+/**
+ * Gives the shared inputs their working's writers. `runCalculation` (run.ts) binds them before it
+ * solves; `compute` never reads a working, so the first flight of a widget carries no such text.
+ */
+export function bindWriters(w: SharedWriters): void {
+  boundWriters = w;
+}
+
+function writers(): SharedWriters {
+  if (boundWriters === null)
+    throw new Error(
+      'the working of a liquid or contact angle is read before its writers are bound: run the calculator with runCalculation (calculators/run.ts)',
+    );
+  return boundWriters;
+}
 
 function waterProperty<T>(compute: () => T): T {
   try {
@@ -230,139 +271,56 @@ export function resolveLiquid(inputs: InputValues, needs: LiquidNeeds): Resolved
 
 function resolveLiquidAfresh(inputs: InputValues, needs: LiquidNeeds): ResolvedLiquid {
   const id = choice(inputs, 'liquid');
-  // Each working line is made only when the working is read (`calculate`), never by `compute`.
-  const steps: (() => WorkingStep)[] = [];
+  // The working lines and the assumption are written only when read (`calculate`), never by
+  // `compute`, and by `shared-working.ts`, which the first flight does not carry (`writers`).
   if (id === 'water') {
     const t = num(inputs, 'temperatureC');
-    const T = t + 273.15;
     const sigma = waterProperty(() => waterSurfaceTension(t));
-    const { B, b, mu: expo, Tc } = IAPWS_R1_76;
-    const tau = 1 - T / Tc;
-    steps.push(() => ({
-      label: `Surface tension of water at ${q(t, 'degC')}`,
-      formula: `σ = B·τ^μ·(1 + b·τ), τ = 1 − T / Tc; B = ${coef(B * 1000)} mN/m, b = ${coef(b)}, μ = ${coef(expo)}, Tc = ${coef(Tc)} K`,
-      substituted: `T = ${q(T, 'K', 6)}, τ = 1 − ${formatValue(T, 6)} / ${coef(Tc)} = ${formatValue(tau, 6)}; σ = ${coef(B)} N/m × ${formatValue(tau, 6)}^${coef(expo)} × (1 + (${coef(b)}) × ${formatValue(tau, 6)})`,
-      value: sigma,
-      unit: 'N/m',
-      source: IAPWS_ST,
-    }));
-    let rho = 0;
-    if (needs.density === true) {
-      const d = waterProperty(() => waterDensity(t));
-      rho = d.value;
-      const { a1, a2, a3, a4, a5 } = TANAKA_2001;
-      const kellTerms = (): string[] =>
-        KELL_1975.a.map((a, n) =>
-          n === 0 ? coef(a) : `${coef(a)}·t${n === 1 ? '' : SUPERSCRIPT[String(n)]}`,
-        );
-      steps.push(() => ({
-        label: `Density of water at ${q(t, 'degC')}`,
-        formula:
-          d.formulation === 'tanaka-2001'
-            ? `ρ = a₅·[1 − (t + a₁)²·(t + a₂) / (a₃·(t + a₄))]; a₁ = ${coef(a1)} °C, a₂ = ${coef(a2)} °C, a₃ = ${coef(a3)} °C², a₄ = ${coef(a4)} °C, a₅ = ${coef(a5)} kg/m³`
-            : `ρ = (${kellTerms().join(' + ').replaceAll('+ −', '− ')}) / (1 + ${coef(KELL_1975.b)}·t), kg/m³, t in °C`,
-        substituted:
-          d.formulation === 'tanaka-2001'
-            ? `t = ${q(t, 'degC')}: ${coef(a5)} × [1 − (${formatValue(t + a1, 6)})² × ${formatValue(t + a2, 6)} / (${coef(a3)} × ${formatValue(t + a4, 6)})]`
-            : `t = ${q(t, 'degC')}`,
-        value: rho,
-        unit: 'kg/m3',
-        source: d.formulation === 'tanaka-2001' ? 'Tanaka et al. 2001' : 'Kell 1975',
-      }));
-    }
-    let mu = 0;
-    if (needs.viscosity === true) {
-      mu = waterProperty(() => waterViscosity(t));
-      const { a, b: bs, Tstar } = IAPWS_SR6_08;
-      steps.push(() => ({
-        label: `Viscosity of water at ${q(t, 'degC')}`,
-        formula: `μ = Σ aᵢ·(T / ${coef(Tstar)} K)^bᵢ μPa·s; a = ${a.map(coef).join(', ')}; b = ${bs.map(coef).join(', ')}`,
-        substituted: `T / ${coef(Tstar)} K = ${formatValue(T / Tstar, 6)}`,
-        value: mu,
-        unit: 'Pa*s',
-        source: SR6,
-      }));
-    }
+    const density = needs.density === true ? waterProperty(() => waterDensity(t)) : null;
+    const viscosity = needs.viscosity === true ? waterProperty(() => waterViscosity(t)) : null;
+    const facts: LiquidFacts = { kind: 'water', t, sigma, density, viscosity };
     return {
       id,
       name: 'water',
       surfaceTension: sigma,
-      density: rho,
-      viscosity: mu,
+      density: density?.value ?? 0,
+      viscosity: viscosity ?? 0,
       get working() {
-        return steps.map((f) => f());
+        return writers().liquidWorking(facts);
       },
       get assumption() {
-        return `Pure, air-free water at ${q(t, 'degC')} and atmospheric pressure, properties from the IAPWS, Tanaka and Kell correlations.`;
+        return writers().liquidAssumption(facts);
       },
     };
   }
   if (id === CUSTOM) {
     const sigma = num(inputs, 'surfaceTension');
-    steps.push(() => ({
-      label: 'Surface tension (entered)',
-      formula: 'σ',
-      substituted: q(sigma, 'N/m'),
-      value: sigma,
-      unit: 'N/m',
-    }));
-    const rho = needs.density === true ? num(inputs, 'density') : 0;
-    if (needs.density === true) {
-      steps.push(() => ({
-        label: 'Density (entered)',
-        formula: 'ρ',
-        substituted: q(rho, 'kg/m3'),
-        value: rho,
-        unit: 'kg/m3',
-      }));
-    }
-    const mu = needs.viscosity === true ? num(inputs, 'viscosity') : 0;
-    if (needs.viscosity === true) {
-      steps.push(() => ({
-        label: 'Viscosity (entered)',
-        formula: 'μ',
-        substituted: q(mu, 'Pa*s'),
-        value: mu,
-        unit: 'Pa*s',
-      }));
-    }
+    const density = needs.density === true ? num(inputs, 'density') : null;
+    const viscosity = needs.viscosity === true ? num(inputs, 'viscosity') : null;
+    const facts: LiquidFacts = { kind: CUSTOM, sigma, density, viscosity };
     return {
       id,
       name: 'the liquid',
       surfaceTension: sigma,
-      density: rho,
-      viscosity: mu,
+      density: density ?? 0,
+      viscosity: viscosity ?? 0,
       get working() {
-        return steps.map((f) => f());
+        return writers().liquidWorking(facts);
       },
       hazard: OTHER_LIQUID_CAUTION,
-      assumption: 'The liquid properties as entered, taken as those of the liquid at the temperature of use.',
+      get assumption() {
+        return writers().liquidAssumption(facts);
+      },
     };
   }
   const row = getLiquid(id);
   if (row === undefined) throw new Error(`liquid ${id} is offered but not tabulated`);
-  const tableStep = (
-    label: string,
-    symbol: string,
-    value: number,
-    unit: UnitId,
-    source: string,
-  ): WorkingStep => ({
-    label: `${label} of ${row.name.toLowerCase()} at ${q(row.temperatureC, 'degC')}`,
-    formula: `${symbol} (table value)`,
-    substituted: q(value, unit),
-    value,
-    unit,
-    source,
-  });
-  steps.push(() =>
-    tableStep('Surface tension', 'σ', row.surfaceTension.value, 'N/m', row.surfaceTension.source),
-  );
-  if (needs.density === true)
-    steps.push(() => tableStep('Density', 'ρ', row.density.value, 'kg/m3', row.density.source));
-  if (needs.viscosity === true) {
-    steps.push(() => tableStep('Viscosity', 'μ', row.viscosity.value, 'Pa*s', row.viscosity.source));
-  }
+  const facts: LiquidFacts = {
+    kind: 'table',
+    row,
+    density: needs.density === true,
+    viscosity: needs.viscosity === true,
+  };
   return {
     id,
     name: row.name.toLowerCase(),
@@ -370,7 +328,7 @@ function resolveLiquidAfresh(inputs: InputValues, needs: LiquidNeeds): ResolvedL
     density: needs.density === true ? row.density.value : 0,
     viscosity: needs.viscosity === true ? row.viscosity.value : 0,
     get working() {
-      return steps.map((f) => f());
+      return writers().liquidWorking(facts);
     },
     ...(row.hazard !== undefined
       ? {
@@ -382,7 +340,7 @@ function resolveLiquidAfresh(inputs: InputValues, needs: LiquidNeeds): ResolvedL
         }
       : {}),
     get assumption() {
-      return `${row.name} at ${q(row.temperatureC, 'degC')}, pure, with the table's values; at another temperature they differ.`;
+      return writers().liquidAssumption(facts);
     },
   };
 }
@@ -448,17 +406,15 @@ export function resolveContactAngle(inputs: InputValues, liquidId: string): Reso
 function resolveContactAngleAfresh(inputs: InputValues, liquidId: string): ResolvedAngle {
   const presetId = choice(inputs, 'contactAnglePreset');
   if (presetId === CUSTOM) {
-    const a = num(inputs, 'contactAngleDeg');
+    const facts: AngleFacts = { kind: CUSTOM, angleDeg: num(inputs, 'contactAngleDeg') };
     return {
-      angleDeg: a,
+      angleDeg: facts.angleDeg,
       basis: [],
       get assumption() {
-        return `A contact angle of ${q(a, 'deg')} as entered, taken as the static angle of the liquid on this surface.`;
+        return writers().angleAssumption(facts);
       },
-      get working(): WorkingStep[] {
-        return [
-          { label: 'Contact angle (entered)', formula: 'θ', substituted: q(a, 'deg'), value: a, unit: 'deg' },
-        ];
+      get working() {
+        return writers().angleWorking(facts);
       },
     };
   }
@@ -472,10 +428,11 @@ function resolveContactAngleAfresh(inputs: InputValues, liquidId: string): Resol
     });
   }
   const spread = preset.spreadDeg;
+  const facts: AngleFacts = { kind: 'preset', preset };
   return {
     angleDeg: preset.angleDeg,
     get assumption() {
-      return `A contact angle of ${q(preset.angleDeg, 'deg')} from the preset "${preset.label}" (${preset.source}, ${preset.basis})${spread === undefined ? '' : `; the likely range spans ${spread.low}–${spread.high}°`}.`;
+      return writers().angleAssumption(facts);
     },
     basis:
       spread === undefined
@@ -488,20 +445,8 @@ function resolveContactAngleAfresh(inputs: InputValues, liquidId: string): Resol
               source: `${preset.label}: ${preset.source} (${preset.basis})`,
             },
           ],
-    get working(): WorkingStep[] {
-      return [
-        {
-          label: `Contact angle, ${preset.label.toLowerCase()}`,
-          formula: 'θ (preset)',
-          substituted:
-            spread === undefined
-              ? q(preset.angleDeg, 'deg')
-              : `${q(preset.angleDeg, 'deg')} (range ${spread.low}–${spread.high}°)`,
-          value: preset.angleDeg,
-          unit: 'deg',
-          source: `${preset.source} (${preset.basis})`,
-        },
-      ];
+    get working() {
+      return writers().angleWorking(facts);
     },
   };
 }
