@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { waterSurfaceTension } from '../properties/water.js';
-import { bindWriters, resolveContactAngle, resolveLiquid } from './shared.js';
+import { bindWriters, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
 import { sharedWriters } from './shared-working.js';
 
 // These tests read the working and assumptions of what was resolved, as `runCalculation` does: with

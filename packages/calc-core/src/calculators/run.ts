@@ -1,7 +1,7 @@
 import { canonicalJson, sha256Hex } from '../hash.js';
 import { VERSION } from '../version.js';
 import { cautionsOf, resolveInputs, solveChecked } from './engine.js';
-import { bindWriters } from './shared.js';
+import { bindWriters } from './shared-liquid.js';
 import { sharedWriters } from './shared-working.js';
 import type { CalculationResult, CalculatorCore, CalculatorTexts, InputValues } from './types.js';
 

@@ -1,15 +1,35 @@
 import { describe, expect, it } from 'vitest';
+import { CalcInputError } from '../errors.js';
+import { calculators, compute } from '../registry.js';
 import { compute as tubeRise } from './tube-rise.js';
 import { compute as wettingForce } from './wetting-force.js';
 import { runCalculation } from './run.js';
 import { calculator as tubeRiseCore } from './tube-rise.js';
-import { resolveContactAngle, resolveLiquid } from './shared.js';
+import { resolveContactAngle, resolveLiquid } from './shared-liquid.js';
 
 // The shared inputs' working is written by shared-working.ts, bound by runCalculation: a bundle that
 // only computes (a widget's first flight) carries none of it. The tests run in this order in one
 // module, so the first ones see the writers unbound.
 
 describe('the shared inputs’ working is written only once runCalculation has bound its writers', () => {
+  it('compute of every calculator, every option of every choice, reads no working', () => {
+    let computed = 0;
+    for (const def of calculators)
+      for (const input of def.inputs) {
+        if (input.kind !== 'choice') continue;
+        for (const option of input.options) {
+          try {
+            expect(compute(def.id, { [input.id]: option.value }).calculator).toBe(def.id);
+            computed++;
+          } catch (err) {
+            // A preset of another liquid is the visitor's mistake, not a read of the working.
+            if (!(err instanceof CalcInputError)) throw err;
+          }
+        }
+      }
+    expect(computed).toBeGreaterThan(40);
+  });
+
   it('compute gives its numbers without the writers', () => {
     const water = tubeRise({ diameter: 1e-3, liquid: 'water', temperatureC: 25 });
     expect(water.outputs.rise).toBeGreaterThan(0.029);

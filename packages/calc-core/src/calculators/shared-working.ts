@@ -1,7 +1,8 @@
 import { IAPWS_R1_76, IAPWS_SR6_08, KELL_1975, TANAKA_2001 } from '../properties/water.js';
 import { formatValue } from '../format.js';
 import type { UnitId } from '../units.js';
-import { type AngleFacts, type LiquidFacts, type SharedWriters, CUSTOM, coef, q } from './shared.js';
+import { CUSTOM, coef, q } from './shared.js';
+import { type AngleFacts, type LiquidFacts, type SharedWriters } from './shared-liquid.js';
 import type { WorkingStep } from './types.js';
 
 // The working and the assumptions of the shared inputs (the liquid, the contact angle), written from

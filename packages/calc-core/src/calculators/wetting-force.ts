@@ -18,16 +18,15 @@ import {
   gravityAssumption,
   gravityInput,
   laterWorking,
-  liquidInputs,
   MM,
   nearNinety,
   num,
   q,
   quantityInput,
-  resolveLiquid,
   warning,
   withFieldNames,
 } from './shared.js';
+import { liquidInputs, resolveLiquid } from './shared-liquid.js';
 import { STANDARD_GRAVITY } from '../units.js';
 import type {
   Caution,
