@@ -6,24 +6,21 @@ import {
   ANGLE_FIELDS,
   choice,
   CONTACT_ANGLE_NEAR_90,
-  contactAngleInputs,
   fmt,
   gravityAssumption,
   gravityInput,
   STATIC_ASSUMPTIONS,
-  liquidInputs,
   nearNinety,
   MM,
   num,
   q,
   quantityInput,
-  resolveContactAngle,
-  resolveLiquid,
   warning,
   capillaryLengthStep,
   solved,
   laterWorking,
 } from './shared.js';
+import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
 import type { CalculatorCore, InputValues, Outputs, QuantityInput, Solution, Warning } from './types.js';
 
 type Shape = 'drop' | 'film-bubble' | 'jet' | 'general' | 'pore';

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { waterSurfaceTension } from '../properties/water.js';
-import { resolveContactAngle, resolveLiquid } from './shared.js';
+import { bindWriters, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
+import { sharedWriters } from './shared-working.js';
+
+// These tests read the working and assumptions of what was resolved, as `runCalculation` does: with
+// the writers bound (shared-working.test.ts checks what happens without them).
+bindWriters(sharedWriters);
 
 describe('resolveLiquid and resolveContactAngle keep what they resolved', () => {
   it('gives the same answer for the same inputs, and another for another temperature', () => {

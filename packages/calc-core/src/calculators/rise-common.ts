@@ -8,25 +8,22 @@ import {
 } from '../formulas/capillary.js';
 import { bandOver } from './engine.js';
 import {
-  contactAngleInputs,
   fmt,
   gravityAssumption,
   STATIC_ASSUMPTIONS,
   gravityInput,
-  liquidInputs,
   MM,
   ANGLE_FIELDS,
   CONTACT_ANGLE_NEAR_90,
   nearNinety,
   num,
   q,
-  resolveContactAngle,
-  resolveLiquid,
   warning,
   capillaryLengthStep,
   solved,
   type Explanation,
 } from './shared.js';
+import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
 import type {
   HeadlineDefinition,
   InputDefinition,

@@ -1,6 +1,8 @@
 import { canonicalJson, sha256Hex } from '../hash.js';
 import { VERSION } from '../version.js';
 import { cautionsOf, resolveInputs, solveChecked } from './engine.js';
+import { bindWriters } from './shared-liquid.js';
+import { sharedWriters } from './shared-working.js';
 import type { CalculationResult, CalculatorCore, CalculatorTexts, InputValues } from './types.js';
 
 // The full run of a calculator: its numbers with the working, the assumptions and the input hash.
@@ -23,6 +25,8 @@ export function runCalculation(
   def: CalculatorCore & Partial<CalculatorTexts>,
   raw: unknown,
 ): CalculationResult {
+  // The shared inputs' working is written by shared-working.ts, which only this full run carries.
+  bindWriters(sharedWriters);
   const inputs = resolveInputs(def, raw);
   const solution = solveChecked(def, inputs, true);
   return {

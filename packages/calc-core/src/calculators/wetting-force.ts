@@ -18,16 +18,15 @@ import {
   gravityAssumption,
   gravityInput,
   laterWorking,
-  liquidInputs,
   MM,
   nearNinety,
   num,
   q,
   quantityInput,
-  resolveLiquid,
   warning,
   withFieldNames,
 } from './shared.js';
+import { liquidInputs, resolveLiquid } from './shared-liquid.js';
 import { STANDARD_GRAVITY } from '../units.js';
 import type {
   Caution,
@@ -60,14 +59,15 @@ function solve(inputs: InputValues): Solution {
   const method = choice(inputs, 'method') as Method;
   const working = laterWorking();
   const warnings: Warning[] = [];
-  let liquidAssumption: string | null = null;
+  // The liquid's assumption is written when the assumptions are read (`calculate`), never by `compute`.
+  let liquidAssumption: (() => string) | null = null;
   let force: number | null = null;
   let sigma: number | null = null;
   let apparent: number | null = null;
   let factor: number | null = null;
   let perimeter: number;
 
-  let assumptions: string[];
+  let assumptions: () => string[];
   let hazards: Caution[] = [];
   if (method === 'ring') {
     const F = num(inputs, 'ringForce');
@@ -205,7 +205,7 @@ function solve(inputs: InputValues): Solution {
         ),
       );
     }
-    assumptions = [
+    assumptions = () => [
       'The maximum pull, net of the weight of the ring, read as the ring is drawn slowly through the surface.',
       'The ring is horizontal, round and fully wetted by the liquid (contact angle 0° on clean platinum).',
       'Clean liquid and a fresh surface: no surfactant, oil or dust.',
@@ -234,7 +234,7 @@ function solve(inputs: InputValues): Solution {
       const liquid = resolveLiquid(inputs, {});
       working.first(() => liquid.working);
       if (liquid.hazard !== undefined) hazards = [liquid.hazard];
-      liquidAssumption = liquid.assumption;
+      liquidAssumption = () => liquid.assumption;
       const s = liquid.surfaceTension;
       force = isPlate
         ? wilhelmyForce({ surfaceTension: s, contactAngleDeg: theta, width: w, thickness: t })
@@ -285,14 +285,14 @@ function solve(inputs: InputValues): Solution {
     }
     const near = nearNinety(theta, ['contactAngleDeg']);
     if (near !== null) warnings.push({ ...near, step: 'method' });
-    assumptions = [
+    assumptions = () => [
       'The force is read at zero immersion depth, net of the weight of the probe: buoyancy is not included.',
       `A contact angle of ${q(theta, 'deg')} on the probe, known independently (0° for a clean roughened platinum plate, common practice).`,
       'Clean liquid and a fresh surface: no surfactant, oil or dust.',
       isPlate
         ? 'A thin rectangular plate wetted along its whole perimeter 2·(w + t).'
         : 'A round rod or fibre wetted around its circumference π·d.',
-      ...(liquidAssumption !== null ? [liquidAssumption] : []),
+      ...(liquidAssumption !== null ? [liquidAssumption()] : []),
     ];
   }
   return {
@@ -309,7 +309,9 @@ function solve(inputs: InputValues): Solution {
     get working() {
       return working.build();
     },
-    assumptions,
+    get assumptions() {
+      return assumptions();
+    },
     ...(hazards.length > 0 ? { hazards } : {}),
   };
 }

@@ -4,24 +4,21 @@ import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
 import {
   choice,
-  contactAngleInputs,
   CONTACT_ANGLE_NEAR_90,
   fmt,
   gravityAssumption,
   gravityInput,
   nearNinety,
-  liquidInputs,
   MM,
   num,
   q,
   quantityInput,
-  resolveContactAngle,
-  resolveLiquid,
   warning,
   capillaryLengthStep,
   solved,
   laterWorking,
 } from './shared.js';
+import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
 import type { CalculatorCore, InputValues, Outputs, Solution, Warning } from './types.js';
 
 /** Gravity-restrained time over Lucas–Washburn time above which gravity is called not negligible. */
