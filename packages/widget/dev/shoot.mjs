@@ -1,5 +1,8 @@
 // Dev-only: opens the preview pages in Debian's Chromium and saves screenshots under /tmp/shots/
-// (or SHOTS_DIR).
+// (or SHOTS_DIR), of the package's built release (or RELEASE=<version>). FIRST_VIEW=1 refuses the
+// app chunk, so the shots show the first view alone; otherwise each widget is shot once the full
+// widget has taken over. Two runs' folders compare pixel for pixel (same build, same pictures,
+// but for the working's arrow caught in its turn).
 // Files are served from this package through Playwright's request routing (no server process).
 // Usage: node dev/shoot.mjs [calculatorId]
 import { mkdirSync, readFileSync, existsSync } from 'node:fs';
@@ -17,6 +20,9 @@ const TYPES = {
   '.css': 'text/css',
 };
 const only = process.argv[2] ?? null;
+const release =
+  process.env.RELEASE ?? JSON.parse(readFileSync(path.join(here, 'package.json'), 'utf8')).version;
+const firstView = process.env.FIRST_VIEW === '1';
 const OUT = process.env.SHOTS_DIR ?? '/tmp/shots';
 mkdirSync(OUT, { recursive: true });
 
@@ -36,6 +42,8 @@ async function open(width, query) {
   const context = await browser.newContext({ viewport: { width, height: 900 }, deviceScaleFactor: 1 });
   await context.route(`${ORIGIN}/**`, (route) => {
     const file = path.join(here, decodeURIComponent(new URL(route.request().url()).pathname));
+    if (firstView && /[\\/]app-[^\\/]*\.js$/.test(file))
+      return route.fulfill({ status: 404, body: 'first view only' });
     if (!file.startsWith(here) || !existsSync(file)) return route.fulfill({ status: 404, body: 'not found' });
     return route.fulfill({
       status: 200,
@@ -50,13 +58,17 @@ async function open(width, query) {
   const problems = [];
   page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
   page.on('console', (m) => m.type() === 'error' && problems.push(`console: ${m.text()}`));
-  await page.goto(`${ORIGIN}/dev/preview.html?${query}`);
+  await page.goto(`${ORIGIN}/dev/preview.html?release=${release}&${query}`);
   await page.waitForSelector('body[data-ready="1"]');
   await page.evaluate(() => document.fonts.ready);
   return { context, page, problems };
 }
 
 async function calculateAll(page) {
+  // A click while the full widget takes over could land on the first view's button as it goes.
+  if (!firstView)
+    for (const mount of await page.locator('[data-wickstone="mount"]').all())
+      await mount.and(page.locator('[data-view="full"]')).waitFor({ timeout: 10_000 });
   for (const button of await page.locator('[data-wickstone="calculate"]').all()) await button.click();
   await page.waitForTimeout(200);
 }
@@ -82,7 +94,10 @@ for (const [width, tag] of [
   for (const id of ids) {
     const { context, page, problems } = await open(width, `only=${id}`);
     await calculateAll(page);
-    if (['tube-rise', 'soil-capillary-rise', 'rising-damp-height', 'frost-screening'].includes(id))
+    if (
+      !firstView &&
+      ['tube-rise', 'soil-capillary-rise', 'rising-damp-height', 'frost-screening'].includes(id)
+    )
       await page.locator('[data-wickstone="working"] summary').first().click();
     await page.screenshot({ path: `${OUT}/widget-${id}-${tag}.png`, fullPage: true });
     // Parts at full resolution, to check type and spacing closely.
