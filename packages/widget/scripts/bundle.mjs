@@ -52,8 +52,9 @@ export const FLIGHT_GOAL = 14 * 1024;
  * (`shared-liquid.js`): runtime 17,452 -> 13,531 bytes (largest: wetting-force, 23,646 bytes). The
  * goal is not met: what is left is the first view and its styles, calc-core's units table, headline
  * and validation, and each engine's own code (inputs' labels and help, the working's text of its solve).
+ * 23 KB with both together (largest: wetting-force, 23,392 bytes; smallest: rising-damp-height, 18,547).
  */
-export const FLIGHT_LIMIT = 23.25 * 1024;
+export const FLIGHT_LIMIT = 23 * 1024;
 
 const ENGINE = 'virtual:wickstone-engine/';
 const TEXTS = 'virtual:wickstone-texts/';
