@@ -85,6 +85,29 @@ function json<T>(value: unknown): T {
 
 const isRunReport = (req: Request) => req.method() === 'POST' && req.url().endsWith('/api/v1/embed/runs');
 
+/**
+ * Serves the release files matching `pattern` with one changed statement at the end (the kind of
+ * edit a compromised server or cache would make); collects the page's console messages. `tampered()`
+ * is the URL of the file changed, '' until one was asked for.
+ */
+async function tamperWith(
+  page: Page,
+  pattern: string,
+): Promise<{ messages: string[]; tampered: () => string }> {
+  const messages: string[] = [];
+  page.on('console', (m) => messages.push(m.text()));
+  let url = '';
+  await page.route(pattern, async (route) => {
+    const original = await route.fetch();
+    url = route.request().url();
+    await route.fulfill({
+      response: original,
+      body: `${await original.text()}\nwindow.__tampered = true;\n`,
+    });
+  });
+  return { messages, tampered: () => url };
+}
+
 describe('widgets in Chromium: configure, brand, embed, run, report and capture a lead', () => {
   let app: RunningApp;
   let browser: Browser;
@@ -620,24 +643,13 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
   it('refuses a chunk whose bytes differ from the hash its loader carries', async () => {
     expect(snippet).not.toBe('');
     const page = await freshPage();
-    const messages: string[] = [];
-    page.on('console', (m) => messages.push(m.text()));
-    let tampered = '';
-    await page.route('**/releases/**/runtime-*.js', async (route) => {
-      const original = await route.fetch();
-      tampered = route.request().url();
-      // One changed statement at the end: the kind of edit a compromised server or cache would make.
-      await route.fulfill({
-        response: original,
-        body: `${await original.text()}\nwindow.__tampered = true;\n`,
-      });
-    });
+    const { messages, tampered } = await tamperWith(page, '**/releases/**/runtime-*.js');
     await page.goto(`${site.origin}/`);
     const host = widgetIn(page);
     await page
       .locator('wickstone-widget[data-wickstone="host"][data-state="unavailable"]')
       .waitFor({ state: 'attached', timeout: 20_000 });
-    expect(tampered).not.toBe('');
+    expect(tampered()).not.toBe('');
     expect(
       await page.evaluate(() => (window as unknown as { __tampered?: boolean }).__tampered),
     ).toBeUndefined();
@@ -648,24 +660,14 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
   it('refuses a later chunk whose bytes differ from the hash the engine carries, and keeps the first view working', async () => {
     expect(snippet).not.toBe('');
     const page = await freshPage();
-    const messages: string[] = [];
-    page.on('console', (m) => messages.push(m.text()));
-    let tampered = '';
     // The full widget's chunk: its hash is not in the loader but in the engine the loader checked.
-    await page.route('**/releases/**/app-*.js', async (route) => {
-      const original = await route.fetch();
-      tampered = route.request().url();
-      await route.fulfill({
-        response: original,
-        body: `${await original.text()}\nwindow.__tampered = true;\n`,
-      });
-    });
+    const { messages, tampered } = await tamperWith(page, '**/releases/**/app-*.js');
     await page.goto(`${site.origin}/`);
     const host = widgetIn(page);
     await host.locator('div[data-wickstone="mount"][data-view="first"] [data-wickstone="root"]').waitFor({
       timeout: 20_000,
     });
-    await expect.poll(() => tampered, { timeout: 20_000 }).not.toBe('');
+    await expect.poll(() => tampered(), { timeout: 20_000 }).not.toBe('');
     await expect
       .poll(() => messages.some((m) => /integrity/i.test(m) && m.includes('app-')), { timeout: 20_000 })
       .toBe(true);

@@ -374,14 +374,14 @@ export function keyValidUntil(value: string): Date {
   return new Date(value);
 }
 
+/** One origin's refusals: how many, and the last day one was counted (`YYYY-MM-DD`). */
+const refusedOrigin = z.object({ origin: z.string(), refusals: z.number().int(), lastDay: z.string() });
+
 /** Refusals (403: origin not allowed) per origin over the last `days` days, most refused first. */
 export const refusedOriginsSchema = z.object({
   days: z.number().int(),
   items: z.array(
-    z.object({
-      origin: z.string(),
-      refusals: z.number().int(),
-      lastDay: z.string(),
+    refusedOrigin.extend({
       /** Per day, oldest first: `YYYY-MM-DD` and the count. */
       byDay: z.array(z.object({ day: z.string(), refusals: z.number().int() })),
     }),
@@ -396,10 +396,7 @@ export type RefusedOrigins = z.infer<typeof refusedOriginsSchema>;
 export const orgRefusedOriginsSchema = z.object({
   days: z.number().int(),
   items: z.array(
-    z.object({
-      origin: z.string(),
-      refusals: z.number().int(),
-      lastDay: z.string(),
+    refusedOrigin.extend({
       widgets: z.array(z.object({ id: z.number().int(), name: z.string(), refusals: z.number().int() })),
     }),
   ),
