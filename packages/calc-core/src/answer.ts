@@ -6,7 +6,14 @@
 import type { CalculationResult, CalculatorDefinition, HeadlineRule } from './calculators/types.js';
 import { conditionsHold, withUnit } from './display.js';
 import { formatInput, formatValue } from './format.js';
-import { convert, displayUnit, units, type QuantityKind, type UnitId, type UnitSystemId } from './units.js';
+import {
+  canonicalUnits,
+  convert,
+  displayUnit,
+  type QuantityKind,
+  type UnitId,
+  type UnitSystemId,
+} from './units.js';
 
 // ---------------------------------------------------------------- numbers
 
@@ -65,6 +72,14 @@ export function practicalDefault(displayValue: number, canonicalDefault: number)
 
 // ---------------------------------------------------------------- units chosen for reading
 
+/** The units a length reads in by size: below `from` (m) the small one, from it on the large one (1 ft = 0.3048 m). */
+const READABLE_LENGTHS: Readonly<
+  Record<UnitSystemId, readonly [small: UnitId, large: UnitId, from: number]>
+> = {
+  si: ['mm', 'm', 1],
+  us: ['in', 'ft', 0.3048],
+};
+
 /**
  * The unit a quantity reads best in for a sentence: lengths by size (0.02 mm, 30 mm, 1.5 m;
  * 0.004 in, 6 in, 3.3 ft), everything else the system's unit for its kind.
@@ -72,9 +87,30 @@ export function practicalDefault(displayValue: number, canonicalDefault: number)
  */
 export function readableUnit(kind: QuantityKind, system: UnitSystemId, canonicalValue: number): UnitId {
   if (kind !== 'length') return displayUnit(kind, system);
-  const abs = Math.abs(canonicalValue);
-  if (system === 'us') return abs >= 0.3048 ? 'ft' : 'in';
-  return abs >= 1 ? 'm' : 'mm';
+  const [small, large, from] = READABLE_LENGTHS[system];
+  return Math.abs(canonicalValue) >= from ? large : small;
+}
+
+/**
+ * Durations span seconds to weeks (wicking through a wall): read in the largest unit that keeps the
+ * number at or above about two (`3.2 h` rather than `11 520 s`), seconds below two minutes. Each
+ * step: the unit, the duration (s) from which it is used, its word in a sentence.
+ */
+export const DURATION_STEPS: readonly (readonly [unit: UnitId, from: number, word: string])[] = [
+  ['day', 2 * 86400, 'days'],
+  ['h', 2 * 3600, 'hours'],
+  ['min', 120, 'minutes'],
+];
+
+/**
+ * The units a value of a kind may be shown in besides its kind's canonical unit and the unit
+ * systems' (lengths and durations by size, `readableUnit` and `DURATION_STEPS`): a bundle that
+ * carries some units only must carry these for every kind it shows.
+ */
+export function unitsBySize(kind: QuantityKind): UnitId[] {
+  if (kind === 'length') return Object.values(READABLE_LENGTHS).flatMap(([small, large]) => [small, large]);
+  if (kind === 'time') return ['s', ...DURATION_STEPS.map(([unit]) => unit)];
+  return [];
 }
 
 /** A canonical value with its unit for a sentence: `29.7 mm`, `1.17 in`, `0.5 m`. */
@@ -89,11 +125,7 @@ export function readable(
 
 /** The canonical unit of a kind (factor 1, no offset): `m`, `N/m`, `°C`. */
 export function canonicalUnitOf(kind: QuantityKind): UnitId {
-  const found = (Object.keys(units) as UnitId[]).find((id) => {
-    const u = units[id];
-    return u.kind === kind && u.factor === 1 && u.offset === 0;
-  });
-  return found ?? '1';
+  return canonicalUnits[kind] ?? '1';
 }
 
 // ---------------------------------------------------------------- the headline
@@ -120,12 +152,7 @@ function shown(def: Def, id: string, value: number, system: UnitSystemId): strin
 }
 
 function durationText(seconds: number): string {
-  const steps: readonly (readonly [UnitId, number, string])[] = [
-    ['day', 2 * 86400, 'days'],
-    ['h', 2 * 3600, 'hours'],
-    ['min', 120, 'minutes'],
-  ];
-  for (const [unit, from, word] of steps) {
+  for (const [unit, from, word] of DURATION_STEPS) {
     if (seconds >= from) return `${formatResult(convert(seconds, 's', unit))} ${word}`;
   }
   return `${formatResult(seconds)} ${seconds === 1 ? 'second' : 'seconds'}`;

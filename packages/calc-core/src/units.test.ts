@@ -217,6 +217,15 @@ describe('unit systems', () => {
       expect(units[canonicalUnits[kind]]).toMatchObject({ kind, factor: 1, offset: 0 });
     }
   });
+
+  it('have no other unit with factor 1 and offset 0 of a kind, so the canonical unit is the one the factors say', () => {
+    for (const kind of quantityKinds) {
+      const plain = (Object.keys(units) as UnitId[]).filter(
+        (id) => units[id].kind === kind && units[id].factor === 1 && units[id].offset === 0,
+      );
+      expect(plain, kind).toEqual([canonicalUnits[kind]]);
+    }
+  });
 });
 
 describe('errors and spellings, exactly', () => {

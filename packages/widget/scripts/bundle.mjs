@@ -21,6 +21,8 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
+import { calculators, canonicalUnits, units, unitSystems } from '@wickstone/calc-core';
+import { unitsBySize } from '@wickstone/calc-core/answer';
 import { init, parse } from 'es-module-lexer';
 import { build } from 'vite';
 
@@ -70,6 +72,73 @@ export function textsModuleOf(calculatorId) {
 }
 /** calc-core's full run (working, assumptions, input hash): with the texts, after first paint. */
 const RUN_MODULE = path.join(calcCoreDist, 'calculators', 'run.js');
+// ---- units (h14-units): each engine carries its calculator's units; the whole table follows first paint.
+/** calc-core's units table (data only), which calc-core's `units.js` reads. */
+const UNIT_TABLE = path.join(calcCoreDist, 'unit-table.js');
+/** What the release puts in the table's place: a table the engines and later chunks fill (`addUnits`). */
+const UNIT_REGISTRY = path.join(widgetDir, 'src', 'lib', 'unit-registry.ts');
+/** Adds calc-core's whole units table to the registry: in the app chunk, which every later chunk follows. */
+const WHOLE_UNITS = 'virtual:wickstone-units/whole';
+const UNITS_MODULE = /[\\/]calc-core[\\/]dist[\\/]units\.js$/;
+/**
+ * Unit ids written as string literals in the calc-core modules a calculator's engine can run (its
+ * own, the formulas and shared helpers it imports; not the texts, the full run nor the table
+ * itself): the units its warnings print values in (`q(lc, 'm')`, `q(angle, 'deg')`), whatever
+ * their kind. Generous by design: an id that is also a word elsewhere ('h', 's') only adds a unit.
+ */
+function unitLiteralsOf(calculatorId) {
+  const skip =
+    /(^|[\\/])(index|registry|run|hash|units|unit-table|wording)\.js$|\.texts\.js$|shared-texts\.js$/;
+  const seen = new Set();
+  const ids = new Set();
+  const visit = (file) => {
+    if (seen.has(file) || skip.test(file)) return;
+    seen.add(file);
+    const code = readFileSync(file, 'utf8');
+    for (const m of code.matchAll(/'([^'\\\n]{1,24})'|"([^"\\\n]{1,24})"/g)) {
+      const id = m[1] ?? m[2];
+      if (Object.hasOwn(units, id)) ids.add(id);
+    }
+    for (const m of code.matchAll(/\bfrom\s*'(\.[^']+)'/g)) visit(path.resolve(path.dirname(file), m[1]));
+  };
+  visit(path.join(calcCoreDist, 'calculators', `${calculatorId}.js`));
+  return ids;
+}
+/**
+ * The units one calculator's first flight can show or convert: for each kind of its inputs, table
+ * columns and outputs, the canonical unit and both unit systems' (`unitSystems`), those the runtime
+ * picks by size (`unitsBySize`: mm or ft for a length, minutes or days for a time) and any an
+ * input or output names for itself (`display`); and the units its warnings print values in
+ * (`unitLiteralsOf`). Entries without the unit's name (the widget never shows one); the factors are
+ * calc-core's own numbers, written as JavaScript prints them, so they are the same doubles.
+ */
+export function unitsOf(calculatorId) {
+  const calc = calculators.find((c) => c.id === calculatorId);
+  if (!calc) throw new Error(`no calculator ${calculatorId} in calc-core's registry`);
+  const items = [...calc.inputs, ...calc.outputs]
+    .flatMap((item) => (item.kind === 'table' ? item.columns : [item]))
+    .filter((item) => item.kind !== 'choice');
+  const kinds = new Set(items.map((item) => item.kind));
+  const ids = new Set(unitLiteralsOf(calculatorId));
+  for (const kind of kinds)
+    for (const id of [canonicalUnits[kind], unitSystems.si[kind], unitSystems.us[kind], ...unitsBySize(kind)])
+      ids.add(id);
+  for (const item of items) for (const id of Object.values(item.display ?? {})) ids.add(id);
+  const pick = (table, keep) => Object.fromEntries(Object.entries(table).filter(([key]) => keep(key)));
+  return {
+    units: Object.fromEntries(
+      Object.entries(units)
+        .filter(([id]) => ids.has(id))
+        .map(([id, { kind, symbol, factor, offset }]) => [id, { kind, symbol, factor, offset }]),
+    ),
+    canonicalUnits: pick(canonicalUnits, (kind) => kinds.has(kind)),
+    unitSystems: {
+      si: pick(unitSystems.si, (kind) => kinds.has(kind)),
+      us: pick(unitSystems.us, (kind) => kinds.has(kind)),
+    },
+  };
+}
+
 /** A calc-core texts module: never part of a first flight. */
 const TEXTS_MODULE = /[\\/]calc-core[\\/]dist[\\/]calculators[\\/][^\\/]*texts\.js$/;
 /**
@@ -241,7 +310,7 @@ function wrapChunk(chunk) {
  * into the one runtime chunk.
  * @returns {Promise<{ files: Map<string, { code: string, imports: string[] }>, engines: Record<string, string>, extras: string }>}
  */
-export async function buildChunks(calculatorIds) {
+export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
   await init;
   const input = {
     ...Object.fromEntries(calculatorIds.map((id) => [`engine-${id}`, ENGINE + id])),
@@ -274,6 +343,7 @@ export async function buildChunks(calculatorIds) {
         !id.includes('extras.css') &&
         id.split('?')[0] !== TABLES_ENTRY &&
         !id.startsWith(TABLES_DIR);
+    else if (id === `\0${WHOLE_UNITS}` || id === UNIT_TABLE) yes = true;
     else if (CALCULATOR_MODULE.test(id)) yes = false;
     else if (id.includes(`${path.sep}calc-core${path.sep}`))
       // calc-core's index re-exports everything: what only it imports is the engines' business.
@@ -319,21 +389,41 @@ export async function buildChunks(calculatorIds) {
     ...common({}),
     plugins: [
       {
+        // calc-core's units.js reads the registry the engines fill, not the whole table (see unitsOf).
+        name: 'wickstone-unit-registry',
+        enforce: 'pre',
+        resolveId: (id, importer) =>
+          id === './unit-table.js' && importer !== undefined && UNITS_MODULE.test(importer)
+            ? UNIT_REGISTRY
+            : null,
+      },
+      {
         name: 'wickstone-engines',
-        resolveId: (id) => (id.startsWith(ENGINE) || id.startsWith(TEXTS) ? `\0${id}` : null),
+        resolveId: (id) =>
+          id.startsWith(ENGINE) || id.startsWith(TEXTS) || id === WHOLE_UNITS ? `\0${id}` : null,
         load(id) {
+          const registry = `import { addUnits } from ${JSON.stringify(UNIT_REGISTRY)};\n`;
+          const whole =
+            `import { units, canonicalUnits, unitSystems } from ${JSON.stringify(UNIT_TABLE)};\n` +
+            `addUnits({ units, canonicalUnits, unitSystems });\n`;
+          if (id === `\0${WHOLE_UNITS}`) return `${registry}${whole}export const wholeUnits = true;\n`;
           // The texts chunk also carries calc-core's full run (working, input hash): the first flight computes only.
+          // Its working prints any unit, so it takes the whole table (with the app chunk, `WHOLE_UNITS`).
           if (id.startsWith(`\0${TEXTS}`))
             return (
               `export { texts } from ${JSON.stringify(textsModuleOf(id.slice(TEXTS.length + 1)))};\n` +
-              `export { runCalculation } from ${JSON.stringify(RUN_MODULE)};\n`
+              `export { runCalculation } from ${JSON.stringify(RUN_MODULE)};\n` +
+              `export { wholeUnits } from ${JSON.stringify(WHOLE_UNITS)};\n`
             );
           if (!id.startsWith(`\0${ENGINE}`)) return null;
           const calc = id.slice(ENGINE.length + 1);
+          // The engine adds its calculator's units to the runtime's table when it runs, before it mounts.
           return (
             `export { calculator, compute } from '@wickstone/calc-core/calculators/${calc}';\n` +
             `export { mountFirst } from ${JSON.stringify(FIRST_ENTRY)};\n` +
-            `export const chunks = ${LATER_CHUNKS};\n`
+            `export const chunks = ${LATER_CHUNKS};\n` +
+            registry +
+            (unitSubsets ? `addUnits(${JSON.stringify(unitsOf(calc))});\n` : whole)
           );
         },
       },
@@ -378,6 +468,7 @@ export async function buildChunks(calculatorIds) {
       imports: o.imports.map((f) => path.posix.basename(f)),
       hasTexts: Object.keys(o.modules).some((id) => TEXTS_MODULE.test(id)),
       hasPreact: Object.keys(o.modules).some((id) => PREACT.test(id)),
+      hasWholeUnits: Object.keys(o.modules).some((id) => id === UNIT_TABLE),
     });
     if (o.isEntry && o.name === 'extras') extras = o.fileName;
     else if (o.isEntry && o.name === 'app') app = o.fileName;
@@ -389,7 +480,27 @@ export async function buildChunks(calculatorIds) {
   if (tables === null) throw new Error('no tables chunk was built');
   if (app === null) throw new Error('no app chunk was built');
   bundleEngines(files, engines);
+  checkWholeUnits(files, { engines, texts, extras, tables, unitSubsets });
   return { files, engines, texts, extras, tables, app };
+}
+
+/**
+ * calc-core's whole units table: in no first flight when the engines carry their own units, and
+ * run before every chunk that follows first paint and may print any unit (the working in the
+ * texts, the worded warnings in the extras, a CSV's units in the tables).
+ */
+function checkWholeUnits(files, { engines, texts, extras, tables, unitSubsets }) {
+  const holders = [...files].filter(([, f]) => f.hasWholeUnits).map(([name]) => name);
+  if (holders.length !== 1)
+    throw new Error(`calc-core's units table should be in one chunk, found: ${holders.join(', ') || 'none'}`);
+  const [holder] = holders;
+  for (const later of [extras, tables, ...Object.values(texts)])
+    if (!closure(files, later).has(holder))
+      throw new Error(`${later} may run before calc-core's whole units table (${holder}) is added`);
+  if (unitSubsets)
+    for (const engine of Object.values(engines))
+      if (files.get(engine).hasWholeUnits || closure(files, engine).has(holder))
+        throw new Error(`${engine}: its first flight carries calc-core's whole units table (${holder})`);
 }
 
 /**
@@ -412,6 +523,7 @@ function bundleEngines(files, engines) {
         imports: [...new Set(parts.flatMap((p) => p.imports))].filter((f) => !own.includes(f)),
         hasTexts: parts.some((p) => p.hasTexts),
         hasPreact: parts.some((p) => p.hasPreact),
+        hasWholeUnits: parts.some((p) => p.hasWholeUnits),
       },
     ];
   });

@@ -6,25 +6,18 @@ import {
   type UnitId,
   type UnitSystemId,
 } from '@wickstone/calc-core';
+import { DURATION_STEPS } from '@wickstone/calc-core/answer';
 import { displayUnitOf, type Displayable } from '@wickstone/calc-core/display';
-
-// Durations span seconds to weeks (wicking through a wall): shown in the largest unit that keeps
-// the number at or above about two, so "3.2 h" rather than "11 520 s".
-const TIME_STEPS: readonly (readonly [UnitId, number])[] = [
-  ['day', 2 * 86400],
-  ['h', 2 * 3600],
-  ['min', 120],
-];
 
 /**
  * The unit an output value is shown in. Times with no unit of their own pick a readable one by
- * magnitude; everything else is calc-core's `displayUnitOf`.
+ * magnitude (calc-core's `DURATION_STEPS`, as its headline does); everything else is calc-core's `displayUnitOf`.
  * @param canonicalValue the output in its canonical unit (seconds for a time)
  */
 export function outputUnitFor(item: Displayable, system: UnitSystemId, canonicalValue: number): UnitId {
   if (item.kind === 'time' && item.display?.[system] === undefined) {
     const abs = Math.abs(canonicalValue);
-    for (const [unit, from] of TIME_STEPS) if (abs >= from) return unit;
+    for (const [unit, from] of DURATION_STEPS) if (abs >= from) return unit;
     return 's';
   }
   return displayUnitOf(item, system);

@@ -1,0 +1,30 @@
+// The units table of a release in the browser. The build puts this module in place of calc-core's
+// `unit-table.js` (scripts/bundle.mjs), so calc-core's lookups and conversions in the runtime read
+// these objects: empty until an engine adds its calculator's units (its inputs' and outputs'
+// kinds in both unit systems, `unitsOf`), and the whole table added by the chunks that follow
+// first paint (working, tables, extras), which may print any unit. Several widgets on a page share
+// the runtime and so this table: each engine adds its own, and a unit's definition is the same
+// whoever adds it. Never imported by the widget's own code, only swapped in by the build.
+import type { QuantityKind, UnitDefinition, UnitId, UnitSystemId } from '@wickstone/calc-core';
+
+/**
+ * Some of calc-core's units: a first-flight entry carries what converting and printing use (kind,
+ * symbol, factor, offset), not the unit's name, which no part of the widget shows.
+ */
+export interface UnitTable {
+  readonly units: Readonly<Partial<Record<UnitId, Omit<UnitDefinition, 'name'>>>>;
+  readonly canonicalUnits: Readonly<Partial<Record<QuantityKind, UnitId>>>;
+  readonly unitSystems: Readonly<Record<UnitSystemId, Readonly<Partial<Record<QuantityKind, UnitId>>>>>;
+}
+
+export const units: Partial<Record<UnitId, Omit<UnitDefinition, 'name'>>> = {};
+export const canonicalUnits: Partial<Record<QuantityKind, UnitId>> = {};
+export const unitSystems: Record<UnitSystemId, Partial<Record<QuantityKind, UnitId>>> = { si: {}, us: {} };
+
+/** Adds units to the table (an engine's, or calc-core's whole table). */
+export function addUnits(table: UnitTable): void {
+  Object.assign(units, table.units);
+  Object.assign(canonicalUnits, table.canonicalUnits);
+  Object.assign(unitSystems.si, table.unitSystems.si);
+  Object.assign(unitSystems.us, table.unitSystems.us);
+}
