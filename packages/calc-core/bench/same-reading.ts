@@ -30,6 +30,7 @@ const outcome = (f: () => unknown): string => {
 /** Everything a person reads of one result, through one build's functions. */
 function reading(lib: Index, id: string, raw: unknown): unknown {
   const def = lib.getCalculator(id);
+  if (def === undefined) throw new Error(`no calculator ${id}`);
   const result = lib.calculate(id, raw);
   return (['si', 'us'] as const).map((system) => ({
     headline: lib.headline(def, result, system),

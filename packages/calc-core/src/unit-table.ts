@@ -1,5 +1,5 @@
-// calc-core's table of units, data only: every unit's definition, the canonical unit of each kind
-// and the unit each unit system shows a kind in. `units.ts` looks units up in it and converts.
+// calc-core's table of units, data only: every unit's definition, the spellings people type for a
+// few, the canonical unit of each kind and the unit each unit system shows a kind in. `units.ts` looks units up in it and converts.
 // Kept apart so that a bundle can put a smaller table in its place: the widget's first flight
 // carries only its calculator's units and the whole table follows after first paint
 // (packages/widget/scripts/bundle.mjs, `unitsOf`).
@@ -134,6 +134,18 @@ export const units = {
 } as const satisfies Record<string, UnitDefinition>;
 
 export type UnitId = keyof typeof units;
+
+/** Spellings people type for a few units (a CSV's header, an API call); mapped onto the ids above. */
+export const aliases: Readonly<Record<string, UnitId>> = {
+  µm: 'um',
+  '°C': 'degC',
+  '°F': 'degF',
+  '°': 'deg',
+  'Pa·s': 'Pa*s',
+  'mPa·s': 'mPa*s',
+  'm/s²': 'm/s2',
+  'ft/s²': 'ft/s2',
+};
 
 /** The canonical (calculate-facing) unit of each kind. */
 export const canonicalUnits: Readonly<Record<QuantityKind, UnitId>> = {

@@ -1,6 +1,6 @@
 import { CalcInputError } from './errors.js';
 import { finite } from './guards.js';
-import { canonicalUnits, units, unitSystems, type UnitId } from './unit-table.js';
+import { aliases, canonicalUnits, units, unitSystems, type UnitId } from './unit-table.js';
 
 export { STANDARD_GRAVITY } from './gravity.js';
 export { canonicalUnits, units, unitSystems, type UnitId } from './unit-table.js';
@@ -62,18 +62,6 @@ export interface UnitDefinition {
 }
 
 export type UnitSystemId = 'si' | 'us';
-
-/** Spellings people type for a few units; mapped onto the table's ids. */
-const aliases: Readonly<Record<string, UnitId>> = {
-  µm: 'um',
-  '°C': 'degC',
-  '°F': 'degF',
-  '°': 'deg',
-  'Pa·s': 'Pa*s',
-  'mPa·s': 'mPa*s',
-  'm/s²': 'm/s2',
-  'ft/s²': 'ft/s2',
-};
 
 /**
  * Units of the centimetre–gram–second system that calc-core knows. Each equals an SI unit with a

@@ -404,8 +404,8 @@ export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
         load(id) {
           const registry = `import { addUnits } from ${JSON.stringify(UNIT_REGISTRY)};\n`;
           const whole =
-            `import { units, canonicalUnits, unitSystems } from ${JSON.stringify(UNIT_TABLE)};\n` +
-            `addUnits({ units, canonicalUnits, unitSystems });\n`;
+            `import { units, canonicalUnits, unitSystems, aliases } from ${JSON.stringify(UNIT_TABLE)};\n` +
+            `addUnits({ units, canonicalUnits, unitSystems, aliases });\n`;
           if (id === `\0${WHOLE_UNITS}`) return `${registry}${whole}export const wholeUnits = true;\n`;
           // The texts chunk also carries calc-core's full run (working, input hash): the first flight computes only.
           // Its working prints any unit, so it takes the whole table (with the app chunk, `WHOLE_UNITS`).

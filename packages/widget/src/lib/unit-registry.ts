@@ -15,11 +15,14 @@ export interface UnitTable {
   readonly units: Readonly<Partial<Record<UnitId, Omit<UnitDefinition, 'name'>>>>;
   readonly canonicalUnits: Readonly<Partial<Record<QuantityKind, UnitId>>>;
   readonly unitSystems: Readonly<Record<UnitSystemId, Readonly<Partial<Record<QuantityKind, UnitId>>>>>;
+  /** Spellings people type (a CSV's header): with the whole table only, the first view reads none. */
+  readonly aliases?: Readonly<Record<string, UnitId>>;
 }
 
 export const units: Partial<Record<UnitId, Omit<UnitDefinition, 'name'>>> = {};
 export const canonicalUnits: Partial<Record<QuantityKind, UnitId>> = {};
 export const unitSystems: Record<UnitSystemId, Partial<Record<QuantityKind, UnitId>>> = { si: {}, us: {} };
+export const aliases: Record<string, UnitId> = {};
 
 /** Adds units to the table (an engine's, or calc-core's whole table). */
 export function addUnits(table: UnitTable): void {
@@ -27,4 +30,5 @@ export function addUnits(table: UnitTable): void {
   Object.assign(canonicalUnits, table.canonicalUnits);
   Object.assign(unitSystems.si, table.unitSystems.si);
   Object.assign(unitSystems.us, table.unitSystems.us);
+  Object.assign(aliases, table.aliases);
 }
