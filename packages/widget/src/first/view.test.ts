@@ -179,6 +179,37 @@ describe('the first view', () => {
   });
 });
 
+describe('a snippet’s settings, checked by the runtime', () => {
+  const bundle = (checkSettings: boolean) => ({
+    calculator,
+    compute,
+    releaseBase: null,
+    defaultApiBase: 'https://app.wickstone.example',
+    texts: null,
+    extras: null,
+    tables: null,
+    app: null,
+    checkSettings,
+  });
+
+  it('refuses a malformed answer before drawing anything, so the loader can give the place back', () => {
+    const host = document.createElement('wickstone-widget');
+    document.body.append(host);
+    const broken = { ...widget(), settings: { ...widget().settings, look: null } } as unknown as EmbedWidget;
+    expect(() => mountFirst(bundle(true), host, { widget: broken })).toThrow(/malformed settings/);
+    expect(host.shadowRoot).toBeNull();
+    expect(host.hasAttribute('data-state')).toBe(false);
+  });
+
+  it('draws a well-formed answer', () => {
+    const host = document.createElement('wickstone-widget');
+    document.body.append(host);
+    mountFirst(bundle(true), host, { widget: widget() });
+    expect(host.shadowRoot?.querySelector('[data-wickstone="root"]')).not.toBeNull();
+    expect(host.getAttribute('data-state')).toBe('ready');
+  });
+});
+
 describe('the full widget taking over from the first view', () => {
   it('keeps the typed text, the unit system, the answer, the focused control and its caret', async () => {
     const host = document.createElement('wickstone-widget');
