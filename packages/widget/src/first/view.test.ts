@@ -177,6 +177,34 @@ describe('the first view', () => {
     expect(diameter(target).selectionStart).toBe(1);
     expect(diameter(target).selectionEnd).toBe(3);
   });
+
+  it('keeps focus on a choice whose change redraws the fields, and a backward selection as it was', () => {
+    const { shadow, target } = shadowTarget();
+    renderFirstView(target, {
+      widget: widget(),
+      calculator: { cautions: [], references: [], ...calculator },
+      compute,
+      apiBase: null,
+    });
+    const liquid = () => target.querySelector<HTMLSelectElement>('select[data-input="liquid"]')!;
+    const before = liquid();
+    before.focus();
+    before.value = 'ethanol';
+    before.dispatchEvent(new Event('change', { bubbles: true }));
+    expect(liquid()).not.toBe(before);
+    expect(shadow.activeElement).toBe(liquid());
+    expect(liquid().value).toBe('ethanol');
+
+    submit(target);
+    const box = diameter(target);
+    box.focus();
+    box.value = '1.25';
+    box.setSelectionRange(1, 3, 'backward');
+    box.dispatchEvent(new Event('input', { bubbles: true }));
+    expect(diameter(target)).not.toBe(box);
+    expect(shadow.activeElement).toBe(diameter(target));
+    expect(diameter(target).selectionDirection).toBe('backward');
+  });
 });
 
 describe('a snippet’s settings, checked by the runtime', () => {

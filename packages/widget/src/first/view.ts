@@ -28,7 +28,6 @@ import {
   typed,
   type FieldState,
 } from '../lib/form.js';
-import { restoreFocus, saveFocus } from '../lib/focus.js';
 import { lookVariables } from '../lib/look.js';
 import { resolveInputSettings, type ResolvedInput } from '../lib/settings.js';
 import { displayUnitOf, outputUnitFor, toDisplay, unitGap, unitSymbol, withUnit } from '../lib/units.js';
@@ -382,7 +381,15 @@ export function renderFirstView(target: HTMLElement, o: FirstViewOptions): First
 
   /** Draws what depends on the state (fields, problems, answer), keeping the focused control and its caret. */
   const draw = (): void => {
-    const focus = saveFocus(target.getRootNode() as ShadowRoot);
+    // A redraw makes the fields again (the unit switch and the button stay): focus and caret follow
+    // the focused field by its id. Only fields are remade, and each has an id, so this is all the
+    // first view needs of lib/focus.ts, which the full widget's takeover uses (it may meet any control).
+    const active = (target.getRootNode() as ShadowRoot).activeElement as HTMLInputElement | null;
+    const id = active?.id;
+    const text = active?.localName === 'input' ? active : null;
+    const start = text?.selectionStart ?? null;
+    const end = text?.selectionEnd ?? null;
+    const direction = text?.selectionDirection ?? undefined;
     const system = shown();
     root.setAttribute('data-system', system);
     for (const [radio] of radios) radio.checked = radio.value === system;
@@ -412,7 +419,11 @@ export function renderFirstView(target: HTMLElement, o: FirstViewOptions): First
     else if (next) announcer.after(next);
     else result?.remove();
     result = next;
-    restoreFocus(target.getRootNode() as ParentNode, focus);
+    const again = id ? root.querySelector<HTMLInputElement>(`#${id}`) : null;
+    if (again && again !== active) {
+      again.focus({ preventScroll: true });
+      if (start !== null && end !== null) again.setSelectionRange(start, end, direction);
+    }
   };
 
   const edit = (next: ViewState['form']): void => {
