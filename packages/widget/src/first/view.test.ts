@@ -35,6 +35,16 @@ function shadowTarget(): { shadow: ShadowRoot; target: HTMLElement } {
   return { shadow, target };
 }
 
+/** The first view of the test widget (tube rise, no texts yet) in `target`. */
+function renderTube(target: HTMLElement): void {
+  renderFirstView(target, {
+    widget: widget(),
+    calculator: { cautions: [], references: [], ...calculator },
+    compute,
+    apiBase: null,
+  });
+}
+
 function type(el: HTMLInputElement, text: string): void {
   el.value = text;
   el.dispatchEvent(new Event('input', { bubbles: true }));
@@ -60,12 +70,7 @@ afterEach(() => {
 describe('the first view', () => {
   it('renders the header, the fields with their units and the button, with no result before one is asked for', () => {
     const { target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     expect(target.querySelector('.widget-name')?.textContent).toBe('Damp check');
     expect(target.querySelector('h2.title')?.textContent).toBe(calculator.title);
     expect(target.querySelector('label[for="wk-in-diameter"]')?.textContent).toBe(
@@ -83,12 +88,7 @@ describe('the first view', () => {
 
   it('works out the answer calc-core gives for what was typed', () => {
     const { target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     type(diameter(target), '0.5');
     submit(target);
     const rise = target.querySelector<HTMLElement>('.readout[data-output="rise"]');
@@ -106,12 +106,7 @@ describe('the first view', () => {
 
   it('never shows a withheld figure, and shows the warning that says why with the answer', () => {
     const { target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     type(diameter(target), '20');
     submit(target);
     const withheld = target.querySelector('.readout[data-output="rise"]');
@@ -128,12 +123,7 @@ describe('the first view', () => {
 
   it('names the field a problem is in, beside it, and gives it focus', () => {
     const { shadow, target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     type(diameter(target), 'abc');
     submit(target);
     const error = target.querySelector('[data-field-error="diameter"]');
@@ -151,12 +141,7 @@ describe('the first view', () => {
 
   it('switches units, showing the typed value in the new unit, and keeps focus and caret on a redraw', () => {
     const { shadow, target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     type(diameter(target), '25.4');
     const us = target.querySelector<HTMLInputElement>('input[data-unit="us"]')!;
     us.checked = true;
@@ -180,12 +165,7 @@ describe('the first view', () => {
 
   it('keeps focus on a choice whose change redraws the fields, and a backward selection as it was', () => {
     const { shadow, target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     const liquid = () => target.querySelector<HTMLSelectElement>('select[data-input="liquid"]')!;
     const before = liquid();
     before.focus();
