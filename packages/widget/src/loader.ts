@@ -7,8 +7,8 @@
 // each checked against the hash the engine carries for it (a chain: the engine's own was checked).
 // It exports nothing, so the IIFE defines no global of its own.
 import { chunkLoader, installRegistry, type ChunkRegistry, type ChunkTable } from './chunks.js';
+import type { EmbedWidget } from '@wickstone/contracts';
 import { installGlobal, type MountHandle, type MountOptions } from './global.js';
-import { isEmbedWidget } from './lib/shape.js';
 import type { Engine, TextsChunk } from './engine.js';
 import type { AppChunk } from './first/mount.js';
 import type { ExtrasModule } from './lazy.js';
@@ -62,37 +62,43 @@ function engine(): Promise<Engine> {
 /**
  * `Wickstone.mount` for this calculator: answers at once with a handle, and renders as soon as
  * the runtime and engine are here (updates and unmounts made before then are kept in order).
+ * `fail` (a snippet's own widget) has the runtime check the settings' shape first, and hears of
+ * anything that keeps the widget from showing.
  */
-function mount(element: Element, first: MountOptions): MountHandle {
+function mount(element: Element, first: MountOptions, fail?: (why: string) => void): MountHandle {
   let latest = first;
   let handle: MountHandle | null = null;
   let gone = false;
-  engine().then(
-    (e) => {
+  engine()
+    .then((e) => {
       if (gone) return;
+      // The engine came through `load`, so there is one.
+      const later =
+        <T>(file: string) =>
+        (): Promise<T> =>
+          load!(file) as Promise<T>;
       handle = e.mountFirst(
         {
           calculator: e.calculator,
           compute: e.compute,
           releaseBase,
           defaultApiBase: script ? apiBaseFor(script.src, null) : null,
-          app: load && (() => load(__WICKSTONE_APP__) as Promise<AppChunk>),
-          texts: load && (() => load(__WICKSTONE_TEXTS__) as Promise<TextsChunk>),
-          extras: load && (() => load(__WICKSTONE_EXTRAS__) as Promise<ExtrasModule>),
-          tables:
-            load && __WICKSTONE_TABLES__ !== null
-              ? () => load(__WICKSTONE_TABLES__ as string) as Promise<TablesModule>
-              : null,
+          app: later<AppChunk>(__WICKSTONE_APP__),
+          texts: later<TextsChunk>(__WICKSTONE_TEXTS__),
+          extras: later<ExtrasModule>(__WICKSTONE_EXTRAS__),
+          tables: __WICKSTONE_TABLES__ === null ? null : later<TablesModule>(__WICKSTONE_TABLES__),
+          checkSettings: fail !== undefined,
         },
         element,
         latest,
       );
-    },
-    (err: unknown) => {
+    })
+    .catch((err: unknown) => {
+      const why = err instanceof Error ? err.message : String(err);
+      if (fail) return fail(why);
       element.setAttribute('data-state', 'unavailable');
-      console.warn(`Wickstone: ${err instanceof Error ? err.message : String(err)}`);
-    },
-  );
+      console.warn(`Wickstone: ${why}`);
+    });
   return {
     update(options) {
       latest = options;
@@ -138,25 +144,24 @@ async function place(tag: HTMLScriptElement, key: string): Promise<void> {
     // No widget is coming: give back the place the snippet held for it.
     host.style.removeProperty('min-height');
     host.style.removeProperty('--wk-held');
-    console.warn(`Wickstone: widget ${key} is not shown: ${why}`);
+    console.warn(`Wickstone: widget ${key} not shown: ${why}`);
   };
-  if (apiBase === null) return unavailable('no server to ask for its settings');
-  // The code and the settings travel at the same time.
-  const code = engine();
-  code.catch(() => undefined);
-  const reply = await getSettings(`${apiBase}/api/v1/embed/widgets/${key}`);
-  if (reply.status === 403) return unavailable('this site is not one the widget may be embedded on');
-  if (reply.status === 404) return unavailable('the widget is not live (draft, paused or unknown key)');
-  if (reply.status !== 200 || !isEmbedWidget(reply.body))
-    return unavailable(`the server answered ${reply.status || 'nothing'}`);
-  if (reply.body.calculatorId !== calculatorId)
-    return unavailable(`it is a ${reply.body.calculatorId} widget, not ${calculatorId}`);
-  try {
-    await code;
-  } catch (err) {
-    return unavailable(err instanceof Error ? err.message : String(err));
-  }
-  mount(host, { widget: reply.body, apiBase });
+  if (apiBase === null) return unavailable('no server');
+  // The code and the settings travel at the same time; the runtime checks the settings' shape.
+  engine().catch(() => undefined);
+  const { status, body } = await getSettings(`${apiBase}/api/v1/embed/widgets/${key}`);
+  const widget = body as EmbedWidget | null;
+  if (status !== 200 || widget?.calculatorId !== calculatorId)
+    return unavailable(
+      status === 403
+        ? 'not allowed on this site'
+        : status === 404
+          ? 'not live (draft, paused or unknown key)'
+          : status === 200
+            ? `settings for ${String(widget?.calculatorId)}`
+            : `server answered ${status || 'nothing'}`,
+    );
+  mount(host, { widget, apiBase }, unavailable);
 }
 
 const key = script?.getAttribute('data-wickstone-key') ?? undefined;

@@ -6,6 +6,7 @@ import type { Bundle } from '../mount.js';
 import type { MountHandle, MountOptions } from '../global.js';
 import { afterFirstPaint } from '../lib/paint.js';
 import { adoptStyles } from '../lib/sheets.js';
+import { isEmbedWidget } from '../lib/shape.js';
 import { HOST_TAG } from '../placement.js';
 import css from '../ui/styles.css?inline';
 import { renderFirstView, type FirstView } from './view.js';
@@ -18,6 +19,8 @@ export interface AppChunk {
 export interface FirstBundle extends Bundle {
   /** Fetches the full widget (Preact, the whole App); null where there is none to fetch (it never takes over). */
   readonly app: (() => Promise<AppChunk>) | null;
+  /** The settings came from the embed API (a snippet's widget): check their shape before drawing anything. */
+  readonly checkSettings?: boolean;
 }
 
 /** The host element to render into: `element` itself when it is one of ours, else one made inside it. */
@@ -40,6 +43,8 @@ export function hostIn(element: Element, calculatorId: string): { host: HTMLElem
  * it) and hands it to the full widget after first paint: same markup, same state, same focus.
  */
 export function mountFirst(bundle: FirstBundle, element: Element, first: MountOptions): MountHandle {
+  // A malformed answer must not break the page: the loader gives the widget's place back instead.
+  if (bundle.checkSettings && !isEmbedWidget(first.widget)) throw new Error('malformed settings');
   const core: CalculatorCore | CalculatorDefinition = bundle.calculator;
   // The first view has no cautions or references of its own to show: they follow with the texts.
   const calculator: CalculatorDefinition = { cautions: [], references: [], ...core };

@@ -35,6 +35,16 @@ function shadowTarget(): { shadow: ShadowRoot; target: HTMLElement } {
   return { shadow, target };
 }
 
+/** The first view of the test widget (tube rise, no texts yet) in `target`. */
+function renderTube(target: HTMLElement): void {
+  renderFirstView(target, {
+    widget: widget(),
+    calculator: { cautions: [], references: [], ...calculator },
+    compute,
+    apiBase: null,
+  });
+}
+
 function type(el: HTMLInputElement, text: string): void {
   el.value = text;
   el.dispatchEvent(new Event('input', { bubbles: true }));
@@ -60,12 +70,7 @@ afterEach(() => {
 describe('the first view', () => {
   it('renders the header, the fields with their units and the button, with no result before one is asked for', () => {
     const { target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     expect(target.querySelector('.widget-name')?.textContent).toBe('Damp check');
     expect(target.querySelector('h2.title')?.textContent).toBe(calculator.title);
     expect(target.querySelector('label[for="wk-in-diameter"]')?.textContent).toBe(
@@ -83,12 +88,7 @@ describe('the first view', () => {
 
   it('works out the answer calc-core gives for what was typed', () => {
     const { target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     type(diameter(target), '0.5');
     submit(target);
     const rise = target.querySelector<HTMLElement>('.readout[data-output="rise"]');
@@ -106,12 +106,7 @@ describe('the first view', () => {
 
   it('never shows a withheld figure, and shows the warning that says why with the answer', () => {
     const { target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     type(diameter(target), '20');
     submit(target);
     const withheld = target.querySelector('.readout[data-output="rise"]');
@@ -128,12 +123,7 @@ describe('the first view', () => {
 
   it('names the field a problem is in, beside it, and gives it focus', () => {
     const { shadow, target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     type(diameter(target), 'abc');
     submit(target);
     const error = target.querySelector('[data-field-error="diameter"]');
@@ -151,12 +141,7 @@ describe('the first view', () => {
 
   it('switches units, showing the typed value in the new unit, and keeps focus and caret on a redraw', () => {
     const { shadow, target } = shadowTarget();
-    renderFirstView(target, {
-      widget: widget(),
-      calculator: { cautions: [], references: [], ...calculator },
-      compute,
-      apiBase: null,
-    });
+    renderTube(target);
     type(diameter(target), '25.4');
     const us = target.querySelector<HTMLInputElement>('input[data-unit="us"]')!;
     us.checked = true;
@@ -176,6 +161,60 @@ describe('the first view', () => {
     expect(shadow.activeElement).toBe(diameter(target));
     expect(diameter(target).selectionStart).toBe(1);
     expect(diameter(target).selectionEnd).toBe(3);
+  });
+
+  it('keeps focus on a choice whose change redraws the fields, and a backward selection as it was', () => {
+    const { shadow, target } = shadowTarget();
+    renderTube(target);
+    const liquid = () => target.querySelector<HTMLSelectElement>('select[data-input="liquid"]')!;
+    const before = liquid();
+    before.focus();
+    before.value = 'ethanol';
+    before.dispatchEvent(new Event('change', { bubbles: true }));
+    expect(liquid()).not.toBe(before);
+    expect(shadow.activeElement).toBe(liquid());
+    expect(liquid().value).toBe('ethanol');
+
+    submit(target);
+    const box = diameter(target);
+    box.focus();
+    box.value = '1.25';
+    box.setSelectionRange(1, 3, 'backward');
+    box.dispatchEvent(new Event('input', { bubbles: true }));
+    expect(diameter(target)).not.toBe(box);
+    expect(shadow.activeElement).toBe(diameter(target));
+    expect(diameter(target).selectionDirection).toBe('backward');
+  });
+});
+
+describe('a snippet’s settings, checked by the runtime', () => {
+  const bundle = (checkSettings: boolean) => ({
+    calculator,
+    compute,
+    releaseBase: null,
+    defaultApiBase: 'https://app.wickstone.example',
+    texts: null,
+    extras: null,
+    tables: null,
+    app: null,
+    checkSettings,
+  });
+
+  it('refuses a malformed answer before drawing anything, so the loader can give the place back', () => {
+    const host = document.createElement('wickstone-widget');
+    document.body.append(host);
+    const broken = { ...widget(), settings: { ...widget().settings, look: null } } as unknown as EmbedWidget;
+    expect(() => mountFirst(bundle(true), host, { widget: broken })).toThrow(/malformed settings/);
+    expect(host.shadowRoot).toBeNull();
+    expect(host.hasAttribute('data-state')).toBe(false);
+  });
+
+  it('draws a well-formed answer', () => {
+    const host = document.createElement('wickstone-widget');
+    document.body.append(host);
+    mountFirst(bundle(true), host, { widget: widget() });
+    expect(host.shadowRoot?.querySelector('[data-wickstone="root"]')).not.toBeNull();
+    expect(host.getAttribute('data-state')).toBe('ready');
   });
 });
 

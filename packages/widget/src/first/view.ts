@@ -28,7 +28,6 @@ import {
   typed,
   type FieldState,
 } from '../lib/form.js';
-import { restoreFocus, saveFocus } from '../lib/focus.js';
 import { lookVariables } from '../lib/look.js';
 import { resolveInputSettings, type ResolvedInput } from '../lib/settings.js';
 import { displayUnitOf, outputUnitFor, toDisplay, unitGap, unitSymbol, withUnit } from '../lib/units.js';
@@ -59,23 +58,9 @@ function h(tag: string, attrs: Record<string, string | null | undefined | false>
   return el;
 }
 
-const LOCK_PATH = 'M3 6V4a3 3 0 0 1 6 0v2h1.5v7h-9V6zm1.5 0h3V4a1.5 1.5 0 0 0-3 0z';
-function lockIcon(): Element {
-  const ns = 'http://www.w3.org/2000/svg';
-  const svg = document.createElementNS(ns, 'svg');
-  for (const [k, v] of [
-    ['viewBox', '0 0 12 14'],
-    ['width', '11'],
-    ['height', '13'],
-    ['aria-hidden', 'true'],
-  ])
-    svg.setAttribute(k!, v!);
-  const path = document.createElementNS(ns, 'path');
-  path.setAttribute('d', LOCK_PATH);
-  path.setAttribute('fill', 'currentColor');
-  svg.append(path);
-  return svg;
-}
+/** The lock note's icon, as `ui/Field.tsx` draws it (a constant: no text of anyone's goes into it). */
+const LOCK_ICON =
+  '<svg viewBox="0 0 12 14" width="11" height="13" aria-hidden="true"><path d="M3 6V4a3 3 0 0 1 6 0v2h1.5v7h-9V6zm1.5 0h3V4a1.5 1.5 0 0 0-3 0z" fill="currentColor"></path></svg>';
 
 /** One calculator input, as `ui/Field.tsx` renders it. */
 function field(
@@ -123,6 +108,9 @@ function field(
     control.readOnly = locked;
     control.value = choice ? (option?.label ?? String(state.value)) : state.text;
   }
+  const lockNote =
+    locked && h('p', { class: 'note lock-note', id: `${id}-lock` }, 'Fixed by the firm for this calculator');
+  if (lockNote) lockNote.insertAdjacentHTML('afterbegin', LOCK_ICON);
   return h(
     'div',
     {
@@ -141,13 +129,7 @@ function field(
       symbol !== '' && h('span', { class: 'unit' }, `, ${symbol}`),
     ),
     h('div', { class: 'box' }, control),
-    locked &&
-      h(
-        'p',
-        { class: 'note lock-note', id: `${id}-lock` },
-        lockIcon(),
-        'Fixed by the firm for this calculator',
-      ),
+    lockNote,
     help && h('p', { class: 'note', id: `${id}-help` }, help),
     error && h('p', { class: 'error', id: `${id}-error`, 'data-field-error': def.id }, error),
   );
@@ -399,7 +381,15 @@ export function renderFirstView(target: HTMLElement, o: FirstViewOptions): First
 
   /** Draws what depends on the state (fields, problems, answer), keeping the focused control and its caret. */
   const draw = (): void => {
-    const focus = saveFocus(target.getRootNode() as ShadowRoot);
+    // A redraw makes the fields again (the unit switch and the button stay): focus and caret follow
+    // the focused field by its id. Only fields are remade, and each has an id, so this is all the
+    // first view needs of lib/focus.ts, which the full widget's takeover uses (it may meet any control).
+    const active = (target.getRootNode() as ShadowRoot).activeElement as HTMLInputElement | null;
+    const id = active?.id;
+    const text = active?.localName === 'input' ? active : null;
+    const start = text?.selectionStart ?? null;
+    const end = text?.selectionEnd ?? null;
+    const direction = text?.selectionDirection ?? undefined;
     const system = shown();
     root.setAttribute('data-system', system);
     for (const [radio] of radios) radio.checked = radio.value === system;
@@ -429,7 +419,11 @@ export function renderFirstView(target: HTMLElement, o: FirstViewOptions): First
     else if (next) announcer.after(next);
     else result?.remove();
     result = next;
-    restoreFocus(target.getRootNode() as ParentNode, focus);
+    const again = id ? root.querySelector<HTMLInputElement>(`#${id}`) : null;
+    if (again && again !== active) {
+      again.focus({ preventScroll: true });
+      if (start !== null && end !== null) again.setSelectionRange(start, end, direction);
+    }
   };
 
   const edit = (next: ViewState['form']): void => {

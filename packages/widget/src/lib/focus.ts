@@ -1,6 +1,6 @@
-// Keeps the visitor's place when the widget's markup is made again (the first view redrawing its
-// fields, or the full widget taking over from it): which control had focus, and where its caret or
-// selection was, so typing goes on where it was.
+// Keeps the visitor's place when the full widget takes over from the first view (and adopts its
+// markup): which control had focus, and where its caret or selection was, so typing goes on where
+// it was. The first view's own redraws remake only its fields, which it finds again by id itself.
 
 /** The focused control, found again by what stays the same across a redraw, and its selection. */
 export interface SavedFocus {

@@ -19,12 +19,6 @@ const CORNERS: Readonly<Record<Look['corner'], readonly [panel: string, control:
   round: ['18px', '12px'],
 };
 
-const FALLBACK = {
-  background: '#ffffff',
-  text: '#1b2a30',
-  primary: '#1d4e5f',
-  primaryText: '#ffffff',
-} as const;
 const HEX = /^#[0-9a-fA-F]{6}$/;
 
 /**
@@ -34,13 +28,14 @@ const HEX = /^#[0-9a-fA-F]{6}$/;
  */
 export function lookVariables(look: Look): Record<string, string> {
   const c = look.colors;
+  // The product's own pairs where a colour is unusable.
   const pick = (value: string, fallback: string): string => (HEX.test(value) ? value : fallback);
   const [panel, control] = CORNERS[look.corner] ?? CORNERS.soft;
   return {
-    '--wk-bg': pick(c.background, FALLBACK.background),
-    '--wk-fg': pick(c.text, FALLBACK.text),
-    '--wk-accent': pick(c.primary, FALLBACK.primary),
-    '--wk-on-accent': pick(c.primaryText, FALLBACK.primaryText),
+    '--wk-bg': pick(c.background, '#ffffff'),
+    '--wk-fg': pick(c.text, '#1b2a30'),
+    '--wk-accent': pick(c.primary, '#1d4e5f'),
+    '--wk-on-accent': pick(c.primaryText, '#ffffff'),
     '--wk-r': panel,
     '--wk-rc': control,
     '--wk-font': FONT_STACKS[look.font] ?? FONT_STACKS['system-sans'],

@@ -7,7 +7,8 @@ const isString = (v: unknown): v is string => typeof v === 'string';
 /**
  * Whether an API answer has the shape of `embedWidgetSchema`, checked by hand: the schema's zod
  * would multiply the bundle's size, and the server already validated what it stored. This only
- * keeps a malformed answer from breaking the host page; it does not re-check values.
+ * keeps a malformed answer from breaking the host page; it does not re-check values. The runtime
+ * checks (`mountFirst`), not the loader: shared by every widget on a page, and compressed better there.
  */
 export function isEmbedWidget(v: unknown): v is EmbedWidget {
   if (

@@ -23,10 +23,8 @@ export function adoptStyles(root: ShadowRoot, text: string, kind: SheetKind): vo
   const style = document.createElement('style');
   style.setAttribute('data-wickstone', kind);
   style.textContent = text;
-  if (kind === 'styles') root.prepend(style);
-  else {
-    const before = [...root.querySelectorAll('style[data-wickstone]')].pop();
-    if (before) before.after(style);
-    else root.prepend(style);
-  }
+  // The main styles first; the others after the last style already there.
+  const before = kind === 'styles' ? null : [...root.querySelectorAll('style[data-wickstone]')].pop();
+  if (before) before.after(style);
+  else root.prepend(style);
 }
