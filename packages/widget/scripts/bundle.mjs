@@ -322,11 +322,15 @@ export async function buildChunks(calculatorIds) {
         name: 'wickstone-engines',
         resolveId: (id) => (id.startsWith(ENGINE) || id.startsWith(TEXTS) ? `\0${id}` : null),
         load(id) {
-          // The texts chunk also carries calc-core's full run (working, input hash): the first flight computes only.
+          // The texts chunk also carries calc-core's full run (working, input hash): the first flight
+          // computes only. The working is written by the texts' `explain` (`<id>.working.ts`), handed
+          // to the full run here, since the widget runs the core it computed with.
           if (id.startsWith(`\0${TEXTS}`))
             return (
-              `export { texts } from ${JSON.stringify(textsModuleOf(id.slice(TEXTS.length + 1)))};\n` +
-              `export { runCalculation } from ${JSON.stringify(RUN_MODULE)};\n`
+              `import { texts } from ${JSON.stringify(textsModuleOf(id.slice(TEXTS.length + 1)))};\n` +
+              `import { runCalculation as run } from ${JSON.stringify(RUN_MODULE)};\n` +
+              `export { texts };\n` +
+              `export const runCalculation = (def, inputs) => run(def, inputs, texts.explain);\n`
             );
           if (!id.startsWith(`\0${ENGINE}`)) return null;
           const calc = id.slice(ENGINE.length + 1);

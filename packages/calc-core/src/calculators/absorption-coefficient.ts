@@ -10,7 +10,7 @@ import {
 import { computer } from './engine.js';
 import { runner } from './run.js';
 import { tableIssues } from './table.js';
-import { choice, fmt, laterWorking, num, q, solved, warning } from './shared.js';
+import { choice, fmt, laterWorking, num, q, solvedLegacy, warning } from './shared.js';
 import type {
   CalculatorCore,
   InputValues,
@@ -156,7 +156,7 @@ function solve(inputs: InputValues): Solution {
   });
 
   if (chosen.length < MIN_POINTS_IN_FIT) {
-    return solved({
+    return solvedLegacy({
       band: null,
       explain,
       outputs: outputs({}),
@@ -220,7 +220,7 @@ function solve(inputs: InputValues): Solution {
         { step: 'slope', withholds: [...RATES] },
       ),
     );
-    return solved({ band: null, explain, outputs: outputs({ rSquared: fit.rSquared }), warnings });
+    return solvedLegacy({ band: null, explain, outputs: outputs({ rSquared: fit.rSquared }), warnings });
   }
   if (r < MIN_CORRELATION) {
     warnings.push(
@@ -231,7 +231,7 @@ function solve(inputs: InputValues): Solution {
         { step: 'r-squared', withholds: [...RATES] },
       ),
     );
-    return solved({ band: null, explain, outputs: outputs({ rSquared: fit.rSquared }), warnings });
+    return solvedLegacy({ band: null, explain, outputs: outputs({ rSquared: fit.rSquared }), warnings });
   }
   const sorptivity = fit.slope / rhoW;
   working.add(() => [
@@ -265,7 +265,7 @@ function solve(inputs: InputValues): Solution {
       ),
     );
   }
-  return solved({
+  return solvedLegacy({
     band: null,
     explain,
     outputs: outputs({

@@ -11,7 +11,7 @@ import {
   num,
   q,
   quantityInput,
-  solved,
+  solvedLegacy,
   laterWorking,
   warning,
 } from './shared.js';
@@ -180,7 +180,7 @@ function solve(inputs: InputValues): Solution {
     if (poor !== null) warnings.push(poor);
   }
 
-  return solved({
+  return solvedLegacy({
     outputs: {
       contactAngleDeg: angle,
       recedingAngleDeg: both ? receding : null,

@@ -10,7 +10,7 @@ import { hazenCapillaryRise } from '../formulas/soil.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
 import { HAZEN_BASIS, hazenCInput, hazenRiseStep } from './hazen.js';
-import { choice, fmt, laterWorking, MM, num, q, quantityInput, solved, warning } from './shared.js';
+import { choice, fmt, laterWorking, MM, num, q, quantityInput, solvedLegacy, warning } from './shared.js';
 import type { CalculatorCore, InputValues, Outputs, Solution, Warning } from './types.js';
 
 const CASAGRANDE = 'Casagrande 1931 grain-size criterion (from memory, common practice)';
@@ -188,7 +188,7 @@ function solve(inputs: InputValues): Solution {
     );
   }
 
-  return solved({
+  return solvedLegacy({
     outputs,
     warnings,
     band,

@@ -17,7 +17,7 @@ import {
   quantityInput,
   warning,
   capillaryLengthStep,
-  solved,
+  solvedLegacy,
   laterWorking,
 } from './shared.js';
 import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
@@ -178,7 +178,7 @@ function solve(inputs: InputValues): Solution {
     ...(angle !== null ? [angle.assumption] : []),
     gravityAssumption(g),
   ];
-  return solved(
+  return solvedLegacy(
     { outputs, warnings, band, explain: () => ({ working: working.build(), assumptions: assumptions() }) },
     liquid,
   );

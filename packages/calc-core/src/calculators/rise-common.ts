@@ -20,7 +20,7 @@ import {
   q,
   warning,
   capillaryLengthStep,
-  solved,
+  solvedLegacy,
   type Explanation,
 } from './shared.js';
 import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
@@ -299,7 +299,7 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
     ];
     return { working, assumptions };
   };
-  return solved({ outputs, warnings, band, explain }, liquid);
+  return solvedLegacy({ outputs, warnings, band, explain }, liquid);
 }
 
 /**

@@ -1,7 +1,7 @@
 import { risingDampSteadyState, STEADY_FRACTION, timeToFraction } from '../formulas/rising-damp.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
-import { choice, fmt, laterWorking, num, q, quantityInput, solved, warning } from './shared.js';
+import { choice, fmt, laterWorking, num, q, quantityInput, solvedLegacy, warning } from './shared.js';
 import type { CalculatorCore, InputValues, Solution, Warning } from './types.js';
 
 const HALL_HOFF = 'Hall & Hoff 2007, Proc. R. Soc. A 463, 1871–1884 (form from memory)';
@@ -118,7 +118,7 @@ function solve(inputs: InputValues): Solution {
     );
   }
 
-  return solved({
+  return solvedLegacy({
     outputs: {
       steadyHeight: r.steadyHeight,
       waterHeld: r.waterHeld,

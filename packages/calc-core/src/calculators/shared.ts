@@ -6,6 +6,7 @@ import type {
   Caution,
   Condition,
   InputValues,
+  Note,
   QuantityInput,
   Solution,
   Warning,
@@ -13,7 +14,8 @@ import type {
 } from './types.js';
 
 // Pieces every calculator shares: gravity, number formatting, the common warnings and cautions, and
-// how a solution's working is written when read. The liquid and contact-angle inputs are in
+// how a solve records its working (notes; the text is written in shared-working.ts and each
+// calculator's `<id>.working.ts`, which only the full run carries). The liquid and contact-angle inputs are in
 // shared-liquid.ts, so that only the calculators that take a liquid carry the liquids' data.
 
 // ---------------------------------------------------------------- number formatting for working
@@ -134,6 +136,37 @@ export const OTHER_LIQUID_CAUTION: Caution = {
   text: "The liquid's hazards are not known to this calculator: read its safety data sheet before handling it.",
 };
 
+/** Notes of one calculator's working, typed by its writers' data (`StepWriters`). */
+export interface NoteTaker<N> {
+  readonly list: Note[];
+  add<K extends keyof N & string>(key: K, data: N[K]): void;
+  /** A note that goes before every note added so far. */
+  first<K extends keyof N & string>(key: K, data: N[K]): void;
+}
+
+/**
+ * A solve's working, recorded as it goes as notes (a key and the numbers its step is written from):
+ * the text is written from them by the calculator's `<id>.working.ts`, which only `calculate` runs.
+ */
+export function noteTaker<N>(): NoteTaker<N> {
+  const list: Note[] = [];
+  return {
+    list,
+    add: (key, data) => void list.push([key, data]),
+    first: (key, data) => void list.unshift([key, data]),
+  };
+}
+
+/** A solution with the liquid's hazard (if it has one) attached to the result's cautions. */
+export function solved(
+  parts: Omit<Solution, 'hazards'>,
+  liquid?: { readonly hazard?: Caution } | null,
+): Solution {
+  return liquid?.hazard !== undefined ? { ...parts, hazards: [liquid.hazard] } : parts;
+}
+
+// ---------------------------------------------------------------- LEGACY (until every calculator writes notes)
+
 /** The assumptions every capillary result shares. */
 export const STATIC_ASSUMPTIONS: readonly string[] = [
   'Static equilibrium: the liquid has stopped moving.',
@@ -193,7 +226,7 @@ export interface Explanation {
  * `explain` instead of `working` and `assumptions`, those two are built on first reading only
  * (`calculate` reads them; `compute` never does, so it formats no number it does not show).
  */
-export function solved(
+export function solvedLegacy(
   parts: Omit<Solution, 'hazards' | 'working' | 'assumptions'> &
     (Explanation | { readonly explain: () => Explanation }),
   liquid?: { readonly hazard?: Caution } | null,

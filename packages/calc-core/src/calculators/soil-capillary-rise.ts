@@ -2,7 +2,7 @@ import { capillaryBreakCheck, HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../fo
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
 import { HAZEN_BASIS, HAZEN_SOURCE, hazenCInput, hazenRiseStep } from './hazen.js';
-import { choice, laterWorking, MM, num, q, quantityInput, warning, solved } from './shared.js';
+import { choice, laterWorking, MM, num, q, quantityInput, warning, solvedLegacy } from './shared.js';
 import type { CalculatorCore, InputValues, Outputs, Warning } from './types.js';
 
 /** IRC R506.2.2: a 4-inch-thick (102 mm) base course under a slab below grade. */
@@ -193,7 +193,7 @@ function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
       ),
     );
   }
-  return solved({
+  return solvedLegacy({
     outputs,
     warnings,
     band,

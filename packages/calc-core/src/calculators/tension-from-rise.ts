@@ -14,7 +14,7 @@ import {
   num,
   q,
   quantityInput,
-  solved,
+  solvedLegacy,
   laterWorking,
   warning,
 } from './shared.js';
@@ -184,7 +184,7 @@ function solve(inputs: InputValues): Solution {
     );
   }
 
-  return solved({
+  return solvedLegacy({
     outputs: {
       surfaceTension: sigmaOut,
       contactAngleDeg: angleOut,

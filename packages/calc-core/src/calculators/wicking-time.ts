@@ -15,7 +15,7 @@ import {
   quantityInput,
   warning,
   capillaryLengthStep,
-  solved,
+  solvedLegacy,
   laterWorking,
 } from './shared.js';
 import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
@@ -114,7 +114,7 @@ function solve(inputs: InputValues): Solution {
       angle.assumption,
       gravityAssumption(g),
     ];
-    return solved(
+    return solvedLegacy(
       {
         outputs,
         warnings,
@@ -244,7 +244,7 @@ function solve(inputs: InputValues): Solution {
     angle.assumption,
     gravityAssumption(g),
   ];
-  return solved(
+  return solvedLegacy(
     { outputs, warnings, band, explain: () => ({ working: working.build(), assumptions: assumptions() }) },
     liquid,
   );
