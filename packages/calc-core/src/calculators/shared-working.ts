@@ -1,7 +1,7 @@
 import { IAPWS_R1_76, IAPWS_SR6_08, KELL_1975, TANAKA_2001 } from '../properties/water.js';
 import { formatValue } from '../format.js';
 import { STANDARD_GRAVITY, type UnitId } from '../units.js';
-import { CUSTOM, coef, q } from './shared.js';
+import { CUSTOM, coef, fmt, q } from './shared.js';
 import { type AngleFacts, type LiquidFacts, type SharedWriters } from './shared-liquid.js';
 import type { WorkingStep } from './types.js';
 
@@ -35,6 +35,26 @@ export function capillaryLengthStep(
     value: lc,
     unit: 'm',
     source: 'de Gennes, Brochard-Wyart & Quéré (2004) Capillarity and Wetting Phenomena',
+  };
+}
+
+/** The working step of h_c = C/(e·D10): C in m², D10 in m, the rise in m. */
+export function hazenRiseStep(
+  id: string,
+  label: string,
+  c: number,
+  e: number,
+  d10: number,
+  value: number,
+): WorkingStep {
+  return {
+    id,
+    label,
+    formula: 'h_c = C / (e·D10)',
+    substituted: `${q(c, 'm2')} / (${fmt(e)} × ${q(d10, 'm')})`,
+    value,
+    unit: 'm',
+    source: 'Hazen, as given by Terzaghi & Peck (1948) (from memory)',
   };
 }
 
