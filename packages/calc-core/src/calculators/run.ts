@@ -23,15 +23,6 @@ export function hashInputs(calculatorId: string, inputs: InputValues): string {
   return sha256Hex(canonicalJson({ calculator: calculatorId, inputs }));
 }
 
-/** Every warning's step is one the working has. */
-function checkSteps(def: CalculatorCore, solution: Solution, working: readonly WorkingStep[]): void {
-  const steps = new Set(working.map((s) => s.id));
-  for (const w of solution.warnings) {
-    if (w.step !== undefined && !steps.has(w.step))
-      throw new Error(`${def.id}: warning ${w.code} points at a step ${w.step} the working does not have`);
-  }
-}
-
 /**
  * Writes a solution's working and assumptions from its notes with the calculator's `explain`, and
  * checks that every warning's step is one the working has.
@@ -42,11 +33,6 @@ function explained(
   inputs: InputValues,
   explain: Explain | undefined,
 ): Explanation {
-  if (solution.notes === undefined) {
-    const working = solution.working ?? [];
-    checkSteps(def, solution, working);
-    return { working, assumptions: solution.assumptions ?? [] };
-  }
   if (explain === undefined)
     throw new Error(
       `${def.id}: its working is written by its texts (calculators/${def.id}.working.ts): give runCalculation their explain`,
@@ -57,7 +43,12 @@ function explained(
     if (write === undefined) throw new Error(`${def.id}: its working has no writer for the note ${key}`);
     return write(data, inputs);
   });
-  checkSteps(def, solution, working);
+  // A calc-core bug, not a bad input: a warning that points at a step the working does not have.
+  const steps = new Set(working.map((s) => s.id));
+  for (const w of solution.warnings) {
+    if (w.step !== undefined && !steps.has(w.step))
+      throw new Error(`${def.id}: warning ${w.code} points at a step ${w.step} the working does not have`);
+  }
   const assumptions = (explain.assumptions as (assumed: unknown, inputs: InputValues) => readonly string[])(
     solution.assumed,
     inputs,

@@ -184,13 +184,9 @@ export interface Solution {
   /** Cautions that belong to these inputs (the chosen liquid's hazard); shown before the calculator's own. */
   readonly hazards?: readonly Caution[];
   /** The working as records, in the order its steps read: `Explain.steps` writes them (`calculate` does, `compute` never). */
-  readonly notes?: readonly Note[];
+  readonly notes: readonly Note[];
   /** What the assumptions are written from (`Explain.assumptions`): numbers and choices, no text. */
-  readonly assumed?: unknown;
-  /** LEGACY: a working written by the solve itself. */
-  readonly working?: readonly WorkingStep[];
-  /** LEGACY */
-  readonly assumptions?: readonly string[];
+  readonly assumed: unknown;
 }
 
 /** A solution's working and its assumptions, as text. */
@@ -268,7 +264,11 @@ export interface CalculatorCore {
 export interface CalculatorTexts {
   readonly cautions: readonly Caution[];
   readonly references: readonly Reference[];
-  /** Writes the working and assumptions from a solution's notes (`<id>.working.ts`): the first flight carries none of it. */
+  /**
+   * Writes the working and assumptions from a solution's notes (`<id>.working.ts`): the first
+   * flight carries none of it. Every calculator's texts have one; it is optional for a definition
+   * a widget makes from the core alone, which `runCalculation` is then given it beside.
+   */
   readonly explain?: Explain;
 }
 
