@@ -1,7 +1,7 @@
 import { IAPWS_R1_76, IAPWS_SR6_08, KELL_1975, TANAKA_2001 } from '../properties/water.js';
 import { formatValue } from '../format.js';
 import { STANDARD_GRAVITY, type UnitId } from '../units.js';
-import { CUSTOM, coef, fmt, q } from './shared.js';
+import { CUSTOM, fmt, q } from './shared.js';
 import { type AngleFacts, type LiquidFacts, type SharedWriters } from './shared-liquid.js';
 import type { WorkingStep } from './types.js';
 
@@ -63,6 +63,14 @@ export function gravityAssumption(g: number): string {
   return g === STANDARD_GRAVITY
     ? `Standard gravity, ${coef(STANDARD_GRAVITY)} m/s².`
     : `Local gravity of ${q(g, 'm/s2')} as entered.`;
+}
+
+/**
+ * A published coefficient exactly as the code holds it (all its digits, a true minus sign), so the
+ * working shows the very number computed with.
+ */
+export function coef(value: number): string {
+  return String(value).replace('-', '−');
 }
 
 /** Superscript digits, for the powers of t in a printed polynomial (Kell 1975). */

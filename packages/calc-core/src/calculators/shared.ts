@@ -19,14 +19,6 @@ export function q(value: number, unit: UnitId, digits = 4): string {
   return withUnit(formatValue(value, digits), unit);
 }
 
-/**
- * A published coefficient exactly as the code holds it (all its digits, a true minus sign), so the
- * working shows the very number computed with.
- */
-export function coef(value: number): string {
-  return String(value).replace('-', '−');
-}
-
 /** A warning instance; `fields` are the input ids a form should highlight. */
 export function warning(
   code: string,

@@ -2,8 +2,8 @@
 // (wetting-force.ts): carried by its texts, so the widget's first flight has none of this text.
 import { RING_TABLE_RANGE, ZUIDEMA_WATERS } from '../formulas/tensiometry.js';
 import { STANDARD_GRAVITY } from '../units.js';
-import { coef, fmt, q } from './shared.js';
-import { gravityAssumption } from './shared-working.js';
+import { fmt, q } from './shared.js';
+import { coef, gravityAssumption } from './shared-working.js';
 import type { Explain, StepWriters } from './types.js';
 import type { WettingForceAssumed, WettingForceNotes } from './wetting-force.js';
 
