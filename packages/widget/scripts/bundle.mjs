@@ -411,12 +411,16 @@ export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
             `import { units, canonicalUnits, unitSystems, aliases } from ${JSON.stringify(UNIT_TABLE)};\n` +
             `addUnits({ units, canonicalUnits, unitSystems, aliases });\n`;
           if (id === `\0${WHOLE_UNITS}`) return `${registry}${whole}export const wholeUnits = true;\n`;
-          // The texts chunk also carries calc-core's full run (working, input hash): the first flight computes only.
-          // Its working prints any unit, so it takes the whole table (with the app chunk, `WHOLE_UNITS`).
+          // The texts chunk also carries calc-core's full run (working, input hash): the first flight
+          // computes only. The working is written by the texts' `explain` (`<id>.working.ts`), handed
+          // to the full run here, since the widget runs the core it computed with. Its working prints
+          // any unit, so it takes the whole table (with the app chunk, `WHOLE_UNITS`).
           if (id.startsWith(`\0${TEXTS}`))
             return (
-              `export { texts } from ${JSON.stringify(textsModuleOf(id.slice(TEXTS.length + 1)))};\n` +
-              `export { runCalculation } from ${JSON.stringify(RUN_MODULE)};\n` +
+              `import { texts } from ${JSON.stringify(textsModuleOf(id.slice(TEXTS.length + 1)))};\n` +
+              `import { runCalculation as run } from ${JSON.stringify(RUN_MODULE)};\n` +
+              `export { texts };\n` +
+              `export const runCalculation = (def, inputs) => run(def, inputs, texts.explain);\n` +
               `export { wholeUnits } from ${JSON.stringify(WHOLE_UNITS)};\n`
             );
           if (!id.startsWith(`\0${ENGINE}`)) return null;

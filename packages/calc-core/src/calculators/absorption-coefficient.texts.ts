@@ -1,5 +1,6 @@
 // The absorption-coefficient calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
 import { DAMP_CAUTION, ESTIMATE_CAUTION } from './shared-texts.js';
+import { explain } from './absorption-coefficient.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -35,4 +36,5 @@ export const texts: CalculatorTexts = {
       basis: 'from memory',
     },
   ],
+  explain,
 };

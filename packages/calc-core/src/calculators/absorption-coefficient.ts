@@ -4,13 +4,14 @@ import {
   FIT_WINDOW_S,
   fitLine,
   inFitWindow,
-  ROOT_SECONDS_PER_ROOT_HOUR,
   type AbsorptionMethod,
+  type LineFit,
 } from '../formulas/absorption.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
 import { tableIssues } from './table.js';
-import { choice, fmt, laterWorking, num, q, solved, warning } from './shared.js';
+import { explain } from './absorption-coefficient.working.js';
+import { choice, fmt, noteTaker, num, q, solved, warning } from './shared.js';
 import type {
   CalculatorCore,
   InputValues,
@@ -37,8 +38,6 @@ export const MIN_POINTS_IN_FIT = 3;
 /** EN ISO 15148's test runs 24 h (from memory). */
 const EN_TEST_DURATION_S = 24 * 3600;
 
-const EN = 'EN ISO 15148:2002';
-const ASTM = 'ASTM C1585';
 const FITTED = [
   'absorptionCoefficient',
   'absorptionCoefficientPerRootHour',
@@ -92,6 +91,23 @@ function readings(inputs: InputValues): readonly TableRow[] {
   return v as readonly TableRow[];
 }
 
+/** What absorption-coefficient.working.ts writes each step of the working from, by note key. */
+export interface AbsorptionCoefficientNotes {
+  readonly gain: {
+    readonly method: AbsorptionMethod;
+    readonly lastMass: number;
+    readonly firstMass: number;
+    readonly area: number;
+    readonly lastGain: number;
+    readonly inFit: number;
+    readonly rows: number;
+    /** Which readings the method fits, as its warning says it too. */
+    readonly windowText: string;
+  };
+  readonly fit: { readonly method: AbsorptionMethod; readonly fit: LineFit; readonly r: number };
+  readonly rates: { readonly slope: number; readonly rhoW: number; readonly sorptivity: number };
+}
+
 const withheld = (): Outputs => Object.fromEntries(FITTED.map((id) => [id, null]));
 
 function solve(inputs: InputValues): Solution {
@@ -107,7 +123,6 @@ function solve(inputs: InputValues): Solution {
         "Readings, row 1, time: the first row must be the specimen's mass at time 0, before it touches the water",
     });
   }
-  const source = method === 'astm-c1585' ? ASTM : EN;
   const points = absorptionPoints(
     rows.map((r) => ({ time: r.time as number, mass: r.mass as number })),
     area,
@@ -121,34 +136,19 @@ function solve(inputs: InputValues): Solution {
   const last = rows[rows.length - 1] as TableRow;
   const lastGain = points[points.length - 1]?.y ?? 0;
   const firstMass = rows[0].mass as number;
-  const working = laterWorking(() => [
-    {
-      id: 'gain',
-      label: 'Mass gained per area of the wet face, last reading',
-      formula: 'Δm/A = (m_t − m_0) / A',
-      substituted: `(${q(last.mass as number, 'kg', 6)} − ${q(firstMass, 'kg', 6)}) / ${q(area, 'm2')}`,
-      value: lastGain,
-      unit: 'kg/m2',
-      source,
-    },
-    {
-      id: 'points',
-      label: 'Readings in the fit',
-      formula: method === 'astm-c1585' ? '1 min ≤ t ≤ 6 h' : 't > 0',
-      substituted: `${chosen.length} of ${rows.length} rows: ${windowText}`,
-      value: chosen.length,
-      unit: '1',
-      source,
-    },
-  ]);
-  const assumptions = [
-    'One face in water, the sides sealed, so water enters through the face area given only.',
-    'The mass at time 0 is the specimen before it touched the water; every later mass is weighed after the surface water is wiped off.',
-    'Water density as given for the sorptivity; the absorption coefficient does not use it.',
-    'The line is fitted by ordinary least squares to Δm/A against √t (every point weighted alike).',
-  ];
-  // The working and assumptions are written only when read (`calculate`), never by `compute`.
-  const explain = () => ({ working: working.build(), assumptions });
+  // The working's text is written from these notes by absorption-coefficient.working.ts (`calculate` only).
+  const working = noteTaker<AbsorptionCoefficientNotes>();
+  working.add('gain', {
+    method,
+    lastMass: last.mass as number,
+    firstMass,
+    area,
+    lastGain,
+    inFit: chosen.length,
+    rows: rows.length,
+    windowText,
+  });
+  const parts = { band: null, notes: working.list, assumed: null };
   const outputs = (values: Partial<Record<(typeof FITTED)[number], number | null>>): Outputs => ({
     ...withheld(),
     ...values,
@@ -157,8 +157,7 @@ function solve(inputs: InputValues): Solution {
 
   if (chosen.length < MIN_POINTS_IN_FIT) {
     return solved({
-      band: null,
-      explain,
+      ...parts,
       outputs: outputs({}),
       warnings: [
         warning(
@@ -172,44 +171,7 @@ function solve(inputs: InputValues): Solution {
   }
   const fit = fitLine(chosen);
   const r = Math.sign(fit.slope) * Math.sqrt(fit.rSquared);
-  working.add(() => [
-    {
-      id: 'sums',
-      label: 'Sums of the fit (x = √t in √s, y = Δm/A in kg/m²)',
-      formula: 'Sxx = Σ(x − x̄)², Sxy = Σ(x − x̄)(y − ȳ)',
-      substituted: `n = ${fit.n}, x̄ = ${fmt(fit.meanX)}, ȳ = ${fmt(fit.meanY)}, Sxx = ${fmt(fit.sxx)}, Sxy = ${fmt(fit.sxy)}, Syy = ${fmt(fit.syy)}`,
-      value: fit.sxx,
-      unit: '1',
-      source: 'Ordinary least squares',
-    },
-    {
-      id: 'slope',
-      label: 'Water absorption coefficient (slope of the line)',
-      formula: 'A_w = Sxy / Sxx',
-      substituted: `${fmt(fit.sxy)} / ${fmt(fit.sxx)}`,
-      value: fit.slope,
-      unit: 'kg/(m2*s^0.5)',
-      source,
-    },
-    {
-      id: 'intercept',
-      label: 'Intercept of the line at t = 0',
-      formula: 'a = ȳ − A_w·x̄',
-      substituted: `${fmt(fit.meanY)} − ${fmt(fit.slope)} × ${fmt(fit.meanX)}`,
-      value: fit.intercept,
-      unit: 'kg/m2',
-      source,
-    },
-    {
-      id: 'r-squared',
-      label: 'Coefficient of determination',
-      formula: 'R² = Sxy² / (Sxx·Syy)',
-      substituted: `${fmt(fit.sxy)}² / (${fmt(fit.sxx)} × ${fmt(fit.syy)}); r = ${fmt(r)}`,
-      value: fit.rSquared,
-      unit: '1',
-      source: 'Ordinary least squares',
-    },
-  ]);
+  working.add('fit', { method, fit, r });
   const warnings: Warning[] = [];
   if (!(fit.slope > 0)) {
     warnings.push(
@@ -220,7 +182,7 @@ function solve(inputs: InputValues): Solution {
         { step: 'slope', withholds: [...RATES] },
       ),
     );
-    return solved({ band: null, explain, outputs: outputs({ rSquared: fit.rSquared }), warnings });
+    return solved({ ...parts, outputs: outputs({ rSquared: fit.rSquared }), warnings });
   }
   if (r < MIN_CORRELATION) {
     warnings.push(
@@ -231,30 +193,10 @@ function solve(inputs: InputValues): Solution {
         { step: 'r-squared', withholds: [...RATES] },
       ),
     );
-    return solved({ band: null, explain, outputs: outputs({ rSquared: fit.rSquared }), warnings });
+    return solved({ ...parts, outputs: outputs({ rSquared: fit.rSquared }), warnings });
   }
   const sorptivity = fit.slope / rhoW;
-  working.add(() => [
-    {
-      id: 'per-root-hour',
-      label: 'Water absorption coefficient per root hour',
-      formula: `A_w,h = ${ROOT_SECONDS_PER_ROOT_HOUR}·A_w  (√3600 s = 60 √s)`,
-      // The step's value stays canonical (per √s), as every step's does; the text shows the √h figure.
-      substituted: `${ROOT_SECONDS_PER_ROOT_HOUR} × ${q(fit.slope, 'kg/(m2*s^0.5)')} = ${q(fit.slope * ROOT_SECONDS_PER_ROOT_HOUR, 'kg/(m2*h^0.5)')}`,
-      value: fit.slope,
-      unit: 'kg/(m2*s^0.5)',
-      source: EN,
-    },
-    {
-      id: 'sorptivity',
-      label: 'Sorptivity',
-      formula: 'S = A_w / ρ_w',
-      substituted: `${q(fit.slope, 'kg/(m2*s^0.5)')} / ${q(rhoW, 'kg/m3')}`,
-      value: sorptivity,
-      unit: 'm/s^0.5',
-      source: ASTM,
-    },
-  ]);
+  working.add('rates', { slope: fit.slope, rhoW, sorptivity });
   if (method === 'en-iso-15148' && (last.time as number) < EN_TEST_DURATION_S) {
     warnings.push(
       warning(
@@ -266,8 +208,7 @@ function solve(inputs: InputValues): Solution {
     );
   }
   return solved({
-    band: null,
-    explain,
+    ...parts,
     outputs: outputs({
       absorptionCoefficient: fit.slope,
       // The same quantity as A_w, kept canonical (per √s); its display unit kg/(m²·√h) shows 60 × the figure.
@@ -382,7 +323,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

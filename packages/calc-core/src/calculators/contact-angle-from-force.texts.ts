@@ -1,6 +1,7 @@
 // The contact-angle-from-force calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
 import { CLEAN_SURFACES_CAUTION, ESTIMATE_CAUTION } from './shared-texts.js';
 import { OTHER_LIQUID_CAUTION } from './shared.js';
+import { explain } from './contact-angle-from-force.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -38,4 +39,5 @@ export const texts: CalculatorTexts = {
       basis: 'printed',
     },
   ],
+  explain,
 };

@@ -1,24 +1,55 @@
-import { plateForceTerms } from '../formulas/contact-angle.js';
+import { plateForceTerms, type PlateForceTerms } from '../formulas/contact-angle.js';
 import { angleOf, ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-reading.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
 import {
   choice,
   fmt,
-  gravityAssumption,
   gravityInput,
   MM,
+  noteTaker,
   num,
   q,
   quantityInput,
   solved,
-  laterWorking,
   warning,
 } from './shared.js';
+import { explain } from './contact-angle-from-force.working.js';
 import type { CalculatorCore, InputValues, Solution, Warning } from './types.js';
 
 const cycle = [{ input: 'readings', values: ['cycle'] }] as const;
-const WILHELMY = 'Wilhelmy 1863, with the buoyancy of the immersed plate';
+/** What contact-angle-from-force.working.ts writes each step of the working from, by note key. */
+export interface ContactAngleFromForceNotes {
+  readonly plate: {
+    readonly w: number;
+    readonly t: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly h: number;
+    readonly F: number;
+    readonly sigma: number;
+    readonly both: boolean;
+    readonly adv: PlateForceTerms;
+  };
+  readonly angle: { readonly both: boolean; readonly cos: number; readonly angle: number };
+  readonly recedingCos: {
+    readonly Fr: number;
+    readonly buoyancy: number;
+    readonly sigma: number;
+    readonly perimeter: number;
+    readonly rc: number;
+  };
+  readonly recedingAngle: { readonly rc: number; readonly rec: number };
+  readonly hysteresis: { readonly angle: number; readonly receding: number; readonly h: number };
+}
+
+/** What the assumptions are written from. */
+export interface ContactAngleFromForceAssumed {
+  /** Both the immersion and the withdrawal force were read. */
+  readonly both: boolean;
+  readonly g: number;
+}
+
 function noAngle(cos: number, which: string, field: string, step: string, withholds: string[]): Warning {
   const why =
     cos > 1
@@ -51,49 +82,13 @@ function solve(inputs: InputValues): Solution {
   };
   const adv = plateForceTerms({ ...plate, force: F });
 
-  const working = laterWorking(() => [
-    {
-      id: 'perimeter',
-      label: 'Wetted length of the plate',
-      formula: 'P = 2·(w + t)',
-      substituted: `2 × (${q(w, 'm')} + ${q(t, 'm')})`,
-      value: adv.perimeter,
-      unit: 'm',
-      source: 'geometry of the plate',
-    },
-    {
-      id: 'buoyancy',
-      label: 'Buoyancy of the immersed part of the plate',
-      formula: 'B = ρ·g·w·t·h',
-      substituted: `${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(w, 'm')} × ${q(t, 'm')} × ${q(h, 'm')}`,
-      value: adv.buoyancy,
-      unit: 'N',
-      source: 'Archimedes: the displaced liquid of the immersed depth',
-    },
-    {
-      id: 'cos',
-      label: both ? 'Cosine of the advancing angle (immersion force)' : 'Cosine of the contact angle',
-      formula: 'cos θ = (F + B) / (σ·P)',
-      substituted: `(${q(F, 'N')} + ${q(adv.buoyancy, 'N')}) / (${q(sigma, 'N/m')} × ${q(adv.perimeter, 'm')})`,
-      value: adv.cosTheta,
-      unit: '1',
-      source: WILHELMY,
-    },
-  ]);
+  // The working's text is written from these notes by contact-angle-from-force.working.ts (`calculate` only).
+  const working = noteTaker<ContactAngleFromForceNotes>();
+  working.add('plate', { w, t, rho, g, h, F, sigma, both, adv });
   const warnings: Warning[] = [];
   const angle = angleOf(adv.cosTheta);
   if (angle !== null) {
-    working.add(() => [
-      {
-        id: 'angle',
-        label: both ? 'Advancing contact angle' : 'Contact angle',
-        formula: 'θ = arccos(cos θ)',
-        substituted: `arccos(${fmt(adv.cosTheta, 6)})`,
-        value: angle,
-        unit: 'deg',
-        source: WILHELMY,
-      },
-    ]);
+    working.add('angle', { both, cos: adv.cosTheta, angle });
   } else {
     warnings.push(
       noAngle(adv.cosTheta, both ? 'advancing angle' : 'contact angle', 'force', 'cos', [
@@ -109,31 +104,11 @@ function solve(inputs: InputValues): Solution {
     const Fr = num(inputs, 'recedingForce');
     const rc = plateForceTerms({ ...plate, force: Fr }).cosTheta;
     recCos = rc;
-    working.add(() => [
-      {
-        id: 'receding-cos',
-        label: 'Cosine of the receding angle (withdrawal force)',
-        formula: 'cos θ_r = (F_r + B) / (σ·P)',
-        substituted: `(${q(Fr, 'N')} + ${q(adv.buoyancy, 'N')}) / (${q(sigma, 'N/m')} × ${q(adv.perimeter, 'm')})`,
-        value: rc,
-        unit: '1',
-        source: WILHELMY,
-      },
-    ]);
+    working.add('recedingCos', { Fr, buoyancy: adv.buoyancy, sigma, perimeter: adv.perimeter, rc });
     const rec = angleOf(rc);
     receding = rec;
     if (rec !== null) {
-      working.add(() => [
-        {
-          id: 'receding-angle',
-          label: 'Receding contact angle',
-          formula: 'θ_r = arccos(cos θ_r)',
-          substituted: `arccos(${fmt(rc, 6)})`,
-          value: rec,
-          unit: 'deg',
-          source: WILHELMY,
-        },
-      ]);
+      working.add('recedingAngle', { rc, rec });
     } else {
       warnings.push(
         noAngle(recCos, 'receding angle', 'recedingForce', 'receding-cos', [
@@ -158,17 +133,7 @@ function solve(inputs: InputValues): Solution {
     } else {
       const h = angle - receding;
       hysteresis = h;
-      working.add(() => [
-        {
-          id: 'hysteresis',
-          label: 'Contact-angle hysteresis',
-          formula: 'Δθ = θ_a − θ_r',
-          substituted: `${q(angle, 'deg')} − ${q(receding, 'deg')}`,
-          value: h,
-          unit: 'deg',
-          source: 'definition',
-        },
-      ]);
+      working.add('hysteresis', { angle, receding, h });
     }
   }
 
@@ -191,19 +156,8 @@ function solve(inputs: InputValues): Solution {
     },
     warnings,
     band: null,
-    explain: () => ({
-      working: working.build(),
-      assumptions: [
-        'The force is net of the weight of the plate in air (the balance tared with the plate hanging above the liquid).',
-        'The immersion depth is that of the lower edge below the undisturbed liquid surface when the force was read.',
-        'A thin rectangular plate of the test material, uniform on all four sides, wetted along its whole perimeter 2·(w + t).',
-        both
-          ? 'The immersion force gives the advancing angle and the withdrawal force the receding angle, both read while the plate moves slowly at a steady speed.'
-          : 'A single reading taken as the contact angle of the plate at rest (for a moving plate, the advancing or receding angle).',
-        'The surface tension and density are those of the liquid as used: a clean liquid, air density neglected.',
-        gravityAssumption(g),
-      ],
-    }),
+    notes: working.list,
+    assumed: { both, g },
   });
 }
 
@@ -306,7 +260,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

@@ -7,6 +7,7 @@ import { calculate, calculatorIds, calculators, getCalculator } from '../registr
 import { units } from '../units.js';
 import { VERSION } from '../version.js';
 import { resolveInputs, resultsAgree } from './engine.js';
+import { runCalculation } from './run.js';
 import * as contactAngleFromForce from './contact-angle-from-force.js';
 import * as frostScreening from './frost-screening.js';
 import * as interfacePressure from './interface-pressure.js';
@@ -134,8 +135,16 @@ describe.each(calculators.map((c) => [c.id, c] as const))('%s', (_id, def) => {
         continue; // a calculator without that liquid or preset
       }
       const own = new Set(texts?.cautions.map((c) => c.code));
-      expect(mod?.run(inputs)).toEqual({ ...full, cautions: full.cautions.filter((c) => !own.has(c.code)) });
+      const fromCore = { ...full, cautions: full.cautions.filter((c) => !own.has(c.code)) };
+      expect(mod?.run(inputs)).toEqual(fromCore);
+      // The widget's texts chunk runs the core it computed with, handing over the texts' explain.
+      if (mod !== undefined) expect(runCalculation(mod.calculator, inputs, texts?.explain)).toEqual(fromCore);
     }
+    // The working's text is the texts' (`<id>.working.ts`): the core alone cannot write it, and says so.
+    expect(mod?.calculator).not.toHaveProperty('explain');
+    expect(texts?.explain).toBeDefined();
+    if (mod !== undefined)
+      expect(() => runCalculation(mod.calculator, {})).toThrow(`calculators/${def.id}.working.ts`);
     const exportsMap = pkg.exports as Record<string, unknown>;
     expect(exportsMap[`./calculators/${def.id}`]).toEqual({
       types: `./dist/calculators/${def.id}.d.ts`,

@@ -108,8 +108,8 @@ export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
   return resolved;
 }
 
-/** `withWorking` false checks the numbers only: the working (a warning's step) is then never built. */
-function checkSolution(def: CalculatorCore, solution: Solution, withWorking: boolean): void {
+/** Checks a solution's numbers and warnings against its definition (a warning's step: `runCalculation`). */
+function checkSolution(def: CalculatorCore, solution: Solution): void {
   // A definition that breaks its own contract is a bug in calc-core, not a bad input: plain Error.
   const { outputs, warnings } = solution;
   for (const out of def.outputs) {
@@ -119,12 +119,8 @@ function checkSolution(def: CalculatorCore, solution: Solution, withWorking: boo
     }
   }
   const declared = new Set(def.warnings.map((w) => w.code));
-  const steps = withWorking ? new Set(solution.working.map((s) => s.id)) : null;
   for (const w of warnings) {
     if (!declared.has(w.code)) throw new Error(`${def.id}: warning ${w.code} is not declared`);
-    if (steps !== null && w.step !== undefined && !steps.has(w.step)) {
-      throw new Error(`${def.id}: warning ${w.code} points at a step ${w.step} the working does not have`);
-    }
     // A withheld output is null: never a figure beside the warning that says it does not hold.
     for (const id of w.withholds ?? []) {
       if (outputs[id] !== null) throw new Error(`${def.id}: ${w.code} withholds ${id} but it has a value`);
@@ -137,7 +133,7 @@ export function cautionsOf(def: Partial<CalculatorTexts>, solution: Solution): C
 }
 
 /** Solves resolved inputs and checks the solution; a RangeError from a formula is the visitor's input, not a bug. */
-export function solveChecked(def: CalculatorCore, inputs: InputValues, withWorking: boolean): Solution {
+export function solveChecked(def: CalculatorCore, inputs: InputValues): Solution {
   let solution;
   try {
     solution = def.solve(inputs);
@@ -147,15 +143,16 @@ export function solveChecked(def: CalculatorCore, inputs: InputValues, withWorki
     }
     throw err;
   }
-  checkSolution(def, solution, withWorking);
+  checkSolution(def, solution);
   return solution;
 }
 
 /**
  * Runs one calculator for its numbers only: validates, solves and checks as `runCalculation` does,
- * but never reads the solution's working or assumptions (built lazily by `solved`, so they are never
- * formatted) and hashes nothing. Its outputs, warnings and band are those `runCalculation` gives for
- * the same inputs; a widget shows them at once and asks for the working when it shows it.
+ * but never writes the working or assumptions from the solution's notes (that text is in the
+ * calculator's texts, `<id>.working.ts`) and hashes nothing. Its outputs, warnings and band are
+ * those `runCalculation` gives for the same inputs; a widget shows them at once and asks for the
+ * working when it shows it.
  * @param raw inputs keyed by input id, canonical units (SI, angles in degrees, temperatures in °C)
  * @throws CalcInputError listing every bad field
  */
@@ -164,7 +161,7 @@ export function computeCalculation(
   raw: unknown,
 ): ComputedResult {
   const inputs = resolveInputs(def, raw);
-  const solution = solveChecked(def, inputs, false);
+  const solution = solveChecked(def, inputs);
   return {
     calculator: def.id,
     inputs,

@@ -1,5 +1,6 @@
 // The frost-screening calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
 import { ESTIMATE_CAUTION, FOUNDATIONS_CAUTION, FROST_CAUTION } from './shared-texts.js';
+import { explain } from './frost-screening.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -49,4 +50,5 @@ export const texts: CalculatorTexts = {
       basis: 'from memory',
     },
   ],
+  explain,
 };

@@ -3,18 +3,18 @@ import {
   casagrandeCriterion,
   frostGroup,
   fringeGapBelowFrostLine,
+  type CasagrandeResult,
   type FrostGroup,
   type SoilKind,
 } from '../formulas/frost.js';
 import { hazenCapillaryRise } from '../formulas/soil.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
-import { HAZEN_BASIS, hazenCInput, hazenRiseStep } from './hazen.js';
-import { choice, fmt, laterWorking, MM, num, q, quantityInput, solved, warning } from './shared.js';
+import { HAZEN_BASIS, hazenCInput } from './hazen.js';
+import { choice, fmt, MM, noteTaker, num, q, quantityInput, solved, warning } from './shared.js';
+import { explain } from './frost-screening.working.js';
 import type { CalculatorCore, InputValues, Outputs, Solution, Warning } from './types.js';
 
-const CASAGRANDE = 'Casagrande 1931 grain-size criterion (from memory, common practice)';
-const GROUPS = 'frost-design soil groups of US Army Corps of Engineers pavement practice (from memory)';
 /** No. 200 sieve, the sand/fines boundary of ASTM D2487: Hazen's relation was drawn from coarser soils. */
 const NO200_SIEVE_M = 0.075e-3;
 /** Our band around a Casagrande threshold, in share of mass: about the repeatability of a hydrometer test. */
@@ -33,6 +33,32 @@ const KIND_LABEL: Readonly<Record<SoilKind, string>> = {
   clay: 'Clay',
   'varved-clay': 'Varved clay or other fine-grained banded sediment',
 };
+
+/** What frost-screening.working.ts writes each step of the working from, by note key. */
+export interface FrostScreeningNotes {
+  readonly screen: {
+    readonly crit: CasagrandeResult;
+    readonly group: FrostGroup;
+    readonly groupIndex: number;
+    readonly kindLabel: string;
+    readonly share: number;
+    readonly cu: number;
+    readonly pi: number | undefined;
+  };
+  readonly hazenRise: { readonly c: number; readonly e: number; readonly d10: number; readonly rise: number };
+  readonly measuredRise: { readonly rise: number };
+  readonly fringe: {
+    readonly wt: number;
+    readonly rise: number;
+    readonly frostDepth: number;
+    readonly gap: number;
+  };
+}
+
+/** What the assumptions are written from. */
+export interface FrostScreeningAssumed {
+  readonly fromHazen: boolean;
+}
 
 function solve(inputs: InputValues): Solution {
   const share = num(inputs, 'finesShare');
@@ -72,55 +98,20 @@ function solve(inputs: InputValues): Solution {
   };
 
   const pct = (x: number): string => `${fmt(x * 100)} %`;
-  const working = laterWorking(() => [
-    {
-      id: 'casagrande',
-      label: `Casagrande criterion: ${crit.gradation} soil, threshold ${pct(crit.threshold)} finer than 0.02 mm`,
-      formula: `susceptible if share finer than 0.02 mm > ${pct(CASAGRANDE_THRESHOLDS.uniformShare)} (Cu < ${CASAGRANDE_THRESHOLDS.uniformBelowCu}) or > ${pct(CASAGRANDE_THRESHOLDS.nonUniformShare)} (otherwise)`,
-      substituted: `Cu = ${fmt(cu)}, share = ${pct(share)} ${crit.susceptible ? '>' : '≤'} ${pct(crit.threshold)}`,
-      value: crit.susceptible ? 1 : 0,
-      unit: '1',
-      source: CASAGRANDE,
-    },
-    {
-      id: 'group',
-      label: `Frost-design soil group: ${group === 'NFS' ? 'not frost-susceptible (NFS)' : group}`,
-      formula: '0 = NFS, 1–4 = F1–F4 (F4 most susceptible)',
-      substituted: `${KIND_LABEL[kind]}, ${pct(share)} finer than 0.02 mm${pi !== undefined ? `, PI = ${fmt(pi)}` : ''}`,
-      value: GROUP_INDEX[group],
-      unit: '1',
-      source: GROUPS,
-    },
-  ]);
-  if (fromHazen && !fine) {
-    working.add(() => [hazenRiseStep('rise', 'Capillary rise above the water table', c, e, d10, riseAt(c))]);
-  } else if (!fromHazen) {
-    working.add(() => [
-      {
-        id: 'rise',
-        label: 'Capillary rise above the water table (measured)',
-        formula: 'h_c',
-        substituted: q(riseAt(c), 'm'),
-        value: riseAt(c),
-        unit: 'm',
-        source: 'measured for this soil',
-      },
-    ]);
-  }
-  if (!fine) {
-    const gap = nominal.fringeGap ?? 0;
-    working.add(() => [
-      {
-        id: 'fringe',
-        label: 'Gap between the frost line and the top of the capillary fringe',
-        formula: 'D_w − h_c − D_f (zero or less: the fringe reaches the frost line)',
-        substituted: `${q(wt, 'm')} − ${q(riseAt(c), 'm')} − ${q(frostDepth, 'm')}`,
-        value: gap,
-        unit: 'm',
-        source: 'depths below the finished surface; the fringe top taken as sharp (common practice)',
-      },
-    ]);
-  }
+  // The working's text is written from these notes by frost-screening.working.ts (`calculate` only).
+  const working = noteTaker<FrostScreeningNotes>();
+  working.add('screen', {
+    crit,
+    group,
+    groupIndex: GROUP_INDEX[group],
+    kindLabel: KIND_LABEL[kind],
+    share,
+    cu,
+    pi,
+  });
+  if (fromHazen && !fine) working.add('hazenRise', { c, e, d10, rise: riseAt(c) });
+  else if (!fromHazen) working.add('measuredRise', { rise: riseAt(c) });
+  if (!fine) working.add('fringe', { wt, rise: riseAt(c), frostDepth, gap: nominal.fringeGap ?? 0 });
 
   const band = fromHazen && !fine ? bandOver([HAZEN_BASIS], nominal, (v) => evaluate(v.hazenC ?? c)) : null;
 
@@ -188,23 +179,7 @@ function solve(inputs: InputValues): Solution {
     );
   }
 
-  return solved({
-    outputs,
-    warnings,
-    band,
-    explain: () => ({
-      working: working.build(),
-      assumptions: [
-        "A screen by grain size only: Casagrande's criterion and the frost-design soil groups, both recalled from the published practice, not seen printed here.",
-        'The soil is the one within the frost depth and below it down to the water table; layered ground needs each layer checked.',
-        'A static water table at its highest seasonal level; the top of the capillary fringe taken as a sharp line.',
-        fromHazen
-          ? "The capillary rise by Hazen's empirical formula, with the band over the published range of its constant."
-          : 'The capillary rise as measured for this soil.',
-        'The frost depth as given, from the local code or climate records.',
-      ],
-    }),
-  });
+  return solved({ outputs, warnings, band, notes: working.list, assumed: { fromHazen } });
 }
 
 export const calculator: CalculatorCore = {
@@ -344,7 +319,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

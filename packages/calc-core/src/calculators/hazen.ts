@@ -1,9 +1,9 @@
 import { HAZEN_C_RANGE_M2 } from '../formulas/soil.js';
-import { fmt, q, quantityInput } from './shared.js';
-import type { BandBasis, Condition, QuantityInput, WorkingStep } from './types.js';
+import { quantityInput } from './shared.js';
+import type { BandBasis, Condition, QuantityInput } from './types.js';
 
 // Hazen's capillary rise as the soil calculators use it: the constant's input with its published
-// spread, the band basis and the working step, written once.
+// spread and the band basis, written once (its working step is in shared-working.ts).
 
 export const HAZEN_SOURCE =
   'Terzaghi & Peck (1948): C = 0.1–0.5 cm² (10–50 mm²), as given by Smith, Elements of Soil Mechanics (from memory)';
@@ -31,24 +31,4 @@ export function hazenCInput(help: string, when?: readonly Condition[]): Quantity
       ...(when !== undefined ? { appliesWhen: when } : {}),
     },
   );
-}
-
-/** The working step of h_c = C/(e·D10): C in m², D10 in m, the rise in m. */
-export function hazenRiseStep(
-  id: string,
-  label: string,
-  c: number,
-  e: number,
-  d10: number,
-  value: number,
-): WorkingStep {
-  return {
-    id,
-    label,
-    formula: 'h_c = C / (e·D10)',
-    substituted: `${q(c, 'm2')} / (${fmt(e)} × ${q(d10, 'm')})`,
-    value,
-    unit: 'm',
-    source: 'Hazen, as given by Terzaghi & Peck (1948) (from memory)',
-  };
 }

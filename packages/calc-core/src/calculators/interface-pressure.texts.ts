@@ -5,6 +5,7 @@ import {
   LIQUID_TABLE_REFERENCES,
   WATER_REFERENCES,
 } from './shared-texts.js';
+import { explain } from './interface-pressure.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -27,4 +28,5 @@ export const texts: CalculatorTexts = {
     ...WATER_REFERENCES,
     ...LIQUID_TABLE_REFERENCES,
   ],
+  explain,
 };

@@ -7,23 +7,28 @@ import {
   choice,
   CONTACT_ANGLE_NEAR_90,
   fmt,
-  gravityAssumption,
   gravityInput,
-  STATIC_ASSUMPTIONS,
   nearNinety,
   MM,
   num,
   q,
   quantityInput,
   warning,
-  capillaryLengthStep,
   solved,
-  laterWorking,
+  noteTaker,
 } from './shared.js';
-import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
+import {
+  contactAngleInputs,
+  liquidInputs,
+  resolveContactAngle,
+  resolveLiquid,
+  type ResolvedAngle,
+  type ResolvedLiquid,
+} from './shared-liquid.js';
+import { explain } from './interface-pressure.working.js';
 import type { CalculatorCore, InputValues, Outputs, QuantityInput, Solution, Warning } from './types.js';
 
-type Shape = 'drop' | 'film-bubble' | 'jet' | 'general' | 'pore';
+export type Shape = 'drop' | 'film-bubble' | 'jet' | 'general' | 'pore';
 
 const oneRadius = [{ input: 'shape', values: ['drop', 'film-bubble', 'jet'] }] as const;
 const whenGeneral = [{ input: 'shape', values: ['general'] }] as const;
@@ -41,13 +46,33 @@ function radiusInput(
   });
 }
 
-const FORMULAS: Readonly<Record<Shape, string>> = {
-  drop: 'Δp = 2·σ / R',
-  'film-bubble': 'Δp = 4·σ / R',
-  jet: 'Δp = σ / R',
-  general: 'Δp = σ·(1/R₁ + 1/R₂)',
-  pore: 'P_c = 2·σ·cos θ / r',
-};
+/** What interface-pressure.working.ts writes each step of the working from, by note key. */
+export interface InterfacePressureNotes {
+  readonly shared: { readonly liquid: ResolvedLiquid; readonly angle: ResolvedAngle | null };
+  readonly capillaryLength: {
+    readonly sigma: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly lc: number;
+  };
+  readonly pressure: {
+    readonly shape: Shape;
+    readonly sigma: number;
+    readonly theta: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly p: number;
+    readonly head: number;
+  };
+}
+
+/** What the assumptions are written from. */
+export interface InterfacePressureAssumed {
+  readonly shape: Shape;
+  readonly liquid: ResolvedLiquid;
+  readonly angle: ResolvedAngle | null;
+  readonly g: number;
+}
 
 function solve(inputs: InputValues): Solution {
   const shape = choice(inputs, 'shape') as Shape;
@@ -57,48 +82,26 @@ function solve(inputs: InputValues): Solution {
   const g = num(inputs, 'gravity');
   const angle = shape === 'pore' ? resolveContactAngle(inputs, liquid.id) : null;
 
-  const pressureAt = (theta: number): { value: number; substituted: string } => {
+  const pressureAt = (theta: number): number => {
     switch (shape) {
-      case 'drop': {
-        const R = num(inputs, 'radius');
-        return {
-          value: laplacePressure({ surfaceTension: sigma, r1: R }),
-          substituted: `2 × ${q(sigma, 'N/m')} / ${q(R, 'm')}`,
-        };
-      }
-      case 'film-bubble': {
-        const R = num(inputs, 'radius');
-        return {
-          value: bubblePressure({ surfaceTension: sigma, radius: R }),
-          substituted: `4 × ${q(sigma, 'N/m')} / ${q(R, 'm')}`,
-        };
-      }
-      case 'jet': {
-        const R = num(inputs, 'radius');
-        return {
-          value: laplacePressure({ surfaceTension: sigma, r1: R, r2: Infinity }),
-          substituted: `${q(sigma, 'N/m')} / ${q(R, 'm')}`,
-        };
-      }
-      case 'general': {
-        const r1 = num(inputs, 'r1');
-        const r2 = num(inputs, 'r2');
-        return {
-          value: laplacePressure({ surfaceTension: sigma, r1, r2 }),
-          substituted: `${q(sigma, 'N/m')} × (1/${q(r1, 'm')} + 1/${q(r2, 'm')})`,
-        };
-      }
-      case 'pore': {
-        const r = num(inputs, 'poreRadius');
-        return {
-          value: poreEntryPressure({ surfaceTension: sigma, contactAngleDeg: theta, poreRadius: r }),
-          substituted: `2 × ${q(sigma, 'N/m')} × cos ${q(theta, 'deg')} / ${q(r, 'm')}`,
-        };
-      }
+      case 'drop':
+        return laplacePressure({ surfaceTension: sigma, r1: num(inputs, 'radius') });
+      case 'film-bubble':
+        return bubblePressure({ surfaceTension: sigma, radius: num(inputs, 'radius') });
+      case 'jet':
+        return laplacePressure({ surfaceTension: sigma, r1: num(inputs, 'radius'), r2: Infinity });
+      case 'general':
+        return laplacePressure({ surfaceTension: sigma, r1: num(inputs, 'r1'), r2: num(inputs, 'r2') });
+      case 'pore':
+        return poreEntryPressure({
+          surfaceTension: sigma,
+          contactAngleDeg: theta,
+          poreRadius: num(inputs, 'poreRadius'),
+        });
     }
   };
   const evaluate = (theta: number): Outputs => {
-    const p = pressureAt(theta).value;
+    const p = pressureAt(theta);
     return { pressure: p, pressureHead: p / (rho * g) };
   };
   const theta = angle?.angleDeg ?? 0;
@@ -110,32 +113,12 @@ function solve(inputs: InputValues): Solution {
   const outputs: Outputs = flattened ? { pressure: null, pressureHead: null } : computed;
   const p = computed.pressure ?? 0;
 
-  const working = laterWorking(() => [...liquid.working, ...(angle?.working ?? [])]);
-  if (shape === 'drop') {
-    working.add(() => [capillaryLengthStep(sigma, rho, g, lc)]);
-  }
-  if (!flattened) {
-    working.add(() => [
-      {
-        id: 'pressure',
-        label: shape === 'pore' ? 'Capillary (entry) pressure of the pore' : 'Pressure across the interface',
-        formula: FORMULAS[shape],
-        substituted: pressureAt(theta).substituted,
-        value: p,
-        unit: 'Pa',
-        source: 'Young–Laplace equation (Young 1805, Laplace 1806)',
-      },
-      {
-        id: 'head',
-        label: 'As a head of the liquid',
-        formula: 'Δp / (ρ·g)',
-        substituted: `${q(p, 'Pa')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')})`,
-        value: computed.pressureHead ?? 0,
-        unit: 'm',
-        source: 'hydrostatics, p = ρ·g·h',
-      },
-    ]);
-  }
+  // The working's text is written from these notes by interface-pressure.working.ts (`calculate` only).
+  const working = noteTaker<InterfacePressureNotes>();
+  working.add('shared', { liquid, angle });
+  if (shape === 'drop') working.add('capillaryLength', { sigma, rho, g, lc });
+  if (!flattened)
+    working.add('pressure', { shape, sigma, theta, rho, g, p, head: computed.pressureHead ?? 0 });
 
   const warnings: Warning[] = [];
   if (flattened) {
@@ -164,22 +147,8 @@ function solve(inputs: InputValues): Solution {
     if (near !== null) warnings.push({ ...near, step: 'pressure' });
   }
   const band = bandOver(angle?.basis ?? [], outputs, (v) => evaluate(v.contactAngleDeg ?? theta));
-  const shapes: Readonly<Record<Shape, string>> = {
-    drop: 'A spherical drop: one radius of curvature, the same everywhere.',
-    'film-bubble': 'A thin-film bubble with two surfaces of the same radius.',
-    jet: 'A long cylindrical jet: one radius, the other infinite.',
-    general: 'The two principal radii of curvature as entered, at the point of interest.',
-    pore: 'A cylindrical pore of the radius entered, with a hemispherical meniscus at the contact angle.',
-  };
-  const assumptions = (): string[] => [
-    ...STATIC_ASSUMPTIONS,
-    shapes[shape],
-    liquid.assumption,
-    ...(angle !== null ? [angle.assumption] : []),
-    gravityAssumption(g),
-  ];
   return solved(
-    { outputs, warnings, band, explain: () => ({ working: working.build(), assumptions: assumptions() }) },
+    { outputs, warnings, band, notes: working.list, assumed: { shape, liquid, angle, g } },
     liquid,
   );
 }
@@ -262,7 +231,7 @@ export const calculator: CalculatorCore = {
  * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
  * its texts: `calculate` (the registry) gives them.
  */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

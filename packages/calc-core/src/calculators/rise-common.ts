@@ -9,8 +9,6 @@ import {
 import { bandOver } from './engine.js';
 import {
   fmt,
-  gravityAssumption,
-  STATIC_ASSUMPTIONS,
   gravityInput,
   MM,
   ANGLE_FIELDS,
@@ -18,12 +16,18 @@ import {
   nearNinety,
   num,
   q,
+  noteTaker,
   warning,
-  capillaryLengthStep,
   solved,
-  type Explanation,
 } from './shared.js';
-import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
+import {
+  contactAngleInputs,
+  liquidInputs,
+  resolveContactAngle,
+  resolveLiquid,
+  type ResolvedAngle,
+  type ResolvedLiquid,
+} from './shared-liquid.js';
 import type {
   HeadlineDefinition,
   InputDefinition,
@@ -32,7 +36,6 @@ import type {
   Outputs,
   Solution,
   Warning,
-  WorkingStep,
 } from './types.js';
 
 // Tube and slot rise share everything but the geometry: the rise law, the meniscus correction, and
@@ -41,9 +44,6 @@ import type {
 export interface RiseGeometry {
   /** Input id of the bore or gap. */
   readonly sizeId: 'diameter' | 'gap';
-  readonly sizeSymbol: 'd' | 'w';
-  readonly riseFormula: string;
-  readonly correctionFormula: string;
   /** 4 for a tube (4σ cos θ/(ρ g d)), 2 for a slot. */
   readonly rise: (a: {
     surfaceTension: number;
@@ -53,10 +53,6 @@ export interface RiseGeometry {
     gravity: number;
   }) => number;
   readonly correction: (size: number, contactAngleDeg: number) => MeniscusGeometry;
-  /** How the liquid held above the meniscus's lowest point is worked out, for the working. */
-  readonly heldFormula: string;
-  readonly riseSource: string;
-  readonly shape: string;
   /** Half the bore or gap over ℓc above which the meniscus correction exceeds 2 % of the rise at θ = 0. */
   readonly notSmallRatio: number;
   readonly codes: { readonly notSmall: string; readonly tooWide: string };
@@ -65,17 +61,50 @@ export interface RiseGeometry {
   readonly ratioId: 'radiusToCapillaryLength' | 'halfGapToCapillaryLength';
 }
 
+/** What rise-common.working.ts writes each step of a rise's working from, by note key. */
+export interface RiseNotes {
+  readonly base: {
+    readonly sizeId: RiseGeometry['sizeId'];
+    readonly liquid: ResolvedLiquid;
+    readonly angle: ResolvedAngle;
+    readonly sigma: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly lc: number;
+    readonly size: number;
+    readonly ratio: number;
+  };
+  readonly rise: {
+    readonly sizeId: RiseGeometry['sizeId'];
+    readonly sigma: number;
+    readonly theta: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly size: number;
+    readonly rise: number;
+  };
+  readonly corrected: {
+    readonly sizeId: RiseGeometry['sizeId'];
+    readonly size: number;
+    readonly theta: number;
+    readonly rise: number;
+    readonly riseCorrected: number;
+  };
+}
+
+/** What a rise's assumptions are written from. */
+export interface RiseAssumed {
+  readonly sizeId: RiseGeometry['sizeId'];
+  readonly liquid: ResolvedLiquid;
+  readonly angle: ResolvedAngle;
+  readonly g: number;
+}
+
 /** Rayleigh's r/3 against 2ℓc²/r: r²/(6ℓc²) = 0.02 at r/ℓc = √0.12. */
 export const TUBE: RiseGeometry = {
   sizeId: 'diameter',
-  sizeSymbol: 'd',
-  riseFormula: 'h = 4·σ·cos θ / (ρ·g·d)',
-  correctionFormula: 'δ = V_held / (π·r²); δ = r/3 at θ = 0',
-  heldFormula: 'R_m = r / cos θ, s = R_m·(1 − sin θ), V_cap = π·s²·(3·R_m − s) / 3, V_held = π·r²·s − V_cap',
   rise: (a) => jurinRise({ ...a, diameter: a.size }),
   correction: (size, angle) => meniscusGeometry({ diameter: size, contactAngleDeg: angle }),
-  riseSource: "Jurin 1718 (Jurin's law)",
-  shape: 'A round, uniform, vertical bore, open to the liquid below.',
   notSmallRatio: Math.sqrt(0.12),
   codes: { notSmall: 'BORE_NOT_SMALL', tooWide: 'BORE_TOO_WIDE' },
   noun: 'bore',
@@ -85,15 +114,8 @@ export const TUBE: RiseGeometry = {
 /** (1/2 − π/8)·w against 2ℓc²/w is 0.02 at (w/2)/ℓc = √(0.01 / (1/2 − π/8)). */
 export const SLOT: RiseGeometry = {
   sizeId: 'gap',
-  sizeSymbol: 'w',
-  riseFormula: 'h = 2·σ·cos θ / (ρ·g·w)',
-  correctionFormula: 'δ = A_held / w; δ = (1/2 − π/8)·w at θ = 0',
-  heldFormula:
-    'R_m = (w/2) / cos θ, s = R_m·(1 − sin θ), φ = 90° − θ, A_seg = R_m²·(φ − sin φ·cos φ), A_held = w·s − A_seg',
   rise: (a) => slotRise({ ...a, gap: a.size }),
   correction: (size, angle) => slotMeniscusGeometry({ gap: size, contactAngleDeg: angle }),
-  riseSource: "Jurin's force balance per unit length of two parallel walls (common practice)",
-  shape: 'Two flat, parallel, vertical walls, long against the gap, open to the liquid below.',
   notSmallRatio: Math.sqrt(0.01 / (0.5 - Math.PI / 8)),
   codes: { notSmall: 'GAP_NOT_SMALL', tooWide: 'GAP_TOO_WIDE' },
   noun: 'gap',
@@ -179,7 +201,6 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
     size,
     gravity: g,
   });
-  const s = geometry.sizeSymbol;
 
   const warnings: Warning[] = [];
   const fields = [geometry.sizeId];
@@ -216,90 +237,17 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
   }
 
   const band = bandOver(angle.basis, outputs, (v) => evaluate(v.contactAngleDeg ?? angle.angleDeg));
-  // The working and assumptions are text: built only when read (by `calculate`, not `compute`).
-  const explain = (): Explanation => {
-    const working: WorkingStep[] = [
-      ...liquid.working,
-      ...angle.working,
-      capillaryLengthStep(sigma, rho, g, lc),
-      {
-        id: 'size-ratio',
-        label: `Half the ${geometry.noun} against the capillary length`,
-        formula: `(${s}/2) / ℓc`,
-        substituted: `${q(size / 2, 'm')} / ${q(lc, 'm')}`,
-        value: ratio,
-        unit: '1',
-        source: 'Rayleigh 1915 (the rise law and its correction need r ≪ ℓc)',
-      },
-    ];
-    if (outputs.rise !== null && outputs.rise !== undefined) {
-      working.push({
-        id: 'rise',
-        label: geometry.sizeId === 'diameter' ? "Rise, Jurin's law" : 'Rise between parallel walls',
-        formula: geometry.riseFormula,
-        substituted: `${geometry.sizeId === 'diameter' ? 4 : 2} × ${q(sigma, 'N/m')} × cos ${q(angle.angleDeg, 'deg')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(size, 'm')})`,
-        value: rise,
-        unit: 'm',
-        source: geometry.riseSource,
-      });
-    }
-    if (outputs.riseCorrected !== null && outputs.riseCorrected !== undefined) {
-      const m = geometry.correction(size, angle.angleDeg);
-      const tube = geometry.sizeId === 'diameter';
-      working.push(
-        {
-          id: 'meniscus-sag',
-          label: 'Meniscus radius and sag',
-          formula: tube ? 'R_m = r / cos θ, s = R_m·(1 − sin θ)' : 'R_m = (w/2) / cos θ, s = R_m·(1 − sin θ)',
-          substituted: `${tube ? 'r' : 'w/2'} = ${q(size / 2, 'm')}, θ = ${q(angle.angleDeg, 'deg')}: R_m = ${Number.isFinite(m.radius) ? q(m.radius, 'm') : '∞ (flat)'}`,
-          value: m.sag,
-          unit: 'm',
-          source: 'spherical (tube) or cylindrical (slot) meniscus, Rayleigh 1915',
-        },
-        {
-          id: 'meniscus-held',
-          label: tube
-            ? 'Liquid held above the lowest point of the meniscus'
-            : 'Liquid held above the lowest point, per unit length',
-          formula: geometry.heldFormula,
-          substituted: `s = ${q(m.sag, 'm')}, ${s} = ${q(size, 'm')}`,
-          value: m.held,
-          unit: tube ? 'm3' : 'm2',
-          source: 'geometry of the meniscus, derived here',
-        },
-        {
-          id: 'meniscus-correction',
-          label: 'Meniscus-weight correction',
-          formula: geometry.correctionFormula,
-          substituted: tube
-            ? `${q(m.held, 'm3')} / (π × (${q(size / 2, 'm')})²)`
-            : `${q(m.held, 'm2')} / ${q(size, 'm')}`,
-          value: m.correction,
-          unit: 'm',
-          source: 'Rayleigh 1915 (r/3 at θ = 0); the same geometry for θ > 0, derived here',
-        },
-        {
-          id: 'rise-corrected',
-          label: 'Rise to the bottom of the meniscus, corrected',
-          formula: 'h − δ',
-          substituted: `${q(rise, 'm')} − ${q(m.correction, 'm')}`,
-          value: outputs.riseCorrected,
-          unit: 'm',
-          source: 'Rayleigh 1915',
-        },
-      );
-    }
-    const assumptions = [
-      ...STATIC_ASSUMPTIONS,
-      geometry.shape,
-      'The rise is measured from the flat free surface of a wide reservoir to the bottom of the meniscus.',
-      liquid.assumption,
-      angle.assumption,
-      gravityAssumption(g),
-    ];
-    return { working, assumptions };
-  };
-  return solved({ outputs, warnings, band, explain }, liquid);
+  // The working's text is written from these notes by rise-common.working.ts (`calculate` only).
+  const sizeId = geometry.sizeId;
+  const theta = angle.angleDeg;
+  const working = noteTaker<RiseNotes>();
+  working.add('base', { sizeId, liquid, angle, sigma, rho, g, lc, size, ratio });
+  if (outputs.rise !== null && outputs.rise !== undefined)
+    working.add('rise', { sizeId, sigma, theta, rho, g, size, rise });
+  if (outputs.riseCorrected !== null && outputs.riseCorrected !== undefined)
+    working.add('corrected', { sizeId, size, theta, rise, riseCorrected: outputs.riseCorrected });
+  const assumed: RiseAssumed = { sizeId, liquid, angle, g };
+  return solved({ outputs, warnings, band, notes: working.list, assumed }, liquid);
 }
 
 /**

@@ -1,5 +1,6 @@
 // The rising-damp-height calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
 import { ESTIMATE_CAUTION } from './shared-texts.js';
+import { explain } from './rising-damp-height.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -42,4 +43,5 @@ export const texts: CalculatorTexts = {
       basis: 'from memory',
     },
   ],
+  explain,
 };

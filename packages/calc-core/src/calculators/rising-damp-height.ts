@@ -1,16 +1,39 @@
-import { risingDampSteadyState, STEADY_FRACTION, timeToFraction } from '../formulas/rising-damp.js';
+import {
+  risingDampSteadyState,
+  STEADY_FRACTION,
+  timeToFraction,
+  type RisingDampResult,
+} from '../formulas/rising-damp.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
-import { choice, fmt, laterWorking, num, q, quantityInput, solved, warning } from './shared.js';
+import { explain } from './rising-damp-height.working.js';
+import { choice, fmt, noteTaker, num, q, quantityInput, solved, warning } from './shared.js';
 import type { CalculatorCore, InputValues, Solution, Warning } from './types.js';
 
-const HALL_HOFF = 'Hall & Hoff 2007, Proc. R. Soc. A 463, 1871–1884 (form from memory)';
-const DERIVED = 'sharp-front water balance of Hall & Hoff 2007, derived here';
 /** Our threshold: below one wall thickness the wet zone is not tall against the wall, see the warning. */
 const SHALLOW_RATIO = 1;
 /** Heights above this are rarely seen in walls (common practice); the model then points at its inputs. */
 const TALL_HEIGHT_M = 2;
 const DAY_S = 86400;
+
+/** What rising-damp-height.working.ts writes each step of the working from, by note key. */
+export interface RisingDampHeightNotes {
+  readonly steady: {
+    readonly S: number;
+    readonly b: number;
+    readonly e: number;
+    readonly theta: number;
+    readonly n: number;
+    readonly r: RisingDampResult;
+    readonly tSteady: number;
+  };
+}
+
+/** What the assumptions are written from. */
+export interface RisingDampHeightAssumed {
+  /** Both faces of the wall dry. */
+  readonly both: boolean;
+}
 
 function solve(inputs: InputValues): Solution {
   const S = num(inputs, 'sorptivity');
@@ -27,64 +50,10 @@ function solve(inputs: InputValues): Solution {
     dryingFaces: n,
   });
   const tSteady = timeToFraction(STEADY_FRACTION, r.timeConstant);
-  const pct = fmt(STEADY_FRACTION * 100);
 
-  const working = laterWorking(() => [
-    {
-      id: 'steady-height',
-      label: 'Steady-state height of the wet front',
-      formula: 'h_ss = S·√(b / (2·n·e·θ_w))',
-      substituted: `${q(S, 'm/s^0.5')} × √(${q(b, 'm')} / (2 × ${n} × ${q(e, 'm/s')} × ${fmt(theta)}))`,
-      value: r.steadyHeight,
-      unit: 'm',
-      source: `${HALL_HOFF}; n drying faces, derived here`,
-    },
-    {
-      id: 'water-held',
-      label: 'Water held in the wet zone, per metre of wall',
-      formula: 'W = θ_w·b·h_ss',
-      substituted: `${fmt(theta)} × ${q(b, 'm')} × ${q(r.steadyHeight, 'm')}`,
-      value: r.waterHeld,
-      unit: 'm3/m',
-      source: DERIVED,
-    },
-    {
-      id: 'flow',
-      label: 'Flow through the wall at steady state, per metre of wall',
-      formula: 'Q = n·e·h_ss = b·S² / (2·θ_w·h_ss)',
-      substituted: `${n} × ${q(e, 'm/s')} × ${q(r.steadyHeight, 'm')}`,
-      value: r.flow,
-      unit: 'm3/(m*s)',
-      source: DERIVED,
-    },
-    {
-      id: 'time-constant',
-      label: 'Time constant of the approach to steady state',
-      formula: 'τ = b·θ_w / (2·n·e); h(t) = h_ss·√(1 − exp(−t/τ))',
-      substituted: `${q(b, 'm')} × ${fmt(theta)} / (2 × ${n} × ${q(e, 'm/s')})`,
-      value: r.timeConstant,
-      unit: 's',
-      source: DERIVED,
-    },
-    {
-      id: 'time-to-steady',
-      label: `Time for a dry wall to wet to ${pct} % of the steady height`,
-      formula: `t = −τ·ln(1 − f²), f = ${fmt(STEADY_FRACTION)}`,
-      substituted: `−${q(r.timeConstant, 's')} × ln(1 − ${fmt(STEADY_FRACTION)}²)`,
-      value: tSteady,
-      unit: 's',
-      source: DERIVED,
-    },
-    {
-      id: 'residence',
-      label: 'Mean time water spends in the wall',
-      formula: 't_r = W / Q = 2·τ',
-      substituted: `${q(r.waterHeld, 'm3/m')} / ${q(r.flow, 'm3/(m*s)')}`,
-      value: r.residenceTime,
-      unit: 's',
-      source: DERIVED,
-    },
-  ]);
+  // The working's text is written from these notes by rising-damp-height.working.ts (`calculate` only).
+  const working = noteTaker<RisingDampHeightNotes>();
+  working.add('steady', { S, b, e, theta, n, r, tSteady });
 
   const warnings: Warning[] = [];
   if (r.steadyHeight < SHALLOW_RATIO * b) {
@@ -129,16 +98,8 @@ function solve(inputs: InputValues): Solution {
     },
     warnings,
     band: null,
-    explain: () => ({
-      working: working.build(),
-      assumptions: [
-        'A sharp wet front: the wall below it is at the wet water content θw, above it dry (Hall & Hoff sharp-front model).',
-        'A uniform wall of one material standing in a permanent water supply at its base; no damp-proof course.',
-        `Evaporation at a steady rate e per unit area from ${both ? 'both faces' : 'one face'} over the whole wet height, none above it.`,
-        'Gravity neglected against capillary suction, and the sorptivity that of the masonry as built (mortar joints included).',
-        'No salts: salts crystallising near the faces change the evaporation and the sorptivity.',
-      ],
-    }),
+    notes: working.list,
+    assumed: { both },
   });
 }
 
@@ -239,7 +200,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

@@ -5,6 +5,7 @@ import { compute as tubeRise } from './tube-rise.js';
 import { compute as wettingForce } from './wetting-force.js';
 import { runCalculation } from './run.js';
 import { calculator as tubeRiseCore } from './tube-rise.js';
+import { texts as tubeRiseTexts } from './tube-rise.texts.js';
 import { resolveContactAngle, resolveLiquid } from './shared-liquid.js';
 
 // The shared inputs' working is written by shared-working.ts, bound by runCalculation: a bundle that
@@ -58,7 +59,7 @@ describe('the shared inputs’ working is written only once runCalculation has b
   });
 
   it('after a full run the same resolved liquid writes its working and assumption', () => {
-    const result = runCalculation(tubeRiseCore, { liquid: 'water', temperatureC: 15 });
+    const result = runCalculation(tubeRiseCore, { liquid: 'water', temperatureC: 15 }, tubeRiseTexts.explain);
     const liquid = resolveLiquid({ liquid: 'water', temperatureC: 15 }, { density: true });
     expect(result.working.slice(0, 2)).toEqual(liquid.working);
     expect(liquid.working.map((s) => s.source)).toEqual(['IAPWS R1-76(2014)', 'Tanaka et al. 2001']);

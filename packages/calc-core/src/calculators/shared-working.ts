@@ -1,13 +1,77 @@
 import { IAPWS_R1_76, IAPWS_SR6_08, KELL_1975, TANAKA_2001 } from '../properties/water.js';
 import { formatValue } from '../format.js';
-import type { UnitId } from '../units.js';
-import { CUSTOM, coef, q } from './shared.js';
+import { STANDARD_GRAVITY, type UnitId } from '../units.js';
+import { CUSTOM, fmt, q } from './shared.js';
 import { type AngleFacts, type LiquidFacts, type SharedWriters } from './shared-liquid.js';
 import type { WorkingStep } from './types.js';
 
 // The working and the assumptions of the shared inputs (the liquid, the contact angle), written from
-// what `resolveLiquid` and `resolveContactAngle` resolved. Text only: `runCalculation` binds it
-// (`bindWriters`), `compute` never reads it, so a widget's first flight, which computes, carries none.
+// what `resolveLiquid` and `resolveContactAngle` resolved, and the steps and assumptions several
+// calculators' `<id>.working.ts` share. Text only: `runCalculation` binds it (`bindWriters`),
+// `compute` never reads it, so a widget's first flight, which computes, carries none.
+// Not every calculator's working may import this module: the widget's build puts a calc-core module
+// that every engine's subpath reaches (their `run` imports their working) into the shared runtime.
+
+/** The assumptions every capillary result shares. */
+export const STATIC_ASSUMPTIONS: readonly string[] = [
+  'Static equilibrium: the liquid has stopped moving.',
+  'Clean liquid and clean surfaces: no surfactant, oil or dirt.',
+  'Air density neglected against the liquid density (0.12 % for water).',
+];
+
+/** The capillary length step ℓc = √(σ/(ρ·g)), id `capillary-length`, for a warning to point at. */
+export function capillaryLengthStep(
+  sigma: number,
+  rho: number,
+  g: number,
+  lc: number,
+  label = 'Capillary length',
+): WorkingStep {
+  return {
+    id: 'capillary-length',
+    label,
+    formula: 'ℓc = √(σ / (ρ·g))',
+    substituted: `√(${q(sigma, 'N/m')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')}))`,
+    value: lc,
+    unit: 'm',
+    source: 'de Gennes, Brochard-Wyart & Quéré (2004) Capillarity and Wetting Phenomena',
+  };
+}
+
+/** The working step of h_c = C/(e·D10): C in m², D10 in m, the rise in m. */
+export function hazenRiseStep(
+  id: string,
+  label: string,
+  c: number,
+  e: number,
+  d10: number,
+  value: number,
+): WorkingStep {
+  return {
+    id,
+    label,
+    formula: 'h_c = C / (e·D10)',
+    substituted: `${q(c, 'm2')} / (${fmt(e)} × ${q(d10, 'm')})`,
+    value,
+    unit: 'm',
+    source: 'Hazen, as given by Terzaghi & Peck (1948) (from memory)',
+  };
+}
+
+/** The gravity assumption, naming the value used. */
+export function gravityAssumption(g: number): string {
+  return g === STANDARD_GRAVITY
+    ? `Standard gravity, ${coef(STANDARD_GRAVITY)} m/s².`
+    : `Local gravity of ${q(g, 'm/s2')} as entered.`;
+}
+
+/**
+ * A published coefficient exactly as the code holds it (all its digits, a true minus sign), so the
+ * working shows the very number computed with.
+ */
+export function coef(value: number): string {
+  return String(value).replace('-', '−');
+}
 
 /** Superscript digits, for the powers of t in a printed polynomial (Kell 1975). */
 const SUPERSCRIPT: Readonly<Record<string, string>> = { '2': '²', '3': '³', '4': '⁴', '5': '⁵' };

@@ -2,18 +2,11 @@ import { CalcInputError } from '../errors.js';
 import { withUnit } from '../display.js';
 import { formatValue } from '../format.js';
 import { STANDARD_GRAVITY, type UnitId } from '../units.js';
-import type {
-  Caution,
-  Condition,
-  InputValues,
-  QuantityInput,
-  Solution,
-  Warning,
-  WorkingStep,
-} from './types.js';
+import type { Caution, Condition, InputValues, Note, QuantityInput, Solution, Warning } from './types.js';
 
 // Pieces every calculator shares: gravity, number formatting, the common warnings and cautions, and
-// how a solution's working is written when read. The liquid and contact-angle inputs are in
+// how a solve records its working (notes; the text is written in shared-working.ts and each
+// calculator's `<id>.working.ts`, which only the full run carries). The liquid and contact-angle inputs are in
 // shared-liquid.ts, so that only the calculators that take a liquid carry the liquids' data.
 
 // ---------------------------------------------------------------- number formatting for working
@@ -24,14 +17,6 @@ export { formatValue as fmt } from '../format.js';
 /** A number with its unit symbol, spaced by the one rule (`display.ts`): `0.07274 N/m`, `20 °C`, `0°`. */
 export function q(value: number, unit: UnitId, digits = 4): string {
   return withUnit(formatValue(value, digits), unit);
-}
-
-/**
- * A published coefficient exactly as the code holds it (all its digits, a true minus sign), so the
- * working shows the very number computed with.
- */
-export function coef(value: number): string {
-  return String(value).replace('-', '−');
 }
 
 /** A warning instance; `fields` are the input ids a form should highlight. */
@@ -134,94 +119,33 @@ export const OTHER_LIQUID_CAUTION: Caution = {
   text: "The liquid's hazards are not known to this calculator: read its safety data sheet before handling it.",
 };
 
-/** The assumptions every capillary result shares. */
-export const STATIC_ASSUMPTIONS: readonly string[] = [
-  'Static equilibrium: the liquid has stopped moving.',
-  'Clean liquid and clean surfaces: no surfactant, oil or dirt.',
-  'Air density neglected against the liquid density (0.12 % for water).',
-];
-
-/** The capillary length step ℓc = √(σ/(ρ·g)), id `capillary-length`, for a warning to point at. */
-export function capillaryLengthStep(
-  sigma: number,
-  rho: number,
-  g: number,
-  lc: number,
-  label = 'Capillary length',
-): WorkingStep {
-  return {
-    id: 'capillary-length',
-    label,
-    formula: 'ℓc = √(σ / (ρ·g))',
-    substituted: `√(${q(sigma, 'N/m')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')}))`,
-    value: lc,
-    unit: 'm',
-    source: 'de Gennes, Brochard-Wyart & Quéré (2004) Capillarity and Wetting Phenomena',
-  };
-}
-
-type StepMaker = () => WorkingStep | readonly WorkingStep[];
-
-/**
- * A solve's working recorded as it goes and written only when read: each step is given as a
- * function that makes it (`working.add(() => ({ ... }))`), called by `build()` from `explain`.
- */
-export interface LaterWorking {
-  add(...makers: StepMaker[]): void;
-  /** Steps that go before every step added so far. */
-  first(maker: StepMaker): void;
-  build(): WorkingStep[];
-}
-
-export function laterWorking(...makers: StepMaker[]): LaterWorking {
-  const list = [...makers];
-  return {
-    add: (...more) => void list.push(...more),
-    first: (maker) => void list.unshift(maker),
-    build: () => list.flatMap((make) => make()),
-  };
-}
-
-/** What a solution explains: its working and its assumptions, text built with `fmt`/`q`. */
-export interface Explanation {
-  readonly working: readonly WorkingStep[];
-  readonly assumptions: readonly string[];
+/** Notes of one calculator's working, typed by its writers' data (`StepWriters`). */
+export interface NoteTaker<N> {
+  readonly list: Note[];
+  add<K extends keyof N & string>(key: K, data: N[K]): void;
+  /** A note that goes before every note added so far. */
+  first<K extends keyof N & string>(key: K, data: N[K]): void;
 }
 
 /**
- * A solution with the liquid's hazard (if it has one) attached to the result's cautions. Given
- * `explain` instead of `working` and `assumptions`, those two are built on first reading only
- * (`calculate` reads them; `compute` never does, so it formats no number it does not show).
+ * A solve's working, recorded as it goes as notes (a key and the numbers its step is written from):
+ * the text is written from them by the calculator's `<id>.working.ts`, which only `calculate` runs.
  */
+export function noteTaker<N>(): NoteTaker<N> {
+  const list: Note[] = [];
+  return {
+    list,
+    add: (key, data) => void list.push([key, data]),
+    first: (key, data) => void list.unshift([key, data]),
+  };
+}
+
+/** A solution with the liquid's hazard (if it has one) attached to the result's cautions. */
 export function solved(
-  parts: Omit<Solution, 'hazards' | 'working' | 'assumptions'> &
-    (Explanation | { readonly explain: () => Explanation }),
+  parts: Omit<Solution, 'hazards'>,
   liquid?: { readonly hazard?: Caution } | null,
 ): Solution {
-  const hazards = liquid?.hazard !== undefined ? { hazards: [liquid.hazard] } : {};
-  if (!('explain' in parts)) return { ...parts, ...hazards };
-  const { explain } = parts;
-  let explained: Explanation | undefined;
-  const read = (): Explanation => (explained ??= explain());
-  return {
-    outputs: parts.outputs,
-    warnings: parts.warnings,
-    band: parts.band,
-    ...hazards,
-    get working() {
-      return read().working;
-    },
-    get assumptions() {
-      return read().assumptions;
-    },
-  };
-}
-
-/** The gravity assumption, naming the value used. */
-export function gravityAssumption(g: number): string {
-  return g === STANDARD_GRAVITY
-    ? `Standard gravity, ${coef(STANDARD_GRAVITY)} m/s².`
-    : `Local gravity of ${q(g, 'm/s2')} as entered.`;
+  return liquid?.hazard !== undefined ? { ...parts, hazards: [liquid.hazard] } : parts;
 }
 
 /**

@@ -1,5 +1,6 @@
 // The soil-capillary-rise calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
 import { ESTIMATE_CAUTION, FOUNDATIONS_CAUTION, FROST_CAUTION } from './shared-texts.js';
+import { explain } from './soil-capillary-rise.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -43,4 +44,5 @@ export const texts: CalculatorTexts = {
       basis: 'printed',
     },
   ],
+  explain,
 };

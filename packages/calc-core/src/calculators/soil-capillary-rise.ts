@@ -1,8 +1,9 @@
 import { capillaryBreakCheck, HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../formulas/soil.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
-import { HAZEN_BASIS, HAZEN_SOURCE, hazenCInput, hazenRiseStep } from './hazen.js';
-import { choice, laterWorking, MM, num, q, quantityInput, warning, solved } from './shared.js';
+import { HAZEN_BASIS, hazenCInput } from './hazen.js';
+import { choice, MM, noteTaker, num, q, quantityInput, solved, warning } from './shared.js';
+import { explain } from './soil-capillary-rise.working.js';
 import type { CalculatorCore, InputValues, Outputs, Warning } from './types.js';
 
 /** IRC R506.2.2: a 4-inch-thick (102 mm) base course under a slab below grade. */
@@ -13,6 +14,39 @@ const NO4_SIEVE_M = 4.75e-3;
 const NO200_SIEVE_M = 0.075e-3;
 
 const withLayer = [{ input: 'breakLayer', values: ['granular'] }] as const;
+
+/** What soil-capillary-rise.working.ts writes each step of the working from, by note key. */
+export interface SoilCapillaryRiseNotes {
+  readonly soilRise: {
+    readonly c: number;
+    readonly e: number;
+    readonly d10: number;
+    readonly soilRise: number;
+  };
+  readonly layerRise: {
+    readonly c: number;
+    readonly layerE: number;
+    readonly layerD10: number;
+    readonly layerRise: number;
+  };
+  readonly layered: {
+    readonly depth: number;
+    readonly t: number;
+    readonly soilRise: number;
+    readonly layerRise: number;
+    readonly soilReachesLayer: boolean;
+    readonly wetZoneTop: number;
+    readonly clearance: number;
+  };
+  readonly clearance: { readonly depth: number; readonly soilRise: number; readonly clearance: number };
+  /** The outputs at either end of Hazen's constant's range, and the band's worst value. */
+  readonly band: { readonly lo: Outputs; readonly hi: Outputs; readonly value: number };
+}
+
+/** What the assumptions are written from. */
+export interface SoilCapillaryRiseAssumed {
+  readonly layered: boolean;
+}
 
 function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
   const d10 = num(inputs, 'd10');
@@ -51,85 +85,29 @@ function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
   });
   const clearance = check.clearance;
 
-  const working = laterWorking();
-  if (!fine)
-    working.add(() => [hazenRiseStep('soil-rise', 'Capillary rise in the soil', c, e, d10, soilRise)]);
-  const fringe =
-    'equilibrium suction ρ·g·z: each material holds water up to its own capillary height (common practice)';
-  if (layerRise !== null) {
-    working.add(() => [
-      hazenRiseStep('layer-rise', 'Capillary rise in the granular layer', c, layerE, layerD10, layerRise),
-    ]);
-  }
+  // The working's text is written from these notes by soil-capillary-rise.working.ts (`calculate` only).
+  const working = noteTaker<SoilCapillaryRiseNotes>();
+  if (!fine) working.add('soilRise', { c, e, d10, soilRise });
+  if (layerRise !== null) working.add('layerRise', { c, layerE, layerD10, layerRise });
   if (!fine && layerRise !== null) {
-    const base = Math.max(depth - t, 0);
-    working.add(() => [
-      {
-        id: 'layer-base',
-        label: 'Height of the base of the layer above the water table',
-        formula: 'z_b = max(D_w − t, 0)',
-        substituted: `max(${q(depth, 'm')} − ${q(t, 'm')}, 0)`,
-        value: base,
-        unit: 'm',
-        source: 'geometry of the profile',
-      },
-      {
-        id: 'wet-top',
-        label: check.soilReachesLayer
-          ? 'Top of the wet zone: the soil fringe reaches the layer, which takes it to its own height'
-          : 'Top of the wet zone: the soil fringe stops below the layer, which stays dry',
-        formula: 'z_w = h_soil if h_soil < z_b, else max(z_b, h_layer)',
-        substituted: check.soilReachesLayer
-          ? `${q(soilRise, 'm')} ≥ ${q(base, 'm')}: max(${q(base, 'm')}, ${q(layerRise, 'm')})`
-          : `${q(soilRise, 'm')} < ${q(base, 'm')}`,
-        value: check.wetZoneTop,
-        unit: 'm',
-        source: fringe,
-      },
-      {
-        id: 'clearance',
-        label: 'Clearance between the capillary zone and the slab',
-        formula: 'D_w − z_w',
-        substituted: `${q(depth, 'm')} − ${q(check.wetZoneTop, 'm')}`,
-        value: clearance,
-        unit: 'm',
-        source: fringe,
-      },
-    ]);
-  } else if (!fine) {
-    working.add(() => [
-      {
-        id: 'clearance',
-        label: 'Clearance between the capillary zone and the slab',
-        formula: 'D_w − h_soil',
-        substituted: `${q(depth, 'm')} − ${q(soilRise, 'm')}`,
-        value: clearance,
-        unit: 'm',
-        source: fringe,
-      },
-    ]);
-  }
+    working.add('layered', {
+      depth,
+      t,
+      soilRise,
+      layerRise,
+      soilReachesLayer: check.soilReachesLayer,
+      wetZoneTop: check.wetZoneTop,
+      clearance,
+    });
+  } else if (!fine) working.add('clearance', { depth, soilRise, clearance });
 
   const band = bandOver([HAZEN_BASIS], outputs, (v) => evaluate(v.hazenC ?? c));
   if (band !== null) {
-    const lo = evaluate(HAZEN_C_RANGE_M2.min);
-    const hi = evaluate(HAZEN_C_RANGE_M2.max);
-    const corner = (o: Outputs): string =>
-      Object.entries(o)
-        .filter(([, v]) => v !== null)
-        .map(([k, v]) => `${k} ${q(v ?? 0, 'm')}`)
-        .join(', ');
-    working.add(() => [
-      {
-        id: 'band',
-        label: "Band over the published range of Hazen's constant: the lowest clearance",
-        formula: 'the same steps at C = 0.1 cm² and C = 0.5 cm²',
-        substituted: `C = 0.1 cm²: ${corner(lo)}; C = 0.5 cm²: ${corner(hi)}`,
-        value: band.outputs.slabClearance?.low ?? band.outputs.layerCapillaryRise?.high ?? 0,
-        unit: 'm',
-        source: HAZEN_SOURCE,
-      },
-    ]);
+    working.add('band', {
+      lo: evaluate(HAZEN_C_RANGE_M2.min),
+      hi: evaluate(HAZEN_C_RANGE_M2.max),
+      value: band.outputs.slabClearance?.low ?? band.outputs.layerCapillaryRise?.high ?? 0,
+    });
   }
   const worst = band?.outputs.slabClearance?.low ?? clearance;
 
@@ -193,23 +171,7 @@ function solve(inputs: InputValues): ReturnType<CalculatorCore['solve']> {
       ),
     );
   }
-  return solved({
-    outputs,
-    warnings,
-    band,
-    explain: () => ({
-      working: working.build(),
-      assumptions: [
-        'Hydrostatic equilibrium above a static water table: no evaporation, infiltration or flow.',
-        "Each material is uniform; its capillary height is Hazen's empirical estimate, a sharp top to the capillary fringe.",
-        "Hazen's constant C within its published range of 0.1–0.5 cm² (the band spans all of it).",
-        'Clean water at ordinary ground temperature.',
-        ...(layered
-          ? ['The granular layer lies directly under the slab, over the soil, with no membrane between.']
-          : []),
-      ],
-    }),
-  });
+  return solved({ outputs, warnings, band, notes: working.list, assumed: { layered } });
 }
 
 export const calculator: CalculatorCore = {
@@ -325,7 +287,7 @@ export const calculator: CalculatorCore = {
  * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
  * its texts: `calculate` (the registry) gives them.
  */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

@@ -1,6 +1,7 @@
 // The tension-from-rise calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
 import { CLEAN_SURFACES_CAUTION, ESTIMATE_CAUTION } from './shared-texts.js';
 import { OTHER_LIQUID_CAUTION } from './shared.js';
+import { explain } from './tension-from-rise.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -36,4 +37,5 @@ export const texts: CalculatorTexts = {
       basis: 'printed',
     },
   ],
+  explain,
 };

@@ -3,21 +3,20 @@ import { ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-reading.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
 import {
-  capillaryLengthStep,
   choice,
   CONTACT_ANGLE_NEAR_90,
   fmt,
-  gravityAssumption,
   gravityInput,
   MM,
   nearNinety,
+  noteTaker,
   num,
   q,
   quantityInput,
   solved,
-  laterWorking,
   warning,
 } from './shared.js';
+import { explain } from './tension-from-rise.working.js';
 import type { CalculatorCore, InputValues, Solution, Warning } from './types.js';
 
 /**
@@ -28,7 +27,6 @@ const NOT_SMALL_RATIO = Math.sqrt(0.12);
 
 const forTension = [{ input: 'solveFor', values: ['surfaceTension'] }] as const;
 const forAngle = [{ input: 'solveFor', values: ['contactAngle'] }] as const;
-const RAYLEIGH = 'Rayleigh 1915, first order: r/3 of liquid held in the meniscus above its lowest point';
 
 /** The rise to the bottom of the meniscus a contact angle gives: Jurin's rise less the meniscus correction, m. */
 function riseFor(sigma: number, angleDeg: number, rho: number, g: number, d: number): number {
@@ -54,6 +52,45 @@ export function angleForRise(h: number, sigma: number, rho: number, g: number, d
   return (lo + hi) / 2;
 }
 
+/** What tension-from-rise.working.ts writes each step of the working from, by note key. */
+export interface TensionFromRiseNotes {
+  readonly tension: {
+    readonly r: number;
+    readonly angleIn: number;
+    readonly m: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly h: number;
+    readonly sigma: number;
+  };
+  readonly wettingRise: {
+    readonly sigma: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly d: number;
+    readonly r: number;
+    readonly wetting: number;
+  };
+  readonly angle: { readonly h: number; readonly angle: number; readonly d: number };
+  readonly size: {
+    readonly sigma: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly lc: number;
+    readonly r: number;
+    readonly ratio: number;
+  };
+}
+
+/** What the assumptions are written from. */
+export interface TensionFromRiseAssumed {
+  /** Solved for the surface tension (else for the contact angle). */
+  readonly tension: boolean;
+  readonly angleIn: number;
+  readonly sigma: number;
+  readonly g: number;
+}
+
 function solve(inputs: InputValues): Solution {
   const mode = choice(inputs, 'solveFor');
   const h = num(inputs, 'rise');
@@ -61,7 +98,8 @@ function solve(inputs: InputValues): Solution {
   const rho = num(inputs, 'density');
   const g = num(inputs, 'gravity');
   const r = d / 2;
-  const working = laterWorking();
+  // The working's text is written from these notes by tension-from-rise.working.ts (`calculate` only).
+  const working = noteTaker<TensionFromRiseNotes>();
   const warnings: Warning[] = [];
   let sigma: number;
   let sigmaOut: number | null = null;
@@ -73,26 +111,7 @@ function solve(inputs: InputValues): Solution {
     const m = meniscusCorrection({ diameter: d, contactAngleDeg: angleIn });
     sigma = (rho * g * r * (h + m)) / (2 * Math.cos((angleIn * Math.PI) / 180));
     sigmaOut = sigma;
-    working.add(() => [
-      {
-        id: 'meniscus',
-        label: 'Meniscus-weight correction',
-        formula: 'δ = V_held / (π·r²); δ = r/3 at θ = 0',
-        substituted: `r = ${q(r, 'm')}, θ = ${q(angleIn, 'deg')}`,
-        value: m,
-        unit: 'm',
-        source: 'Rayleigh 1915 (r/3 at θ = 0); the same spherical-cap geometry for θ > 0, derived here',
-      },
-      {
-        id: 'solved',
-        label: 'Surface tension',
-        formula: 'σ = ρ·g·r·(h + δ) / (2·cos θ)',
-        substituted: `${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(r, 'm')} × (${q(h, 'm')} + ${q(m, 'm')}) / (2 × cos ${q(angleIn, 'deg')})`,
-        value: sigma,
-        unit: 'N/m',
-        source: RAYLEIGH,
-      },
-    ]);
+    working.add('tension', { r, angleIn, m, rho, g, h, sigma });
     if (angleIn > 0) {
       warnings.push(
         warning(
@@ -108,17 +127,7 @@ function solve(inputs: InputValues): Solution {
   } else {
     sigma = num(inputs, 'surfaceTension');
     const wetting = riseFor(sigma, 0, rho, g, d);
-    working.add(() => [
-      {
-        id: 'wetting-rise',
-        label: 'Rise of a fully wetting liquid (θ = 0) in this bore',
-        formula: 'h₀ = 4·σ / (ρ·g·d) − r/3',
-        substituted: `4 × ${q(sigma, 'N/m')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(d, 'm')}) − ${q(r, 'm')}/3`,
-        value: wetting,
-        unit: 'm',
-        source: RAYLEIGH,
-      },
-    ]);
+    working.add('wettingRise', { sigma, rho, g, d, r, wetting });
     const angle = angleForRise(h, sigma, rho, g, d);
     if (angle === null) {
       warnings.push(
@@ -131,17 +140,7 @@ function solve(inputs: InputValues): Solution {
       );
     } else {
       angleOut = angle;
-      working.add(() => [
-        {
-          id: 'solved',
-          label: 'Contact angle',
-          formula: 'θ such that h = 4·σ·cos θ / (ρ·g·d) − δ(θ), solved by bisection over 0–90°',
-          substituted: `h = ${q(h, 'm')}: θ = ${q(angle, 'deg')}, δ(θ) = ${q(meniscusCorrection({ diameter: d, contactAngleDeg: angle }), 'm')}`,
-          value: angle,
-          unit: 'deg',
-          source: "Jurin's law with Rayleigh's meniscus correction (its geometry for θ > 0 derived here)",
-        },
-      ]);
+      working.add('angle', { h, angle, d });
       const poor = poorlyDetermined(angle, 'rise', ['rise', 'surfaceTension'], 'solved');
       if (poor !== null) warnings.push(poor);
     }
@@ -149,18 +148,7 @@ function solve(inputs: InputValues): Solution {
 
   const lc = Math.sqrt(sigma / (rho * g));
   const ratio = r / lc;
-  working.add(() => [
-    capillaryLengthStep(sigma, rho, g, lc),
-    {
-      id: 'size-ratio',
-      label: 'Bore radius against the capillary length',
-      formula: 'r / ℓc',
-      substituted: `${q(r, 'm')} / ${q(lc, 'm')}`,
-      value: ratio,
-      unit: '1',
-      source: 'Rayleigh 1915 (the first-order correction needs r ≪ ℓc)',
-    },
-  ]);
+  working.add('size', { sigma, rho, g, lc, r, ratio });
   const solvedId = mode === 'surfaceTension' ? 'surfaceTension' : 'contactAngleDeg';
   if (ratio >= 1) {
     warnings.push(
@@ -193,19 +181,8 @@ function solve(inputs: InputValues): Solution {
     },
     warnings,
     band: null,
-    explain: () => ({
-      working: working.build(),
-      assumptions: [
-        'Static equilibrium: the meniscus has stopped moving (read after it has risen and, better, after it has been let fall back to the same height).',
-        'A clean, round, uniform, vertical bore dipping into a reservoir wide enough for its surface to be flat.',
-        'The rise is measured from the flat reservoir surface to the bottom of the meniscus.',
-        mode === 'surfaceTension'
-          ? `A contact angle of ${q(angleIn, 'deg')} between the liquid and the tube, known independently.`
-          : `A surface tension of ${q(sigma, 'N/m')}, measured on the same liquid.`,
-        'Air density neglected against the liquid density.',
-        gravityAssumption(g),
-      ],
-    }),
+    notes: working.list,
+    assumed: { tension: mode === 'surfaceTension', angleIn, sigma, g },
   });
 }
 
@@ -284,7 +261,7 @@ export const calculator: CalculatorCore = {
 };
 
 /** Runs this calculator alone (what a widget bundling one calculator calls); inputs in SI keyed by input id. */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

@@ -7,6 +7,7 @@ import {
   RAYLEIGH_REFERENCE,
   WATER_REFERENCES,
 } from './shared-texts.js';
+import { explain } from './rise-common.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -23,4 +24,5 @@ export const texts: CalculatorTexts = {
     ...WATER_REFERENCES,
     ...LIQUID_TABLE_REFERENCES,
   ],
+  explain,
 };

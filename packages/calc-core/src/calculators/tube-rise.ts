@@ -1,6 +1,7 @@
 import { computer } from './engine.js';
 import { runner } from './run.js';
 import { riseHeadline, riseInputs, riseOutputs, riseWarnings, solveRise, TUBE } from './rise-common.js';
+import { explain } from './rise-common.working.js';
 import { MM, quantityInput } from './shared.js';
 import type { CalculatorCore } from './types.js';
 
@@ -23,7 +24,7 @@ export const calculator: CalculatorCore = {
  * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
  * its texts: `calculate` (the registry) gives them.
  */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

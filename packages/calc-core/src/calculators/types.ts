@@ -171,15 +171,44 @@ export interface Band {
  */
 export type Outputs = Readonly<Record<string, number | null>>;
 
+/**
+ * One record of a solve's working: the key of the step writer in the calculator's `<id>.working.ts`
+ * and the numbers (or resolved liquid and angle) it writes the steps from; never text.
+ */
+export type Note = readonly [key: string, data: unknown];
+
 export interface Solution {
   readonly outputs: Outputs;
-  readonly working: readonly WorkingStep[];
   readonly warnings: readonly Warning[];
   readonly band: Band | null;
-  /** What the result takes for granted (static equilibrium, clean surfaces, …), in plain sentences. */
-  readonly assumptions: readonly string[];
   /** Cautions that belong to these inputs (the chosen liquid's hazard); shown before the calculator's own. */
   readonly hazards?: readonly Caution[];
+  /** The working as records, in the order its steps read: `Explain.steps` writes them (`calculate` does, `compute` never). */
+  readonly notes: readonly Note[];
+  /** What the assumptions are written from (`Explain.assumptions`): numbers and choices, no text. */
+  readonly assumed: unknown;
+}
+
+/** A solution's working and its assumptions, as text. */
+export interface Explanation {
+  readonly working: readonly WorkingStep[];
+  /** What the result takes for granted (static equilibrium, clean surfaces, …), in plain sentences. */
+  readonly assumptions: readonly string[];
+}
+
+/** The step writers of one calculator, typed by its notes (`{ washburn: { time: number }, … }`). */
+export type StepWriters<N> = {
+  readonly [K in keyof N]: (data: N[K], inputs: InputValues) => readonly WorkingStep[];
+};
+
+/**
+ * How a calculator's working and assumptions are written from its solution (`<id>.working.ts`,
+ * carried by its texts): a step writer per note key, and the assumptions from `Solution.assumed`.
+ * `never` parameters take any calculator's writers; `runCalculation` hands each its own notes.
+ */
+export interface Explain {
+  readonly steps: Readonly<Record<string, (data: never, inputs: InputValues) => readonly WorkingStep[]>>;
+  readonly assumptions: (assumed: never, inputs: InputValues) => readonly string[];
 }
 
 /**
@@ -235,6 +264,12 @@ export interface CalculatorCore {
 export interface CalculatorTexts {
   readonly cautions: readonly Caution[];
   readonly references: readonly Reference[];
+  /**
+   * Writes the working and assumptions from a solution's notes (`<id>.working.ts`): the first
+   * flight carries none of it. Every calculator's texts have one; it is optional for a definition
+   * a widget makes from the core alone, which `runCalculation` is then given it beside.
+   */
+  readonly explain?: Explain;
 }
 
 /** A whole calculator: its core and its texts, as calc-core's registry joins them. */

@@ -6,6 +6,7 @@ import {
   WATER_REFERENCES,
 } from './shared-texts.js';
 import type { CalculatorTexts } from './types.js';
+import { explain } from './wetting-force.working.js';
 
 export const texts: CalculatorTexts = {
   cautions: [
@@ -60,4 +61,5 @@ export const texts: CalculatorTexts = {
     ...WATER_REFERENCES,
     ...LIQUID_TABLE_REFERENCES,
   ],
+  explain,
 };

@@ -2,7 +2,7 @@ import {
   platePerimeter,
   RING_TABLE_RANGE,
   ringCorrection,
-  ZUIDEMA_WATERS,
+  type RingCorrection,
   wilhelmyForce,
   wilhelmyRodForce,
   wilhelmyRodSurfaceTension,
@@ -12,22 +12,20 @@ import { computer } from './engine.js';
 import { runner } from './run.js';
 import {
   choice,
-  coef,
   CONTACT_ANGLE_NEAR_90,
   fmt,
-  gravityAssumption,
   gravityInput,
-  laterWorking,
   MM,
   nearNinety,
+  noteTaker,
   num,
   q,
   quantityInput,
   warning,
   withFieldNames,
 } from './shared.js';
-import { liquidInputs, resolveLiquid } from './shared-liquid.js';
-import { STANDARD_GRAVITY } from '../units.js';
+import { liquidInputs, resolveLiquid, type ResolvedLiquid } from './shared-liquid.js';
+import { explain } from './wetting-force.working.js';
 import type {
   Caution,
   CalculatorCore,
@@ -55,19 +53,67 @@ const ASTM_MIN_RING_CIRCUMFERENCE_M = 0.04;
 const PLATE_FIELDS = { width: 'plateWidth', thickness: 'plateThickness' } as const;
 const ROD_FIELDS = { diameter: 'rodDiameter' } as const;
 
+/** What wetting-force.working.ts writes each step of the working from, by note key. */
+export interface WettingForceNotes {
+  readonly ring: {
+    readonly F: number;
+    readonly R: number;
+    readonly r: number;
+    readonly drho: number;
+    readonly g: number;
+    readonly x: RingCorrection;
+  };
+  readonly ringFactor: {
+    readonly radicand: number;
+    readonly root: number;
+    readonly factor: number;
+    readonly apparent: number;
+  };
+  readonly perimeter: {
+    readonly isPlate: boolean;
+    readonly w: number;
+    readonly t: number;
+    readonly d: number;
+    readonly perimeter: number;
+  };
+  readonly liquid: ResolvedLiquid;
+  readonly force: {
+    readonly s: number;
+    readonly perimeter: number;
+    readonly theta: number;
+    readonly F: number;
+  };
+  readonly tension: {
+    readonly F: number;
+    readonly perimeter: number;
+    readonly theta: number;
+    readonly sigma: number;
+  };
+}
+
+/** What the assumptions are written from. */
+export type WettingForceAssumed =
+  | { readonly ring: true; readonly g: number }
+  | {
+      readonly ring: false;
+      readonly theta: number;
+      readonly isPlate: boolean;
+      readonly liquid: ResolvedLiquid | null;
+    };
+
 function solve(inputs: InputValues): Solution {
   const method = choice(inputs, 'method') as Method;
-  const working = laterWorking();
+  // The working's text is written from these notes by wetting-force.working.ts (`calculate` only).
+  const working = noteTaker<WettingForceNotes>();
   const warnings: Warning[] = [];
-  // The liquid's assumption is written when the assumptions are read (`calculate`), never by `compute`.
-  let liquidAssumption: (() => string) | null = null;
+  let assumedLiquid: ResolvedLiquid | null = null;
   let force: number | null = null;
   let sigma: number | null = null;
   let apparent: number | null = null;
   let factor: number | null = null;
   let perimeter: number;
 
-  let assumptions: () => string[];
+  let assumed: WettingForceAssumed;
   let hazards: Caution[] = [];
   if (method === 'ring') {
     const F = num(inputs, 'ringForce');
@@ -81,79 +127,17 @@ function solve(inputs: InputValues): Solution {
     perimeter = 4 * Math.PI * R;
     apparent = x.apparent;
     const t = RING_TABLE_RANGE;
-    const { base, k, c, m } = ZUIDEMA_WATERS;
     const applies = x.inTableRange && x.factor !== null;
     factor = applies ? x.factor : null;
     sigma = applies && x.factor !== null ? x.factor * x.apparent : null;
-    working.add(() => [
-      {
-        id: 'apparent',
-        label: 'Apparent surface tension (uncorrected)',
-        formula: 'σ* = F / (4π·R)',
-        substituted: `${q(F, 'N')} / (4π × ${q(R, 'm')})`,
-        value: x.apparent,
-        unit: 'N/m',
-        source: 'du Noüy 1925',
-      },
-      {
-        id: 'ring-ratio',
-        label: 'Ring to wire radius',
-        formula: 'R / r',
-        substituted: `${q(R, 'm')} / ${q(r, 'm')}`,
-        value: x.ringToWire,
-        unit: '1',
-        source: `Harkins & Jordan 1930: tables span R/r ${t.ringToWire.min}–${t.ringToWire.max} (from memory)`,
-      },
-      {
-        id: 'lifted-volume',
-        label: 'Volume of liquid lifted',
-        formula: 'V = F / (Δρ·g)',
-        substituted: `${q(F, 'N')} / (${q(drho, 'kg/m3')} × ${q(g, 'm/s2')})`,
-        value: x.liftedVolume,
-        unit: 'm3',
-        source: 'Harkins & Jordan 1930',
-      },
-      {
-        id: 'ring-range',
-        label: 'Ring size against the lifted volume',
-        formula: 'R³ / V',
-        substituted: `(${q(R, 'm')})³ / ${q(x.liftedVolume, 'm3')}`,
-        value: x.r3OverV,
-        unit: '1',
-        source: `Harkins & Jordan 1930: tables span R³/V ${t.r3OverV.min}–${t.r3OverV.max} (from memory)`,
-      },
-      {
-        id: 'ring-radicand',
-        label: 'Zuidema–Waters radicand',
-        formula: `k·P·(gₙ/g) / (C²·(D − d)) + c − m·r/R; k = ${coef(k)}, c = ${coef(c)}, m = ${coef(m)}; P in dyn/cm, C in cm, D − d in g/mL`,
-        substituted: `P = ${fmt(x.apparent * 1000)} dyn/cm, C = ${fmt(2 * Math.PI * R * 100)} cm, D − d = ${fmt(drho / 1000)} g/mL, gₙ/g = ${fmt(STANDARD_GRAVITY / g, 6)}, r/R = ${fmt(r / R)}`,
-        value: x.radicand,
-        unit: '1',
-        source: 'Zuidema & Waters 1941 in the form of ASTM D971 (from memory)',
-      },
-    ]);
+    working.add('ring', { F, R, r, drho, g, x });
     if (applies && x.root !== null && x.factor !== null) {
-      const { root, factor } = x;
-      working.add(() => [
-        {
-          id: 'ring-factor',
-          label: 'Zuidema–Waters correction factor',
-          formula: `f = ${coef(base)} + √radicand`,
-          substituted: `${coef(base)} + √${fmt(x.radicand)} = ${coef(base)} + ${fmt(root)}`,
-          value: factor,
-          unit: '1',
-          source: 'Zuidema & Waters 1941 in the form of ASTM D971 (from memory)',
-        },
-        {
-          id: 'ring-corrected',
-          label: 'Surface tension, corrected',
-          formula: 'σ = f·σ*',
-          substituted: `${fmt(factor)} × ${q(x.apparent, 'N/m')}`,
-          value: factor * x.apparent,
-          unit: 'N/m',
-          source: 'Harkins & Jordan 1930',
-        },
-      ]);
+      working.add('ringFactor', {
+        radicand: x.radicand,
+        root: x.root,
+        factor: x.factor,
+        apparent: x.apparent,
+      });
     }
     if (!applies) {
       const why: string[] = [];
@@ -205,13 +189,7 @@ function solve(inputs: InputValues): Solution {
         ),
       );
     }
-    assumptions = () => [
-      'The maximum pull, net of the weight of the ring, read as the ring is drawn slowly through the surface.',
-      'The ring is horizontal, round and fully wetted by the liquid (contact angle 0° on clean platinum).',
-      'Clean liquid and a fresh surface: no surfactant, oil or dust.',
-      'Against air the density difference is the liquid density; air density neglected.',
-      gravityAssumption(g),
-    ];
+    assumed = { ring: true, g };
   } else {
     const theta = num(inputs, 'contactAngleDeg');
     const isPlate = method === 'plate-force' || method === 'plate-tension';
@@ -219,38 +197,17 @@ function solve(inputs: InputValues): Solution {
     const t = isPlate ? num(inputs, 'plateThickness') : 0;
     const d = isPlate ? 0 : num(inputs, 'rodDiameter');
     perimeter = isPlate ? platePerimeter(w, t) : Math.PI * d;
-    working.add(() => [
-      {
-        id: 'perimeter',
-        source: 'geometry of the probe',
-        label: 'Wetted length',
-        formula: isPlate ? 'P = 2·(w + t)' : 'P = π·d',
-        substituted: isPlate ? `2 × (${q(w, 'm')} + ${q(t, 'm')})` : `π × ${q(d, 'm')}`,
-        value: perimeter,
-        unit: 'm',
-      },
-    ]);
+    working.add('perimeter', { isPlate, w, t, d, perimeter });
     if (method === 'plate-force' || method === 'rod-force') {
       const liquid = resolveLiquid(inputs, {});
-      working.first(() => liquid.working);
+      working.first('liquid', liquid);
       if (liquid.hazard !== undefined) hazards = [liquid.hazard];
-      liquidAssumption = () => liquid.assumption;
+      assumedLiquid = liquid;
       const s = liquid.surfaceTension;
       force = isPlate
         ? wilhelmyForce({ surfaceTension: s, contactAngleDeg: theta, width: w, thickness: t })
         : wilhelmyRodForce({ surfaceTension: s, contactAngleDeg: theta, diameter: d });
-      const F = force;
-      working.add(() => [
-        {
-          id: 'method',
-          source: 'Wilhelmy 1863',
-          label: 'Wetting force',
-          formula: 'F = σ·P·cos θ',
-          substituted: `${q(s, 'N/m')} × ${q(perimeter, 'm')} × cos ${q(theta, 'deg')}`,
-          value: F,
-          unit: 'N',
-        },
-      ]);
+      working.add('force', { s, perimeter, theta, F: force });
     } else {
       const F = num(inputs, isPlate ? 'force' : 'rodForce');
       sigma = isPlate
@@ -260,18 +217,7 @@ function solve(inputs: InputValues): Solution {
         : withFieldNames({ ...ROD_FIELDS, force: 'rodForce' }, () =>
             wilhelmyRodSurfaceTension({ force: F, contactAngleDeg: theta, diameter: d }),
           );
-      const found = sigma;
-      working.add(() => [
-        {
-          id: 'method',
-          source: 'Wilhelmy 1863',
-          label: 'Surface tension',
-          formula: 'σ = F / (P·cos θ)',
-          substituted: `${q(F, 'N')} / (${q(perimeter, 'm')} × cos ${q(theta, 'deg')})`,
-          value: found,
-          unit: 'N/m',
-        },
-      ]);
+      working.add('tension', { F, perimeter, theta, sigma });
       if (theta > 0) {
         warnings.push(
           warning(
@@ -285,15 +231,7 @@ function solve(inputs: InputValues): Solution {
     }
     const near = nearNinety(theta, ['contactAngleDeg']);
     if (near !== null) warnings.push({ ...near, step: 'method' });
-    assumptions = () => [
-      'The force is read at zero immersion depth, net of the weight of the probe: buoyancy is not included.',
-      `A contact angle of ${q(theta, 'deg')} on the probe, known independently (0° for a clean roughened platinum plate, common practice).`,
-      'Clean liquid and a fresh surface: no surfactant, oil or dust.',
-      isPlate
-        ? 'A thin rectangular plate wetted along its whole perimeter 2·(w + t).'
-        : 'A round rod or fibre wetted around its circumference π·d.',
-      ...(liquidAssumption !== null ? [liquidAssumption()] : []),
-    ];
+    assumed = { ring: false, theta, isPlate, liquid: assumedLiquid };
   }
   return {
     outputs: {
@@ -305,13 +243,8 @@ function solve(inputs: InputValues): Solution {
     },
     warnings,
     band: null,
-    // Written only when read (`calculate`), never by `compute`.
-    get working() {
-      return working.build();
-    },
-    get assumptions() {
-      return assumptions();
-    },
+    notes: working.list,
+    assumed,
     ...(hazards.length > 0 ? { hazards } : {}),
   };
 }
@@ -443,7 +376,7 @@ export const calculator: CalculatorCore = {
  * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
  * its texts: `calculate` (the registry) gives them.
  */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);

@@ -8,6 +8,7 @@ import {
   WATER_REFERENCES,
 } from './shared-texts.js';
 import type { CalculatorTexts } from './types.js';
+import { explain } from './wicking-time.working.js';
 
 export const texts: CalculatorTexts = {
   cautions: [
@@ -45,4 +46,5 @@ export const texts: CalculatorTexts = {
     VISCOSITY_REFERENCE,
     ...LIQUID_TABLE_REFERENCES,
   ],
+  explain,
 };

@@ -6,7 +6,6 @@ import {
   choice,
   CONTACT_ANGLE_NEAR_90,
   fmt,
-  gravityAssumption,
   gravityInput,
   nearNinety,
   MM,
@@ -14,11 +13,18 @@ import {
   q,
   quantityInput,
   warning,
-  capillaryLengthStep,
   solved,
-  laterWorking,
+  noteTaker,
 } from './shared.js';
-import { contactAngleInputs, liquidInputs, resolveContactAngle, resolveLiquid } from './shared-liquid.js';
+import {
+  contactAngleInputs,
+  liquidInputs,
+  resolveContactAngle,
+  resolveLiquid,
+  type ResolvedAngle,
+  type ResolvedLiquid,
+} from './shared-liquid.js';
+import { explain } from './wicking-time.working.js';
 import type { CalculatorCore, InputValues, Outputs, Solution, Warning } from './types.js';
 
 /** Gravity-restrained time over Lucas–Washburn time above which gravity is called not negligible. */
@@ -30,8 +36,57 @@ const GRAVITY_RATIO_LIMIT = 1.05;
  */
 const INERTIA_RATIO_LIMIT = 1.05;
 
-const WASHBURN = 'Lucas 1918; Washburn 1921';
-const BOSANQUET = 'Bosanquet 1923';
+/** What wicking-time.working.ts writes each step of the working from, by note key. */
+export interface WickingTimeNotes {
+  readonly base: {
+    readonly liquid: ResolvedLiquid;
+    readonly angle: ResolvedAngle;
+    readonly sigma: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly lc: number;
+  };
+  readonly washburn: {
+    readonly mu: number;
+    readonly L: number;
+    readonly sigma: number;
+    readonly r: number;
+    readonly rho: number;
+    readonly theta: number;
+    readonly vertical: boolean;
+    readonly time: number;
+    readonly inertial: ReturnType<typeof bosanquetTime>;
+    readonly inertiaRatio: number;
+  };
+  readonly jurinLimit: {
+    readonly sigma: number;
+    readonly rho: number;
+    readonly g: number;
+    readonly r: number;
+    readonly theta: number;
+    readonly limit: number;
+  };
+  readonly gravity: {
+    readonly L: number;
+    readonly limit: number;
+    readonly x: number;
+    readonly shape: number;
+    readonly sigma: number;
+    readonly r: number;
+    readonly mu: number;
+    readonly theta: number;
+    readonly tg: number;
+  };
+}
+
+/** What the assumptions are written from. */
+export interface WickingTimeAssumed {
+  readonly tooWide: boolean;
+  readonly vertical: boolean;
+  readonly liquid: ResolvedLiquid;
+  readonly angle: ResolvedAngle;
+  readonly g: number;
+}
 
 function solve(inputs: InputValues): Solution {
   const vertical = choice(inputs, 'direction') === 'vertical';
@@ -93,11 +148,9 @@ function solve(inputs: InputValues): Solution {
   };
   const outputs = evaluate(angle.angleDeg);
 
-  const working = laterWorking(() => [
-    ...liquid.working,
-    ...angle.working,
-    capillaryLengthStep(sigma, rho, g, lc, 'Capillary length (the pore must be well below it)'),
-  ]);
+  // The working's text is written from these notes by wicking-time.working.ts (`calculate` only).
+  const working = noteTaker<WickingTimeNotes>();
+  working.add('base', { liquid, angle, sigma, rho, g, lc });
   const warnings: Warning[] = [];
   if (tooWide) {
     warnings.push(
@@ -108,18 +161,13 @@ function solve(inputs: InputValues): Solution {
         { step: 'capillary-length', withholds: ['time', 'timeWithInertia', 'jurinLimit', 'timeWithGravity'] },
       ),
     );
-    const assumptions = (): string[] => [
-      'Laminar flow of a Newtonian liquid in a uniform cylindrical capillary of the effective radius given.',
-      liquid.assumption,
-      angle.assumption,
-      gravityAssumption(g),
-    ];
     return solved(
       {
         outputs,
         warnings,
         band: null,
-        explain: () => ({ working: working.build(), assumptions: assumptions() }),
+        notes: working.list,
+        assumed: { tooWide, vertical, liquid, angle, g },
       },
       liquid,
     );
@@ -127,51 +175,22 @@ function solve(inputs: InputValues): Solution {
   const raw = compute(angle.angleDeg);
   const inertiaRatio = raw.inertial.time / raw.time;
   const inertiaMatters = inertiaRatio > INERTIA_RATIO_LIMIT;
-  working.add(() => [
-    {
-      id: 'washburn',
-      label: 'Time, Lucas–Washburn (gravity and inertia neglected)',
-      formula: 't = 2·μ·L² / (σ·r·cos θ)',
-      substituted: `2 × ${q(mu, 'Pa*s')} × (${q(L, 'm')})² / (${q(sigma, 'N/m')} × ${q(r, 'm')} × cos ${q(angle.angleDeg, 'deg')})`,
-      value: raw.time,
-      unit: 's',
-      source: WASHBURN,
-    },
-    {
-      id: 'inertia-scale',
-      label: 'Inertial time scale',
-      formula: '1/b = ρ·r² / (8·μ)',
-      substituted: `${q(rho, 'kg/m3')} × (${q(r, 'm')})² / (8 × ${q(mu, 'Pa*s')})`,
-      value: 1 / raw.inertial.b,
-      unit: 's',
-      source: BOSANQUET,
-    },
-    {
-      id: 'bosanquet',
-      label: vertical
-        ? 'Time with inertia, horizontal (the size of the inertia effect)'
-        : 'Time with inertia, Bosanquet',
-      formula: 'L² = (a / b²)·(b·t − 1 + e^(−b·t)), a = 4·σ·cos θ / (ρ·r), b = 8·μ / (ρ·r²); solved for t',
-      substituted: `a = ${fmt(raw.inertial.a)} m²/s², b = ${fmt(raw.inertial.b)} 1/s, b·t = ${fmt(raw.inertial.tau)}; against Lucas–Washburn × ${fmt(inertiaRatio)}`,
-      value: raw.inertial.time,
-      unit: 's',
-      source: BOSANQUET,
-    },
-  ]);
+  working.add('washburn', {
+    mu,
+    L,
+    sigma,
+    r,
+    rho,
+    theta: angle.angleDeg,
+    vertical,
+    time: raw.time,
+    inertial: raw.inertial,
+    inertiaRatio,
+  });
   const withheldByInertia = vertical ? ['time', 'timeWithGravity'] : ['time'];
   if (vertical && raw.limit !== null) {
     const limit = raw.limit;
-    working.add(() => [
-      {
-        id: 'jurin-limit',
-        label: 'Jurin limit of the rise',
-        formula: 'h_J = 2·σ·cos θ / (ρ·g·r)',
-        substituted: `2 × ${q(sigma, 'N/m')} × cos ${q(angle.angleDeg, 'deg')} / (${q(rho, 'kg/m3')} × ${q(g, 'm/s2')} × ${q(r, 'm')})`,
-        value: limit,
-        unit: 'm',
-        source: "Jurin 1718 (Jurin's law)",
-      },
-    ]);
+    working.add('jurinLimit', { sigma, rho, g, r, theta: angle.angleDeg, limit });
     const tg = raw.withGravity;
     if (tg === null) {
       warnings.push(
@@ -185,26 +204,7 @@ function solve(inputs: InputValues): Solution {
     } else if (!inertiaMatters) {
       const x = L / limit;
       const shape = gravityShape(x);
-      working.add(() => [
-        {
-          id: 'gravity-shape',
-          label: 'Height against the Jurin limit, and the shape term',
-          formula: 'x = h / h_J; −x − ln(1 − x)',
-          substituted: `x = ${q(L, 'm')} / ${q(limit, 'm')} = ${fmt(x)}`,
-          value: shape,
-          unit: '1',
-          source: WASHBURN,
-        },
-        {
-          id: 'gravity-time',
-          label: 'Time with gravity',
-          formula: 't = (2·h_J² / K)·(−x − ln(1 − x)), K = σ·r·cos θ / (2μ)',
-          substituted: `K = ${fmt((sigma * r * Math.cos((angle.angleDeg * Math.PI) / 180)) / (2 * mu))} m²/s, 2 × (${q(limit, 'm')})² / K × ${fmt(shape)}`,
-          value: tg,
-          unit: 's',
-          source: WASHBURN,
-        },
-      ]);
+      working.add('gravity', { L, limit, x, shape, sigma, r, mu, theta: angle.angleDeg, tg });
       if (tg / raw.time > GRAVITY_RATIO_LIMIT) {
         warnings.push(
           warning(
@@ -232,20 +232,8 @@ function solve(inputs: InputValues): Solution {
   const near = nearNinety(angle.angleDeg);
   if (near !== null) warnings.push({ ...near, step: 'washburn' });
   const band = bandOver(angle.basis, outputs, (v) => evaluate(v.contactAngleDeg ?? angle.angleDeg));
-  const assumptions = (): string[] => [
-    'Laminar flow of a Newtonian liquid in a uniform cylindrical capillary of the effective radius given.',
-    'The static contact angle holds while the liquid moves (no dynamic angle).',
-    'Clean liquid and clean surfaces: no surfactant, oil or dirt.',
-    'Entrance losses and the air displaced ahead of the liquid are neglected.',
-    vertical
-      ? 'Upward: gravity is included in the time with gravity only; inertia is judged from the horizontal solution.'
-      : 'Horizontal: gravity plays no part.',
-    liquid.assumption,
-    angle.assumption,
-    gravityAssumption(g),
-  ];
   return solved(
-    { outputs, warnings, band, explain: () => ({ working: working.build(), assumptions: assumptions() }) },
+    { outputs, warnings, band, notes: working.list, assumed: { tooWide, vertical, liquid, angle, g } },
     liquid,
   );
 }
@@ -352,7 +340,7 @@ export const calculator: CalculatorCore = {
  * input id. Its results carry the liquid's hazards but not the calculator's own cautions, which are in
  * its texts: `calculate` (the registry) gives them.
  */
-export const run = /* @__PURE__ */ runner(calculator);
+export const run = /* @__PURE__ */ runner(calculator, explain);
 
 /** Its numbers only (`compute`): no working, assumptions or input hash; what the widget's first result uses. */
 export const compute = /* @__PURE__ */ computer(calculator);
