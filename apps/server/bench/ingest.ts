@@ -5,6 +5,11 @@
 // is stored exactly once and that the rollups equal the raw runs.
 // Run: npx tsx apps/server/bench/ingest.ts   (DB_HOST/DB_PORT/DB_USER/DB_PASSWORD: a MariaDB the
 // benchmark may create its own database `wst_bench_ingest` in)
+// BENCH_BASELINE_SERVER_DIR=<another copy's apps/server> also runs that copy's server (on the same
+// database) in the same alternating slices, so a change is measured against the code before it
+// under the same load at the same moments. A copy of a commit: `git archive <commit> apps/server |
+// tar -x -C /tmp/base`, then link node_modules, releases and packages/widget of this checkout
+// into /tmp/base and copy tsconfig.base.json there.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
@@ -85,9 +90,14 @@ async function waitForHttp(url: string, child: ChildProcess): Promise<void> {
 /** Extra node flags for the server under test, e.g. BENCH_SERVER_NODE_ARGS=--cpu-prof to profile it. */
 const serverNodeArgs = (process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
 
-function start(script: string, env: Record<string, string>, nodeArgs: string[] = []): ChildProcess {
+function start(
+  script: string,
+  env: Record<string, string>,
+  nodeArgs: string[] = [],
+  cwd = serverDir,
+): ChildProcess {
   return spawn(process.execPath, [...nodeArgs, '--import', 'tsx', script], {
-    cwd: serverDir,
+    cwd,
     env: { ...process.env, ...env },
     // The server logs every request as it would in production; the lines go to /dev/null.
     stdio: ['ignore', 'ignore', 'inherit'],
@@ -211,29 +221,33 @@ const serverPort = Number(process.env.BENCH_SERVER_PORT ?? 0) || (await freePort
 const bareUrl = `http://127.0.0.1:${barePort}`;
 const serverUrl = `http://127.0.0.1:${serverPort}`;
 const bare = start('bench/ingest-bare.ts', { PORT: String(barePort) });
-const server = start(
-  'src/index.ts',
-  {
-    PORT: String(serverPort),
-    DB_NAME: DB,
-    DB_HOST: config.db.host,
-    DB_PORT: String(config.db.port),
-    LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'info',
-    RETENTION_FIRST_PURGE_MINUTES: '600',
-  },
-  serverNodeArgs,
-);
-const results = { bare: emptyLoad(), ingest: emptyLoad() };
+const serverEnv = (port: number) => ({
+  PORT: String(port),
+  DB_NAME: DB,
+  DB_HOST: config.db.host,
+  DB_PORT: String(config.db.port),
+  LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'info',
+  RETENTION_FIRST_PURGE_MINUTES: '600',
+});
+const server = start('src/index.ts', serverEnv(serverPort), serverNodeArgs);
+const baselineDir = process.env.BENCH_BASELINE_SERVER_DIR;
+const baselinePort = baselineDir ? Number(process.env.BENCH_BASELINE_PORT ?? 0) || (await freePort()) : 0;
+const baselineUrl = `http://127.0.0.1:${baselinePort}`;
+const baseline = baselineDir ? start('src/index.ts', serverEnv(baselinePort), [], baselineDir) : undefined;
+const results = { bare: emptyLoad(), ingest: emptyLoad(), baseline: emptyLoad() };
 const warmupAcks = emptyLoad();
+const baselineWarmupAcks = emptyLoad();
 let statements = NaN;
 let commits = NaN;
 try {
   await waitForHttp(`${bareUrl}/`, bare);
   await waitForHttp(`${serverUrl}/api/v1/health`, server);
+  if (baseline) await waitForHttp(`${baselineUrl}/api/v1/health`, baseline);
   const dbPid = await databasePid();
   for (const [url, into] of [
     [bareUrl, emptyLoad()],
     [serverUrl, warmupAcks],
+    ...(baseline ? ([[baselineUrl, baselineWarmupAcks]] as const) : []),
   ] as const) {
     for (let s = 0; s < WARMUP_MAX_S && into.ok < WARMUP_REQUESTS; s += WARMUP_SLICE_S)
       await load(url, WARMUP_SLICE_S, into);
@@ -246,9 +260,11 @@ try {
     const s1 = await status();
     statements = (Number.isNaN(statements) ? 0 : statements) + s1.Questions! - s0.Questions! - 1;
     commits = (Number.isNaN(commits) ? 0 : commits) + s1.Com_commit! - s0.Com_commit!;
+    if (baseline)
+      await load(baselineUrl, DURATION_S / SLICES, results.baseline, { server: baseline.pid, db: dbPid });
   }
 } finally {
-  await Promise.all([stop(bare), stop(server)]);
+  await Promise.all([stop(bare), stop(server), ...(baseline ? [stop(baseline)] : [])]);
 }
 
 const rate = (r: Load) => r.ok / DURATION_S;
@@ -265,13 +281,24 @@ console.log(row('POST /api/v1/embed/runs', results.ingest));
 console.log(
   `  ratio ${(rate(results.ingest) / rate(results.bare)).toFixed(2)} (goal 0.8, not done below 0.5); CPU per request ratio ${(cpuMs(results.bare) / cpuMs(results.ingest)).toFixed(2)}`,
 );
+if (baseline) {
+  console.log(row(`baseline (${baselineDir})`, results.baseline));
+  console.log(
+    `  baseline ratio ${(rate(results.baseline) / rate(results.bare)).toFixed(2)}; this code against the baseline: ${(rate(results.ingest) / rate(results.baseline)).toFixed(2)}× the rate, ${(cpuMs(results.ingest) / cpuMs(results.baseline)).toFixed(2)}× the CPU per report (server + database)`,
+  );
+}
 console.log(
   `  database: ${(statements / results.ingest.ok).toFixed(2)} statements and ${(commits / results.ingest.ok).toFixed(3)} commits per report (${(results.ingest.ok / commits).toFixed(1)} reports per transaction)`,
 );
 
 // Every acknowledged report is a row, exactly once; the rollups are the raw runs counted.
 const t0 = performance.now();
-const acked = [...warmupAcks.acknowledged, ...results.ingest.acknowledged];
+const acked = [
+  ...warmupAcks.acknowledged,
+  ...results.ingest.acknowledged,
+  ...baselineWarmupAcks.acknowledged,
+  ...results.baseline.acknowledged,
+];
 let found = 0;
 for (let i = 0; i < acked.length; i += 5000) {
   const rows = await sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM runs WHERE id IN (?)', {

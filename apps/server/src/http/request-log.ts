@@ -37,10 +37,14 @@ export const nextRequestId = (): number => (lastId = (lastId % 2147483646) + 1);
 
 /**
  * The request log for one route, with the records pino-http writes for the others (same fields,
- * levels and messages), at the cost of one log call per request.
+ * levels and messages), at the cost of one log call per request. Its records go through a child
+ * logger without the app's redaction: they carry no header but the origin (see `requestRecord`), so
+ * there is nothing to redact, and redacting copies the record's `req` on every request. Errors
+ * logged through `req.log` still go through the app's own logger, redaction and all.
  */
 export function quickRequestLog(logger: Logger, mode: Mode) {
   const line = mode === 'line';
+  const records = logger.child({}, { redact: [] });
   return function requestLog(req: Request, res: Response, next: NextFunction): void {
     const id = nextRequestId();
     const started = Date.now();
@@ -53,20 +57,20 @@ export function quickRequestLog(logger: Logger, mode: Mode) {
       get: () => (child ??= line ? logger.child({ reqId: id }) : logger.child({ req: requestRecord(req) })),
     });
     if (mode !== 'off') {
-      const done = (): void => {
-        res.removeListener('finish', done);
-        res.removeListener('close', done);
+      // A response always ends with 'close' (after 'finish', or when the connection is lost first):
+      // one listener, where pino-http listens for both.
+      res.once('close', () => {
         const ms = Date.now() - started;
         const level = requestLevel(res);
         const failed = res.statusCode >= 500;
         const err = failed ? new Error(`failed with status code ${res.statusCode}`) : undefined;
         if (line) {
-          logger[level](
+          records[level](
             { reqId: id, responseTime: ms, ...(err ? { err } : {}) },
             failed ? errorLine(req, res) : successLine(req, res, ms),
           );
         } else {
-          logger[level](
+          records[level](
             {
               req: requestRecord(req),
               res: { statusCode: res.statusCode },
@@ -76,9 +80,7 @@ export function quickRequestLog(logger: Logger, mode: Mode) {
             failed ? 'request errored' : 'request completed',
           );
         }
-      };
-      res.on('finish', done);
-      res.on('close', done);
+      });
     }
     next();
   };

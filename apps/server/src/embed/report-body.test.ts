@@ -1,0 +1,116 @@
+import { randomUUID } from 'node:crypto';
+import { gzipSync } from 'node:zlib';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { embedRunBodySchema, type Widget } from '@wickstone/contracts';
+import {
+  createLiveWidget,
+  createTestApp,
+  runReportBody,
+  seedOrgWithTeam,
+  TestClient,
+  type TestApp,
+} from '../../testing/index.js';
+import { runBodySchema } from './router.js';
+
+const SITE = 'https://www.polwithen-damp.example';
+
+// The run-report route reads a widget's report itself (a plain UTF-8 body of a known length) and
+// leaves every other request to body-parser: both must give the same answers.
+describe('the run report body', () => {
+  let t: TestApp;
+  let widget: Widget;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    const org = await seedOrgWithTeam();
+    const owner = new TestClient(t.app);
+    await owner.login(org.users.owner.email, org.users.owner.password);
+    widget = await createLiveWidget(owner, org.id, 'Body rise', [SITE]);
+  });
+  afterAll(() => t.close());
+
+  const post = (contentType: string, body: string | Buffer, extra: Record<string, string> = {}) =>
+    request(t.app)
+      .post('/api/v1/embed/runs')
+      .set('Origin', SITE)
+      .set('Content-Type', contentType)
+      .set(extra)
+      .send(body);
+  const report = () => JSON.stringify(runReportBody(widget.publicKey, { id: randomUUID() }));
+
+  it.each([
+    'text/plain;charset=UTF-8',
+    'text/plain',
+    'application/json',
+    'application/json; charset=utf-8',
+    // Not among the types read directly: body-parser reads these.
+    'text/plain; charset="utf-8"',
+    'Text/Plain; Charset=UTF-8',
+  ])('stores a report sent as %s', async (type) => {
+    const res = await post(type, report()).expect(201);
+    expect(res.body).toMatchObject({ agreed: true, duplicate: false });
+  });
+
+  it('drops a byte order mark before the JSON, as body-parser does', async () => {
+    await post('text/plain', `\uFEFF${report()}`).expect(201);
+    await post('text/plain; charset="utf-8"', `\uFEFF${report()}`).expect(201);
+  });
+
+  it('reads a report sent in several chunks', async () => {
+    const text = report();
+    const req = request(t.app)
+      .post('/api/v1/embed/runs')
+      .set('Origin', SITE)
+      .set('Content-Type', 'text/plain')
+      .set('Content-Length', String(Buffer.byteLength(text)));
+    // supertest's request: written in pieces before it ends.
+    for (let i = 0; i < text.length; i += 200) void req.write(text.slice(i, i + 200));
+    await req.expect(201);
+  });
+
+  it('a compressed report is read by body-parser', async () => {
+    await post('text/plain', gzipSync(report()), { 'Content-Encoding': 'gzip' }).expect(201);
+  });
+
+  it('the same answers as body-parser for bad bodies', async () => {
+    // Malformed JSON, on both paths.
+    for (const type of ['text/plain', 'text/plain; charset="utf-8"']) {
+      const res = await post(type, '{"id": ').expect(400);
+      expect(res.body.error).toMatchObject({
+        code: 'bad_request',
+        details: { fields: [{ field: 'body', message: 'Malformed JSON' }] },
+      });
+    }
+    // Too large: 413 whether or not the length is declared up front.
+    const big = JSON.stringify({ pad: 'x'.repeat(40_000) });
+    expect((await post('text/plain', big).expect(413)).body.error.code).toBe('payload_too_large');
+    // Another charset.
+    expect((await post('text/plain; charset=koi8-x', report()).expect(415)).body.error.code).toBe(
+      'unsupported_media_type',
+    );
+    // A type neither path reads: no body, so the body is the field named.
+    const res = await post('text/csv', report()).expect(400);
+    expect(res.body.error.details.fields[0].field).toBe('body');
+  });
+
+  it("uses zod's compiled parser, which answers as the schema does", () => {
+    // z.compile hands the schema back unchanged when it cannot compile it.
+    expect(runBodySchema).not.toBe(embedRunBodySchema);
+    const good = runReportBody(widget.publicKey, { id: randomUUID(), pageUrl: `${SITE}/a` });
+    expect(runBodySchema.parse(good)).toEqual(embedRunBodySchema.parse(good));
+    const bad = [
+      { ...good, id: 'not-a-uuid' },
+      { ...good, extra: 1 },
+      { ...good, pageUrl: 'javascript:alert(1)' },
+      { ...good, inputs: { diameter: 'x'.repeat(61) } },
+      { ...good, result: { ...good.result, outputs: { h: Number.NaN } } },
+      { ...good, unitSystem: 'imperial' },
+    ];
+    for (const b of bad) {
+      const compiled = runBodySchema.safeParse(b);
+      expect(compiled.success).toBe(false);
+      expect(compiled.error?.issues).toEqual(embedRunBodySchema.safeParse(b).error?.issues);
+    }
+  });
+});
