@@ -1,7 +1,8 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import express, { type Express } from 'express';
+import type { IncomingMessage, ServerResponse } from 'node:http';
+import express, { type Express, type Request, type Response } from 'express';
 import cookieParser from 'cookie-parser';
 import { pinoHttp } from 'pino-http';
 import {
@@ -212,7 +213,21 @@ export function createApp(deps: AppDeps): Express {
   // calculation comes here, so it skips the layers other requests pass (pino-http's child logger
   // per request, the routers before the embed API's).
   const embedApi = embedRouter(embed, sheets, config.embed, counters, refusals);
-  app.post(`${API_BASE}/embed/runs`, quickRequestLog(logger, config.requestLog), ...embedApi.runs);
+  const runsLog = quickRequestLog(logger, config.requestLog);
+  app.post(`${API_BASE}/embed/runs`, runsLog, ...embedApi.runs);
+  takeRunReportsFirst(app, (req, res) => {
+    if (req.method !== 'POST' || req.url !== `${API_BASE}/embed/runs` || !embedApi.takes(req)) return false;
+    runsLog(req as Request, res as Response, () => undefined);
+    return embedApi.fast(req, res, (err, body) => {
+      // A failure is answered as on every route: Express's request and response, the refusal
+      // count, the one error shape.
+      const [request, response] = asExpress(app, req, res);
+      request.body = body;
+      embedApi.refusals(err, request, response, (e: unknown) =>
+        errorHandler(e, request, response, () => undefined),
+      );
+    });
+  });
   app.use(requestLog);
 
   // The widget bundle's releases, and the cookie-less API the widgets call from the firms' sites.
@@ -248,4 +263,32 @@ export function createApp(deps: AppDeps): Express {
   app.use(notFoundHandler);
   app.use(errorHandler);
   return app;
+}
+
+type NodeHandler = (req: IncomingMessage, res: ServerResponse) => boolean;
+
+/**
+ * Lets `first` answer a request before Express dispatches it (the run-report hot path: Express's
+ * dispatch, prototypes swapped on both objects and the router's matching, costs a bare handler as
+ * much again as its own work). `first` returns false for a request it leaves alone; Express then
+ * handles it as it would have. Every way in (listen, a test's supertest, a server's 'request'
+ * listener) calls `app.handle`, so every one of them takes the same path.
+ */
+function takeRunReportsFirst(app: Express, first: NodeHandler): void {
+  const dispatch = (app as unknown as { handle: Dispatch }).handle;
+  (app as unknown as { handle: Dispatch }).handle = function handle(this: Express, req, res, done) {
+    if (first(req, res)) return;
+    dispatch.call(this, req, res, done);
+  };
+}
+type Dispatch = (req: IncomingMessage, res: ServerResponse, done?: (err?: unknown) => void) => void;
+
+/** A request and response as Express's handlers expect them (what `app.handle` does first). */
+function asExpress(app: Express, req: IncomingMessage, res: ServerResponse): [Request, Response] {
+  const request = Object.setPrototypeOf(req, app.request) as Request;
+  const response = Object.setPrototypeOf(res, app.response) as Response;
+  (request as { res?: Response }).res = response;
+  (response as { req?: Request }).req = request;
+  response.locals ??= Object.create(null) as Response['locals'];
+  return [request, response];
 }

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { gzipSync } from 'node:zlib';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
 import { embedRunBodySchema, type Widget } from '@wickstone/contracts';
 import {
@@ -111,6 +111,43 @@ describe('the run report body', () => {
       const compiled = runBodySchema.safeParse(b);
       expect(compiled.success).toBe(false);
       expect(compiled.error?.issues).toEqual(embedRunBodySchema.safeParse(b).error?.issues);
+    }
+  });
+  it("answers a widget's report before Express dispatches, with the Express path's headers and errors", async () => {
+    // Express's router sees only what the hot path leaves to it.
+    const router = (t.app as unknown as { router: { handle: () => void } }).router;
+    const handle = vi.spyOn(router, 'handle');
+    try {
+      const quick = await post('text/plain;charset=UTF-8', report()).expect(201);
+      expect(handle).not.toHaveBeenCalled();
+      const viaExpress = await post('text/plain; charset="utf-8"', report()).expect(201);
+      expect(handle).toHaveBeenCalledTimes(1);
+      for (const res of [quick, viaExpress]) {
+        expect(res.headers).toMatchObject({
+          'access-control-allow-origin': SITE,
+          'access-control-expose-headers': 'Retry-After',
+          vary: 'Origin',
+          'cache-control': 'no-store',
+          'content-type': 'application/json; charset=utf-8',
+        });
+      }
+      // Failures on the hot path: the one error shape, and no CORS answer for a foreign page.
+      const foreign = await request(t.app)
+        .post('/api/v1/embed/runs')
+        .set('Origin', 'https://copycat.example')
+        .set('Content-Type', 'text/plain')
+        .send(report())
+        .expect(403);
+      expect(foreign.body.error.code).toBe('forbidden');
+      expect(foreign.headers['access-control-allow-origin']).toBeUndefined();
+      const unnamed = await post('text/plain', JSON.stringify({ ...JSON.parse(report()), id: 'x' })).expect(
+        400,
+      );
+      expect(unnamed.body.error.details.fields.map((f: { field: string }) => f.field)).toEqual(['body.id']);
+      expect(unnamed.headers['access-control-allow-origin']).toBe(SITE);
+      expect(handle).toHaveBeenCalledTimes(1);
+    } finally {
+      handle.mockRestore();
     }
   });
 });
