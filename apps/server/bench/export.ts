@@ -214,6 +214,49 @@ try {
     return `${t.access_type} on ${t.key} (${t.used_key_parts.join(', ')}), ${t.r_rows} rows read for ${EXPORT_CHUNK} returned, ${t.r_engine_stats?.pages_read_count ?? 0} pages read from disk, ${Number(block.r_total_time_ms).toFixed(0)} ms`;
   }
 
+  if (process.env.BENCH_EXPORT_ALTERNATE) {
+    // Both designs over the same year at once, in turns of this many chunks each, so that a busy
+    // spell on the shared machine falls on both: each is timed only while it is being read.
+    const slice = Number(process.env.BENCH_EXPORT_ALTERNATE);
+    const sides = [
+      { label: 'CSV export, previous design:', parts: previousExport(org.id, filters) },
+      { label: 'CSV export:', parts: createRunService({ sequelize }).exportCsv(org.id, filters) },
+    ].map((x) => ({
+      ...x,
+      it: x.parts[Symbol.asyncIterator](),
+      ms: 0,
+      rows: -1,
+      hash: createHash('sha256'),
+      done: false,
+    }));
+    while (sides.some((x) => !x.done))
+      for (const side of sides) {
+        const t0 = performance.now();
+        for (let k = 0; k < slice && !side.done; k++) {
+          const next = await side.it.next();
+          if (next.done) side.done = true;
+          else {
+            side.hash.update(Buffer.from(next.value));
+            for (let i = next.value.indexOf('\n'); i !== -1; i = next.value.indexOf('\n', i + 1))
+              side.rows += 1;
+          }
+        }
+        side.ms += performance.now() - t0;
+      }
+    const [old, now] = sides as [(typeof sides)[0], (typeof sides)[0]];
+    console.log(`export ${from} … ${to}, the two designs in turns of ${slice} chunks:`);
+    for (const x of sides)
+      console.log(
+        `  ${x.label.padEnd(30)} ${x.rows.toLocaleString('en')} rows in ${seconds(x.ms)}, ${perS(rate(x.rows, x.ms))}`,
+      );
+    const [a, b] = [old.hash.digest('hex'), now.hash.digest('hex')];
+    console.log(
+      `  ratio ${(rate(now.rows, now.ms) / rate(old.rows, old.ms)).toFixed(2)}; SHA-256 ${b}${a === b ? ' (identical)' : ` DIFFERS from ${a}`}`,
+    );
+    if (a !== b) process.exitCode = 1;
+    process.exit();
+  }
+
   const basePrevious = withPrevious ? await plainSelect(previousChunkQuery(org.id, filters, null), {}) : null;
   const base = await plainSelect(exportChunkQuery(org.id, filters, null), {
     rowsAsArray: true,

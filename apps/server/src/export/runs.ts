@@ -27,7 +27,7 @@ export const EXPORT_LEAD_COLUMN = `(SELECT MIN(l.id) FROM leads l WHERE l.run_id
 
 /**
  * Up to this many requests linked to runs, an export reads them all first (one query, a map from
- * run to its first request: about 6 MB at the limit, however many runs are exported) instead of
+ * run to its first request: about 5 MB at the limit, however many runs are exported) instead of
  * looking one up per run. Requests are a small share of runs (0.4 % in the benchmark's year).
  */
 export const LINKED_LEADS_READ_WHOLE = 50_000;
