@@ -12,6 +12,8 @@
 // first and last chunks' times (a linear export keeps them alike), heap and RSS peaks over the first
 // 100,000 rows and over all of them (flat when alike), and the plan of a chunk from the middle.
 // BENCH_EXPORT_PREVIOUS=0 leaves out 1 and 3 (for a profile of the export alone).
+// BENCH_EXPORT_ALTERNATE=<n> instead reads 3 and 4 in turns of n chunks each (a fairer ratio on a
+// busy machine: a busy spell falls on both), timing each only while it is read, and compares hashes.
 // Run: npx tsx apps/server/bench/export.ts [--db wst_bench_usage]
 import { createHash } from 'node:crypto';
 import { createWriteStream } from 'node:fs';
