@@ -2,10 +2,10 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import type { RunDetail, RunFilters, RunListItem, RunListQuery, RunListResponse } from '@wickstone/contracts';
 import { Lead, Run, Widget } from '../db/models/index.js';
 import { notFound } from '../errors.js';
-import { keysetCsv } from '../export/csv.js';
+import { EXPORT_CHUNK, EXPORT_COLUMNS, EXPORT_LEAD_COLUMN, runsCsv } from '../export/runs.js';
 import { jsonValue } from '../usage/rollups.js';
 import { nextDay } from '../usage/days.js';
-import { runPrinter, showRun, valuesCell, type RunPrinter } from './present.js';
+import { showRun } from './present.js';
 import { wholeResult, type EngineOf } from './working.js';
 
 export interface RunService {
@@ -16,8 +16,7 @@ export interface RunService {
   exportCsv(orgId: number, filters: RunFilters): AsyncGenerator<string>;
 }
 
-/** Rows read per query when exporting: one round trip per this many lines, never all of them at once. */
-export const EXPORT_CHUNK = 1000;
+export { EXPORT_CHUNK };
 
 type WidgetInfo = Pick<Widget, 'id' | 'name' | 'calculatorId' | 'settings'>;
 
@@ -43,8 +42,6 @@ const LIST_COLUMNS = `r.id, r.created_at, r.widget_id, r.calculator_id, r.origin
   (SELECT MIN(l.id) FROM leads l WHERE l.run_id = r.id AND l.organization_id = r.organization_id) AS lead_id`;
 
 const toDate = (v: Date | string): Date => (v instanceof Date ? v : new Date(`${v.replace(' ', 'T')}Z`));
-/** An instant as a DATETIME(3) literal in UTC, the time zone the connection stores in. */
-const sqlTime = (d: Date): string => d.toISOString().replace('T', ' ').replace('Z', '');
 
 export interface Where {
   sql: string;
@@ -83,12 +80,17 @@ function runsWhere(orgId: number, f: RunFilters): Where {
  * DATETIME(3) literal, id) in the export's order, a range of the runs table's (organisation,
  * time, id) key. Exported for the export benchmark, which checks the plan with ANALYZE.
  */
-export function exportChunkQuery(orgId: number, f: RunFilters, cursor: [string, string] | null): Where {
+export function exportChunkQuery(
+  orgId: number,
+  f: RunFilters,
+  cursor: [string, string] | null,
+  leadInQuery = false,
+): Where {
   const where = runsWhere(orgId, f);
   const dir = f.sort === 'createdAt' ? 'ASC' : 'DESC';
   const after = dir === 'DESC' ? '<' : '>';
   return {
-    sql: `SELECT ${LIST_COLUMNS} FROM runs r WHERE ${where.sql}${cursor ? ` AND (r.created_at ${after} ? OR (r.created_at = ? AND r.id ${after} ?))` : ''}
+    sql: `SELECT ${EXPORT_COLUMNS}${leadInQuery ? `, ${EXPORT_LEAD_COLUMN}` : ''} FROM runs r WHERE ${where.sql}${cursor ? ` AND (r.created_at ${after} ? OR (r.created_at = ? AND r.id ${after} ?))` : ''}
      ORDER BY r.created_at ${dir}, r.id ${dir} LIMIT ${EXPORT_CHUNK}`,
     params: cursor ? [...where.params, cursor[0], cursor[0], cursor[1]] : where.params,
   };
@@ -131,6 +133,8 @@ export function createRunService(deps: {
   reads?: Sequelize;
   /** Release engines: a run's working is made again with the engine of the release that made it. */
   engineOf?: EngineOf;
+  /** How many linked requests the export reads whole before it looks them up per run instead (tests). */
+  linkedLeadsLimit?: number;
 }): RunService {
   const { sequelize } = deps;
   const reads = deps.reads ?? sequelize;
@@ -254,63 +258,12 @@ export function createRunService(deps: {
     },
 
     async *exportCsv(orgId, f) {
-      const widgets = await widgetsOf(orgId);
-      // Each widget's printer is made once per unit system and serves all of its runs: the units,
-      // conversions and labels are not looked up again for every cell.
-      const printers = new Map<string, RunPrinter>();
-      const printerOf = (w: WidgetInfo | undefined, calculatorId: string, system: 'si' | 'us') => {
-        const key = `${w?.id ?? ''}|${calculatorId}|${system}`;
-        let p = printers.get(key);
-        if (!p) printers.set(key, (p = runPrinter(calculatorId, w?.settings ?? { inputs: {} }, system)));
-        return p;
-      };
-      yield* keysetCsv<RunColumns, [string, string]>({
-        header: [
-          'Time (UTC)',
-          'Run',
-          'Widget ID',
-          'Widget',
-          'Calculator',
-          'Inputs',
-          'Outputs',
-          'Units',
-          'Warnings',
-          'Site',
-          'Page',
-          'Release',
-          'Agreed',
-          'Lead',
-        ],
-        chunk: EXPORT_CHUNK,
-        page: (cursor) => {
-          const q = exportChunkQuery(orgId, f, cursor);
-          return select<RunColumns>(q.sql, q.params);
-        },
-        cursor: (last) => [sqlTime(toDate(last.created_at)), last.id],
-        cells: (rows) =>
-          rows.map((row) => {
-            const widgetId = Number(row.widget_id);
-            const w = widgets.get(widgetId);
-            const system = w?.settings.units.system ?? row.unit_system;
-            const p = printerOf(w, row.calculator_id, system);
-            const leadId = row.lead_id === null ? null : Number(row.lead_id);
-            return [
-              toDate(row.created_at).toISOString(),
-              row.id,
-              widgetId,
-              w?.name ?? `Widget ${row.widget_id}`,
-              p.title,
-              valuesCell(p.inputs(jsonValue<Record<string, number | string>>(row.inputs))),
-              valuesCell(p.outputs(jsonValue<Record<string, number | null> | null>(row.outputs) ?? {})),
-              system,
-              jsonValue<string[]>(row.warning_codes).join(' '),
-              row.origin,
-              row.page_url,
-              row.release,
-              Boolean(Number(row.agreed)),
-              leadId,
-            ];
-          }),
+      yield* runsCsv({
+        reads,
+        orgId,
+        widgets: await widgetsOf(orgId),
+        page: (cursor, leadInQuery) => exportChunkQuery(orgId, f, cursor, leadInQuery),
+        linkedLeadsLimit: deps.linkedLeadsLimit,
       });
     },
   };
