@@ -77,10 +77,14 @@ const pageProbe = (expected: number) => `
     for (const e of list.getEntries()) {
       if (e.hadRecentInput) continue;
       window.__cls += e.value;
-      // What moved, for BENCH_DEBUG: each shifted node, where it was and where it went (y, height).
+      // What moved, for BENCH_DEBUG: each shifted node, where it was and where it went (x, y, width,
+      // height), and the widths of the demo page's columns then.
       window.__shifts.push(e.value.toFixed(4) + ' at ' + Math.round(e.startTime) + ' ms: ' + (e.sources || []).map((s) =>
-        describe(s.node) + ' y ' + Math.round(s.previousRect.y) + '→' + Math.round(s.currentRect.y) +
-        ' h ' + Math.round(s.previousRect.height) + '→' + Math.round(s.currentRect.height)).join(', '));
+        describe(s.node) + ' x ' + Math.round(s.previousRect.x) + '→' + Math.round(s.currentRect.x) +
+        ' y ' + Math.round(s.previousRect.y) + '→' + Math.round(s.currentRect.y) +
+        ' w ' + Math.round(s.previousRect.width) + '→' + Math.round(s.currentRect.width) +
+        ' h ' + Math.round(s.previousRect.height) + '→' + Math.round(s.currentRect.height)).join(', ') +
+        '; columns of .pair: ' + [...document.querySelectorAll('.pair > section')].map((c) => Math.round(c.getBoundingClientRect().width)).join('/'));
     }
   }).observe({ type: 'layout-shift', buffered: true });
   const usable = () => {
