@@ -205,7 +205,10 @@ assert.equal(await hostA.locator('[data-input="diameter"]').inputValue(), '0.019
 assert.equal(Number(await hostA.locator('[data-output="rise"]').getAttribute('data-value')), riseSi);
 
 // Every input is named with its unit (label plus unit suffix label).
-assert.equal(await hostA.getByRole('textbox', { name: 'Bore (inside diameter), in', exact: true }).count(), 1);
+assert.equal(
+  await hostA.getByRole('textbox', { name: 'Bore (inside diameter), in', exact: true }).count(),
+  1,
+);
 assert.equal(await hostA.getByRole('combobox', { name: 'Liquid', exact: true }).count(), 1);
 
 // The report: retried after the 503 with the very same body, as text/plain.
