@@ -259,18 +259,27 @@ await hostB.locator('[data-wickstone="calculate"]').click();
 await hostB.locator('[data-field-error="diameter"]').waitFor();
 console.log('field error (US units):', await hostB.locator('[data-field-error="diameter"]').textContent());
 assert.equal(log.length, before);
-// Preview through Wickstone.mount: rendering again updates in place (the result stays), nothing is sent.
+// Preview through Wickstone.mount: an update redraws in place (the result stays), nothing is sent.
 const sentBefore = log.length;
 const preview = await tab.evaluate(async (widget) => {
   const slot = document.createElement('div');
   document.body.append(slot);
   const handle = window.Wickstone.mount(slot, { widget, preview: true });
   const root = () => slot.querySelector('wickstone-widget').shadowRoot;
+  // The first view draws once the engine has arrived; the full widget takes over after first paint.
+  for (
+    let i = 0;
+    !slot.querySelector('wickstone-widget')?.shadowRoot?.querySelector('[data-view="full"]');
+    i++
+  ) {
+    if (i > 400) throw new Error('the preview never became the full widget');
+    await new Promise((r) => setTimeout(r, 25));
+  }
   root().querySelector('[data-wickstone="calculate"]').click();
   await new Promise((r) => setTimeout(r, 50));
   const recoloured = structuredClone(widget);
   recoloured.settings.look.colors.primary = '#4b3fa8';
-  window.Wickstone.mount(slot, { widget: recoloured, preview: true });
+  handle.update({ widget: recoloured, preview: true });
   await new Promise((r) => setTimeout(r, 50));
   const out = {
     hosts: slot.querySelectorAll('wickstone-widget').length,
