@@ -244,20 +244,27 @@ export function embedRouter(
     res.set('Cache-Control', 'no-store');
     res.vary('Origin');
     const origin = req.get('origin');
-    if (!origin) return preflight(req, res, next);
+    const answered = origin ? answerOrigin(res, origin) : undefined;
+    if (answered === undefined) return preflight(req, res, next);
+    return answered.then(() => preflight(req, res, next));
+  }
+
+  /**
+   * Lets the page read the answer when a live widget allows its origin: synchronous while the
+   * origin's answer is cached. While the database is down the origin cannot be checked; the 503
+   * carries no data, so the widget may read it and its Retry-After (the failure is passed on).
+   */
+  function answerOrigin(res: ServerResponse, origin: string): void | Promise<void> {
     const allowed = originAllowed(origin.toLowerCase());
     if (typeof allowed === 'boolean') {
       if (allowed) allowOrigin(res, origin);
-      return preflight(req, res, next);
+      return;
     }
     return allowed.then(
       (ok) => {
         if (ok) allowOrigin(res, origin);
-        preflight(req, res, next);
       },
       (e: unknown) => {
-        // While the database is down the origin cannot be checked; the 503 carries no data, so the
-        // widget may read it and its Retry-After.
         if (isDatabaseUnavailable(e)) allowOrigin(res, origin);
         throw e;
       },
@@ -305,23 +312,13 @@ export function embedRouter(
     res.setHeader('Cache-Control', 'no-store');
     res.setHeader('Vary', 'Origin');
     const origin = req.headers.origin;
-    const allowed = origin ? originAllowed(origin.toLowerCase()) : false;
+    const answered = origin ? answerOrigin(res, origin) : undefined;
     // A check that fails is answered once the body is read, as in `cors`.
-    if (typeof allowed !== 'boolean') allowed.catch(() => undefined);
+    answered?.catch(() => undefined);
     readPlain(req, length, (err, text) => {
       let json: unknown;
       void (async () => {
-        if (origin) {
-          let ok: boolean;
-          try {
-            ok = await allowed;
-          } catch (e) {
-            // While the database is down the origin cannot be checked; the 503 carries no data.
-            if (isDatabaseUnavailable(e)) allowOrigin(res, origin);
-            throw e;
-          }
-          if (ok) allowOrigin(res, origin);
-        }
+        await answered;
         if (err) throw err;
         json = parseJson(text!);
         await acknowledge(json, origin, res);
