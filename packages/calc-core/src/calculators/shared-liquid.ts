@@ -1,10 +1,15 @@
 import { CalcInputError } from '../errors.js';
 import {
-  type ContactAnglePreset,
-  contactAnglePresets,
-  getContactAnglePreset,
-} from '../properties/contactAngles.js';
-import { type Liquid, getLiquid, liquids } from '../properties/liquids.js';
+  type ContactAngleValues,
+  contactAngleValues,
+  getContactAngleValues,
+} from '../properties/contactAngleValues.js';
+import {
+  type LiquidValues,
+  TABLE_TEMPERATURE_C,
+  getLiquidValues,
+  liquidValues,
+} from '../properties/liquidValues.js';
 import { type WaterDensity, waterDensity, waterSurfaceTension, waterViscosity } from '../properties/water.js';
 import { CUSTOM, OTHER_LIQUID_CAUTION, choice, num, quantityInput } from './shared.js';
 import type {
@@ -20,11 +25,13 @@ import type {
 
 // The liquid and contact-angle inputs and how they resolve into numbers. Apart from shared.ts so that
 // the liquids' and contact angles' data and the water correlations travel only with the engines of
-// the calculators that take a liquid, not with every calculator's first flight.
+// the calculators that take a liquid, not with every calculator's first flight. It reads the
+// values alone (`liquidValues.ts`, `contactAngleValues.ts`): where each comes from is written by the
+// working (`shared-working.ts`, from `liquids.ts` and `contactAngles.ts`), which follows first paint.
 //
 // Liquid design: the `liquid` choice decides where σ, ρ and μ come from.
 //   water  → the IAPWS / Tanaka / Kell correlations at `temperatureC` (the only input that then shows);
-//   a table liquid → its 20 °C row in `liquids` (temperature does not apply: the table has one row);
+//   a table liquid → its 20 °C row in `liquidValues` (temperature does not apply: the table has one row);
 //   custom → the `surfaceTension`, `density` and `viscosity` inputs as typed.
 // So a temperature never silently changes a value it cannot change, and a typed σ is never
 // overwritten by a correlation.
@@ -54,10 +61,10 @@ export function liquidInputs(needs: LiquidNeeds): InputDefinition[] {
           label: 'Water',
           help: 'Properties from the IAPWS, Tanaka and Kell correlations at the temperature given.',
         },
-        ...liquids.map((l) => ({
+        ...liquidValues.map((l) => ({
           value: l.id,
           label: l.name,
-          help: `Table values at ${l.temperatureC} °C.`,
+          help: `Table values at ${TABLE_TEMPERATURE_C} °C.`,
         })),
         { value: CUSTOM, label: 'Other (enter properties)' },
       ],
@@ -121,12 +128,17 @@ export type LiquidFacts =
       readonly density: number | null;
       readonly viscosity: number | null;
     }
-  | { readonly kind: 'table'; readonly row: Liquid; readonly density: boolean; readonly viscosity: boolean };
+  | {
+      readonly kind: 'table';
+      readonly row: LiquidValues;
+      readonly density: boolean;
+      readonly viscosity: boolean;
+    };
 
 /** What a resolved contact angle's working and assumption are written from. */
 export type AngleFacts =
   | { readonly kind: typeof CUSTOM; readonly angleDeg: number }
-  | { readonly kind: 'preset'; readonly preset: ContactAnglePreset };
+  | { readonly kind: 'preset'; readonly preset: ContactAngleValues };
 
 /** The text of the shared inputs' working and assumptions (`shared-working.ts`). */
 export interface SharedWriters {
@@ -241,7 +253,7 @@ function resolveLiquidAfresh(inputs: InputValues, needs: LiquidNeeds): ResolvedL
       },
     };
   }
-  const row = getLiquid(id);
+  const row = getLiquidValues(id);
   if (row === undefined) throw new Error(`liquid ${id} is offered but not tabulated`);
   const facts: LiquidFacts = {
     kind: 'table',
@@ -252,9 +264,9 @@ function resolveLiquidAfresh(inputs: InputValues, needs: LiquidNeeds): ResolvedL
   return {
     id,
     name: row.name.toLowerCase(),
-    surfaceTension: row.surfaceTension.value,
-    density: needs.density === true ? row.density.value : 0,
-    viscosity: needs.viscosity === true ? row.viscosity.value : 0,
+    surfaceTension: row.surfaceTension,
+    density: needs.density === true ? row.density : 0,
+    viscosity: needs.viscosity === true ? row.viscosity : 0,
     get working() {
       return writers().liquidWorking(facts);
     },
@@ -283,15 +295,12 @@ export function contactAngleInputs(opts: {
   readonly maxDeg?: number;
 }): InputDefinition[] {
   const when = opts.when ?? [];
-  const options = contactAnglePresets
+  const options = contactAngleValues
     .filter((p) => opts.presetIds.includes(p.id))
     .map((p) => ({
       value: p.id,
       label: p.label,
-      help:
-        p.spreadDeg === undefined
-          ? `${p.angleDeg}°`
-          : `${p.angleDeg}° (${p.spreadDeg.low}–${p.spreadDeg.high}°)`,
+      help: p.spread === undefined ? `${p.angleDeg}°` : `${p.angleDeg}° (${p.spread.low}–${p.spread.high}°)`,
       // Offered only with its own liquid (or one entered by hand): any other pairing is refused below.
       appliesWhen: [{ input: 'liquid', values: [p.liquid, CUSTOM] }],
     }));
@@ -346,7 +355,7 @@ function resolveContactAngleAfresh(inputs: InputValues, liquidId: string): Resol
       },
     };
   }
-  const preset = getContactAnglePreset(presetId);
+  const preset = getContactAngleValues(presetId);
   if (preset === undefined) throw new Error(`contact-angle preset ${presetId} is offered but not defined`);
   if (liquidId !== CUSTOM && preset.liquid !== liquidId) {
     throw new CalcInputError({
@@ -355,7 +364,7 @@ function resolveContactAngleAfresh(inputs: InputValues, liquidId: string): Resol
       message: `"${preset.label}" is for ${preset.liquid}, not the liquid chosen; pick a matching preset or enter the angle`,
     });
   }
-  const spread = preset.spreadDeg;
+  const spread = preset.spread;
   const facts: AngleFacts = { kind: 'preset', preset };
   return {
     angleDeg: preset.angleDeg,
@@ -370,7 +379,7 @@ function resolveContactAngleAfresh(inputs: InputValues, liquidId: string): Resol
               input: 'contactAngleDeg',
               low: spread.low,
               high: spread.high,
-              source: `${preset.label}: ${preset.source} (${preset.basis})`,
+              source: `${preset.label}: ${spread.source} (${spread.basis})`,
             },
           ],
     get working() {

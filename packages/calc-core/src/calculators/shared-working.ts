@@ -1,3 +1,5 @@
+import { getContactAnglePreset } from '../properties/contactAngles.js';
+import { getLiquid } from '../properties/liquids.js';
 import { IAPWS_R1_76, IAPWS_SR6_08, KELL_1975, TANAKA_2001 } from '../properties/water.js';
 import { formatValue } from '../format.js';
 import { STANDARD_GRAVITY, type UnitId } from '../units.js';
@@ -79,6 +81,12 @@ const SUPERSCRIPT: Readonly<Record<string, string>> = { '2': '²', '3': '³', '4
 const IAPWS_ST = 'IAPWS R1-76(2014)';
 const SR6 = 'IAPWS SR6-08 (2011)';
 
+/** The cited row (`liquids.ts`, `contactAngles.ts`) of a liquid or preset the calculation resolved. */
+function cited<T>(row: T | undefined, id: string): T {
+  if (row === undefined) throw new Error(`${id} is resolved but has no sources`);
+  return row;
+}
+
 function liquidWorking(facts: LiquidFacts): WorkingStep[] {
   const steps: WorkingStep[] = [];
   if (facts.kind === 'water') {
@@ -155,7 +163,7 @@ function liquidWorking(facts: LiquidFacts): WorkingStep[] {
       });
     return steps;
   }
-  const { row } = facts;
+  const row = cited(getLiquid(facts.row.id), facts.row.id);
   const tableStep = (
     label: string,
     symbol: string,
@@ -182,7 +190,8 @@ function liquidAssumption(facts: LiquidFacts): string {
     return `Pure, air-free water at ${q(facts.t, 'degC')} and atmospheric pressure, properties from the IAPWS, Tanaka and Kell correlations.`;
   if (facts.kind === CUSTOM)
     return 'The liquid properties as entered, taken as those of the liquid at the temperature of use.';
-  return `${facts.row.name} at ${q(facts.row.temperatureC, 'degC')}, pure, with the table's values; at another temperature they differ.`;
+  const row = cited(getLiquid(facts.row.id), facts.row.id);
+  return `${row.name} at ${q(row.temperatureC, 'degC')}, pure, with the table's values; at another temperature they differ.`;
 }
 
 function angleWorking(facts: AngleFacts): WorkingStep[] {
@@ -192,7 +201,7 @@ function angleWorking(facts: AngleFacts): WorkingStep[] {
       { label: 'Contact angle (entered)', formula: 'θ', substituted: q(a, 'deg'), value: a, unit: 'deg' },
     ];
   }
-  const { preset } = facts;
+  const preset = cited(getContactAnglePreset(facts.preset.id), facts.preset.id);
   const spread = preset.spreadDeg;
   return [
     {
@@ -212,7 +221,7 @@ function angleWorking(facts: AngleFacts): WorkingStep[] {
 function angleAssumption(facts: AngleFacts): string {
   if (facts.kind === CUSTOM)
     return `A contact angle of ${q(facts.angleDeg, 'deg')} as entered, taken as the static angle of the liquid on this surface.`;
-  const { preset } = facts;
+  const preset = cited(getContactAnglePreset(facts.preset.id), facts.preset.id);
   const spread = preset.spreadDeg;
   return `A contact angle of ${q(preset.angleDeg, 'deg')} from the preset "${preset.label}" (${preset.source}, ${preset.basis})${spread === undefined ? '' : `; the likely range spans ${spread.low}–${spread.high}°`}.`;
 }

@@ -1,4 +1,7 @@
+/// <reference types="vite/client" />
 import { describe, expect, it } from 'vitest';
+import { TABLE_TEMPERATURE_C, getLiquidValues, liquidValues } from './liquidValues.js';
+import valuesSource from './liquidValues.ts?raw';
 import { getLiquid, liquids } from './liquids.js';
 
 describe('liquid table', () => {
@@ -63,5 +66,28 @@ describe('liquid table', () => {
     expect(getLiquid('mercury')?.hazard?.text).toMatch(/toxic/);
     expect(getLiquid('mercury')?.hazard?.code).toBe('HAZARD_MERCURY');
     expect(getLiquid('water')).toBeUndefined();
+  });
+
+  it('cites every value of the values table, row for row, with the values and hazard unchanged', () => {
+    expect(liquids.map((l) => l.id)).toEqual(liquidValues.map((v) => v.id));
+    for (const l of liquids) {
+      const v = getLiquidValues(l.id);
+      expect(l.name).toBe(v?.name);
+      expect(l.temperatureC).toBe(TABLE_TEMPERATURE_C);
+      expect([l.surfaceTension.value, l.density.value, l.viscosity.value]).toEqual([
+        v?.surfaceTension,
+        v?.density,
+        v?.viscosity,
+      ]);
+      expect(l.hazard).toBe(v?.hazard);
+    }
+  });
+
+  it('keeps the values table (what a calculation and its first view load) free of the value citations', () => {
+    const citations = new Set(
+      liquids.flatMap((l) => [l.surfaceTension, l.density, l.viscosity].map((v) => v.source)),
+    );
+    expect(citations.size).toBeGreaterThanOrEqual(3);
+    for (const citation of citations) expect(valuesSource).not.toContain(citation);
   });
 });

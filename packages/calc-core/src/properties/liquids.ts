@@ -1,3 +1,7 @@
+import { type Hazard, TABLE_TEMPERATURE_C, liquidValues } from './liquidValues.js';
+
+export { MERCURY_HAZARD, type Hazard } from './liquidValues.js';
+
 /**
  * How firmly a tabulated value is sourced: seen in the named publication, a fact of the trade with
  * no single source, or recalled from the named handbook without the page at hand.
@@ -23,134 +27,59 @@ export interface Liquid {
   readonly hazard?: Hazard;
 }
 
-/** A liquid's hazard as a result shows it: GHS classes and hazard statements, with their source. */
-export interface Hazard {
-  /** Stable caution code, `HAZARD_<LIQUID>`. */
-  readonly code: string;
-  readonly text: string;
-  readonly source: string;
-  readonly basis: Basis;
-}
+// The values themselves are in `liquidValues.ts` (what a calculation needs, in the widget's first
+// flight); here is where each comes from, by liquid id, for the working and the references, which
+// follow first paint.
 
-/**
- * Harmonised classifications of Regulation (EC) No 1272/2008 (CLP) Annex VI as the ECHA C&L
- * inventory lists them, or the supplier safety data sheet where there is none; recalled, not read
- * from the inventory here, so every line says `from memory` until someone checks it.
- */
-const CLP_SOURCE = 'Regulation (EC) No 1272/2008 (CLP) Annex VI, as listed in the ECHA C&L inventory';
-const SDS_SOURCE = 'supplier safety data sheets (self-classification under CLP)';
-
-function hazard(code: string, text: string, source: string): Hazard {
-  return { code, text, source, basis: 'from memory' };
-}
-
-/** Shown with every result that involves mercury. */
-export const MERCURY_HAZARD =
-  'Mercury is toxic: its vapour is harmful at room temperature and spills are hard to clean up. GHS: Acute Tox. 2 by inhalation (H330), Repr. 1B (H360D), STOT RE 1 (H372), Aquatic Acute 1 and Chronic 1 (H400, H410). Handle it only under the controls its safety data sheet and local rules require.';
+type Citation = Omit<SourcedValue, 'value'>;
 
 const JASPER = 'Jasper J. J. (1972) J. Phys. Chem. Ref. Data 1, 841–1009';
 const CRC = 'CRC Handbook of Chemistry and Physics, tables of liquid density and viscosity';
 
-function printed(value: number, source: string): SourcedValue {
-  return { value, source, basis: 'printed' };
+function printed(source: string): Citation {
+  return { source, basis: 'printed' };
 }
-function recalled(value: number, source: string): SourcedValue {
-  return { value, source, basis: 'from memory' };
+function recalled(source: string): Citation {
+  return { source, basis: 'from memory' };
 }
 
 /**
- * Liquids other than water, at 20 °C (water has its own temperature correlations in `water`).
- * Surface tensions are Jasper's printed values except glycerol; densities and viscosities are
- * handbook values marked `from memory` until someone checks them against the printed page.
+ * The source of each value, [σ, ρ, μ], by liquid id. Surface tensions are Jasper's printed values
+ * except glycerol; densities and viscosities are handbook values marked `from memory` until someone
+ * checks them against the printed page.
  */
-export const liquids: readonly Liquid[] = [
-  {
-    id: 'ethanol',
-    name: 'Ethanol',
-    temperatureC: 20,
-    // Jasper's fit for ethanol, 24.05 − 0.0832·t mN/m, gives 22.39 at 20 °C.
-    surfaceTension: printed(22.39e-3, JASPER),
-    density: recalled(789.3, CRC),
-    viscosity: recalled(1.2e-3, CRC),
-    hazard: hazard(
-      'HAZARD_ETHANOL',
-      'Ethanol is highly flammable: keep it away from flames, sparks and hot surfaces. GHS: Flam. Liq. 2 (H225); Eye Irrit. 2 (H319) on most supplier sheets.',
-      `${CLP_SOURCE}; ${SDS_SOURCE} for H319`,
-    ),
-  },
-  {
-    id: 'methanol',
-    name: 'Methanol',
-    temperatureC: 20,
-    surfaceTension: printed(22.45e-3, JASPER),
-    density: recalled(791.4, CRC),
-    viscosity: recalled(0.59e-3, CRC),
-    hazard: hazard(
-      'HAZARD_METHANOL',
-      'Methanol is highly flammable and toxic if swallowed, inhaled or absorbed through the skin; it damages the optic nerve. GHS: Flam. Liq. 2 (H225), Acute Tox. 3 oral, dermal and inhalation (H301, H311, H331), STOT SE 1 (H370).',
-      CLP_SOURCE,
-    ),
-  },
-  {
-    id: 'acetone',
-    name: 'Acetone',
-    temperatureC: 20,
-    surfaceTension: printed(24.02e-3, JASPER),
-    density: recalled(790, CRC),
-    viscosity: recalled(0.32e-3, CRC),
-    hazard: hazard(
-      'HAZARD_ACETONE',
-      'Acetone is highly flammable and its vapour causes drowsiness. GHS: Flam. Liq. 2 (H225), Eye Irrit. 2 (H319), STOT SE 3 (H336); EUH066 (repeated exposure may cause skin dryness or cracking).',
-      CLP_SOURCE,
-    ),
-  },
-  {
-    id: 'toluene',
-    name: 'Toluene',
-    temperatureC: 20,
-    surfaceTension: printed(28.52e-3, JASPER),
-    density: recalled(866.9, CRC),
-    viscosity: recalled(0.59e-3, CRC),
-    hazard: hazard(
-      'HAZARD_TOLUENE',
-      'Toluene is highly flammable, may be fatal if swallowed and enters the airways, and is suspected of damaging the unborn child. GHS: Flam. Liq. 2 (H225), Asp. Tox. 1 (H304), Skin Irrit. 2 (H315), STOT SE 3 (H336), Repr. 2 (H361d), STOT RE 2 (H373).',
-      CLP_SOURCE,
-    ),
-  },
-  {
-    id: 'ethylene-glycol',
-    name: 'Ethylene glycol',
-    temperatureC: 20,
-    surfaceTension: printed(48.43e-3, JASPER),
-    density: recalled(1113.5, CRC),
-    viscosity: recalled(19.9e-3, CRC),
-    hazard: hazard(
-      'HAZARD_ETHYLENE_GLYCOL',
-      'Ethylene glycol is harmful if swallowed and damages the kidneys on repeated exposure; it tastes sweet, so keep it from children and animals. GHS: Acute Tox. 4 oral (H302), STOT RE 2 (H373).',
-      CLP_SOURCE,
-    ),
-  },
-  {
-    id: 'glycerol',
-    name: 'Glycerol',
-    temperatureC: 20,
-    surfaceTension: recalled(63.4e-3, 'handbook value for glycerol at 20 °C'),
-    density: recalled(1261, CRC),
-    viscosity: recalled(1.41, CRC),
-  },
-  {
-    id: 'mercury',
-    name: 'Mercury',
-    temperatureC: 20,
-    surfaceTension: printed(
-      486.5e-3,
-      'Adamson A. W., Gast A. P. (1997) Physical Chemistry of Surfaces, 6th ed., Wiley',
-    ),
-    density: recalled(13546, CRC),
-    viscosity: recalled(1.55e-3, CRC),
-    hazard: hazard('HAZARD_MERCURY', MERCURY_HAZARD, CLP_SOURCE),
-  },
-];
+const SOURCES: Readonly<Record<string, readonly [Citation, Citation, Citation]>> = {
+  ethanol: [printed(JASPER), recalled(CRC), recalled(CRC)],
+  methanol: [printed(JASPER), recalled(CRC), recalled(CRC)],
+  acetone: [printed(JASPER), recalled(CRC), recalled(CRC)],
+  toluene: [printed(JASPER), recalled(CRC), recalled(CRC)],
+  'ethylene-glycol': [printed(JASPER), recalled(CRC), recalled(CRC)],
+  glycerol: [recalled('handbook value for glycerol at 20 °C'), recalled(CRC), recalled(CRC)],
+  mercury: [
+    printed('Adamson A. W., Gast A. P. (1997) Physical Chemistry of Surfaces, 6th ed., Wiley'),
+    recalled(CRC),
+    recalled(CRC),
+  ],
+};
+
+/**
+ * Liquids other than water, at 20 °C (water has its own temperature correlations in `water`), each
+ * value with its source and basis.
+ */
+export const liquids: readonly Liquid[] = liquidValues.map((row) => {
+  const sources = SOURCES[row.id];
+  if (sources === undefined) throw new Error(`liquid ${row.id} has values but no sources`);
+  const [sigma, rho, mu] = sources;
+  return {
+    id: row.id,
+    name: row.name,
+    temperatureC: TABLE_TEMPERATURE_C,
+    surfaceTension: { value: row.surfaceTension, ...sigma },
+    density: { value: row.density, ...rho },
+    viscosity: { value: row.viscosity, ...mu },
+    ...(row.hazard === undefined ? {} : { hazard: row.hazard }),
+  };
+});
 
 /** A liquid row by id, or undefined. */
 export function getLiquid(id: string): Liquid | undefined {
