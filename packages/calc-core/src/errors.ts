@@ -1,3 +1,17 @@
+/**
+ * Set to true by the widget's release build (a Vite `define`), nowhere else: calc-core's tests, the
+ * server and a published release's `engine.mjs` leave it undefined.
+ */
+declare const __WICKSTONE_RELEASE__: boolean | undefined;
+
+/**
+ * Whether calc-core checks its own definitions as it runs (a solution's warnings declared, a withheld
+ * output null, a table input's checker present, a resolved input of the type its solver reads): bugs
+ * in calc-core, never a visitor's input, caught by its tests and on the server. The widget's release
+ * leaves them out (its minifier drops the code behind a false constant).
+ */
+export const SELF_CHECKS = typeof __WICKSTONE_RELEASE__ === 'undefined' || !__WICKSTONE_RELEASE__;
+
 /** One bad argument or input field: which one, a stable code, and a sentence for a person. */
 export interface FieldIssue {
   readonly field: string;
@@ -22,8 +36,9 @@ export class CalcInputError extends Error {
 
   constructor(issues: FieldIssue | readonly FieldIssue[]) {
     const list = Array.isArray(issues) ? [...(issues as readonly FieldIssue[])] : [issues as FieldIssue];
-    const first = list[0];
-    if (first === undefined) throw new TypeError('CalcInputError needs at least one issue');
+    // An empty list is a calc-core bug (the release then fails reading `first`).
+    if (SELF_CHECKS && list.length === 0) throw new TypeError('CalcInputError needs at least one issue');
+    const first = list[0] as FieldIssue;
     super(list.length === 1 ? first.message : list.map((i) => `${i.field}: ${i.message}`).join('; '));
     this.code = list.length === 1 ? first.code : 'INVALID_INPUTS';
     this.field = first.field;
