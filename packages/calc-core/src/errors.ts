@@ -28,11 +28,12 @@ export interface FieldIssue {
  */
 export class CalcInputError extends Error {
   override readonly name = 'CalcInputError';
+  // Declared only (set in the constructor, in this order): no class fields to define first.
   /** `INVALID_INPUTS` when several fields are bad, otherwise the single issue's code. */
-  readonly code: string;
+  declare readonly code: string;
   /** The first bad field or argument. */
-  readonly field: string;
-  readonly issues: readonly FieldIssue[];
+  declare readonly field: string;
+  declare readonly issues: readonly FieldIssue[];
 
   constructor(issues: FieldIssue | readonly FieldIssue[]) {
     const list = Array.isArray(issues) ? [...(issues as readonly FieldIssue[])] : [issues as FieldIssue];
@@ -49,4 +50,9 @@ export class CalcInputError extends Error {
   toJSON(): { code: string; message: string; issues: FieldIssue[] } {
     return { code: this.code, message: this.message, issues: this.issues.map((i) => ({ ...i })) };
   }
+}
+
+/** A CalcInputError with one issue. */
+export function inputError(field: string, code: string, message: string): CalcInputError {
+  return new CalcInputError({ field, code, message });
 }
