@@ -6,9 +6,11 @@ declare const __WICKSTONE_RELEASE__: boolean | undefined;
 
 /**
  * Whether calc-core checks its own definitions as it runs (a solution's warnings declared, a withheld
- * output null, a table input's checker present, a resolved input of the type its solver reads): bugs
- * in calc-core, never a visitor's input, caught by its tests and on the server. The widget's release
- * leaves them out (its minifier drops the code behind a false constant).
+ * output null, a table input's checker present, a resolved input of the type its solver reads) and
+ * its caller's side of the contract (inputs an object keyed by the definition's input ids): bugs in
+ * calc-core or in the code that calls it, never a visitor's input, caught by its tests and on the
+ * server (where the inputs of an API call are checked so). The widget's release leaves them out: its
+ * form builds the inputs from the definition, and its minifier drops the code behind a false constant.
  */
 export const SELF_CHECKS = typeof __WICKSTONE_RELEASE__ === 'undefined' || !__WICKSTONE_RELEASE__;
 

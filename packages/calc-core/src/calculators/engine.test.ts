@@ -87,6 +87,19 @@ describe('self-checks', () => {
     expect(choice({ liquid: 'water' }, 'liquid')).toBe('water');
   });
 
+  it("reject inputs that are not an object keyed by the definition's input ids, listing unknown ids first", () => {
+    const def = brokenCalculator(solution({}));
+    expect(() => computeCalculation(def, null)).toThrow('inputs must be an object keyed by input id');
+    expect(() => computeCalculation(def, { length: 2, width: 1 })).toThrow(
+      expect.objectContaining({
+        issues: [{ field: 'width', code: 'UNKNOWN_INPUT', message: 'broken has no input "width"' }],
+      }),
+    );
+    expect(() => computeCalculation(def, { width: 1, length: 20 })).toThrow(
+      expect.objectContaining({ code: 'INVALID_INPUTS', field: 'width' }),
+    );
+  });
+
   it('reject an input error without an issue', () => {
     expect(() => new CalcInputError([])).toThrow(TypeError);
   });

@@ -37,18 +37,24 @@ function rangeText(input: QuantityInput): string {
  * @throws CalcInputError listing every bad field at once
  */
 export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
-  if (!isPlainObject(raw)) {
+  // The caller's side of the contract, an object keyed by the definition's input ids: checked where
+  // inputs come from outside (the server's API), a self-check in the widget, whose form builds them
+  // from the definition (SELF_CHECKS).
+  if (SELF_CHECKS && !isPlainObject(raw)) {
     throw inputError('inputs', 'NOT_AN_OBJECT', 'inputs must be an object keyed by input id');
   }
+  const sent = raw as Readonly<Record<string, unknown>>;
   const issues: FieldIssue[] = [];
   const add = (field: string, code: string, message: string): void =>
     void issues.push({ field, code, message });
   /** What was sent for an input, else its default. */
   const given = (input: InputDefinition): unknown =>
-    raw[input.id] === undefined ? input.default : raw[input.id];
-  const known = new Set(def.inputs.map((i) => i.id));
-  for (const key of Object.keys(raw)) {
-    if (!known.has(key)) add(key, 'UNKNOWN_INPUT', `${def.id} has no input "${key}"`);
+    sent[input.id] === undefined ? input.default : sent[input.id];
+  if (SELF_CHECKS) {
+    const known = new Set(def.inputs.map((i) => i.id));
+    for (const key of Object.keys(sent)) {
+      if (!known.has(key)) add(key, 'UNKNOWN_INPUT', `${def.id} has no input "${key}"`);
+    }
   }
 
   const choices = new Map<string, string>();
