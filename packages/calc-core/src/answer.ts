@@ -22,16 +22,13 @@ import {
  * full (no ×10ⁿ) from 10⁻⁶ up to 10⁹, which every figure in a well-chosen unit falls within.
  */
 export function formatResult(value: number, digits = 3): string {
-  if (!Number.isFinite(value)) return String(value);
-  if (value === 0) return '0';
-  const abs = Math.abs(value);
-  const sign = value < 0 ? '−' : '';
-  const rounded = Number(abs.toPrecision(digits));
+  // NaN, ±Infinity and ±0 fail the range test and are written by formatValue (`NaN`, `0`).
+  const rounded = Number(Math.abs(value).toPrecision(digits));
   if (rounded >= 1e-6 && rounded < 1e9) {
     // Enough decimals to keep `digits` significant figures, trailing zeros dropped.
     const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(rounded)));
     return (
-      sign +
+      (value < 0 ? '−' : '') +
       rounded
         .toFixed(Math.min(decimals, 20))
         .replace(/(\.\d*?)0+$/, '$1')

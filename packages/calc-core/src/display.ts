@@ -63,14 +63,14 @@ export function inputApplies(
   if (depth >= 8) return false;
   return (input.appliesWhen ?? []).every((cond) => {
     const parent = inputs.find((i) => i.id === cond.input);
-    const value = Object.hasOwn(choices, cond.input) ? choices[cond.input] : undefined;
-    return (
-      parent !== undefined &&
-      typeof value === 'string' &&
-      cond.values.includes(value) &&
-      inputApplies(parent, inputs, choices, depth + 1)
-    );
+    return parent !== undefined && holds(cond, choices) && inputApplies(parent, inputs, choices, depth + 1);
   });
+}
+
+/** Whether one condition holds: its input's value is a string among the condition's values. */
+function holds(cond: Condition, values: Readonly<Record<string, unknown>>): boolean {
+  const value = Object.hasOwn(values, cond.input) ? values[cond.input] : undefined;
+  return typeof value === 'string' && cond.values.includes(value);
 }
 
 /** Whether every condition holds for these values (only strings match a condition). */
@@ -78,10 +78,7 @@ export function conditionsHold(
   conditions: readonly Condition[] | undefined,
   values: Readonly<Record<string, unknown>>,
 ): boolean {
-  return (conditions ?? []).every((cond) => {
-    const value = Object.hasOwn(values, cond.input) ? values[cond.input] : undefined;
-    return typeof value === 'string' && cond.values.includes(value);
-  });
+  return (conditions ?? []).every((cond) => holds(cond, values));
 }
 
 /**

@@ -1,31 +1,31 @@
-import { CalcInputError } from './errors.js';
+import { inputError } from './errors.js';
 
 // Every formula checks its arguments here so that no function can hand back NaN or an infinity:
 // the check names the argument, which is what a caller needs to fix the call.
 
+/** Throws the argument's issue; its sentence starts with the argument's name. */
 function fail(field: string, code: string, message: string): never {
-  throw new CalcInputError({ field, code, message });
+  throw inputError(field, code, `${field} ${message}`);
 }
 
 /** Throws unless `value` is a finite number. */
 export function finite(field: string, value: number): number {
-  if (typeof value !== 'number' || Number.isNaN(value))
-    fail(field, 'NOT_A_NUMBER', `${field} must be a number`);
-  if (!Number.isFinite(value)) fail(field, 'NOT_FINITE', `${field} must be finite`);
+  if (typeof value !== 'number' || Number.isNaN(value)) fail(field, 'NOT_A_NUMBER', 'must be a number');
+  if (!Number.isFinite(value)) fail(field, 'NOT_FINITE', 'must be finite');
   return value;
 }
 
 /** Throws unless `value` is finite and greater than zero. */
 export function positive(field: string, value: number): number {
   finite(field, value);
-  if (value <= 0) fail(field, 'NOT_POSITIVE', `${field} must be greater than zero`);
+  if (value <= 0) fail(field, 'NOT_POSITIVE', 'must be greater than zero');
   return value;
 }
 
 /** Throws unless `value` is finite and not negative. */
 export function nonNegative(field: string, value: number): number {
   finite(field, value);
-  if (value < 0) fail(field, 'NEGATIVE', `${field} must not be negative`);
+  if (value < 0) fail(field, 'NEGATIVE', 'must not be negative');
   return value;
 }
 
@@ -38,7 +38,7 @@ export function positiveOrInfinite(field: string, value: number): number {
 /** Throws unless `value` is a contact angle in degrees, 0–180 inclusive. */
 export function contactAngle(field: string, value: number): number {
   finite(field, value);
-  if (value < 0 || value > 180) fail(field, 'ANGLE_OUT_OF_RANGE', `${field} must be between 0° and 180°`);
+  if (value < 0 || value > 180) fail(field, 'ANGLE_OUT_OF_RANGE', 'must be between 0° and 180°');
   return value;
 }
 

@@ -1,4 +1,4 @@
-import { CalcInputError } from './errors.js';
+import { inputError } from './errors.js';
 import { finite } from './guards.js';
 import { aliases, canonicalUnits, units, unitSystems, type UnitId } from './unit-table.js';
 
@@ -77,7 +77,7 @@ const withIds = new Map<UnitId, Readonly<UnitDefinition & { id: UnitId }>>();
 export function getUnit(id: string, field = 'unit'): Readonly<UnitDefinition & { id: UnitId }> {
   const key = (Object.hasOwn(units, id) ? id : aliases[id]) as UnitId | undefined;
   if (key === undefined || !Object.hasOwn(units, key)) {
-    throw new CalcInputError({ field, code: 'UNKNOWN_UNIT', message: `unknown unit "${id}"` });
+    throw inputError(field, 'UNKNOWN_UNIT', `unknown unit "${id}"`);
   }
   let def = withIds.get(key);
   if (def === undefined) withIds.set(key, (def = Object.freeze({ ...units[key], id: key })));
@@ -99,11 +99,11 @@ export function converter(fromUnit: string, toUnit: string): (value: number) => 
   const from = getUnit(fromUnit, 'fromUnit');
   const to = getUnit(toUnit, 'toUnit');
   if (from.kind !== to.kind) {
-    throw new CalcInputError({
-      field: 'toUnit',
-      code: 'UNIT_KIND_MISMATCH',
-      message: `cannot convert ${from.kind} (${from.symbol}) to ${to.kind} (${to.symbol})`,
-    });
+    throw inputError(
+      'toUnit',
+      'UNIT_KIND_MISMATCH',
+      `cannot convert ${from.kind} (${from.symbol}) to ${to.kind} (${to.symbol})`,
+    );
   }
   if (from.id === to.id) return (value) => finite('value', value);
   return (value) => ((finite('value', value) + from.offset) * from.factor) / to.factor - to.offset;

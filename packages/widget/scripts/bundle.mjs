@@ -191,6 +191,8 @@ const common = (define) => ({
   define: {
     __WICKSTONE_VERSION__: JSON.stringify(widgetVersion),
     __WICKSTONE_MANROPE_FILE__: JSON.stringify(MANROPE_FILE),
+    // calc-core leaves its self-checks (SELF_CHECKS in its errors.ts) out of the release.
+    __WICKSTONE_RELEASE__: 'true',
     ...define,
   },
   // A release is the production build whatever NODE_ENV the caller runs under (the release tests run

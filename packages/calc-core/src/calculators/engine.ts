@@ -1,6 +1,5 @@
-import { CalcInputError, type FieldIssue } from '../errors.js';
-import { inputApplies, withUnit } from '../display.js';
-import { formatValue } from '../format.js';
+import { CalcInputError, inputError, SELF_CHECKS, type FieldIssue } from '../errors.js';
+import { inputApplies } from '../display.js';
 import { canonicalUnits } from '../units.js';
 import { VERSION } from '../version.js';
 import type {
@@ -18,6 +17,7 @@ import type {
   QuantityInput,
   Solution,
 } from './types.js';
+import { q } from './shared.js';
 
 function isPlainObject(value: unknown): value is Readonly<Record<string, unknown>> {
   if (typeof value !== 'object' || value === null || Array.isArray(value)) return false;
@@ -27,7 +27,7 @@ function isPlainObject(value: unknown): value is Readonly<Record<string, unknown
 
 function rangeText(input: QuantityInput): string {
   const unit = canonicalUnits[input.kind];
-  return `from ${withUnit(formatValue(input.min, 6), unit)} to ${withUnit(formatValue(input.max, 6), unit)}`;
+  return `from ${q(input.min, unit, 6)} to ${q(input.max, unit, 6)}`;
 }
 
 /**
@@ -37,25 +37,31 @@ function rangeText(input: QuantityInput): string {
  * @throws CalcInputError listing every bad field at once
  */
 export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
-  if (!isPlainObject(raw)) {
-    throw new CalcInputError({
-      field: 'inputs',
-      code: 'NOT_AN_OBJECT',
-      message: 'inputs must be an object keyed by input id',
-    });
+  // The caller's side of the contract, an object keyed by the definition's input ids: checked where
+  // inputs come from outside (the server's API), a self-check in the widget, whose form builds them
+  // from the definition (SELF_CHECKS).
+  if (SELF_CHECKS && !isPlainObject(raw)) {
+    throw inputError('inputs', 'NOT_AN_OBJECT', 'inputs must be an object keyed by input id');
   }
+  const sent = raw as Readonly<Record<string, unknown>>;
   const issues: FieldIssue[] = [];
-  const known = new Set(def.inputs.map((i) => i.id));
-  for (const key of Object.keys(raw)) {
-    if (!known.has(key))
-      issues.push({ field: key, code: 'UNKNOWN_INPUT', message: `${def.id} has no input "${key}"` });
+  const add = (field: string, code: string, message: string): void =>
+    void issues.push({ field, code, message });
+  /** What was sent for an input, else its default. */
+  const given = (input: InputDefinition): unknown =>
+    sent[input.id] === undefined ? input.default : sent[input.id];
+  if (SELF_CHECKS) {
+    const known = new Set(def.inputs.map((i) => i.id));
+    for (const key of Object.keys(sent)) {
+      if (!known.has(key)) add(key, 'UNKNOWN_INPUT', `${def.id} has no input "${key}"`);
+    }
   }
 
   const choices = new Map<string, string>();
   const badChoices = new Set<string>();
   for (const input of def.inputs) {
     if (input.kind !== 'choice') continue;
-    const value = raw[input.id] === undefined ? input.default : raw[input.id];
+    const value = given(input);
     if (typeof value === 'string' && input.options.some((o) => o.value === value))
       choices.set(input.id, value);
     else badChoices.add(input.id);
@@ -71,20 +77,19 @@ export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
       const value = choices.get(input.id);
       if (value !== undefined) resolved[input.id] = value;
       // A bad value only matters for a choice that applies, as with numbers.
-      if (badChoices.has(input.id)) {
-        issues.push({
-          field: input.id,
-          code: 'NOT_AN_OPTION',
-          message: `${input.label} must be one of: ${input.options.map((o) => o.value).join(', ')}`,
-        });
-      }
+      if (badChoices.has(input.id))
+        add(
+          input.id,
+          'NOT_AN_OPTION',
+          `${input.label} must be one of: ${input.options.map((o) => o.value).join(', ')}`,
+        );
       continue;
     }
     if (input.kind === 'table') {
-      const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];
-      if (def.checkTable === undefined)
+      const value = given(input);
+      if (SELF_CHECKS && def.checkTable === undefined)
         throw new Error(`${def.id}: table input ${input.id} needs checkTable`);
-      const found = def.checkTable(input, value);
+      const found = (def.checkTable as NonNullable<CalculatorCore['checkTable']>)(input, value);
       if (found.length > 0) issues.push(...found);
       // Checked: an array of plain objects holding a number in every column. Copied in column order.
       else
@@ -93,10 +98,8 @@ export function resolveInputs(def: CalculatorCore, raw: unknown): InputValues {
         );
       continue;
     }
-    const value: unknown = raw[input.id] === undefined ? input.default : raw[input.id];
-    const fail = (code: string, message: string): void => {
-      issues.push({ field: input.id, code, message: `${input.label} ${message}` });
-    };
+    const value = given(input);
+    const fail = (code: string, message: string): void => add(input.id, code, `${input.label} ${message}`);
     if (value === null) fail('REQUIRED', 'needs a value');
     else if (typeof value !== 'number' || Number.isNaN(value)) fail('NOT_A_NUMBER', 'must be a number');
     else if (!Number.isFinite(value)) fail('NOT_FINITE', 'must be finite');
@@ -138,12 +141,10 @@ export function solveChecked(def: CalculatorCore, inputs: InputValues): Solution
   try {
     solution = def.solve(inputs);
   } catch (err) {
-    if (err instanceof RangeError) {
-      throw new CalcInputError({ field: 'inputs', code: 'OUT_OF_RANGE', message: err.message });
-    }
+    if (err instanceof RangeError) throw inputError('inputs', 'OUT_OF_RANGE', err.message);
     throw err;
   }
-  checkSolution(def, solution);
+  if (SELF_CHECKS) checkSolution(def, solution);
   return solution;
 }
 

@@ -1,4 +1,4 @@
-import { CalcInputError } from '../errors.js';
+import { CalcInputError, SELF_CHECKS } from '../errors.js';
 import { withUnit } from '../display.js';
 import { formatValue } from '../format.js';
 import { STANDARD_GRAVITY, type UnitId } from '../units.js';
@@ -40,15 +40,15 @@ export function warning(
 /** A resolved numeric input; throws if the definition and the solver disagree (a calc-core bug). */
 export function num(inputs: InputValues, id: string): number {
   const v = inputs[id];
-  if (typeof v !== 'number') throw new Error(`input ${id} is not a resolved number`);
-  return v;
+  if (SELF_CHECKS && typeof v !== 'number') throw new Error(`input ${id} is not a resolved number`);
+  return v as number;
 }
 
 /** A resolved choice input. */
 export function choice(inputs: InputValues, id: string): string {
   const v = inputs[id];
-  if (typeof v !== 'string') throw new Error(`input ${id} is not a resolved choice`);
-  return v;
+  if (SELF_CHECKS && typeof v !== 'string') throw new Error(`input ${id} is not a resolved choice`);
+  return v as string;
 }
 
 // ---------------------------------------------------------------- input builders
