@@ -53,7 +53,7 @@ export function chunkLoader(
   const fetchScript = (file: string): Promise<void> =>
     new Promise((resolve, reject) => {
       const entry = table[file];
-      if (!entry) return reject(new Error(`no chunk ${file} in release ${version}`));
+      if (!entry) return reject(Error(`no chunk ${file}`));
       const s = doc.createElement('script');
       s.src = base + file;
       s.integrity = entry[0];
@@ -61,17 +61,15 @@ export function chunkLoader(
       s.onload = () => resolve();
       s.onerror = () => {
         s.remove();
-        reject(new Error(`${base + file} was not loaded or failed its integrity check`));
+        reject(Error(`${s.src} failed to load or its integrity check`));
       };
       doc.head.append(s);
     });
 
   const run = (file: string): unknown => {
     const s = slot(file);
-    if (!('e' in s)) {
-      if (!s.f) throw new Error(`chunk ${file} did not register`);
-      s.e = s.f(run);
-    }
+    // Its script ran (loaded, integrity checked) and so registered its factory.
+    if (!('e' in s)) s.e = s.f!(run);
     return s.e;
   };
   function load(file: string): Promise<unknown> {

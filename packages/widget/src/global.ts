@@ -42,13 +42,7 @@ declare global {
 
 function isGlobal(value: unknown): value is WickstoneGlobal {
   const v = value as Partial<WickstoneGlobal> | null | undefined;
-  return (
-    typeof v === 'object' &&
-    v !== null &&
-    typeof v.mount === 'function' &&
-    typeof v.bundles === 'object' &&
-    v.bundles !== null
-  );
+  return typeof v?.mount === 'function' && typeof v.bundles === 'object' && v.bundles !== null;
 }
 
 /**
@@ -72,9 +66,7 @@ export function installGlobal(
       mount(element, options) {
         const id = options?.widget?.calculatorId;
         const bundle = typeof id === 'string' ? bundles[id] : undefined;
-        if (bundle === undefined) {
-          throw new Error(`Wickstone: no bundle for calculator "${String(id)}" is loaded on this page`);
-        }
+        if (!bundle) throw Error(`Wickstone: no bundle for calculator "${id}" on this page`);
         return bundle.mount(element, options);
       },
     };
