@@ -90,7 +90,8 @@ async function getSettings(url: string): Promise<[status: number, body: EmbedWid
     let status = 0;
     let body = null;
     try {
-      const res = await fetch(url, { credentials: 'omit', mode: 'cors' });
+      // A CORS request (fetch's default mode), without cookies.
+      const res = await fetch(url, { credentials: 'omit' });
       status = res.status;
       body = await res.json();
     } catch {
