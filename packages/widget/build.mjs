@@ -20,9 +20,7 @@ import { calculators, VERSION as calcCoreVersion } from '@wickstone/calc-core';
 import {
   buildChunks,
   buildLoader,
-  laterTable,
-  sealEngine,
-  hasTableInput,
+  sealChain,
   checkContents,
   closure,
   FLIGHT_GOAL,
@@ -76,19 +74,11 @@ try {
     tables,
     app,
   } = await buildChunks(calculators.map((c) => c.id));
-  /** What each calculator's loader and engine name: its first flight and the chunks after it. */
-  const parts = Object.fromEntries(
-    calculators.map((calc) => {
-      const engine = engines[calc.id];
-      if (!engine) throw new Error(`no engine chunk for ${calc.id}`);
-      return [
-        calc.id,
-        { engine, texts: texts[calc.id], extras, app, tables: hasTableInput(calc) ? tables : null },
-      ];
-    }),
-  );
-  for (const calc of calculators)
-    sealEngine(chunks, parts[calc.id].engine, laterTable(chunks, parts[calc.id]));
+  for (const calc of calculators) {
+    if (!engines[calc.id]) throw new Error(`no engine chunk for ${calc.id}`);
+    if (!texts[calc.id]) throw new Error(`no texts chunk for ${calc.id}`);
+  }
+  sealChain(chunks, { engines, texts, extras, tables, app });
   for (const [name, chunk] of chunks) {
     const m = emit(name, chunk.code);
     chunkFigures[name] = {
@@ -112,9 +102,9 @@ try {
     `${'calculator'.padEnd(24)}${'loader'.padStart(8)}${'gzip'.padStart(9)}${'brotli'.padStart(9)}${'vs goal'.padStart(9)}   chunks`,
   );
   for (const calc of calculators) {
-    const { engine } = parts[calc.id];
+    const engine = engines[calc.id];
     const file = `wickstone-${calc.id}.js`;
-    const loader = emit(file, await buildLoader(calc.id, calcCoreVersion, chunks, parts[calc.id]));
+    const loader = emit(file, await buildLoader(calc.id, calcCoreVersion, chunks, engine));
     const flight = [...closure(chunks, engine)];
     for (const f of flight.filter((x) => chunks.get(x).hasTexts))
       failures.push(

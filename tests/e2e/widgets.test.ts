@@ -633,7 +633,7 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
       })),
     );
     expect(tags.length).toBeGreaterThan(2);
-    // The snippet pins its loader with SHA-384; the loader and the engine carry SHA-256 for the chunks.
+    // The snippet pins its loader with SHA-384; the loader, the runtime and the app chunk carry SHA-256 for the chunks.
     for (const t of tags) {
       expect(t.integrity, t.src).toMatch(/\/wickstone-[a-z-]+\.js$/.test(t.src) ? /^sha384-/ : /^sha256-/);
       expect(t.crossOrigin, t.src).toBe('anonymous');
@@ -657,10 +657,10 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     expect(messages.some((m) => /integrity/i.test(m) && m.includes('runtime-'))).toBe(true);
   });
 
-  it('refuses a later chunk whose bytes differ from the hash the engine carries, and keeps the first view working', async () => {
+  it('refuses a later chunk whose bytes differ from the hash the runtime carries, and keeps the first view working', async () => {
     expect(snippet).not.toBe('');
     const page = await freshPage();
-    // The full widget's chunk: its hash is not in the loader but in the engine the loader checked.
+    // The full widget's chunk: its hash is not in the loader but in the runtime the loader checked.
     const { messages, tampered } = await tamperWith(page, '**/releases/**/app-*.js');
     await page.goto(`${site.origin}/`);
     const host = widgetIn(page);
@@ -679,6 +679,26 @@ describe('widgets in Chromium: configure, brand, embed, run, report and capture 
     await host.locator('[data-result]').waitFor();
     expect(await host.locator('[data-wickstone="headline"]').textContent()).not.toBe('');
     expect(await host.locator('div[data-wickstone="mount"][data-view="full"]').count()).toBe(0);
+  });
+
+  it('refuses a chunk whose bytes differ from the hash the app chunk carries (the texts), while the full widget takes over', async () => {
+    expect(snippet).not.toBe('');
+    const page = await freshPage();
+    // The calculator's texts: their hash is in neither the loader nor the runtime but in the app chunk.
+    const { messages, tampered } = await tamperWith(page, '**/releases/**/texts-*.js');
+    await page.goto(`${site.origin}/`);
+    const host = widgetIn(page);
+    await host.locator('div[data-wickstone="mount"][data-view="full"]').waitFor({ timeout: 20_000 });
+    await expect.poll(() => tampered(), { timeout: 20_000 }).not.toBe('');
+    await expect
+      .poll(() => messages.some((m) => /integrity/i.test(m) && m.includes('texts-')), { timeout: 20_000 })
+      .toBe(true);
+    expect(
+      await page.evaluate(() => (window as unknown as { __tampered?: boolean }).__tampered),
+    ).toBeUndefined();
+    await host.locator('[data-wickstone="calculate"]').click();
+    await host.locator('[data-result]').waitFor();
+    expect(await host.locator('[data-wickstone="headline"]').textContent()).not.toBe('');
   });
 
   it('gives a site that is not allowed no widget and stores nothing it sends', async () => {

@@ -7,8 +7,10 @@
 //                      units table is empty until an engine adds its calculator's units (`unitsOf`)
 //   engine-<id>-<hash>.js  one calculator's core, with the chunks it shares only with other engines (one
 //                      file: e.g. the liquid inputs, the liquids' data and the water correlations for the
-//                      calculators that take a liquid), and the SRI hashes of every chunk that follows first paint for it
-//   app-<hash>.js      Preact and the whole widget (App), after first paint: it takes over from the first view
+//                      calculators that take a liquid); the runtime mounts it (src/engine.ts) and carries the app
+//                      chunk's SRI hash
+//   app-<hash>.js      Preact and the whole widget (App), after first paint: it takes over from the first view;
+//                      it carries the SRI hashes of every later chunk of the release (`sealChain`)
 //   texts-<id>-<hash>.js   that calculator's cautions and references (`<id>.texts.ts`), after first paint
 //   extras-<hash>.js   the working, the lead form, the run reporter, the font and their styles, after first paint
 // The chunks come from one code-split ES build (entries: each engine, each texts, the app, the extras
@@ -146,6 +148,31 @@ export function unitsOf(calculatorId) {
   };
 }
 
+/**
+ * `unitsOf(calculatorId)` in the shorter form an engine carries (`UnitList` in
+ * src/lib/unit-registry.ts, which `addUnitList` turns back into the same entries): by kind, the
+ * kind's canonical, SI and US units (0 when the subset has none for it), then each unit as its id
+ * alone when its symbol is its id, its factor 1 and its offset 0, else `[id, factor, offset?,
+ * symbol?]`. Numbers are written as JavaScript prints them, so they read back as the same doubles.
+ */
+export function unitListOf(calculatorId) {
+  const subset = unitsOf(calculatorId);
+  const list = {};
+  for (const [id, { kind, symbol, factor, offset }] of Object.entries(subset.units)) {
+    const canonical = subset.canonicalUnits[kind];
+    list[kind] ??= [
+      canonical === undefined ? 0 : [canonical, subset.unitSystems.si[kind], subset.unitSystems.us[kind]],
+    ];
+    const entry = [id, factor];
+    if (offset !== 0 || symbol !== id) entry.push(offset);
+    if (symbol !== id) entry.push(symbol);
+    list[kind].push(entry.length === 2 && factor === 1 ? id : entry);
+  }
+  for (const kind of Object.keys(subset.canonicalUnits))
+    if (!list[kind]) throw new Error(`${calculatorId}: no unit of its kind ${kind} in its subset`);
+  return list;
+}
+
 /** A calc-core texts module: never part of a first flight. */
 const TEXTS_MODULE = /[\\/]calc-core[\\/]dist[\\/]calculators[\\/][^\\/]*texts\.js$/;
 /**
@@ -161,8 +188,12 @@ const FIRST_ENTRY = path.join(src, 'first', 'mount.ts');
 /** The full widget's entry (Preact, App): after first paint. */
 const APP_ENTRY = path.join(src, 'app.ts');
 const PREACT = /[\\/]node_modules[\\/]preact[\\/]/;
-/** Stands in an engine for the table of the chunks after first paint (`sealEngine` writes it). */
+/** Stands in the app chunk for the table of the chunks after it (`sealChain` writes it). */
 export const LATER_CHUNKS = '__WICKSTONE_LATER_CHUNKS__';
+/** Stands in the runtime for the app chunk's file, hash and imports (`sealChain` writes it; see src/engine.ts). */
+export const APP_CHUNK = '__WICKSTONE_APP_CHUNK__';
+/** The runtime's side of an engine (`mountEngine`, which holds `APP_CHUNK`): in the runtime. */
+const ENGINE_MODULE = path.join(src, 'engine.ts');
 /** Widget modules only the extras chunk uses: left out of the runtime. */
 const EXTRAS_ONLY = new Set(
   [
@@ -180,8 +211,6 @@ const EXTRAS_ONLY = new Set(
 // ---- tables chunk (h2-tradetab): the table input, CSV reading and chart, for calculators with a table input.
 const TABLES_ENTRY = path.join(src, 'tables.ts');
 const TABLES_DIR = path.join(src, 'tables') + path.sep;
-/** Whether a calculator takes a table input, and so its loader may fetch the tables chunk. */
-export const hasTableInput = (calc) => calc.inputs.some((i) => i.kind === 'table');
 
 const common = (define) => ({
   configFile: false,
@@ -234,9 +263,9 @@ export function measure(code) {
 }
 
 /**
- * The SRI hash a loader or an engine carries for a chunk: SHA-256, which every browser checks as it
+ * The SRI hash a loader, the runtime or the app chunk carries for a chunk: SHA-256, which every browser checks as it
  * does SHA-384 (the Subresource Integrity spec requires both), 27 characters shorter in base64, and
- * a first flight carries up to eight of them (about 140 bytes brotli less). What a snippet pins (the
+ * a first flight carries three of them (the loader two, the runtime one). What a snippet pins (the
  * loader's own hash, `measure().integrity`, in the manifest) stays SHA-384.
  */
 export function chunkIntegrity(code) {
@@ -247,11 +276,11 @@ export function chunkIntegrity(code) {
  * Turns one ES chunk into a classic script: static imports of other chunks become `$wkr("<file>")`,
  * dynamic ones `r.l("<file>")`, and the export list the factory's return value.
  */
-function wrapChunk(chunk) {
+function wrapChunk(chunk, extraExports = []) {
   let code = chunk.code;
   const [imports] = parse(code);
   const edits = [];
-  const reexports = [];
+  const reexports = [...extraExports];
   for (const imp of imports) {
     const file = path.posix.basename(imp.n ?? '');
     if (imp.d === -2)
@@ -336,7 +365,7 @@ export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
       FIRST_ENTRY,
       (next) => !CALC_CORE_INDEX.test(next) && !PREACT.test(next),
     );
-    return first.has(id) || everyEngineUses(id, getModuleInfo);
+    return first.has(id) || id === ENGINE_MODULE || everyEngineUses(id, getModuleInfo);
   };
   const runtimeMemo = new Map();
   /** A module of the full widget: Preact, the widget's own code, and what they import from calc-core. */
@@ -411,7 +440,7 @@ export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
         resolveId: (id) =>
           id.startsWith(ENGINE) || id.startsWith(TEXTS) || id === WHOLE_UNITS ? `\0${id}` : null,
         load(id) {
-          const registry = `import { addUnits } from ${JSON.stringify(UNIT_REGISTRY)};\n`;
+          const registry = `import { addUnits, addUnitList } from ${JSON.stringify(UNIT_REGISTRY)};\n`;
           const whole =
             `import { units, canonicalUnits, unitSystems, aliases } from ${JSON.stringify(UNIT_TABLE)};\n` +
             `addUnits({ units, canonicalUnits, unitSystems, aliases });\n`;
@@ -434,9 +463,9 @@ export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
           return (
             `export { calculator, compute } from '@wickstone/calc-core/calculators/${calc}';\n` +
             `export { mountFirst } from ${JSON.stringify(FIRST_ENTRY)};\n` +
-            `export const chunks = ${LATER_CHUNKS};\n` +
+            `export { mountEngine as mount } from ${JSON.stringify(ENGINE_MODULE)};\n` +
             registry +
-            (unitSubsets ? `addUnits(${JSON.stringify(unitsOf(calc))});\n` : whole)
+            (unitSubsets ? `addUnitList(${JSON.stringify(unitListOf(calc))});\n` : whole)
           );
         },
       },
@@ -477,7 +506,8 @@ export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
           `  ${o.fileName} ${String(m.renderedLength).padStart(7)} ${String(m.code ? measure(m.code).brotliBytes : 0).padStart(6)} ${path.relative(widgetDir, id)}`,
         );
     files.set(o.fileName, {
-      code: wrapChunk(o),
+      // The app chunk also exports the table of the chunks after it (`sealChain`).
+      code: wrapChunk(o, o.isEntry && o.name === 'app' ? [`"later":${LATER_CHUNKS}`] : []),
       imports: o.imports.map((f) => path.posix.basename(f)),
       hasTexts: Object.keys(o.modules).some((id) => TEXTS_MODULE.test(id)),
       hasPreact: Object.keys(o.modules).some((id) => PREACT.test(id)),
@@ -564,43 +594,42 @@ export function closure(files, file, out = new Set()) {
   return out;
 }
 
-/**
- * The chunks that follow first paint for one calculator (the app, its texts, the extras, the tables
- * when it has a table input, and what they import), each with its SRI hash and static imports.
- */
-export function laterTable(files, { engine, texts, extras, app, tables = null }) {
-  const first = closure(files, engine);
-  const reach = [...closure(files, app), ...closure(files, texts), ...closure(files, extras)];
-  if (tables !== null) reach.push(...closure(files, tables));
-  const table = {};
-  for (const f of new Set(reach))
-    if (!first.has(f)) table[f] = [chunkIntegrity(files.get(f).code), files.get(f).imports];
-  return table;
+/** Writes `text` in place of the one `placeholder` in `file`'s code. */
+function fillIn(files, file, placeholder, text) {
+  const chunk = files.get(file);
+  const parts = chunk.code.split(placeholder);
+  if (parts.length !== 2) throw new Error(`${file}: expected one ${placeholder}, found ${parts.length - 1}`);
+  files.set(file, { ...chunk, code: parts.join(text) });
 }
 
 /**
- * Writes the table of the later chunks into an engine (in place of `LATER_CHUNKS`): the loader
- * trusts it because it checked the engine's own hash, so every file is still checked and the
- * loader, in the first flight, carries two hashes rather than every chunk's.
+ * Seals the chain of trust for the chunks after first paint. The app chunk gets the SRI hash and
+ * static imports of every later chunk of the release (all but the runtime, the engines and itself,
+ * so also the chunks the engines carry inside them, which a later chunk may import) and which
+ * file is each calculator's texts, the extras and the tables (in place of `LATER_CHUNKS`); then the
+ * runtime gets the sealed app chunk's file, hash and imports (in place of `APP_CHUNK`). The loader
+ * checked the runtime, so every file is still checked while no loader or engine carries more than
+ * the first flight's hashes.
+ * @returns the runtime's file and how many chunks the app chunk's table lists
  */
-export function sealEngine(files, engine, table) {
-  const chunk = files.get(engine);
-  const parts = chunk.code.split(LATER_CHUNKS);
-  if (parts.length !== 2)
-    throw new Error(`${engine}: expected one ${LATER_CHUNKS}, found ${parts.length - 1}`);
-  files.set(engine, { ...chunk, code: parts.join(JSON.stringify(table)) });
+export function sealChain(files, { engines, texts, extras, tables, app }) {
+  const runtime = [...files.keys()].find((f) => f.startsWith('runtime-'));
+  if (runtime === undefined) throw new Error('no runtime chunk was built');
+  const skip = new Set([runtime, app, ...Object.values(engines)]);
+  const chunks = {};
+  for (const [file, chunk] of files)
+    if (!skip.has(file)) chunks[file] = [chunkIntegrity(chunk.code), chunk.imports];
+  fillIn(files, app, LATER_CHUNKS, JSON.stringify({ chunks, texts, extras, tables }));
+  const sealed = files.get(app);
+  fillIn(files, runtime, APP_CHUNK, JSON.stringify([app, chunkIntegrity(sealed.code), sealed.imports]));
+  return { runtime, listed: Object.keys(chunks).length };
 }
 
 /**
  * One calculator's loader: an IIFE carrying the SRI hash and static imports of its first flight's
- * chunks (the runtime and its engine); the engine carries the rest (`sealEngine`).
+ * chunks (the runtime and its engine); the runtime and the app chunk carry the rest (`sealChain`).
  */
-export async function buildLoader(
-  calculatorId,
-  calcCoreVersion,
-  files,
-  { engine, texts, extras, app, tables = null },
-) {
+export async function buildLoader(calculatorId, calcCoreVersion, files, engine) {
   const table = {};
   for (const f of closure(files, engine))
     table[f] = [chunkIntegrity(files.get(f).code), files.get(f).imports];
@@ -609,10 +638,6 @@ export async function buildLoader(
       __WICKSTONE_CALCULATOR__: JSON.stringify(calculatorId),
       __WICKSTONE_CALC_CORE_VERSION__: JSON.stringify(calcCoreVersion),
       __WICKSTONE_ENGINE__: JSON.stringify(engine),
-      __WICKSTONE_TEXTS__: JSON.stringify(texts),
-      __WICKSTONE_EXTRAS__: JSON.stringify(extras),
-      __WICKSTONE_APP__: JSON.stringify(app),
-      __WICKSTONE_TABLES__: JSON.stringify(tables),
       __WICKSTONE_CHUNKS__: JSON.stringify(table),
     }),
     build: {

@@ -1,5 +1,7 @@
+import { calculators } from '@wickstone/calc-core';
 import { describe, expect, it } from 'vitest';
 import { chunkLoader, installRegistry, type ChunkRegistry, type ChunkTable } from './chunks.js';
+import { laterChunks, type LaterChunks } from './engine.js';
 
 const BASE = 'https://app.wickstone.example/releases/0.2.0/';
 
@@ -150,37 +152,83 @@ describe('chunk loader', () => {
     await expect(chunkLoader(g, '0.2.0', BASE, table, doc)('elsewhere.js')).rejects.toThrow(/no chunk/);
   });
 
-  it('loads a later chunk with the hash an engine carried for it, once the loader took the table of the engine it checked (a chain of trust)', async () => {
+  it('loads the chunks after first paint through a chain: the app with the hash the runtime carries, the rest with the hashes the app carries', async () => {
     const order: string[] = [];
     const served = chunks(order);
-    const app = (hash: string) => ({
+    const later: LaterChunks = {
+      chunks: {
+        'texts-t.js': ['sha384-texts', ['app-d.js']],
+        'extras-x.js': ['sha384-extras', ['app-d.js']],
+        'tables-y.js': ['sha384-tables', ['app-d.js']],
+      },
+      texts: { 'tube-rise': 'texts-t.js' },
+      extras: 'extras-x.js',
+      tables: 'tables-y.js',
+    };
+    const chunk = (file: string, hash: string, exports: object) => ({
       hash,
       body: (g: ChunkRegistry) =>
-        g._d('0.2.0/app-d.js', (r) => {
-          order.push('app');
-          return { runtime: (r('runtime-a.js') as { mount: string }).mount };
+        g._d(`0.2.0/${file}`, (r) => {
+          r('runtime-a.js');
+          if (file !== 'app-d.js') r('app-d.js');
+          order.push(file);
+          return exports;
         }),
     });
-    for (const [servedHash, ok] of [
-      ['sha384-app', true],
-      ['sha384-app-changed', false],
-    ] as const) {
+    /** The release as served, with the files named in `tampered` changed (their hash differs). */
+    const page = (...tampered: string[]) => {
       order.length = 0;
-      const { g, doc } = fakePage({ ...served, 'app-d.js': app(servedHash) });
+      const files = {
+        'app-d.js': chunk('app-d.js', 'sha384-app', { mountWidget: 'the app', later }),
+        'texts-t.js': chunk('texts-t.js', 'sha384-texts', { texts: 'tube-rise texts' }),
+        'extras-x.js': chunk('extras-x.js', 'sha384-extras', { extras: true }),
+        'tables-y.js': chunk('tables-y.js', 'sha384-tables', { tables: true }),
+      };
+      for (const f of tampered) files[f as keyof typeof files].hash = 'sha384-changed';
+      const { g, doc, added } = fakePage({ ...served, ...files });
       // The loader's own table: the first flight only.
       const own: Record<string, ChunkTable[string]> = { ...table };
       const load = chunkLoader(g, '0.2.0', BASE, own, doc);
-      await expect(load('app-d.js')).rejects.toThrow(/no chunk app-d\.js/);
-      await load('engine-c.js');
-      // What the checked engine carries for the chunks after first paint.
-      Object.assign(own, { 'app-d.js': ['sha384-app', ['runtime-a.js']] });
-      if (ok) {
-        await expect(load('app-d.js')).resolves.toEqual({ runtime: 'the runtime' });
-        expect(order).toEqual(['runtime', 'shared', 'engine', 'app']);
-      } else {
-        await expect(load('app-d.js')).rejects.toThrow(/app-d\.js .*integrity/);
-        expect(order).not.toContain('app');
-      }
-    }
+      return { load, own, added };
+    };
+    const appEntry = ['app-d.js', 'sha384-app', ['runtime-a.js']] as const;
+    const tube = calculators.find((c) => c.id === 'tube-rise')!;
+
+    const ok = page();
+    await expect(ok.load('texts-t.js')).rejects.toThrow(/no chunk texts-t\.js/);
+    const chain = laterChunks(ok.load, ok.own, tube, appEntry);
+    expect(chain.tables).toBeNull(); // no table input
+    await expect(chain.texts()).resolves.toEqual({ texts: 'tube-rise texts' });
+    await expect(chain.extras()).resolves.toEqual({ extras: true });
+    expect(order).toEqual(['runtime', 'app-d.js', 'texts-t.js', 'extras-x.js']);
+    for (const s of ok.added) expect(s.integrity).toBe(ok.own[s.src.slice(BASE.length)]?.[0]);
+    // A calculator with a table input fetches the tables chunk, checked the same way.
+    const withTable = laterChunks(
+      ok.load,
+      ok.own,
+      calculators.find((c) => c.inputs.some((i) => i.kind === 'table'))!,
+      appEntry,
+    );
+    await expect(withTable.tables?.()).resolves.toEqual({ tables: true });
+
+    // A later chunk that differs from the hash the app carries is refused, and never runs.
+    const texts = page('texts-t.js');
+    const refused = laterChunks(texts.load, texts.own, tube, appEntry);
+    await expect(refused.texts()).rejects.toThrow(/texts-t\.js .*integrity/);
+    await expect(refused.extras()).resolves.toEqual({ extras: true });
+    expect(order).not.toContain('texts-t.js');
+
+    // A changed app chunk: refused, and nothing that depends on its table is loaded.
+    const app = page('app-d.js');
+    const noApp = laterChunks(app.load, app.own, tube, appEntry);
+    await expect(noApp.app()).rejects.toThrow(/app-d\.js .*integrity/);
+    await expect(noApp.texts()).rejects.toThrow(/integrity/);
+    expect(order).toEqual(['runtime']); // only what the loader's own table vouches for
+    expect(app.added.map((s) => s.src.slice(BASE.length))).not.toContain('texts-t.js');
+
+    // A calculator whose texts the app does not list gets none.
+    await expect(
+      laterChunks(ok.load, ok.own, { id: 'slot-rise', inputs: [] }, appEntry).texts(),
+    ).rejects.toThrow(/no chunk/);
   });
 });

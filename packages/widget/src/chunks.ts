@@ -49,45 +49,39 @@ export function chunkLoader(
   doc: Document = document,
 ): (file: string) => Promise<unknown> {
   const slot = (file: string): Slot => (registry._c[`${version}/${file}`] ??= {});
-
-  const fetchScript = (file: string): Promise<void> =>
-    new Promise((resolve, reject) => {
-      const entry = table[file];
-      if (!entry) return reject(new Error(`no chunk ${file} in release ${version}`));
-      const s = doc.createElement('script');
-      s.src = base + file;
-      s.integrity = entry[0];
-      s.crossOrigin = 'anonymous';
-      s.onload = () => resolve();
-      s.onerror = () => {
-        s.remove();
-        reject(new Error(`${base + file} was not loaded or failed its integrity check`));
-      };
-      doc.head.append(s);
-    });
-
   const run = (file: string): unknown => {
     const s = slot(file);
-    if (!('e' in s)) {
-      if (!s.f) throw new Error(`chunk ${file} did not register`);
-      s.e = s.f(run);
-    }
+    // Its script ran (loaded, integrity checked) and so registered its factory.
+    if (!('e' in s)) s.e = s.f!(run);
     return s.e;
   };
-  function load(file: string): Promise<unknown> {
+  const load = (file: string): Promise<unknown> => {
     const s = slot(file);
-    if (!s.p) {
-      const p = Promise.all([
-        s.f ? undefined : fetchScript(file),
-        ...(table[file]?.[1] ?? []).map(load),
-      ]).then(() => run(file));
-      // A failed load is forgotten, so a later mount asks again.
-      p.catch(() => {
-        if (s.p === p) delete s.p;
-      });
-      s.p = p;
-    }
-    return s.p;
-  }
+    const entry = table[file];
+    return (s.p ??= Promise.all([
+      // A chunk another file registered (an engine carries the chunks only engines share) is not fetched.
+      s.f ??
+        new Promise((resolve, reject) => {
+          if (!entry) throw Error(`no chunk ${file}`);
+          const tag = doc.createElement('script');
+          tag.src = base + file;
+          tag.integrity = entry[0];
+          tag.crossOrigin = 'anonymous';
+          tag.onload = resolve;
+          tag.onerror = () => {
+            tag.remove();
+            reject(Error(`${tag.src} failed to load or its integrity check`));
+          };
+          doc.head.append(tag);
+        }),
+      ...(entry?.[1] ?? []).map(load),
+    ])
+      .then(() => run(file))
+      .catch((err: unknown) => {
+        // A failed load is forgotten, so a later mount asks again.
+        delete s.p;
+        throw err;
+      }));
+  };
   return load;
 }

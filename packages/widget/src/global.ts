@@ -40,17 +40,6 @@ declare global {
   }
 }
 
-function isGlobal(value: unknown): value is WickstoneGlobal {
-  const v = value as Partial<WickstoneGlobal> | null | undefined;
-  return (
-    typeof v === 'object' &&
-    v !== null &&
-    typeof v.mount === 'function' &&
-    typeof v.bundles === 'object' &&
-    v.bundles !== null
-  );
-}
-
 /**
  * The shared `Wickstone` object on `host` (normally `window`), created by the first bundle to run.
  * A later bundle of any release only adds itself to `bundles`, so the dispatching `mount` keeps
@@ -61,25 +50,22 @@ export function installGlobal(
   version: string,
   entry: BundleEntry,
 ): WickstoneGlobal {
-  const existing = host.Wickstone;
-  let g: WickstoneGlobal;
-  if (isGlobal(existing)) g = existing;
-  else {
-    const bundles: Record<string, BundleEntry> = Object.create(null) as Record<string, BundleEntry>;
-    g = {
+  let g = host.Wickstone as Partial<WickstoneGlobal> | null | undefined;
+  // Anything else under that name (not a Wickstone object) is replaced.
+  if (typeof g?.mount !== 'function' || typeof g.bundles !== 'object' || !g.bundles) {
+    // No prototype: a calculator id never finds an inherited property.
+    const bundles = Object.create(null) as Record<string, BundleEntry>;
+    host.Wickstone = g = {
       version,
       bundles,
       mount(element, options) {
         const id = options?.widget?.calculatorId;
-        const bundle = typeof id === 'string' ? bundles[id] : undefined;
-        if (bundle === undefined) {
-          throw new Error(`Wickstone: no bundle for calculator "${String(id)}" is loaded on this page`);
-        }
+        const bundle = bundles[id];
+        if (!bundle) throw Error(`Wickstone: no bundle for calculator "${id}" on this page`);
         return bundle.mount(element, options);
       },
     };
-    host.Wickstone = g;
   }
-  g.bundles[entry.calculatorId] = entry;
-  return g;
+  g.bundles![entry.calculatorId] = entry;
+  return g as WickstoneGlobal;
 }

@@ -2,7 +2,7 @@
 export const PLACED_ATTR = 'data-wickstone-placed';
 // A widget key: a reference key (four blocks of four Crockford Base32 symbols and a check symbol,
 // from 0.3.0) or an older `wk_` key. The server checks the check symbol; the shape is enough here.
-const KEY = /^(?:wk_[a-z0-9]{20}|[0-9A-HJKMNP-TV-Z]{4}(?:-[0-9A-HJKMNP-TV-Z]{4}){3}-[0-9A-HJKMNP-TV-Z])$/;
+const KEY = /^(wk_[a-z\d]{20}|([\dA-HJKMNP-TV-Z]{4}-){4}[\dA-HJKMNP-TV-Z])$/;
 
 /** Whether a script URL is this calculator's bundle (any release, any server). */
 export function isBundleSrc(src: string, calculatorId: string): boolean {
@@ -19,18 +19,15 @@ export function isBundleSrc(src: string, calculatorId: string): boolean {
  * script came from.
  */
 export function apiBaseFor(src: string, override: string | null): string | null {
-  if (override !== null && override.trim() !== '') {
-    try {
-      const u = new URL(override.trim());
-      if (u.protocol === 'https:' || u.protocol === 'http:')
-        return (u.origin + u.pathname).replace(/\/+$/, '');
-    } catch {
-      // fall through to the script's own origin
-    }
-  }
+  const given = httpUrl(override?.trim());
+  return given ? (given.origin + given.pathname).replace(/\/+$/, '') : (httpUrl(src)?.origin ?? null);
+}
+
+/** `text` as an http(s) URL, else null (not a URL, or another scheme). */
+function httpUrl(text: string | undefined): URL | null {
   try {
-    const u = new URL(src);
-    return u.protocol === 'https:' || u.protocol === 'http:' ? u.origin : null;
+    const u = new URL(text!);
+    return /^https?:$/.test(u.protocol) ? u : null;
   } catch {
     return null;
   }
@@ -55,11 +52,11 @@ export function isPublicKey(key: string | undefined): key is string {
  * calculator not yet placed, else any script tag loading it (a preview page without a key).
  */
 export function findOwnScript(doc: Document, calculatorId: string): HTMLScriptElement | null {
+  const ours = (s: Element | null): s is HTMLScriptElement =>
+    s instanceof HTMLScriptElement && isBundleSrc(s.src, calculatorId);
   const current = doc.currentScript;
-  if (current instanceof HTMLScriptElement && isBundleSrc(current.src, calculatorId)) return current;
-  const scripts = [...doc.querySelectorAll<HTMLScriptElement>('script[src]')].filter((s) =>
-    isBundleSrc(s.src, calculatorId),
-  );
+  if (ours(current)) return current;
+  const scripts = [...doc.scripts].filter(ours);
   return (
     scripts.find((s) => s.hasAttribute('data-wickstone-key') && !s.hasAttribute(PLACED_ATTR)) ??
     scripts[0] ??
@@ -82,21 +79,14 @@ export function insertHost(script: HTMLScriptElement, calculatorId: string): HTM
     before instanceof HTMLElement &&
     before.localName === HOST_TAG &&
     before.getAttribute('data-calculator') === calculatorId &&
-    before.shadowRoot === null
-      ? before
-      : null;
-  const host = reserved ?? doc.createElement(HOST_TAG);
+    !before.shadowRoot;
+  const host = reserved ? before : doc.createElement(HOST_TAG);
   host.setAttribute('data-wickstone', 'host');
   host.setAttribute('data-calculator', calculatorId);
   if (reserved) return host;
-  if (script.parentNode !== null && !doc.head?.contains(script)) {
-    script.after(host);
-    return host;
-  }
-  const append = (): void => {
-    doc.body.append(host);
-  };
-  if (doc.body) append();
+  const append = (): void => doc.body.append(host);
+  if (script.parentNode && !doc.head?.contains(script)) script.after(host);
+  else if (doc.body) append();
   else doc.addEventListener('DOMContentLoaded', append, { once: true });
   return host;
 }

@@ -1,7 +1,8 @@
 import { calculators } from '@wickstone/calc-core';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { addUnitList, canonicalUnits, unitSystems, units, type UnitList } from './unit-registry.js';
 // @ts-expect-error: the build scripts are plain JavaScript modules without declarations
-import { buildChunks, closure, LATER_CHUNKS, unitsOf } from '../../scripts/bundle.mjs';
+import { buildChunks, closure, unitListOf, unitsOf } from '../../scripts/bundle.mjs';
 // @ts-expect-error: as above
 import { compareViews, firstViews } from '../../scripts/first-views.mjs';
 
@@ -20,10 +21,10 @@ interface Views {
 type Release = { files: (id: string) => string[]; read: (file: string) => string };
 
 const ids = calculators.map((c) => c.id);
-/** A build's first flights as the browser runs them: the runtime, then the engine (its later chunks' table left empty). */
+/** A build's first flights as the browser runs them: the runtime, then the engine. */
 const release = ({ files, engines }: Built): Release => ({
   files: (id) => [...(closure(files, engines[id]) as Set<string>)],
-  read: (file) => files.get(file)!.code.replace(LATER_CHUNKS, '{}'),
+  read: (file) => files.get(file)!.code,
 });
 
 let subsets: Built;
@@ -54,6 +55,40 @@ describe("each engine's units", () => {
     // No pressure, no time in a tube's rise.
     for (const unit of ['Pa', 'psi', 's', 'day']) expect(tube.units, unit).not.toHaveProperty([unit]);
     expect(tube.unitSystems.us).not.toHaveProperty('pressure');
+  });
+
+  it('travel in a shorter list that adds the very same entries (same doubles, symbols, kinds) and systems', () => {
+    type Entry = { kind: string; symbol: string; factor: number; offset: number };
+    type Subset = {
+      units: Record<string, Entry>;
+      canonicalUnits: Record<string, string>;
+      unitSystems: { si: Record<string, string>; us: Record<string, string> };
+    };
+    let shortened = 0;
+    for (const id of ids) {
+      const subset = unitsOf(id) as Subset;
+      const list = unitListOf(id) as UnitList;
+      // Shorter than the entries it stands for, as JSON (what the engine carries).
+      expect(JSON.stringify(list).length, id).toBeLessThan(JSON.stringify(subset).length);
+      // The table is shared, as on a page: an entry another calculator added first must agree.
+      addUnitList(list);
+      for (const [unit, entry] of Object.entries(subset.units)) {
+        const added = (units as Record<string, Entry>)[unit]!;
+        expect(Object.keys(added), `${id} ${unit}`).toEqual(['kind', 'symbol', 'factor', 'offset']);
+        expect(added.kind, `${id} ${unit}`).toBe(entry.kind);
+        expect(added.symbol, `${id} ${unit}`).toBe(entry.symbol);
+        // Object.is: the same double, and 0 is not -0.
+        expect(Object.is(added.factor, entry.factor), `${id} ${unit} factor`).toBe(true);
+        expect(Object.is(added.offset, entry.offset), `${id} ${unit} offset`).toBe(true);
+        shortened++;
+      }
+      for (const [kind, unit] of Object.entries(subset.canonicalUnits))
+        expect((canonicalUnits as Record<string, string>)[kind], `${id} ${kind}`).toBe(unit);
+      for (const system of ['si', 'us'] as const)
+        for (const [kind, unit] of Object.entries(subset.unitSystems[system]))
+          expect((unitSystems[system] as Record<string, string>)[kind], `${id} ${system} ${kind}`).toBe(unit);
+    }
+    expect(shortened).toBeGreaterThan(ids.length * 5);
   });
 
   it('render every calculator’s first view as calc-core’s whole table does (both systems, defaults and seeded inputs)', () => {

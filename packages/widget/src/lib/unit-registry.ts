@@ -24,7 +24,38 @@ export const canonicalUnits: Partial<Record<QuantityKind, UnitId>> = {};
 export const unitSystems: Record<UnitSystemId, Partial<Record<QuantityKind, UnitId>>> = { si: {}, us: {} };
 export const aliases: Record<string, UnitId> = {};
 
-/** Adds units to the table (an engine's, or calc-core's whole table). */
+/**
+ * One unit of an engine's list: its id alone when its symbol is its id, its factor 1 and its
+ * offset 0; else `[id, factor, offset?, symbol?]`, the offset left out when 0 and the symbol when
+ * it is the id.
+ */
+export type UnitEntry = UnitId | readonly [id: UnitId, factor: number, offset?: number, symbol?: string];
+
+/**
+ * An engine's units (`scripts/bundle.mjs`, `unitListOf`), by kind: first the kind's canonical, SI and
+ * US units (0 for a kind only a warning prints, which has none of its own), then its units.
+ */
+export type UnitList = Readonly<
+  Partial<
+    Record<QuantityKind, readonly [systems: readonly [UnitId, UnitId, UnitId] | 0, ...units: UnitEntry[]]>
+  >
+>;
+
+/** Adds an engine's units to the table: the same objects as calc-core's entries without the name. */
+export function addUnitList(list: UnitList): void {
+  for (const [kind, [systems, ...entries]] of Object.entries(list) as [
+    QuantityKind,
+    NonNullable<UnitList[QuantityKind]>,
+  ][]) {
+    for (const entry of entries) {
+      const [id, factor = 1, offset = 0, symbol = id] = typeof entry === 'string' ? [entry] : entry;
+      units[id] = { kind, symbol, factor, offset };
+    }
+    if (systems) [canonicalUnits[kind], unitSystems.si[kind], unitSystems.us[kind]] = systems;
+  }
+}
+
+/** Adds units to the table (calc-core's whole table). */
 export function addUnits(table: UnitTable): void {
   Object.assign(units, table.units);
   Object.assign(canonicalUnits, table.canonicalUnits);
