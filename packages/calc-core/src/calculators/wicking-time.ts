@@ -327,10 +327,7 @@ export const calculator: CalculatorCore = {
       code: 'PORE_TOO_WIDE',
       summary: 'The pore radius is at least the capillary length: no time is given.',
     },
-    {
-      code: 'GRAVITY_NOT_NEGLIGIBLE',
-      summary: 'Gravity lengthens the time by more than 5 % (our threshold); use the time with gravity.',
-    },
+    { code: 'GRAVITY_NOT_NEGLIGIBLE' },
   ],
   solve,
 };
