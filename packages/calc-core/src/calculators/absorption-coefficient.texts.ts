@@ -1,5 +1,4 @@
 // The absorption-coefficient calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
-import { MIN_CORRELATION, MIN_POINTS_IN_FIT } from '../formulas/absorption.js';
 import { DAMP_CAUTION, ESTIMATE_CAUTION } from './shared-texts.js';
 import { explain } from './absorption-coefficient.working.js';
 import type { CalculatorTexts } from './types.js';
@@ -35,21 +34,6 @@ export const texts: CalculatorTexts = {
         'Hall C. (1989) Water sorptivity of mortars and concretes: a review, Magazine of Concrete Research 41, 51–61',
       usedFor: 'sorptivity as the slope of the absorbed volume per area against √t (citation from memory)',
       basis: 'from memory',
-    },
-  ],
-  warnings: [
-    {
-      code: 'TOO_FEW_POINTS_IN_FIT',
-      summary: `Fewer than ${MIN_POINTS_IN_FIT} readings in the method's fit window: no rate is given.`,
-    },
-    { code: 'NO_UPTAKE', summary: 'The fitted line does not rise: no rate is given.' },
-    {
-      code: 'NOT_LINEAR',
-      summary: `The fit's correlation coefficient is below ${MIN_CORRELATION} (ASTM C1585, from memory; our threshold for EN ISO 15148): no rate is given.`,
-    },
-    {
-      code: 'SHORTER_THAN_TEST',
-      summary: 'An EN ISO 15148 test whose last reading is before 24 h.',
     },
   ],
   explain,

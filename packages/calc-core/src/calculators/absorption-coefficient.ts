@@ -4,8 +4,6 @@ import {
   FIT_WINDOW_S,
   fitLine,
   inFitWindow,
-  MIN_CORRELATION,
-  MIN_POINTS_IN_FIT,
   type AbsorptionMethod,
   type LineFit,
 } from '../formulas/absorption.js';
@@ -29,6 +27,14 @@ import type {
 // straight line while the wetting front is inside the specimen; its slope is A_w (EN ISO 15148)
 // and A_w/ρ_w the sorptivity S (ASTM C1585's initial rate of absorption, Hall's sorptivity).
 
+/**
+ * The least correlation coefficient r of the fit for a rate to be reported. ASTM C1585: data
+ * between 1 min and 6 h with r below 0.98 do not give an initial rate (from memory). EN ISO 15148
+ * prints no such number that we could see; the same limit is applied to it as our threshold.
+ */
+export const MIN_CORRELATION = 0.98;
+/** Fewer points than this in the fit window and no line is fitted (two points always lie on one). */
+export const MIN_POINTS_IN_FIT = 3;
 /** EN ISO 15148's test runs 24 h (from memory). */
 const EN_TEST_DURATION_S = 24 * 3600;
 
@@ -307,7 +313,10 @@ export const calculator: CalculatorCore = {
       code: 'NOT_LINEAR',
       summary: `The fit's correlation coefficient is below ${MIN_CORRELATION} (ASTM C1585, from memory; our threshold for EN ISO 15148): no rate is given.`,
     },
-    { code: 'SHORTER_THAN_TEST' },
+    {
+      code: 'SHORTER_THAN_TEST',
+      summary: 'An EN ISO 15148 test whose last reading is before 24 h.',
+    },
   ],
   solve,
   checkTable: (input, value) => tableIssues(input, value),

@@ -13,8 +13,10 @@ export function angleOf(cos: number): number | null {
   return acosDeg(Math.max(-1, Math.min(1, cos)));
 }
 
-/** Its declaration in a core: its summary is with the texts (angle-reading.texts.ts). */
-export const ANGLE_POORLY_DETERMINED: WarningDefinition = { code: 'ANGLE_POORLY_DETERMINED' };
+export const ANGLE_POORLY_DETERMINED: WarningDefinition = {
+  code: 'ANGLE_POORLY_DETERMINED',
+  summary: `An angle below ${ILL_CONDITIONED_BELOW_DEG}°, where a 1 % error in the measurement or the surface tension moves it by about 2° or more.`,
+};
 
 /**
  * The ANGLE_POORLY_DETERMINED warning for an angle below the threshold, else null.

@@ -1,5 +1,4 @@
 // The contact-angle-from-force calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
-import { ANGLE_POORLY_DETERMINED } from './angle-reading.texts.js';
 import { CLEAN_SURFACES_CAUTION, ESTIMATE_CAUTION } from './shared-texts.js';
 import { OTHER_LIQUID_CAUTION } from './shared.js';
 import { explain } from './contact-angle-from-force.working.js';
@@ -39,23 +38,6 @@ export const texts: CalculatorTexts = {
         'the optical contact-angle methods (as its published scope says) that a force-derived angle is compared with; the force method itself is not in the series',
       basis: 'printed',
     },
-  ],
-  warnings: [
-    {
-      code: 'NO_ANGLE_FOR_FORCE',
-      summary:
-        'cos θ from the force is outside −1 to 1: no contact angle gives this reading (surface tension too low, or a tare error).',
-    },
-    {
-      code: 'NO_ANGLE_FOR_RECEDING_FORCE',
-      summary: 'cos θ from the withdrawal force is outside −1 to 1: no receding angle gives this reading.',
-    },
-    {
-      code: 'RECEDING_ABOVE_ADVANCING',
-      summary:
-        'The withdrawal force is below the immersion force: the readings look swapped, no hysteresis is given.',
-    },
-    ANGLE_POORLY_DETERMINED,
   ],
   explain,
 };

@@ -1,16 +1,11 @@
 // The working and assumptions of a rise (tube-rise, slot-rise), written from the notes solveRise
 // records (rise-common.ts): carried by the two calculators' texts, so the widget's first flight
 // has none of this text.
-import {
-  BORE_NOT_SMALL_RATIO,
-  GAP_NOT_SMALL_RATIO,
-  meniscusGeometry,
-  slotMeniscusGeometry,
-} from '../formulas/capillary.js';
-import { CONTACT_ANGLE_NEAR_90, fmt, q } from './shared.js';
+import { meniscusGeometry, slotMeniscusGeometry } from '../formulas/capillary.js';
+import { q } from './shared.js';
 import { capillaryLengthStep, gravityAssumption, STATIC_ASSUMPTIONS } from './shared-working.js';
 import type { RiseAssumed, RiseNotes } from './rise-common.js';
-import type { Explain, StepWriters, WarningDefinition } from './types.js';
+import type { Explain, StepWriters } from './types.js';
 
 /** The words and formulas of each geometry, by its size input. */
 const WORDS = {
@@ -129,27 +124,3 @@ function assumptions({ sizeId, liquid, angle, g }: RiseAssumed): string[] {
 
 /** The working of tube-rise and slot-rise (the notes say which geometry). */
 export const explain: Explain = { steps, assumptions };
-
-/**
- * The warning catalogue of a rise calculator with every summary, for its texts: the core's
- * (`riseWarnings`) in its order, the summaries the first view never shows included.
- */
-export function riseWarningTexts(sizeId: RiseNotes['base']['sizeId']): WarningDefinition[] {
-  const { noun } = WORDS[sizeId];
-  const tube = sizeId === 'diameter';
-  return [
-    {
-      code: tube ? 'BORE_NOT_SMALL' : 'GAP_NOT_SMALL',
-      summary: `Half the ${noun} exceeds ${fmt(tube ? BORE_NOT_SMALL_RATIO : GAP_NOT_SMALL_RATIO)} of the capillary length, where the meniscus weight changes the rise by more than 2 % (common practice threshold, ours).`,
-    },
-    {
-      code: tube ? 'BORE_TOO_WIDE' : 'GAP_TOO_WIDE',
-      summary: `Half the ${noun} is at least the capillary length: the capillary formulas do not hold.`,
-    },
-    CONTACT_ANGLE_NEAR_90,
-    {
-      code: 'MENISCUS_CORRECTION_NOT_APPLIED',
-      summary: 'A convex meniscus (θ > 90°): the meniscus-weight correction is not applied.',
-    },
-  ];
-}

@@ -1,8 +1,6 @@
 // The tension-from-rise calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
-import { ANGLE_POORLY_DETERMINED } from './angle-reading.texts.js';
-import { BORE_NOT_SMALL_RATIO as NOT_SMALL_RATIO } from '../formulas/capillary.js';
 import { CLEAN_SURFACES_CAUTION, ESTIMATE_CAUTION } from './shared-texts.js';
-import { CONTACT_ANGLE_NEAR_90, fmt, OTHER_LIQUID_CAUTION } from './shared.js';
+import { OTHER_LIQUID_CAUTION } from './shared.js';
 import { explain } from './tension-from-rise.working.js';
 import type { CalculatorTexts } from './types.js';
 
@@ -38,26 +36,6 @@ export const texts: CalculatorTexts = {
       usedFor: 'the capillary length ℓc = √(σ/(ρ·g))',
       basis: 'printed',
     },
-  ],
-  warnings: [
-    {
-      code: 'BORE_TOO_WIDE',
-      summary: 'The bore radius is at least the capillary length: no surface tension or angle is given.',
-    },
-    {
-      code: 'BORE_NOT_SMALL',
-      summary: `The bore radius exceeds ${fmt(NOT_SMALL_RATIO)} of the capillary length, where the meniscus term is over 2 % of the rise.`,
-    },
-    {
-      code: 'NO_ANGLE_FOR_RISE',
-      summary: 'cos θ from the rise is above 1: no contact angle gives this rise.',
-    },
-    {
-      code: 'CONTACT_ANGLE_NOT_ZERO',
-      summary: 'A non-zero contact angle is assumed when reading the surface tension.',
-    },
-    CONTACT_ANGLE_NEAR_90,
-    ANGLE_POORLY_DETERMINED,
   ],
   explain,
 };

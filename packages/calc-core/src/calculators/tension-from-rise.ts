@@ -1,4 +1,4 @@
-import { BORE_NOT_SMALL_RATIO as NOT_SMALL_RATIO, meniscusCorrection } from '../formulas/capillary.js';
+import { meniscusCorrection } from '../formulas/capillary.js';
 import { ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-reading.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
@@ -18,6 +18,12 @@ import {
 } from './shared.js';
 import { explain } from './tension-from-rise.working.js';
 import type { CalculatorCore, InputValues, Solution, Warning } from './types.js';
+
+/**
+ * r/ℓc above which Rayleigh's r/3 is more than 2 % of the rise (r²/(6ℓc²) = 0.02), the tube-rise
+ * calculator's threshold too; written here so this calculator's bundle does not carry the rise module.
+ */
+const NOT_SMALL_RATIO = Math.sqrt(0.12);
 
 const forTension = [{ input: 'solveFor', values: ['surfaceTension'] }] as const;
 const forAngle = [{ input: 'solveFor', values: ['contactAngle'] }] as const;
@@ -236,12 +242,18 @@ export const calculator: CalculatorCore = {
       code: 'BORE_TOO_WIDE',
       summary: 'The bore radius is at least the capillary length: no surface tension or angle is given.',
     },
-    { code: 'BORE_NOT_SMALL' },
+    {
+      code: 'BORE_NOT_SMALL',
+      summary: `The bore radius exceeds ${fmt(NOT_SMALL_RATIO)} of the capillary length, where the meniscus term is over 2 % of the rise.`,
+    },
     {
       code: 'NO_ANGLE_FOR_RISE',
       summary: 'cos θ from the rise is above 1: no contact angle gives this rise.',
     },
-    { code: 'CONTACT_ANGLE_NOT_ZERO' },
+    {
+      code: 'CONTACT_ANGLE_NOT_ZERO',
+      summary: 'A non-zero contact angle is assumed when reading the surface tension.',
+    },
     CONTACT_ANGLE_NEAR_90,
     ANGLE_POORLY_DETERMINED,
   ],

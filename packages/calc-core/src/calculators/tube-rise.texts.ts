@@ -7,7 +7,7 @@ import {
   RAYLEIGH_REFERENCE,
   WATER_REFERENCES,
 } from './shared-texts.js';
-import { explain, riseWarningTexts } from './rise-common.working.js';
+import { explain } from './rise-common.working.js';
 import type { CalculatorTexts } from './types.js';
 
 export const texts: CalculatorTexts = {
@@ -24,6 +24,5 @@ export const texts: CalculatorTexts = {
     ...WATER_REFERENCES,
     ...LIQUID_TABLE_REFERENCES,
   ],
-  warnings: riseWarningTexts('diameter'),
   explain,
 };

@@ -272,6 +272,8 @@ export interface CalculatorTexts {
   /**
    * The core's warnings, in its order, each with its summary: joined with the core they take the
    * place of its list, whose summaries are only those of the warnings that withhold an output.
+   * Absent where the core carries every summary itself (one whose texts would otherwise fetch a
+   * shared module for it, at more cost to the first flight than the summaries save).
    */
   readonly warnings?: readonly WarningDefinition[];
   /**

@@ -9,15 +9,6 @@ import { finite, positive } from '../guards.js';
 /** Seconds per hour, square-rooted: A_w in kg/(m²·√h) = 60 × A_w in kg/(m²·√s). */
 export const ROOT_SECONDS_PER_ROOT_HOUR = 60;
 
-/**
- * The least correlation coefficient r of the fit for a rate to be reported. ASTM C1585: data
- * between 1 min and 6 h with r below 0.98 do not give an initial rate (from memory). EN ISO 15148
- * prints no such number that we could see; the same limit is applied to it as our threshold.
- */
-export const MIN_CORRELATION = 0.98;
-/** Fewer points than this in the fit window and no line is fitted (two points always lie on one). */
-export const MIN_POINTS_IN_FIT = 3;
-
 export interface LineFit {
   /** Number of points in the fit. */
   readonly n: number;

@@ -96,15 +96,6 @@ export function meniscusCorrection(args: {
   return meniscusGeometry(args).correction;
 }
 
-/**
- * Half the bore over ℓc above which Rayleigh's r/3 is more than 2 % of the rise at θ = 0
- * (r²/(6ℓc²) = 0.02 at r/ℓc = √0.12): where a tube's meniscus correction stops being small.
- */
-export const BORE_NOT_SMALL_RATIO = Math.sqrt(0.12);
-
-/** The same for a slot: (1/2 − π/8)·w against 2ℓc²/w is 0.02 at (w/2)/ℓc = √(0.01 / (1/2 − π/8)). */
-export const GAP_NOT_SMALL_RATIO = Math.sqrt(0.01 / (0.5 - Math.PI / 8));
-
 /** The pieces of a meniscus correction, for the working: all lengths in m, volume in m³ (area in m² for a slot). */
 export interface MeniscusGeometry {
   /** Radius of the meniscus surface, m (r/cos θ or (w/2)/cos θ). */
