@@ -1,4 +1,4 @@
-import { capillaryLength } from '../formulas/capillary.js';
+import { capillaryLength } from '../formulas/jurin.js';
 import { bubblePressure, laplacePressure, poreEntryPressure } from '../formulas/laplace.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';

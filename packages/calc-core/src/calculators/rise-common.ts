@@ -1,11 +1,5 @@
-import {
-  capillaryLength,
-  jurinRise,
-  meniscusGeometry,
-  slotMeniscusGeometry,
-  slotRise,
-  type MeniscusGeometry,
-} from '../formulas/capillary.js';
+import { meniscusGeometry, slotMeniscusGeometry, type MeniscusGeometry } from '../formulas/capillary.js';
+import { capillaryLength, jurinRise, slotRise } from '../formulas/jurin.js';
 import { bandOver } from './engine.js';
 import {
   fmt,

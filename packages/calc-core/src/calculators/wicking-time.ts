@@ -1,4 +1,4 @@
-import { capillaryLength, jurinRise } from '../formulas/capillary.js';
+import { capillaryLength, jurinRise } from '../formulas/jurin.js';
 import { bosanquetTime, gravityRestrainedRiseTime, gravityShape, washburnTime } from '../formulas/wicking.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
