@@ -44,6 +44,8 @@ export interface FrostScreeningNotes {
     readonly share: number;
     readonly cu: number;
     readonly pi: number | undefined;
+    /** The criterion's thresholds (the working prints them). */
+    readonly limits: typeof CASAGRANDE_THRESHOLDS;
   };
   readonly hazenRise: { readonly c: number; readonly e: number; readonly d10: number; readonly rise: number };
   readonly measuredRise: { readonly rise: number };
@@ -108,6 +110,7 @@ function solve(inputs: InputValues): Solution {
     share,
     cu,
     pi,
+    limits: CASAGRANDE_THRESHOLDS,
   });
   if (fromHazen && !fine) working.add('hazenRise', { c, e, d10, rise: riseAt(c) });
   else if (!fromHazen) working.add('measuredRise', { rise: riseAt(c) });

@@ -26,6 +26,8 @@ export interface RisingDampHeightNotes {
     readonly n: number;
     readonly r: RisingDampResult;
     readonly tSteady: number;
+    /** The fraction of the steady height `tSteady` is the time to (the working prints it). */
+    readonly f: number;
   };
 }
 
@@ -53,7 +55,7 @@ function solve(inputs: InputValues): Solution {
 
   // The working's text is written from these notes by rising-damp-height.working.ts (`calculate` only).
   const working = noteTaker<RisingDampHeightNotes>();
-  working.add('steady', { S, b, e, theta, n, r, tSteady });
+  working.add('steady', { S, b, e, theta, n, r, tSteady, f: STEADY_FRACTION });
 
   const warnings: Warning[] = [];
   if (r.steadyHeight < SHALLOW_RATIO * b) {

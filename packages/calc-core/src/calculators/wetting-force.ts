@@ -7,6 +7,7 @@ import {
   wilhelmyRodForce,
   wilhelmyRodSurfaceTension,
   wilhelmySurfaceTension,
+  ZUIDEMA_WATERS,
 } from '../formulas/tensiometry.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
@@ -62,12 +63,17 @@ export interface WettingForceNotes {
     readonly drho: number;
     readonly g: number;
     readonly x: RingCorrection;
+    /** The range of the ring tables and the fit's coefficients (the working prints them). */
+    readonly table: typeof RING_TABLE_RANGE;
+    readonly fit: typeof ZUIDEMA_WATERS;
   };
   readonly ringFactor: {
     readonly radicand: number;
     readonly root: number;
     readonly factor: number;
     readonly apparent: number;
+    /** The fit's constant term. */
+    readonly base: number;
   };
   readonly perimeter: {
     readonly isPlate: boolean;
@@ -130,13 +136,14 @@ function solve(inputs: InputValues): Solution {
     const applies = x.inTableRange && x.factor !== null;
     factor = applies ? x.factor : null;
     sigma = applies && x.factor !== null ? x.factor * x.apparent : null;
-    working.add('ring', { F, R, r, drho, g, x });
+    working.add('ring', { F, R, r, drho, g, x, table: t, fit: ZUIDEMA_WATERS });
     if (applies && x.root !== null && x.factor !== null) {
       working.add('ringFactor', {
         radicand: x.radicand,
         root: x.root,
         factor: x.factor,
         apparent: x.apparent,
+        base: ZUIDEMA_WATERS.base,
       });
     }
     if (!applies) {
