@@ -83,6 +83,8 @@ export interface RiseNotes {
     readonly theta: number;
     readonly rise: number;
     readonly riseCorrected: number;
+    /** The meniscus the correction is drawn from (the working prints its radius, sag and volume). */
+    readonly meniscus: MeniscusGeometry;
   };
 }
 
@@ -239,7 +241,14 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
   if (outputs.rise !== null && outputs.rise !== undefined)
     working.add('rise', { sizeId, sigma, theta, rho, g, size, rise });
   if (outputs.riseCorrected !== null && outputs.riseCorrected !== undefined)
-    working.add('corrected', { sizeId, size, theta, rise, riseCorrected: outputs.riseCorrected });
+    working.add('corrected', {
+      sizeId,
+      size,
+      theta,
+      rise,
+      riseCorrected: outputs.riseCorrected,
+      meniscus: geometry.correction(size, theta),
+    });
   const assumed: RiseAssumed = { sizeId, liquid, angle, g };
   return solved({ outputs, warnings, band, notes: working.list, assumed }, liquid);
 }
