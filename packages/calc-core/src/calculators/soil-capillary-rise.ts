@@ -1,4 +1,5 @@
-import { capillaryBreakCheck, HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../formulas/soil.js';
+import { capillaryBreakCheck } from '../formulas/capillary-break.js';
+import { HAZEN_C_RANGE_M2, hazenCapillaryRise } from '../formulas/soil.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
 import { HAZEN_BASIS, hazenCInput } from './hazen.js';
