@@ -10,7 +10,7 @@ import {
 } from '../formulas/absorption.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
-import { tableIssues } from './table.js';
+import { tableIssues } from './table-issues.js';
 import { explain } from './absorption-coefficient.working.js';
 import { choice, fmt, noteTaker, num, q, solved, warning } from './shared.js';
 import type {
