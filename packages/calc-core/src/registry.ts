@@ -31,9 +31,24 @@ import { texts as wettingForceTexts } from './calculators/wetting-force.texts.js
 import { calculator as wickingTimeCore } from './calculators/wicking-time.js';
 import { texts as wickingTimeTexts } from './calculators/wicking-time.texts.js';
 
-/** A calculator whole: its core (what computes) and its texts (cautions, references). */
+/**
+ * A calculator whole: its core (what computes) and its texts (cautions, references, and every
+ * warning's summary, in place of the core's list that carries only the headline's).
+ * @throws Error when the texts' warnings are not the core's, in its order, with the same summaries
+ *   where the core has one (a calc-core bug)
+ */
 export function withTexts(core: CalculatorCore, texts: CalculatorTexts): CalculatorDefinition {
-  return { ...core, ...texts };
+  const warnings = texts.warnings ?? core.warnings;
+  const same =
+    warnings.length === core.warnings.length &&
+    warnings.every(
+      (w, i) =>
+        w.code === core.warnings[i]?.code &&
+        typeof w.summary === 'string' &&
+        (core.warnings[i]?.summary ?? w.summary) === w.summary,
+    );
+  if (!same) throw new Error(`${core.id}: its texts' warnings are not its core's, each with its summary`);
+  return { ...core, ...texts, warnings };
 }
 
 export const tubeRise: CalculatorDefinition = withTexts(tubeRiseCore, tubeRiseTexts);

@@ -4,12 +4,13 @@ import {
   FIT_WINDOW_S,
   fitLine,
   inFitWindow,
+  ROOT_SECONDS_PER_ROOT_HOUR,
   type AbsorptionMethod,
   type LineFit,
 } from '../formulas/absorption.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
-import { tableIssues } from './table.js';
+import { tableIssues } from './table-issues.js';
 import { explain } from './absorption-coefficient.working.js';
 import { choice, fmt, noteTaker, num, q, solved, warning } from './shared.js';
 import type {
@@ -105,7 +106,13 @@ export interface AbsorptionCoefficientNotes {
     readonly windowText: string;
   };
   readonly fit: { readonly method: AbsorptionMethod; readonly fit: LineFit; readonly r: number };
-  readonly rates: { readonly slope: number; readonly rhoW: number; readonly sorptivity: number };
+  readonly rates: {
+    readonly slope: number;
+    readonly rhoW: number;
+    readonly sorptivity: number;
+    /** √s per √h (the working gives the coefficient per √h too). */
+    readonly perRootHour: number;
+  };
 }
 
 const withheld = (): Outputs => Object.fromEntries(FITTED.map((id) => [id, null]));
@@ -196,7 +203,7 @@ function solve(inputs: InputValues): Solution {
     return solved({ ...parts, outputs: outputs({ rSquared: fit.rSquared }), warnings });
   }
   const sorptivity = fit.slope / rhoW;
-  working.add('rates', { slope: fit.slope, rhoW, sorptivity });
+  working.add('rates', { slope: fit.slope, rhoW, sorptivity, perRootHour: ROOT_SECONDS_PER_ROOT_HOUR });
   if (method === 'en-iso-15148' && (last.time as number) < EN_TEST_DURATION_S) {
     warnings.push(
       warning(

@@ -1,7 +1,7 @@
 // The absorption-coefficient calculator's working and assumptions, written from the notes its
 // solve records (absorption-coefficient.ts): carried by its texts, so the widget's first flight has
 // none of this text.
-import { ROOT_SECONDS_PER_ROOT_HOUR, type AbsorptionMethod } from '../formulas/absorption.js';
+import type { AbsorptionMethod } from '../formulas/absorption.js';
 import type { AbsorptionCoefficientNotes } from './absorption-coefficient.js';
 import { fmt, q } from './shared.js';
 import type { Explain, StepWriters } from './types.js';
@@ -69,13 +69,13 @@ const steps: StepWriters<AbsorptionCoefficientNotes> = {
       source: 'Ordinary least squares',
     },
   ],
-  rates: ({ slope, rhoW, sorptivity }) => [
+  rates: ({ slope, rhoW, sorptivity, perRootHour }) => [
     {
       id: 'per-root-hour',
       label: 'Water absorption coefficient per root hour',
-      formula: `A_w,h = ${ROOT_SECONDS_PER_ROOT_HOUR}·A_w  (√3600 s = 60 √s)`,
+      formula: `A_w,h = ${perRootHour}·A_w  (√3600 s = 60 √s)`,
       // The step's value stays canonical (per √s), as every step's does; the text shows the √h figure.
-      substituted: `${ROOT_SECONDS_PER_ROOT_HOUR} × ${q(slope, 'kg/(m2*s^0.5)')} = ${q(slope * ROOT_SECONDS_PER_ROOT_HOUR, 'kg/(m2*h^0.5)')}`,
+      substituted: `${perRootHour} × ${q(slope, 'kg/(m2*s^0.5)')} = ${q(slope * perRootHour, 'kg/(m2*h^0.5)')}`,
       value: slope,
       unit: 'kg/(m2*s^0.5)',
       source: EN,

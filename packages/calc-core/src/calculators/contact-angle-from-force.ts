@@ -1,4 +1,4 @@
-import { plateForceTerms, type PlateForceTerms } from '../formulas/contact-angle.js';
+import { plateForceTerms, type PlateForceTerms } from '../formulas/plate-force.js';
 import { angleOf, ANGLE_POORLY_DETERMINED, poorlyDetermined } from './angle-reading.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';

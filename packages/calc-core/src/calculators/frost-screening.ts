@@ -44,6 +44,8 @@ export interface FrostScreeningNotes {
     readonly share: number;
     readonly cu: number;
     readonly pi: number | undefined;
+    /** The criterion's thresholds (the working prints them). */
+    readonly limits: typeof CASAGRANDE_THRESHOLDS;
   };
   readonly hazenRise: { readonly c: number; readonly e: number; readonly d10: number; readonly rise: number };
   readonly measuredRise: { readonly rise: number };
@@ -108,6 +110,7 @@ function solve(inputs: InputValues): Solution {
     share,
     cu,
     pi,
+    limits: CASAGRANDE_THRESHOLDS,
   });
   if (fromHazen && !fine) working.add('hazenRise', { c, e, d10, rise: riseAt(c) });
   else if (!fromHazen) working.add('measuredRise', { rise: riseAt(c) });
@@ -292,28 +295,11 @@ export const calculator: CalculatorCore = {
       summary:
         "D10 is finer than 0.075 mm, outside the sands Hazen's relation was drawn from: no estimated rise.",
     },
-    {
-      code: 'WATER_TABLE_WITHIN_FROST_DEPTH',
-      summary: 'The water table is at or above the frost line.',
-    },
-    {
-      code: 'FRINGE_MAY_REACH_FROST_LINE',
-      summary:
-        "The fringe stops below the frost line at the chosen C but reaches it at the top of Hazen's published range.",
-    },
-    {
-      code: 'INTERMEDIATE_GRADATION',
-      summary:
-        'Cu between 5 and 15, where the criterion gives no threshold of its own; the 3 % threshold is applied.',
-    },
-    {
-      code: 'NEAR_THRESHOLD',
-      summary: 'The share finer than 0.02 mm is within one percentage point of the threshold.',
-    },
-    {
-      code: 'SCREENS_DISAGREE',
-      summary: 'The Casagrande criterion and the soil group disagree; the soil is taken as susceptible.',
-    },
+    { code: 'WATER_TABLE_WITHIN_FROST_DEPTH' },
+    { code: 'FRINGE_MAY_REACH_FROST_LINE' },
+    { code: 'INTERMEDIATE_GRADATION' },
+    { code: 'NEAR_THRESHOLD' },
+    { code: 'SCREENS_DISAGREE' },
   ],
   solve,
 };

@@ -1,7 +1,6 @@
 // The frost-screening calculator's working and assumptions, written from the notes its solve
 // records (frost-screening.ts): carried by its texts, so the widget's first flight has none of
 // this text.
-import { CASAGRANDE_THRESHOLDS } from '../formulas/frost.js';
 import type { FrostScreeningAssumed, FrostScreeningNotes } from './frost-screening.js';
 import { fmt, q } from './shared.js';
 import { hazenRiseStep } from './shared-working.js';
@@ -13,11 +12,11 @@ const GROUPS = 'frost-design soil groups of US Army Corps of Engineers pavement 
 const pct = (x: number): string => `${fmt(x * 100)} %`;
 
 const steps: StepWriters<FrostScreeningNotes> = {
-  screen: ({ crit, group, groupIndex, kindLabel, share, cu, pi }) => [
+  screen: ({ crit, group, groupIndex, kindLabel, share, cu, pi, limits }) => [
     {
       id: 'casagrande',
       label: `Casagrande criterion: ${crit.gradation} soil, threshold ${pct(crit.threshold)} finer than 0.02 mm`,
-      formula: `susceptible if share finer than 0.02 mm > ${pct(CASAGRANDE_THRESHOLDS.uniformShare)} (Cu < ${CASAGRANDE_THRESHOLDS.uniformBelowCu}) or > ${pct(CASAGRANDE_THRESHOLDS.nonUniformShare)} (otherwise)`,
+      formula: `susceptible if share finer than 0.02 mm > ${pct(limits.uniformShare)} (Cu < ${limits.uniformBelowCu}) or > ${pct(limits.nonUniformShare)} (otherwise)`,
       substituted: `Cu = ${fmt(cu)}, share = ${pct(share)} ${crit.susceptible ? '>' : '≤'} ${pct(crit.threshold)}`,
       value: crit.susceptible ? 1 : 0,
       unit: '1',

@@ -1,4 +1,4 @@
-import { capillaryLength } from '../formulas/capillary.js';
+import { capillaryLength } from '../formulas/jurin.js';
 import { bubblePressure, laplacePressure, poreEntryPressure } from '../formulas/laplace.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
@@ -220,7 +220,7 @@ export const calculator: CalculatorCore = {
       code: 'SHAPE_NOT_SPHERICAL',
       summary: 'A drop at least as large as the capillary length is flattened by gravity.',
     },
-    { code: 'PORE_NON_WETTING', summary: 'θ > 90°: the liquid must be pushed into the pore.' },
+    { code: 'PORE_NON_WETTING' },
     CONTACT_ANGLE_NEAR_90,
   ],
   solve,

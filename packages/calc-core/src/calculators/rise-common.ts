@@ -1,11 +1,5 @@
-import {
-  capillaryLength,
-  jurinRise,
-  meniscusGeometry,
-  slotMeniscusGeometry,
-  slotRise,
-  type MeniscusGeometry,
-} from '../formulas/capillary.js';
+import { meniscusGeometry, slotMeniscusGeometry, type MeniscusGeometry } from '../formulas/capillary.js';
+import { capillaryLength, jurinRise, slotRise } from '../formulas/jurin.js';
 import { bandOver } from './engine.js';
 import {
   fmt,
@@ -89,6 +83,8 @@ export interface RiseNotes {
     readonly theta: number;
     readonly rise: number;
     readonly riseCorrected: number;
+    /** The meniscus the correction is drawn from (the working prints its radius, sag and volume). */
+    readonly meniscus: MeniscusGeometry;
   };
 }
 
@@ -245,7 +241,14 @@ export function solveRise(geometry: RiseGeometry, inputs: InputValues): Solution
   if (outputs.rise !== null && outputs.rise !== undefined)
     working.add('rise', { sizeId, sigma, theta, rho, g, size, rise });
   if (outputs.riseCorrected !== null && outputs.riseCorrected !== undefined)
-    working.add('corrected', { sizeId, size, theta, rise, riseCorrected: outputs.riseCorrected });
+    working.add('corrected', {
+      sizeId,
+      size,
+      theta,
+      rise,
+      riseCorrected: outputs.riseCorrected,
+      meniscus: geometry.correction(size, theta),
+    });
   const assumed: RiseAssumed = { sizeId, liquid, angle, g };
   return solved({ outputs, warnings, band, notes: working.list, assumed }, liquid);
 }

@@ -1,7 +1,6 @@
 // The working and assumptions of a rise (tube-rise, slot-rise), written from the notes solveRise
 // records (rise-common.ts): carried by the two calculators' texts, so the widget's first flight
 // has none of this text.
-import { meniscusGeometry, slotMeniscusGeometry } from '../formulas/capillary.js';
 import { q } from './shared.js';
 import { capillaryLengthStep, gravityAssumption, STATIC_ASSUMPTIONS } from './shared-working.js';
 import type { RiseAssumed, RiseNotes } from './rise-common.js';
@@ -61,11 +60,8 @@ const steps: StepWriters<RiseNotes> = {
       source: WORDS[sizeId].riseSource,
     },
   ],
-  corrected: ({ sizeId, size, theta, rise, riseCorrected }) => {
+  corrected: ({ sizeId, size, theta, rise, riseCorrected, meniscus: m }) => {
     const tube = sizeId === 'diameter';
-    const m = tube
-      ? meniscusGeometry({ diameter: size, contactAngleDeg: theta })
-      : slotMeniscusGeometry({ gap: size, contactAngleDeg: theta });
     return [
       {
         id: 'meniscus-sag',

@@ -43,5 +43,22 @@ export const texts: CalculatorTexts = {
       basis: 'from memory',
     },
   ],
+  warnings: [
+    {
+      code: 'WET_ZONE_NOT_TALL',
+      summary:
+        'The steady height is below the wall thickness, where an even water content across the wall is a poor approximation.',
+    },
+    {
+      code: 'HEIGHT_ABOVE_OBSERVED',
+      summary:
+        'The steady height is above 2 m, which rising damp rarely reaches in practice (common practice).',
+    },
+    {
+      code: 'SLOW_APPROACH',
+      summary:
+        'More than ten years to approach steady state: the steady figures are a limit the wall does not reach.',
+    },
+  ],
   explain,
 };

@@ -26,6 +26,8 @@ export interface RisingDampHeightNotes {
     readonly n: number;
     readonly r: RisingDampResult;
     readonly tSteady: number;
+    /** The fraction of the steady height `tSteady` is the time to (the working prints it). */
+    readonly f: number;
   };
 }
 
@@ -53,7 +55,7 @@ function solve(inputs: InputValues): Solution {
 
   // The working's text is written from these notes by rising-damp-height.working.ts (`calculate` only).
   const working = noteTaker<RisingDampHeightNotes>();
-  working.add('steady', { S, b, e, theta, n, r, tSteady });
+  working.add('steady', { S, b, e, theta, n, r, tSteady, f: STEADY_FRACTION });
 
   const warnings: Warning[] = [];
   if (r.steadyHeight < SHALLOW_RATIO * b) {
@@ -179,23 +181,7 @@ export const calculator: CalculatorCore = {
     ],
     missing: 'steady height',
   },
-  warnings: [
-    {
-      code: 'WET_ZONE_NOT_TALL',
-      summary:
-        'The steady height is below the wall thickness, where an even water content across the wall is a poor approximation.',
-    },
-    {
-      code: 'HEIGHT_ABOVE_OBSERVED',
-      summary:
-        'The steady height is above 2 m, which rising damp rarely reaches in practice (common practice).',
-    },
-    {
-      code: 'SLOW_APPROACH',
-      summary:
-        'More than ten years to approach steady state: the steady figures are a limit the wall does not reach.',
-    },
-  ],
+  warnings: [{ code: 'WET_ZONE_NOT_TALL' }, { code: 'HEIGHT_ABOVE_OBSERVED' }, { code: 'SLOW_APPROACH' }],
   solve,
 };
 

@@ -1,7 +1,6 @@
 // The rising-damp-height calculator's working and assumptions, written from the notes its solve
 // records (rising-damp-height.ts): carried by its texts, so the widget's first flight has none of
 // this text.
-import { STEADY_FRACTION } from '../formulas/rising-damp.js';
 import type { RisingDampHeightAssumed, RisingDampHeightNotes } from './rising-damp-height.js';
 import { fmt, q } from './shared.js';
 import type { Explain, StepWriters } from './types.js';
@@ -10,7 +9,7 @@ const HALL_HOFF = 'Hall & Hoff 2007, Proc. R. Soc. A 463, 1871–1884 (form from
 const DERIVED = 'sharp-front water balance of Hall & Hoff 2007, derived here';
 
 const steps: StepWriters<RisingDampHeightNotes> = {
-  steady: ({ S, b, e, theta, n, r, tSteady }) => [
+  steady: ({ S, b, e, theta, n, r, tSteady, f }) => [
     {
       id: 'steady-height',
       label: 'Steady-state height of the wet front',
@@ -49,9 +48,9 @@ const steps: StepWriters<RisingDampHeightNotes> = {
     },
     {
       id: 'time-to-steady',
-      label: `Time for a dry wall to wet to ${fmt(STEADY_FRACTION * 100)} % of the steady height`,
-      formula: `t = −τ·ln(1 − f²), f = ${fmt(STEADY_FRACTION)}`,
-      substituted: `−${q(r.timeConstant, 's')} × ln(1 − ${fmt(STEADY_FRACTION)}²)`,
+      label: `Time for a dry wall to wet to ${fmt(f * 100)} % of the steady height`,
+      formula: `t = −τ·ln(1 − f²), f = ${fmt(f)}`,
+      substituted: `−${q(r.timeConstant, 's')} × ln(1 − ${fmt(f)}²)`,
       value: tSteady,
       unit: 's',
       source: DERIVED,

@@ -71,7 +71,13 @@ export interface TensionFromRiseNotes {
     readonly r: number;
     readonly wetting: number;
   };
-  readonly angle: { readonly h: number; readonly angle: number; readonly d: number };
+  readonly angle: {
+    readonly h: number;
+    readonly angle: number;
+    readonly d: number;
+    /** The meniscus correction at that angle, m (the working prints it). */
+    readonly delta: number;
+  };
   readonly size: {
     readonly sigma: number;
     readonly rho: number;
@@ -140,7 +146,12 @@ function solve(inputs: InputValues): Solution {
       );
     } else {
       angleOut = angle;
-      working.add('angle', { h, angle, d });
+      working.add('angle', {
+        h,
+        angle,
+        d,
+        delta: meniscusCorrection({ diameter: d, contactAngleDeg: angle }),
+      });
       const poor = poorlyDetermined(angle, 'rise', ['rise', 'surfaceTension'], 'solved');
       if (poor !== null) warnings.push(poor);
     }

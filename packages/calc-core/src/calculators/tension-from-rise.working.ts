@@ -1,7 +1,6 @@
 // The tension-from-rise calculator's working and assumptions, written from the notes its solve
 // records (tension-from-rise.ts): carried by its texts, so the widget's first flight has none of
 // this text.
-import { meniscusCorrection } from '../formulas/capillary.js';
 import { q } from './shared.js';
 import { capillaryLengthStep, gravityAssumption } from './shared-working.js';
 import type { TensionFromRiseAssumed, TensionFromRiseNotes } from './tension-from-rise.js';
@@ -41,12 +40,12 @@ const steps: StepWriters<TensionFromRiseNotes> = {
       source: RAYLEIGH,
     },
   ],
-  angle: ({ h, angle, d }) => [
+  angle: ({ h, angle, delta }) => [
     {
       id: 'solved',
       label: 'Contact angle',
       formula: 'θ such that h = 4·σ·cos θ / (ρ·g·d) − δ(θ), solved by bisection over 0–90°',
-      substituted: `h = ${q(h, 'm')}: θ = ${q(angle, 'deg')}, δ(θ) = ${q(meniscusCorrection({ diameter: d, contactAngleDeg: angle }), 'm')}`,
+      substituted: `h = ${q(h, 'm')}: θ = ${q(angle, 'deg')}, δ(θ) = ${q(delta, 'm')}`,
       value: angle,
       unit: 'deg',
       source: "Jurin's law with Rayleigh's meniscus correction (its geometry for θ > 0 derived here)",

@@ -97,10 +97,15 @@ export interface OutputDefinition {
   readonly display?: Partial<Readonly<Record<UnitSystemId, UnitId>>>;
 }
 
-/** A validity check a calculator can raise: stable code, and what it means in general. */
+/**
+ * A validity check a calculator can raise: stable code, and what it means in general. A whole
+ * calculator (the registry's) has every summary; its core carries only the summaries the first view
+ * can show (`answer.ts`'s headline gives the one of a warning that withholds its output), and its
+ * texts carry them all.
+ */
 export interface WarningDefinition {
   readonly code: string;
-  readonly summary: string;
+  readonly summary?: string;
 }
 
 export interface Caution {
@@ -265,6 +270,13 @@ export interface CalculatorTexts {
   readonly cautions: readonly Caution[];
   readonly references: readonly Reference[];
   /**
+   * The core's warnings, in its order, each with its summary: joined with the core they take the
+   * place of its list, whose summaries are only those of the warnings that withhold an output.
+   * Absent where the core carries every summary itself (one whose texts would otherwise fetch a
+   * shared module for it, at more cost to the first flight than the summaries save).
+   */
+  readonly warnings?: readonly WarningDefinition[];
+  /**
    * Writes the working and assumptions from a solution's notes (`<id>.working.ts`): the first
    * flight carries none of it. Every calculator's texts have one; it is optional for a definition
    * a widget makes from the core alone, which `runCalculation` is then given it beside.
@@ -273,7 +285,9 @@ export interface CalculatorTexts {
 }
 
 /** A whole calculator: its core and its texts, as calc-core's registry joins them. */
-export interface CalculatorDefinition extends CalculatorCore, CalculatorTexts {}
+export interface CalculatorDefinition extends CalculatorCore, CalculatorTexts {
+  readonly warnings: readonly WarningDefinition[];
+}
 
 /**
  * A result's numbers without its working, assumptions or input hash (`compute`): what a widget

@@ -7,6 +7,7 @@ import {
   wilhelmyRodForce,
   wilhelmyRodSurfaceTension,
   wilhelmySurfaceTension,
+  ZUIDEMA_WATERS,
 } from '../formulas/tensiometry.js';
 import { computer } from './engine.js';
 import { runner } from './run.js';
@@ -62,12 +63,17 @@ export interface WettingForceNotes {
     readonly drho: number;
     readonly g: number;
     readonly x: RingCorrection;
+    /** The range of the ring tables and the fit's coefficients (the working prints them). */
+    readonly table: typeof RING_TABLE_RANGE;
+    readonly fit: typeof ZUIDEMA_WATERS;
   };
   readonly ringFactor: {
     readonly radicand: number;
     readonly root: number;
     readonly factor: number;
     readonly apparent: number;
+    /** The fit's constant term. */
+    readonly base: number;
   };
   readonly perimeter: {
     readonly isPlate: boolean;
@@ -130,13 +136,14 @@ function solve(inputs: InputValues): Solution {
     const applies = x.inTableRange && x.factor !== null;
     factor = applies ? x.factor : null;
     sigma = applies && x.factor !== null ? x.factor * x.apparent : null;
-    working.add('ring', { F, R, r, drho, g, x });
+    working.add('ring', { F, R, r, drho, g, x, table: t, fit: ZUIDEMA_WATERS });
     if (applies && x.root !== null && x.factor !== null) {
       working.add('ringFactor', {
         radicand: x.radicand,
         root: x.root,
         factor: x.factor,
         apparent: x.apparent,
+        base: ZUIDEMA_WATERS.base,
       });
     }
     if (!applies) {
@@ -345,28 +352,16 @@ export const calculator: CalculatorCore = {
     missing: 'corrected surface tension',
   },
   warnings: [
-    {
-      code: 'CONTACT_ANGLE_NOT_ZERO',
-      summary: 'A non-zero contact angle is assumed for a plate or rod reading.',
-    },
+    { code: 'CONTACT_ANGLE_NOT_ZERO' },
     CONTACT_ANGLE_NEAR_90,
-    {
-      code: 'RING_BELOW_ASTM_SIZE',
-      summary: 'The ring is smaller than the 40 mm circumference of ASTM D971.',
-    },
+    { code: 'RING_BELOW_ASTM_SIZE' },
     {
       code: 'RING_OUTSIDE_CORRECTION_RANGE',
       summary:
         'R/r or R³/V is outside the range of the Harkins & Jordan tables (from memory: R/r 30–80, R³/V 0.3–4.5), or the radicand is negative: no corrected value is given.',
     },
-    {
-      code: 'RING_FACTOR_OUTSIDE_TABLES',
-      summary: 'The correction factor is outside the 0.75–1.05 band of the tables (from memory).',
-    },
-    {
-      code: 'DENSITY_DIFFERENCE_IMPLAUSIBLE',
-      summary: 'A density difference below 100 kg/m³: against air, likely a g/mL value typed as kg/m³.',
-    },
+    { code: 'RING_FACTOR_OUTSIDE_TABLES' },
+    { code: 'DENSITY_DIFFERENCE_IMPLAUSIBLE' },
   ],
   solve,
 };

@@ -1,6 +1,5 @@
 // The wetting-force calculator's working and assumptions, written from the notes its solve records
 // (wetting-force.ts): carried by its texts, so the widget's first flight has none of this text.
-import { RING_TABLE_RANGE, ZUIDEMA_WATERS } from '../formulas/tensiometry.js';
 import { STANDARD_GRAVITY } from '../units.js';
 import { fmt, q } from './shared.js';
 import { coef, gravityAssumption } from './shared-working.js';
@@ -8,9 +7,8 @@ import type { Explain, StepWriters } from './types.js';
 import type { WettingForceAssumed, WettingForceNotes } from './wetting-force.js';
 
 const steps: StepWriters<WettingForceNotes> = {
-  ring: ({ F, R, r, drho, g, x }) => {
-    const t = RING_TABLE_RANGE;
-    const { k, c, m } = ZUIDEMA_WATERS;
+  ring: ({ F, R, r, drho, g, x, table: t, fit }) => {
+    const { k, c, m } = fit;
     return [
       {
         id: 'apparent',
@@ -59,8 +57,7 @@ const steps: StepWriters<WettingForceNotes> = {
       },
     ];
   },
-  ringFactor: ({ radicand, root, factor, apparent }) => {
-    const { base } = ZUIDEMA_WATERS;
+  ringFactor: ({ radicand, root, factor, apparent, base }) => {
     return [
       {
         id: 'ring-factor',

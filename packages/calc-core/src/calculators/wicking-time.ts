@@ -1,4 +1,4 @@
-import { capillaryLength, jurinRise } from '../formulas/capillary.js';
+import { capillaryLength, jurinRise } from '../formulas/jurin.js';
 import { bosanquetTime, gravityRestrainedRiseTime, gravityShape, washburnTime } from '../formulas/wicking.js';
 import { bandOver, computer } from './engine.js';
 import { runner } from './run.js';
@@ -327,10 +327,7 @@ export const calculator: CalculatorCore = {
       code: 'PORE_TOO_WIDE',
       summary: 'The pore radius is at least the capillary length: no time is given.',
     },
-    {
-      code: 'GRAVITY_NOT_NEGLIGIBLE',
-      summary: 'Gravity lengthens the time by more than 5 % (our threshold); use the time with gravity.',
-    },
+    { code: 'GRAVITY_NOT_NEGLIGIBLE' },
   ],
   solve,
 };

@@ -1,56 +1,14 @@
 import { CalcInputError } from '../errors.js';
-import { contactAngle, cosDeg, finiteResult, nonNegative, positive } from '../guards.js';
+import { contactAngle, cosDeg, finiteResult, positive } from '../guards.js';
 import { STANDARD_GRAVITY } from '../units.js';
 
 // Contact angles and surface tensions read backwards from a measurement: the force on a Wilhelmy
-// plate with the buoyancy of its immersed part, and the rise in a narrow tube with Rayleigh's
-// first-order meniscus correction. All SI: N, N/m, kg/m³, m, m/s².
+// plate with the buoyancy of its immersed part (plate-force.ts), and the rise in a narrow tube with
+// Rayleigh's first-order meniscus correction. All SI: N, N/m, kg/m³, m, m/s².
 
-export interface PlateForceArgs {
-  /** Measured force on the plate, net of its weight in air (tare), N; positive pulls the plate down. */
-  readonly force: number;
-  /** N/m */
-  readonly surfaceTension: number;
-  /** Liquid density, kg/m³ */
-  readonly density: number;
-  /** m */
-  readonly plateWidth: number;
-  /** m */
-  readonly plateThickness: number;
-  /** Depth of the plate's lower edge below the undisturbed liquid surface, m (0 at the zero-depth reading). */
-  readonly immersionDepth: number;
-  /** m/s²; standard gravity when absent */
-  readonly gravity?: number;
-}
-
-/** The terms of the plate's force balance, each worth showing on a calculation sheet. */
-export interface PlateForceTerms {
-  /** Wetted perimeter P = 2(w + t), m. */
-  readonly perimeter: number;
-  /** Buoyancy of the immersed part, ρ·g·w·t·h, N. */
-  readonly buoyancy: number;
-  /** cos θ = (F + ρ·g·w·t·h) / (σ·P), unbounded: outside [−1, 1] no angle exists. */
-  readonly cosTheta: number;
-}
-
-/**
- * Wilhelmy plate read for the contact angle, with buoyancy: the measured force is
- * F = σ·P·cos θ − ρ·g·w·t·h, so cos θ = (F + ρ·g·w·t·h) / (σ·P), P = 2(w + t).
- * The returned cos θ is not clamped: a value outside [−1, 1] means the force is more than the
- * surface tension can give (a surface tension set too low, or a tare error), and no angle exists.
- */
-export function plateForceTerms(args: PlateForceArgs): PlateForceTerms {
-  const force = finiteResult('force', args.force);
-  const sigma = positive('surfaceTension', args.surfaceTension);
-  const rho = positive('density', args.density);
-  const w = positive('plateWidth', args.plateWidth);
-  const t = nonNegative('plateThickness', args.plateThickness);
-  const h = nonNegative('immersionDepth', args.immersionDepth);
-  const g = positive('gravity', args.gravity ?? STANDARD_GRAVITY);
-  const perimeter = 2 * (w + t);
-  const buoyancy = rho * g * w * t * h;
-  return { perimeter, buoyancy, cosTheta: finiteResult('cos θ', (force + buoyancy) / (sigma * perimeter)) };
-}
+// The plate's force balance is in plate-force.ts, apart, so that tension-from-rise (which reads its
+// angle from a rise) does not carry it; re-exported here as before.
+export { plateForceTerms, type PlateForceArgs, type PlateForceTerms } from './plate-force.js';
 
 /** Degrees, 0–180, from a cosine inside [−1, 1]. */
 export function acosDeg(cos: number): number {
