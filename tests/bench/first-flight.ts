@@ -10,7 +10,8 @@
 // A benchmark, not a test: it prints figures and asserts nothing. Needs the built tree
 // (`npm run build`) and the test database's DB_* variables exported (see DEVELOPERS.md):
 //   npm run bench -w tests            (BENCH_PORT, default 5670; the firm's site on BENCH_PORT + 1;
-//                                      BENCH_ONLY=<calculator id>,… measures those widgets alone)
+//                                      BENCH_ONLY=<calculator id>,… measures those widgets alone;
+//                                      BENCH_PROFILE=1 prints where a click's CPU time went)
 import { readFileSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import { loadavg } from 'node:os';
@@ -201,15 +202,60 @@ const typeAndReady = (factor: number) => `(() => {
 })()`;
 
 /** Typing to result, `rounds` times (alternately up and down) at the CPU rate in force: the medians. */
-async function typing(page: Page, rounds: number): Promise<Typing> {
+/** A CPU profile's nodes, as the DevTools protocol gives them. */
+interface ProfileNode {
+  id: number;
+  callFrame: { functionName: string; url: string; lineNumber: number };
+}
+
+/**
+ * BENCH_PROFILE: the CPU profile of a round's click until its report's answer, self time summed per
+ * chunk file (the engine's compute, Preact's render in the app chunk, the working in extras), the
+ * browser's own calls from script (DOM, fetch) and the rest: "(program)" is the browser's work
+ * outside script (style, layout, paint), "(idle)" the main thread waiting.
+ */
+function printProfile(
+  rate: number,
+  profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] },
+): void {
+  const byId = new Map(profile.nodes.map((n) => [n.id, n] as const));
+  const self = new Map<string, number>();
+  profile.samples.forEach((id, i) => {
+    const frame = byId.get(id)!.callFrame;
+    const file = frame.url.split('/').pop() ?? '';
+    const key =
+      file !== ''
+        ? file.replace(/-[\w-]{8}\.js$/, '')
+        : frame.functionName.startsWith('(')
+          ? frame.functionName
+          : '(browser calls from script)';
+    self.set(key, (self.get(key) ?? 0) + (profile.timeDeltas[i] ?? 0) / 1000);
+  });
+  console.error(
+    `  profile at CPU ${rate}×: ` +
+      [...self]
+        .sort((a, b) => b[1] - a[1])
+        .map(([key, msSelf]) => `${key} ${msSelf.toFixed(1)} ms`)
+        .join(', '),
+  );
+}
+
+async function typing(page: Page, cdp: CDPSession, rate: number, rounds: number): Promise<Typing> {
   const all: Typing[] = [];
   for (let i = 0; i < rounds; i++) {
     const { x, y } = (await page.evaluate(typeAndReady(i % 2 === 0 ? 1.5 : 1 / 1.5))) as {
       x: number;
       y: number;
     };
+    const profiling = process.env.BENCH_PROFILE && i === 0;
+    if (profiling) {
+      await cdp.send('Profiler.enable');
+      await cdp.send('Profiler.setSamplingInterval', { interval: 100 });
+      await cdp.send('Profiler.start');
+    }
     await page.mouse.click(x, y);
     all.push((await page.evaluate('window.__typed')) as Typing);
+    if (profiling) printProfile(rate, (await cdp.send('Profiler.stop')).profile as never);
     for (const f of await page.evaluate(() => (window as unknown as { __frames: string[] }).__frames))
       if (process.env.BENCH_DEBUG) console.error(`  long frame ${f}`);
     if (process.env.BENCH_DEBUG) console.error(JSON.stringify(all[all.length - 1]));
@@ -292,9 +338,9 @@ async function measure(browser: Browser, path: string, expected: number, types: 
   let slow: Typing | null = null;
   let fast: Typing | null = null;
   if (types) {
-    slow = await typing(page, TYPING_ROUNDS);
+    slow = await typing(page, cdp, CPU_SLOWDOWN, TYPING_ROUNDS);
     await cdp.send('Emulation.setCPUThrottlingRate', { rate: 1 });
-    fast = await typing(page, TYPING_ROUNDS);
+    fast = await typing(page, cdp, 1, TYPING_ROUNDS);
   }
   const heights = await page.evaluate(() =>
     ((window as unknown as { __heights?: string[] }).__heights ?? []).join(' '),
