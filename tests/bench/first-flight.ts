@@ -9,15 +9,18 @@
 //
 // A benchmark, not a test: it prints figures and asserts nothing. Needs the built tree
 // (`npm run build`) and the test database's DB_* variables exported (see DEVELOPERS.md):
-//   npm run bench -w tests            (BENCH_PORT, default 5670; the firm's site on BENCH_PORT + 1)
+//   npm run bench -w tests            (BENCH_PORT, default 5670; the firm's site on BENCH_PORT + 1;
+//                                      BENCH_ONLY=<calculator id>,… measures those widgets alone;
+//                                      BENCH_PROFILE=1 prints where a click's CPU time went)
 import { readFileSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
+import { loadavg } from 'node:os';
 import { calculators } from '@wickstone/calc-core';
 import { defaultWidgetSettings, type WidgetSettings } from '@wickstone/contracts';
 import { createApp } from '@wickstone/server/app';
 import { createLogger } from '@wickstone/server/logger';
 import { createTestDatabase, seedOrgWithTeam, TestClient } from '@wickstone/server/testing';
-import type { Browser, CDPSession } from 'playwright-core';
+import type { Browser, CDPSession, Page } from 'playwright-core';
 import { launchBrowser } from '../support/browser.js';
 
 const appPort = Number(process.env.BENCH_PORT ?? 5670);
@@ -46,6 +49,19 @@ const template = readFileSync(new URL('../../scripts/demo-site/index.html', impo
 const sitePage = (one: string, two: string) =>
   template.replace('{{WIDGET_1}}', one).replace('{{WIDGET_2}}', two);
 
+interface Typing {
+  /** From the click to the frame presented after its handlers (0: under 16 ms, unreported). */
+  shown: number | null;
+  /** Whether the new result was in that frame (every round). */
+  inFirst: boolean;
+  /** From the click to the frame after the one with the full run (the working) and its report sent. */
+  full: number | null;
+  /** From the click to the frame after the one with the report's answer. */
+  stored: number | null;
+}
+
+const TYPING_ROUNDS = 3;
+
 interface Figures {
   requests: number;
   bytes: number;
@@ -55,7 +71,9 @@ interface Figures {
   /** When the full widget (the app chunk) had taken over every first view; null if it never did. */
   fullMs: number | null;
   cls: number;
-  typingMs: number | null;
+  /** Typing to result with the CPU four times slower, then at full speed; null without typing. */
+  slow: Typing | null;
+  fast: Typing | null;
   runtimeLoads: number;
   /** The shipped font: not fetched, or fetched before or after the calculator was usable. */
   font: 'none' | 'before' | 'after';
@@ -115,28 +133,147 @@ const pageProbe = (expected: number) => `
   requestAnimationFrame(full);
 `;
 
-/** Types into the first widget, presses Calculate and resolves with the milliseconds until the new result is painted. */
-const typeAndWait = `(async () => {
+/**
+ * Types into the first widget and readies the measuring; the bench then presses "Work it out" with
+ * a real (trusted) click and `typedWait` resolves with what the visitor saw, in milliseconds from
+ * the click's own time stamp: `shown`, the frame presented with the new result (the click's event
+ * timing: its duration runs to the next frame presented after its handlers, which is the result's
+ * frame when the result is rendered before they end; Chromium reports it from 16 ms, in steps of
+ * 8 ms; `inFirst` says whether the result was in that frame); `full`, the DOM holds the full run
+ * (the working, once the extras are here) and a new run id (its report sent) and the next frame has
+ * begun; `stored`, likewise for the report's answer (the emulated network's round trip in it).
+ * `window.__frames` keeps the long animation frames meanwhile (what ran, when layout began), for
+ * BENCH_DEBUG.
+ */
+const typeAndReady = (factor: number) => `(() => {
   const root = document.querySelector('wickstone-widget').shadowRoot;
   const control = [...root.querySelectorAll('input[data-input]')].find((i) => i.type !== 'radio' && i.type !== 'checkbox' && !i.readOnly && Number(i.value) > 0);
-  const before = root.querySelector('[data-result]') ? root.querySelector('[data-result]').outerHTML : '';
-  const t0 = performance.now();
-  control.value = String(Number(control.value) * 1.5);
-  control.dispatchEvent(new Event('input', { bubbles: true }));
-  root.querySelector('[data-wickstone="calculate"]').click();
-  await new Promise((resolve) => {
-    const check = () => {
-      const now = root.querySelector('[data-result]:not([data-stale])');
-      if (now && now.outerHTML !== before) resolve();
-      else requestAnimationFrame(check);
-    };
-    check();
+  const result = () => root.querySelector('[data-result]');
+  const before = result() ? result().outerHTML : '';
+  const runBefore = result() ? result().getAttribute('data-run-id') : null;
+  const since = performance.now();
+  const frames = [];
+  const loaf = new PerformanceObserver((list) => frames.push(...list.getEntries()));
+  try { loaf.observe({ type: 'long-animation-frame' }); } catch {}
+  const events = [];
+  const timing = new PerformanceObserver((list) => events.push(...list.getEntries()));
+  timing.observe({ type: 'event', durationThreshold: 16 });
+  const at = { shown: null, full: null, stored: null };
+  const nextFrame = (key) => requestAnimationFrame(() => { at[key] = performance.now(); });
+  const observer = new MutationObserver(() => {
+    const now = result();
+    if (!now || now.hasAttribute('data-stale')) return;
+    if (at.shown === null && now.outerHTML !== before) at.shown = performance.now();
+    const run = now.getAttribute('data-run-id');
+    if (at.full === null && run && run !== runBefore) { at.full = -1; nextFrame('full'); }
+    if (at.full !== null && at.stored === null && /^(stored|failed)$/.test(now.getAttribute('data-report') || '')) { at.stored = -1; nextFrame('stored'); }
   });
-  await new Promise((r) => requestAnimationFrame(r));
-  return performance.now() - t0;
+  observer.observe(root, { subtree: true, childList: true, attributes: true, characterData: true });
+  control.value = String(Number(control.value) * ${factor});
+  control.dispatchEvent(new Event('input', { bubbles: true }));
+  const button = root.querySelector('[data-wickstone="calculate"]');
+  button.scrollIntoView({ block: 'center' });
+  window.__typed = (async () => {
+    const deadline = performance.now() + 20000;
+    const click = () => events.find((e) => e.name === 'click' && e.startTime >= since);
+    const settled = () => at.shown !== null && at.full > 0 && at.stored > 0 && click();
+    while (!settled() && performance.now() < deadline) await new Promise((r) => setTimeout(r, 20));
+    // Event timing is reported after the frame: give a click under 16 ms its chance to be missing.
+    await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 100)));
+    observer.disconnect();
+    loaf.disconnect();
+    timing.disconnect();
+    const c = click();
+    const t0 = c ? c.startTime : null;
+    window.__frames = t0 === null ? [] : frames.filter((e) => e.startTime + e.duration >= t0).map((e) =>
+      Math.round(e.startTime - t0) + '+' + Math.round(e.duration) + ' ms (render at ' + Math.round(e.renderStart - t0) +
+      ', style/layout at ' + Math.round(e.styleAndLayoutStart - t0) + '): ' +
+      e.scripts.map((s) => (s.invoker || s.invokerType) + ' ' + Math.round(s.duration) + ' ms').join(', '));
+    return {
+      // No click entry: it took under 16 ms (or it was never reported: then the others are null too).
+      shown: c ? c.duration : at.shown === null ? null : 0,
+      inFirst: c ? at.shown !== null && at.shown <= c.processingEnd : at.shown !== null,
+      full: t0 !== null && at.full > 0 ? at.full - t0 : null,
+      stored: t0 !== null && at.stored > 0 ? at.stored - t0 : null,
+    };
+  })();
+  const r = button.getBoundingClientRect();
+  return { x: r.left + r.width / 2, y: r.top + r.height / 2 };
 })()`;
 
-async function measure(browser: Browser, path: string, expected: number, typing: boolean): Promise<Figures> {
+/** Typing to result, `rounds` times (alternately up and down) at the CPU rate in force: the medians. */
+/** A CPU profile's nodes, as the DevTools protocol gives them. */
+interface ProfileNode {
+  id: number;
+  callFrame: { functionName: string; url: string; lineNumber: number };
+}
+
+/**
+ * BENCH_PROFILE: the CPU profile of a round's click until its report's answer, self time summed per
+ * chunk file (the engine's compute, Preact's render in the app chunk, the working in extras), the
+ * browser's own calls from script (DOM, fetch) and the rest: "(program)" is the browser's work
+ * outside script (style, layout, paint), "(idle)" the main thread waiting.
+ */
+function printProfile(
+  rate: number,
+  profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] },
+): void {
+  const byId = new Map(profile.nodes.map((n) => [n.id, n] as const));
+  const self = new Map<string, number>();
+  profile.samples.forEach((id, i) => {
+    const frame = byId.get(id)!.callFrame;
+    const file = frame.url.split('/').pop() ?? '';
+    const key =
+      file !== ''
+        ? file.replace(/-[\w-]{8}\.js$/, '')
+        : frame.functionName.startsWith('(')
+          ? frame.functionName
+          : '(browser calls from script)';
+    self.set(key, (self.get(key) ?? 0) + (profile.timeDeltas[i] ?? 0) / 1000);
+  });
+  console.error(
+    `  profile at CPU ${rate}×: ` +
+      [...self]
+        .sort((a, b) => b[1] - a[1])
+        .map(([key, msSelf]) => `${key} ${msSelf.toFixed(1)} ms`)
+        .join(', '),
+  );
+}
+
+async function typing(page: Page, cdp: CDPSession, rate: number, rounds: number): Promise<Typing> {
+  const all: Typing[] = [];
+  for (let i = 0; i < rounds; i++) {
+    const { x, y } = (await page.evaluate(typeAndReady(i % 2 === 0 ? 1.5 : 1 / 1.5))) as {
+      x: number;
+      y: number;
+    };
+    const profiling = process.env.BENCH_PROFILE && i === 0;
+    if (profiling) {
+      await cdp.send('Profiler.enable');
+      await cdp.send('Profiler.setSamplingInterval', { interval: 100 });
+      await cdp.send('Profiler.start');
+    }
+    await page.mouse.click(x, y);
+    all.push((await page.evaluate('window.__typed')) as Typing);
+    if (profiling) printProfile(rate, (await cdp.send('Profiler.stop')).profile as never);
+    for (const f of await page.evaluate(() => (window as unknown as { __frames: string[] }).__frames))
+      if (process.env.BENCH_DEBUG) console.error(`  long frame ${f}`);
+    if (process.env.BENCH_DEBUG) console.error(JSON.stringify(all[all.length - 1]));
+  }
+  const median = (pick: (t: Typing) => number | null): number | null => {
+    const v = all.map(pick).filter((n): n is number => n !== null && n >= 0);
+    v.sort((a, b) => a - b);
+    return v.length === 0 ? null : v[Math.floor(v.length / 2)]!;
+  };
+  return {
+    shown: median((t) => t.shown),
+    inFirst: all.every((t) => t.inFirst),
+    full: median((t) => t.full),
+    stored: median((t) => t.stored),
+  };
+}
+
+async function measure(browser: Browser, path: string, expected: number, types: boolean): Promise<Figures> {
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   const page = await context.newPage();
   const cdp: CDPSession = await context.newCDPSession(page);
@@ -198,9 +335,12 @@ async function measure(browser: Browser, path: string, expected: number, typing:
   const cls = await page.evaluate(() => (window as unknown as { __cls: number }).__cls);
   for (const shift of await page.evaluate(() => (window as unknown as { __shifts: string[] }).__shifts))
     log(`layout shift ${shift}`);
-  let typingMs: number | null = null;
-  if (typing) {
-    typingMs = (await page.evaluate(typeAndWait)) as number;
+  let slow: Typing | null = null;
+  let fast: Typing | null = null;
+  if (types) {
+    slow = await typing(page, cdp, CPU_SLOWDOWN, TYPING_ROUNDS);
+    await cdp.send('Emulation.setCPUThrottlingRate', { rate: 1 });
+    fast = await typing(page, cdp, 1, TYPING_ROUNDS);
   }
   const heights = await page.evaluate(() =>
     ((window as unknown as { __heights?: string[] }).__heights ?? []).join(' '),
@@ -217,7 +357,8 @@ async function measure(browser: Browser, path: string, expected: number, typing:
     usableMs,
     fullMs,
     cls,
-    typingMs,
+    slow,
+    fast,
     runtimeLoads: total.filter(([u]) => /runtime/.test(u)).length,
     font: atUsable.some(([u]) => u.endsWith('.woff2'))
       ? 'before'
@@ -290,17 +431,53 @@ try {
   console.log(
     `first flight, Chromium over ${NETWORK.latency} ms RTT at ${(NETWORK.downloadThroughput / 1024).toFixed(0)} KB/s, CPU ${CPU_SLOWDOWN}× slower; bytes as sent (compressed), from the app's origin`,
   );
-  console.log(`baseline: the firm's page with no widget, loaded in ${ms(base.usableMs)}`);
   console.log(
-    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'full'.padStart(9)}${'CLS'.padStart(8)}${'type→result'.padStart(13)}${'runtimes'.padStart(10)}${'font'.padStart(8)}   shown/held px`,
+    `baseline: the firm's page with no widget, loaded in ${ms(base.usableMs)}; load average ${loadavg()
+      .map((n) => n.toFixed(2))
+      .join(' ')}`,
+  );
+  console.log(
+    `${'page'.padEnd(24)}${'req→usable'.padStart(11)}${'bytes→usable'.padStart(14)}${'req idle'.padStart(10)}${'bytes idle'.padStart(12)}${'usable'.padStart(10)}${'× page'.padStart(8)}${'full'.padStart(9)}${'CLS'.padStart(8)}${'runtimes'.padStart(10)}${'font'.padStart(8)}   shown/held px`,
   );
   const row = (name: string, f: Figures) =>
     console.log(
-      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${ms(f.fullMs).padStart(9)}${f.cls.toFixed(3).padStart(8)}${ms(f.typingMs).padStart(13)}${String(f.runtimeLoads).padStart(10)}${f.font.padStart(8)}   ${f.heights}`,
+      `${name.padEnd(24)}${String(f.requests).padStart(11)}${kb(f.bytes).padStart(14)}${String(f.totalRequests).padStart(10)}${kb(f.totalBytes).padStart(12)}${ms(f.usableMs).padStart(10)}${(f.usableMs / base.usableMs).toFixed(2).padStart(8)}${ms(f.fullMs).padStart(9)}${f.cls.toFixed(3).padStart(8)}${String(f.runtimeLoads).padStart(10)}${f.font.padStart(8)}   ${f.heights}`,
     );
-  for (const name of snippets.keys())
-    row(name, await measure(browser, `/one/${encodeURIComponent(name)}`, 1, true));
-  row('two widgets (demo page)', await measure(browser, '/', 2, true));
+  const typed: [string, Figures][] = [];
+  // BENCH_ONLY=<name>,<name>: those widgets alone (and no demo page), to look at one closely.
+  const only = process.env.BENCH_ONLY?.split(',') ?? null;
+  for (const name of snippets.keys()) {
+    if (only && !only.includes(name)) continue;
+    const f = await measure(browser, `/one/${encodeURIComponent(name)}`, 1, true);
+    row(name, f);
+    typed.push([name, f]);
+  }
+  if (!only) {
+    const demo = await measure(browser, '/', 2, true);
+    row('two widgets (demo page)', demo);
+    typed.push(['two widgets (demo page)', demo]);
+  }
+
+  // Typing to result once the full widget has taken over (the first widget on the page; medians of
+  // the rounds), from a trusted click's time stamp: "shown" is what the visitor sees, the frame
+  // presented after the click (1st: the new result was in it, every round; later: not); "working" the
+  // frame after the full run's working and its run report; "stored" after the report's answer.
+  const shown = (t: Typing | null) =>
+    t === null || t.shown === null
+      ? '—'
+      : `${t.shown === 0 ? '<16 ms' : ms(t.shown)} ${t.inFirst ? '(1st)' : '(later)'}`;
+  console.log(
+    `typing to result, median of ${TYPING_ROUNDS}; CPU ${CPU_SLOWDOWN}× slower, then full speed; load average ${loadavg()
+      .map((n) => n.toFixed(2))
+      .join(' ')}`,
+  );
+  console.log(
+    `${'page'.padEnd(24)}${`shown ${CPU_SLOWDOWN}×`.padStart(16)}${`working ${CPU_SLOWDOWN}×`.padStart(12)}${`stored ${CPU_SLOWDOWN}×`.padStart(12)}${'shown 1×'.padStart(16)}${'working 1×'.padStart(12)}${'stored 1×'.padStart(12)}`,
+  );
+  for (const [name, f] of typed)
+    console.log(
+      `${name.padEnd(24)}${shown(f.slow).padStart(16)}${ms(f.slow?.full ?? null).padStart(12)}${ms(f.slow?.stored ?? null).padStart(12)}${shown(f.fast).padStart(16)}${ms(f.fast?.full ?? null).padStart(12)}${ms(f.fast?.stored ?? null).padStart(12)}`,
+    );
 
   // BENCH_SHOTS=<dir>: the demo page at desktop and phone widths, unthrottled: demo-<width>-first.png
   // with the first view only (the full widget's chunk held back), demo-<width>.png once the full

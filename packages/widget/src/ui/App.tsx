@@ -8,7 +8,7 @@ import {
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { EmbedWidget } from '@wickstone/contracts';
-import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
+import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'preact/hooks';
 import {
   applicable,
   collectInputs,
@@ -34,6 +34,7 @@ import {
   type ShownOutcome,
   type ViewState,
 } from '../lib/view.js';
+import { afterThisPaint } from './after-paint.js';
 import { Field } from './Field.js';
 import { useExtras } from '../lazy.js';
 import type { LeadTarget } from './LeadForm.js';
@@ -153,10 +154,13 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
   };
 
   // The working and the run report need the full run: made once the answer is on screen (and the
-  // full run has arrived with the texts), so typing to answer costs compute's numbers alone.
-  useEffect(() => {
+  // full run has arrived with the texts), so typing to answer costs compute's numbers alone. A
+  // layout effect only schedules it, from the render that put the answer in the DOM: the full run
+  // starts in the task after that frame's paint, never before it (a passive effect may run before
+  // the paint when the frame is late) nor inside the next frame (it would hold that frame back).
+  useLayoutEffect(() => {
     if (outcome === null || outcome.full !== null || run === null) return;
-    const id = requestAnimationFrame(() => {
+    return afterThisPaint(() => {
       let full: CalculationResult;
       try {
         full = run(outcome.raw);
@@ -177,7 +181,6 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
         setReport((current) => (current === 'pending' ? (ok ? 'stored' : 'failed') : current)),
       );
     });
-    return () => cancelAnimationFrame(id);
   }, [outcome, run, reporter]);
 
   const calculate = (e: Event): void => {
