@@ -64,8 +64,12 @@ export const FLIGHT_GOAL = 14 * 1024;
  * 21 KB with the units, each calculator's own working out of its engine (`<id>.working.js`, in the
  * texts chunk) and the first view's and loader's trims together (largest: wetting-force, 20,732;
  * smallest: rising-damp-height, 16,091).
+ * 19.25 KB when the later chunks' SRI table moved from each engine to the runtime (the app chunk's
+ * hash) and the app chunk (every other's), the loader was trimmed, calc-core's developer
+ * self-checks left the release, the liquids' citations and the warnings' summaries the first view
+ * never shows moved to the texts (largest: wetting-force, 19,510; smallest: rising-damp-height, 15,142).
  */
-export const FLIGHT_LIMIT = 21 * 1024;
+export const FLIGHT_LIMIT = 19.25 * 1024;
 
 const ENGINE = 'virtual:wickstone-engine/';
 const TEXTS = 'virtual:wickstone-texts/';
