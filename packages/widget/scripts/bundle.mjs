@@ -516,6 +516,7 @@ export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
       hasTexts: Object.keys(o.modules).some((id) => TEXTS_MODULE.test(id)),
       hasPreact: Object.keys(o.modules).some((id) => PREACT.test(id)),
       hasWholeUnits: Object.keys(o.modules).some((id) => id === UNIT_TABLE),
+      calcCode: calcCoreCode(o),
     });
     if (o.isEntry && o.name === 'extras') extras = o.fileName;
     else if (o.isEntry && o.name === 'app') app = o.fileName;
@@ -529,6 +530,24 @@ export async function buildChunks(calculatorIds, { unitSubsets = true } = {}) {
   bundleEngines(files, engines);
   checkWholeUnits(files, { engines, texts, extras, tables, unitSubsets });
   return { files, engines, texts, extras, tables, app };
+}
+
+/** calc-core's modules in a chunk, as the chunk carries them (minified, before the chunk is wrapped). */
+const CALC_CORE_MODULE = /[\\/]calc-core[\\/]dist[\\/]/;
+function calcCoreCode(chunk) {
+  return Object.entries(chunk.modules)
+    .filter(([id]) => CALC_CORE_MODULE.test(id))
+    .map(([, m]) => m.code ?? '')
+    .join('\n');
+}
+
+/**
+ * What computes in a first flight, alone: calc-core's code in the chunks `flight` lists (the
+ * calculator's core, the shared inputs, units, validation and the headline), as one file, brotli.
+ * The rest of the first flight is the loader and the first view (form, answer, styles, look).
+ */
+export function calcCoreBrotli(files, flight) {
+  return measure(flight.map((f) => files.get(f).calcCode ?? '').join('\n')).brotliBytes;
 }
 
 /**
@@ -571,6 +590,7 @@ function bundleEngines(files, engines) {
         hasTexts: parts.some((p) => p.hasTexts),
         hasPreact: parts.some((p) => p.hasPreact),
         hasWholeUnits: parts.some((p) => p.hasWholeUnits),
+        calcCode: parts.map((p) => p.calcCode).join('\n'),
       },
     ];
   });
