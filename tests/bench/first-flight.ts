@@ -46,8 +46,12 @@ function listen(server: Server, port: number): Promise<void> {
 }
 
 const template = readFileSync(new URL('../../scripts/demo-site/index.html', import.meta.url), 'utf8');
+/** The demo page with `one` and `two` in its first two widget places and its other places left empty. */
 const sitePage = (one: string, two: string) =>
-  template.replace('{{WIDGET_1}}', one).replace('{{WIDGET_2}}', two);
+  template
+    .replace('{{WIDGET_1}}', one)
+    .replace('{{WIDGET_2}}', two)
+    .replace(/\{\{WIDGET_[A-Z0-9]+\}\}/g, '');
 
 interface Typing {
   /** From the click to the frame presented after its handlers (0: under 16 ms, unreported). */
