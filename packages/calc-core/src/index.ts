@@ -109,13 +109,13 @@ export {
 export { canonicalJson, sha256Hex, type JsonValue } from './hash.js';
 export { computeCalculation, computer, resolveInputs, resultsAgree } from './calculators/engine.js';
 export { runCalculation, runner, hashInputs } from './calculators/run.js';
+export { withTexts } from './join.js';
 export {
   calculators,
   calculatorIds,
   getCalculator,
   calculate,
   compute,
-  withTexts,
   tubeRise as tubeRiseCalculator,
   slotRise as slotRiseCalculator,
   soilCapillaryRise as soilCapillaryRiseCalculator,

@@ -2,6 +2,7 @@ import { CalcInputError } from './errors.js';
 import { calculator as absorptionCoefficientCore } from './calculators/absorption-coefficient.js';
 import { texts as absorptionCoefficientTexts } from './calculators/absorption-coefficient.texts.js';
 import { computeCalculation } from './calculators/engine.js';
+import { withTexts } from './join.js';
 import { runCalculation } from './calculators/run.js';
 import { calculator as contactAngleFromForceCore } from './calculators/contact-angle-from-force.js';
 import { texts as contactAngleFromForceTexts } from './calculators/contact-angle-from-force.texts.js';
@@ -19,38 +20,14 @@ import { calculator as tensionFromRiseCore } from './calculators/tension-from-ri
 import { texts as tensionFromRiseTexts } from './calculators/tension-from-rise.texts.js';
 import { calculator as tubeRiseCore } from './calculators/tube-rise.js';
 import { texts as tubeRiseTexts } from './calculators/tube-rise.texts.js';
-import type {
-  CalculationResult,
-  CalculatorCore,
-  CalculatorDefinition,
-  CalculatorTexts,
-  ComputedResult,
-} from './calculators/types.js';
+import type { CalculationResult, CalculatorDefinition, ComputedResult } from './calculators/types.js';
 import { calculator as wettingForceCore } from './calculators/wetting-force.js';
 import { texts as wettingForceTexts } from './calculators/wetting-force.texts.js';
 import { calculator as wickingTimeCore } from './calculators/wicking-time.js';
 import { texts as wickingTimeTexts } from './calculators/wicking-time.texts.js';
 
-/**
- * A calculator whole: its core (what computes) and its texts (cautions, references, and every
- * warning's summary, in place of the core's list that carries only the headline's).
- * @throws Error when the texts' warnings are not the core's, in its order, with the same summaries
- *   where the core has one (a calc-core bug)
- */
-export function withTexts(core: CalculatorCore, texts: CalculatorTexts): CalculatorDefinition {
-  const warnings = texts.warnings ?? core.warnings;
-  const same =
-    warnings.length === core.warnings.length &&
-    warnings.every(
-      (w, i) =>
-        w.code === core.warnings[i]?.code &&
-        typeof w.summary === 'string' &&
-        (core.warnings[i]?.summary ?? w.summary) === w.summary,
-    );
-  if (!same) throw new Error(`${core.id}: its texts' warnings are not its core's, each with its summary`);
-  return { ...core, ...texts, warnings };
-}
-
+// Each calculator whole: its core joined with its texts by `withTexts` (`join.ts`), the
+// join the widget makes when the texts arrive; a texts module that does not fit its core throws here.
 export const tubeRise: CalculatorDefinition = withTexts(tubeRiseCore, tubeRiseTexts);
 export const slotRise: CalculatorDefinition = withTexts(slotRiseCore, slotRiseTexts);
 export const soilCapillaryRise: CalculatorDefinition = withTexts(

@@ -4,6 +4,7 @@ import type {
   CalculatorDefinition,
   ComputedResult,
 } from '@wickstone/calc-core';
+import { withTexts } from '@wickstone/calc-core/join';
 import type { TextsChunk } from './engine.js';
 import { hydrate, render } from 'preact';
 import type { MountHandle, MountOptions } from './global.js';
@@ -139,7 +140,8 @@ export function mountWidget(
     afterFirstPaint(() => {
       fetchTexts().then(
         ({ texts, runCalculation }) => {
-          calculator = { ...calculator, ...texts };
+          // calc-core's own join, as its registry makes the whole calculator from the same modules.
+          calculator = withTexts(bundle.calculator, texts);
           // The core, as the engine computes with: the liquid's hazards, the calculator's cautions from the texts.
           const core = bundle.calculator;
           run = (inputs) => runCalculation(core, inputs);

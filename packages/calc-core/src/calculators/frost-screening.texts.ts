@@ -50,34 +50,15 @@ export const texts: CalculatorTexts = {
       basis: 'from memory',
     },
   ],
-  warnings: [
-    {
-      code: 'FINE_GRAINED_SOIL',
-      summary:
-        "D10 is finer than 0.075 mm, outside the sands Hazen's relation was drawn from: no estimated rise.",
-    },
-    {
-      code: 'WATER_TABLE_WITHIN_FROST_DEPTH',
-      summary: 'The water table is at or above the frost line.',
-    },
-    {
-      code: 'FRINGE_MAY_REACH_FROST_LINE',
-      summary:
-        "The fringe stops below the frost line at the chosen C but reaches it at the top of Hazen's published range.",
-    },
-    {
-      code: 'INTERMEDIATE_GRADATION',
-      summary:
-        'Cu between 5 and 15, where the criterion gives no threshold of its own; the 3 % threshold is applied.',
-    },
-    {
-      code: 'NEAR_THRESHOLD',
-      summary: 'The share finer than 0.02 mm is within one percentage point of the threshold.',
-    },
-    {
-      code: 'SCREENS_DISAGREE',
-      summary: 'The Casagrande criterion and the soil group disagree; the soil is taken as susceptible.',
-    },
-  ],
+  warningSummaries: {
+    WATER_TABLE_WITHIN_FROST_DEPTH: 'The water table is at or above the frost line.',
+    FRINGE_MAY_REACH_FROST_LINE:
+      "The fringe stops below the frost line at the chosen C but reaches it at the top of Hazen's published range.",
+    INTERMEDIATE_GRADATION:
+      'Cu between 5 and 15, where the criterion gives no threshold of its own; the 3 % threshold is applied.',
+    NEAR_THRESHOLD: 'The share finer than 0.02 mm is within one percentage point of the threshold.',
+    SCREENS_DISAGREE:
+      'The Casagrande criterion and the soil group disagree; the soil is taken as susceptible.',
+  },
   explain,
 };

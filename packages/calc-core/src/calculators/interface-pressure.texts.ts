@@ -1,5 +1,4 @@
 // The interface-pressure calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
-import { CONTACT_ANGLE_NEAR_90 } from './shared.js';
 import {
   CLEAN_SURFACES_CAUTION,
   ESTIMATE_CAUTION,
@@ -29,13 +28,8 @@ export const texts: CalculatorTexts = {
     ...WATER_REFERENCES,
     ...LIQUID_TABLE_REFERENCES,
   ],
-  warnings: [
-    {
-      code: 'SHAPE_NOT_SPHERICAL',
-      summary: 'A drop at least as large as the capillary length is flattened by gravity.',
-    },
-    { code: 'PORE_NON_WETTING', summary: 'θ > 90°: the liquid must be pushed into the pore.' },
-    CONTACT_ANGLE_NEAR_90,
-  ],
+  warningSummaries: {
+    PORE_NON_WETTING: 'θ > 90°: the liquid must be pushed into the pore.',
+  },
   explain,
 };

@@ -43,22 +43,13 @@ export const texts: CalculatorTexts = {
       basis: 'from memory',
     },
   ],
-  warnings: [
-    {
-      code: 'WET_ZONE_NOT_TALL',
-      summary:
-        'The steady height is below the wall thickness, where an even water content across the wall is a poor approximation.',
-    },
-    {
-      code: 'HEIGHT_ABOVE_OBSERVED',
-      summary:
-        'The steady height is above 2 m, which rising damp rarely reaches in practice (common practice).',
-    },
-    {
-      code: 'SLOW_APPROACH',
-      summary:
-        'More than ten years to approach steady state: the steady figures are a limit the wall does not reach.',
-    },
-  ],
+  warningSummaries: {
+    WET_ZONE_NOT_TALL:
+      'The steady height is below the wall thickness, where an even water content across the wall is a poor approximation.',
+    HEIGHT_ABOVE_OBSERVED:
+      'The steady height is above 2 m, which rising damp rarely reaches in practice (common practice).',
+    SLOW_APPROACH:
+      'More than ten years to approach steady state: the steady figures are a limit the wall does not reach.',
+  },
   explain,
 };

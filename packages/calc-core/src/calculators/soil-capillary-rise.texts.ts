@@ -44,29 +44,13 @@ export const texts: CalculatorTexts = {
       basis: 'printed',
     },
   ],
-  warnings: [
-    {
-      code: 'CAPILLARY_RISE_REACHES_SLAB',
-      summary: 'At the chosen C the capillary zone reaches the underside of the slab.',
-    },
-    {
-      code: 'CAPILLARY_RISE_MAY_REACH_SLAB',
-      summary:
-        "The capillary zone stops below the slab at the chosen C but reaches it at the top of Hazen's published range.",
-    },
-    {
-      code: 'LAYER_THINNER_THAN_CODE_MINIMUM',
-      summary: 'The granular layer is thinner than the 4 in (102 mm) of IRC R506.2.2.',
-    },
-    {
-      code: 'LAYER_NOT_CLEAN_GRAVEL',
-      summary: 'More than 10 % of the layer passes the No. 4 sieve (D10 below 4.75 mm).',
-    },
-    { code: 'WATER_TABLE_IN_LAYER', summary: 'The water table is inside the granular layer.' },
-    {
-      code: 'FINE_GRAINED_SOIL',
-      summary: "D10 is finer than 0.075 mm, outside the sands Hazen's relation was drawn from.",
-    },
-  ],
+  warningSummaries: {
+    CAPILLARY_RISE_REACHES_SLAB: 'At the chosen C the capillary zone reaches the underside of the slab.',
+    CAPILLARY_RISE_MAY_REACH_SLAB:
+      "The capillary zone stops below the slab at the chosen C but reaches it at the top of Hazen's published range.",
+    LAYER_THINNER_THAN_CODE_MINIMUM: 'The granular layer is thinner than the 4 in (102 mm) of IRC R506.2.2.',
+    LAYER_NOT_CLEAN_GRAVEL: 'More than 10 % of the layer passes the No. 4 sieve (D10 below 4.75 mm).',
+    WATER_TABLE_IN_LAYER: 'The water table is inside the granular layer.',
+  },
   explain,
 };

@@ -101,7 +101,7 @@ export interface OutputDefinition {
  * A validity check a calculator can raise: stable code, and what it means in general. A whole
  * calculator (the registry's) has every summary; its core carries only the summaries the first view
  * can show (`answer.ts`'s headline gives the one of a warning that withholds its output), and its
- * texts carry them all.
+ * texts the others (`CalculatorTexts.warningSummaries`).
  */
 export interface WarningDefinition {
   readonly code: string;
@@ -270,12 +270,14 @@ export interface CalculatorTexts {
   readonly cautions: readonly Caution[];
   readonly references: readonly Reference[];
   /**
-   * The core's warnings, in its order, each with its summary: joined with the core they take the
-   * place of its list, whose summaries are only those of the warnings that withhold an output.
-   * Absent where the core carries every summary itself (one whose texts would otherwise fetch a
-   * shared module for it, at more cost to the first flight than the summaries save).
+   * The summary of each of the core's warnings that the core declares without one, by warning code
+   * (`{ PORE_NON_WETTING: 'θ > 90°: …' }`): the core keeps only the summaries its first view shows,
+   * those of the warnings that withhold an output. `withTexts` (calc-core's `join.ts`) gives each
+   * of the core's warnings, in the core's order, its own summary or this one; it refuses a summary
+   * for a code the core does not declare or one the core already has. Absent where the core
+   * summarises every warning itself.
    */
-  readonly warnings?: readonly WarningDefinition[];
+  readonly warningSummaries?: Readonly<Record<string, string>>;
   /**
    * Writes the working and assumptions from a solution's notes (`<id>.working.ts`): the first
    * flight carries none of it. Every calculator's texts have one; it is optional for a definition
@@ -284,8 +286,11 @@ export interface CalculatorTexts {
   readonly explain?: Explain;
 }
 
-/** A whole calculator: its core and its texts, as calc-core's registry joins them. */
-export interface CalculatorDefinition extends CalculatorCore, CalculatorTexts {
+/**
+ * A whole calculator: its core and its texts, as `withTexts` joins them (calc-core's registry, the
+ * widget once its texts arrive): every warning with its summary, and no `warningSummaries` of its own.
+ */
+export interface CalculatorDefinition extends CalculatorCore, Omit<CalculatorTexts, 'warningSummaries'> {
   readonly warnings: readonly WarningDefinition[];
 }
 

@@ -1,15 +1,18 @@
 /// <reference types="vite/client" />
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import before from '../../testing/registry-warnings-d13f24b.json' with { type: 'json' };
 import { anyInputs } from '../../testing/arbitrary.js';
 import { headline } from '../answer.js';
-import { calculators, withTexts } from '../registry.js';
+import { withTexts } from '../join.js';
+import { calculators } from '../registry.js';
 import { computeCalculation } from './engine.js';
-import type { CalculatorCore, CalculatorDefinition, ComputedResult } from './types.js';
+import type { CalculatorCore, CalculatorDefinition, CalculatorTexts, ComputedResult } from './types.js';
 
 // A core declares every warning its solve raises but carries only the summaries its first view can
-// show: the headline's, which says why a withheld output has no figure. Its texts carry them all,
-// and the whole calculator (the registry's, the widget's once its texts arrive) has every one.
+// show: the headline's, which says why a withheld output has no figure. Its texts summarise the
+// others (`warningSummaries`), and the whole calculator (the registry's, the widget's once its texts
+// arrive: both joined by `withTexts`) has every one, each written in one place.
 
 const cores = Object.values(
   import.meta.glob<{ calculator: CalculatorCore }>(['./*.ts', '!./*.*.ts'], { eager: true }),
@@ -21,9 +24,18 @@ const coreOf = (id: string): CalculatorCore => {
   if (core === undefined) throw new Error(`no core for ${id}`);
   return core;
 };
+const textModules = Object.entries(
+  import.meta.glob<{ texts: CalculatorTexts }>('./*.texts.ts', { eager: true }),
+).map(([file, m]) => ({ calculator: file.slice(2, -'.texts.ts'.length), texts: m.texts }));
+const textsOf = (id: string): CalculatorTexts => {
+  const texts = textModules.find((t) => t.calculator === id)?.texts;
+  if (texts === undefined) throw new Error(`no texts for ${id}`);
+  return texts;
+};
 
 describe.each(calculators.map((c) => [c.id, c] as const))('%s', (id, def: CalculatorDefinition) => {
   const core = coreOf(id);
+  const texts = textsOf(id);
 
   it('has every warning summarised whole, and declares the same warnings in its core', () => {
     for (const w of def.warnings) expect(w.summary?.length ?? 0).toBeGreaterThan(15);
@@ -31,6 +43,18 @@ describe.each(calculators.map((c) => [c.id, c] as const))('%s', (id, def: Calcul
     core.warnings.forEach((w, i) => {
       if (w.summary !== undefined) expect(w.summary).toBe(def.warnings[i]?.summary);
     });
+  });
+
+  it('has the warnings, order and summaries it had when its texts restated the whole list', () => {
+    // Fixture: each calculator's `warnings` in the registry at commit d13f24b (texts with full lists).
+    expect(Object.keys(before)).toContain(id);
+    expect(def.warnings).toEqual(before[id as keyof typeof before]);
+  });
+
+  it('summarises in its texts exactly the warnings its core leaves without a summary', () => {
+    const unsummarised = core.warnings.filter((w) => w.summary === undefined).map((w) => w.code);
+    expect(Object.keys(texts.warningSummaries ?? {}).sort()).toEqual([...unsummarised].sort());
+    expect(def).not.toHaveProperty('warningSummaries');
   });
 
   it("gives the first view the full widget's headline, withheld or not (a warning that withholds keeps its summary in the core)", () => {
@@ -61,33 +85,53 @@ describe.each(calculators.map((c) => [c.id, c] as const))('%s', (id, def: Calcul
 });
 
 describe('withTexts', () => {
+  // Wetting force: a core that summarises some of its warnings and texts that summarise the rest.
   const core = coreOf('wetting-force');
-  const def = calculators.find((c) => c.id === 'wetting-force') as CalculatorDefinition;
-  const texts = {
-    cautions: def.cautions,
-    references: def.references,
-    warnings: def.warnings,
-    ...(def.explain !== undefined ? { explain: def.explain } : {}),
-  };
+  const texts = textsOf('wetting-force');
+  const summaries = texts.warningSummaries ?? {};
+  const inCore = core.warnings.find((w) => w.summary !== undefined);
+  const inTexts = core.warnings.find((w) => w.summary === undefined);
+  if (inCore === undefined || inTexts === undefined)
+    throw new Error('wetting-force no longer has both kinds');
 
-  it('joins a core and its texts, the texts giving every summary in the core order', () => {
-    expect(withTexts(core, texts)).toEqual(def);
+  it("keeps the core's order, each warning with the core's summary or else the texts'", () => {
+    const joined = withTexts(core, texts);
+    expect(joined.warnings.map((w) => w.code)).toEqual(core.warnings.map((w) => w.code));
+    joined.warnings.forEach((w, i) => {
+      const own = core.warnings[i]?.summary;
+      expect(w.summary).toBe(own ?? summaries[w.code]);
+      expect(w.summary).toBeDefined();
+    });
+    // The rest is the core's and the texts' own, the summaries map left out.
+    const { warningSummaries: _given, ...said } = texts;
+    expect(joined).toEqual({ ...core, ...said, warnings: joined.warnings });
+    expect(joined).not.toHaveProperty('warningSummaries');
   });
 
-  it('refuses texts whose warnings are not the core ones, or lack a summary, or say another', () => {
-    const swapped = [def.warnings[1], def.warnings[0], ...def.warnings.slice(2)];
-    expect(() => withTexts(core, { ...texts, warnings: swapped as typeof def.warnings })).toThrow(
-      /wetting-force/,
+  it('takes a core that summarises every warning as it is, with texts that summarise none', () => {
+    const tube = coreOf('tube-rise');
+    expect(tube.warnings.every((w) => w.summary !== undefined)).toBe(true);
+    expect(withTexts(tube, textsOf('tube-rise')).warnings).toEqual(tube.warnings);
+  });
+
+  it('refuses a warning left without a summary, naming the calculator and the code', () => {
+    const { [inTexts.code]: _dropped, ...fewer } = summaries;
+    expect(() => withTexts(core, { ...texts, warningSummaries: fewer })).toThrow(
+      new RegExp(`wetting-force.*${inTexts.code}`),
     );
-    expect(() => withTexts(core, { ...texts, warnings: def.warnings.slice(1) })).toThrow(/wetting-force/);
-    const bare = def.warnings.map((w) => ({ code: w.code }));
-    expect(() => withTexts(core, { ...texts, warnings: bare })).toThrow(/wetting-force/);
-    const kept = def.warnings.findIndex(
-      (w, i) => core.warnings[i]?.summary !== undefined && w.code !== 'CONTACT_ANGLE_NEAR_90',
+  });
+
+  it('refuses a summary for a code the core does not declare, naming the calculator and the code', () => {
+    const extra = { ...summaries, RING_NOT_ROUND: 'A ring that is not round enough to read.' };
+    expect(() => withTexts(core, { ...texts, warningSummaries: extra })).toThrow(
+      /wetting-force.*RING_NOT_ROUND/,
     );
-    const other = def.warnings.map((w, i) =>
-      i === kept ? { ...w, summary: 'Another summary entirely.' } : w,
+  });
+
+  it('refuses a summary for a warning the core already summarises, even the same words', () => {
+    const again = { ...summaries, [inCore.code]: inCore.summary as string };
+    expect(() => withTexts(core, { ...texts, warningSummaries: again })).toThrow(
+      new RegExp(`wetting-force.*${inCore.code}`),
     );
-    expect(() => withTexts(core, { ...texts, warnings: other })).toThrow(/wetting-force/);
   });
 });

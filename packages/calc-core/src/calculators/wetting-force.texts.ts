@@ -1,5 +1,4 @@
 // The wetting-force calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
-import { CONTACT_ANGLE_NEAR_90 } from './shared.js';
 import {
   CLEAN_SURFACES_CAUTION,
   ESTIMATE_CAUTION,
@@ -62,29 +61,13 @@ export const texts: CalculatorTexts = {
     ...WATER_REFERENCES,
     ...LIQUID_TABLE_REFERENCES,
   ],
-  warnings: [
-    {
-      code: 'CONTACT_ANGLE_NOT_ZERO',
-      summary: 'A non-zero contact angle is assumed for a plate or rod reading.',
-    },
-    CONTACT_ANGLE_NEAR_90,
-    {
-      code: 'RING_BELOW_ASTM_SIZE',
-      summary: 'The ring is smaller than the 40 mm circumference of ASTM D971.',
-    },
-    {
-      code: 'RING_OUTSIDE_CORRECTION_RANGE',
-      summary:
-        'R/r or R³/V is outside the range of the Harkins & Jordan tables (from memory: R/r 30–80, R³/V 0.3–4.5), or the radicand is negative: no corrected value is given.',
-    },
-    {
-      code: 'RING_FACTOR_OUTSIDE_TABLES',
-      summary: 'The correction factor is outside the 0.75–1.05 band of the tables (from memory).',
-    },
-    {
-      code: 'DENSITY_DIFFERENCE_IMPLAUSIBLE',
-      summary: 'A density difference below 100 kg/m³: against air, likely a g/mL value typed as kg/m³.',
-    },
-  ],
+  warningSummaries: {
+    CONTACT_ANGLE_NOT_ZERO: 'A non-zero contact angle is assumed for a plate or rod reading.',
+    RING_BELOW_ASTM_SIZE: 'The ring is smaller than the 40 mm circumference of ASTM D971.',
+    RING_FACTOR_OUTSIDE_TABLES:
+      'The correction factor is outside the 0.75–1.05 band of the tables (from memory).',
+    DENSITY_DIFFERENCE_IMPLAUSIBLE:
+      'A density difference below 100 kg/m³: against air, likely a g/mL value typed as kg/m³.',
+  },
   explain,
 };

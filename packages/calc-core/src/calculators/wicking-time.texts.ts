@@ -1,5 +1,4 @@
 // The wicking-time calculator's texts, apart from its core: see DEVELOPERS.md, "Adding a calculator".
-import { CONTACT_ANGLE_NEAR_90 } from './shared.js';
 import {
   CLEAN_SURFACES_CAUTION,
   DAMP_CAUTION,
@@ -47,22 +46,9 @@ export const texts: CalculatorTexts = {
     VISCOSITY_REFERENCE,
     ...LIQUID_TABLE_REFERENCES,
   ],
-  warnings: [
-    { code: 'BEYOND_JURIN_LIMIT', summary: 'An upward height at or above the Jurin limit is never reached.' },
-    {
-      code: 'INERTIA_NOT_NEGLIGIBLE',
-      summary:
-        'Inertia lengthens the time by more than 5 % (our threshold: the time is under twenty inertial time scales ρr²/(8μ)); the viscous-only times are withheld.',
-    },
-    CONTACT_ANGLE_NEAR_90,
-    {
-      code: 'PORE_TOO_WIDE',
-      summary: 'The pore radius is at least the capillary length: no time is given.',
-    },
-    {
-      code: 'GRAVITY_NOT_NEGLIGIBLE',
-      summary: 'Gravity lengthens the time by more than 5 % (our threshold); use the time with gravity.',
-    },
-  ],
+  warningSummaries: {
+    GRAVITY_NOT_NEGLIGIBLE:
+      'Gravity lengthens the time by more than 5 % (our threshold); use the time with gravity.',
+  },
   explain,
 };
