@@ -4,11 +4,12 @@ import {
   type CalculatorDefinition,
   type ComputedResult,
   type FieldIssue,
+  type TableInput,
   type TableRow,
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { EmbedWidget } from '@wickstone/contracts';
-import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'preact/hooks';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'preact/hooks';
 import {
   applicable,
   collectInputs,
@@ -17,6 +18,7 @@ import {
   reformat,
   settleChoices,
   typed,
+  type FieldState,
   type FormState,
 } from '../lib/form.js';
 import { lookVariables } from '../lib/look.js';
@@ -38,6 +40,7 @@ import { afterThisPaint } from './after-paint.js';
 import { Field } from './Field.js';
 import { useExtras } from '../lazy.js';
 import type { LeadTarget } from './LeadForm.js';
+import { pure } from './pure.js';
 import { Result } from './Result.js';
 import { ChartSlot, TableSlot } from './TableSlot.js';
 
@@ -56,6 +59,11 @@ export interface AppProps {
   readonly initial?: ViewState | undefined;
 }
 
+// Held once, so a field with no problems, warnings or text is handed the same props on every render.
+const NO_ISSUES: readonly FieldIssue[] = [];
+const NO_WARNINGS: readonly string[] = [];
+const EMPTY: FieldState = { text: '', value: null };
+
 interface Outcome extends ShownOutcome {
   /** The same run with its working and input hash, made after the answer is painted; null until then. */
   readonly full: CalculationResult | null;
@@ -66,7 +74,7 @@ interface Outcome extends ShownOutcome {
  * The unit choice: a short line of two plain radio buttons in the header ("Figures in ◉ metric
  * ○ US"), named after the widget so two widgets on a page have distinct groups.
  */
-function UnitSwitch({
+const UnitSwitch = pure(function UnitSwitch({
   name,
   system,
   onChange,
@@ -96,7 +104,7 @@ function UnitSwitch({
       ))}
     </div>
   );
-}
+});
 
 /** The whole widget: header, inputs, result and lead form for one calculator. */
 export function App({ widget, calculator, compute, run, apiBase, reporter, initial }: AppProps) {
@@ -109,7 +117,7 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
   const [form, setForm] = useState<FormState>(
     () => initial?.form ?? initialForm(inputs, settings.units.system),
   );
-  const [issues, setIssues] = useState<readonly FieldIssue[]>(initial?.issues ?? []);
+  const [issues, setIssues] = useState<readonly FieldIssue[]>(initial?.issues ?? NO_ISSUES);
   const [outcome, setOutcome] = useState<Outcome | null>(() =>
     initial?.outcome ? { ...initial.outcome, full: null, target: null } : null,
   );
@@ -128,7 +136,7 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
     appliedKeyRef.current = settingsKey;
     setSystem(settings.units.system);
     setForm(initialForm(inputs, settings.units.system));
-    setIssues([]);
+    setIssues(NO_ISSUES);
     setOutcome(null);
     setReport(null);
   }, [settingsKey, inputs, settings.units.system]);
@@ -139,19 +147,36 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
   const { fieldErrors, otherErrors } = placeIssues(issues, inputs, visible, shownSystem);
   const warned = warnedFields(outcome && !stale ? outcome.result : null);
 
-  const edit = (next: FormState): void => {
-    setForm(next);
-    if (outcome) setStale(true);
-  };
-  const onText = (input: ResolvedInput, text: string): void =>
-    edit({ ...form, [input.def.id]: typed(input, text, shownSystem) });
+  // The handlers keep their identity from render to render (they change the form through updater
+  // functions), so a field whose own props are unchanged is not rendered again. `stale` is only
+  // read beside an answer, and every new answer clears it: an edit may set it whether or not one is shown.
+  const edit = useCallback((change: (form: FormState) => FormState): void => {
+    setForm(change);
+    setStale(true);
+  }, []);
+  const onText = useCallback(
+    (input: ResolvedInput, text: string): void =>
+      edit((f) => ({ ...f, [input.def.id]: typed(input, text, shownSystem) })),
+    [edit, shownSystem],
+  );
   // A new liquid may leave the chosen preset unoffered: the form settles on one that goes with it.
-  const onChoice = (input: ResolvedInput, value: string): void =>
-    edit(settleChoices(inputs, { ...form, [input.def.id]: { text: value, value } }));
-  const onSystem = (next: UnitSystemId): void => {
-    setSystem(next);
-    setForm(reformat(form, inputs, next));
-  };
+  const onChoice = useCallback(
+    (input: ResolvedInput, value: string): void =>
+      edit((f) => settleChoices(inputs, { ...f, [input.def.id]: { text: value, value } })),
+    [edit, inputs],
+  );
+  const onRows = useCallback(
+    (input: TableInput, rows: readonly Readonly<Record<string, number | null>>[]): void =>
+      edit((f) => ({ ...f, [input.id]: { text: '', value: rows as TableRow[] } })),
+    [edit],
+  );
+  const onSystem = useCallback(
+    (next: UnitSystemId): void => {
+      setSystem(next);
+      setForm((f) => reformat(f, inputs, next));
+    },
+    [inputs],
+  );
 
   // The working and the run report need the full run: made once the answer is on screen (and the
   // full run has arrived with the texts), so typing to answer costs compute's numbers alone. A
@@ -199,7 +224,7 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
       if (first) rootRef.current?.querySelector<HTMLElement>(`#${controlId(first.field)}`)?.focus();
       return;
     }
-    setIssues([]);
+    setIssues(NO_ISSUES);
     setStale(false);
     setAnnouncement(answerAnnouncement(calculator, result, shownSystem));
     setReport(null);
@@ -248,17 +273,17 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
                   Array.isArray(form[input.def.id]?.value) ? (form[input.def.id]?.value as TableRow[]) : null
                 }
                 system={shownSystem}
-                onRows={(rows) => edit({ ...form, [input.def.id]: { text: '', value: rows as TableRow[] } })}
+                onRows={onRows}
               />
             ) : (
               <Field
                 key={input.def.id}
                 input={input}
-                state={form[input.def.id] ?? { text: '', value: null }}
+                state={form[input.def.id] ?? EMPTY}
                 system={shownSystem}
                 error={fieldErrors.get(input.def.id)}
                 options={offeredOptions(input, inputs, form)}
-                warningIds={warned.get(input.def.id) ?? []}
+                warningIds={warned.get(input.def.id) ?? NO_WARNINGS}
                 onText={onText}
                 onChoice={onChoice}
               />

@@ -10,6 +10,7 @@ import { outputHelp } from '@wickstone/calc-core/display';
 import { outputUnitFor, toDisplay, unitGap, unitSymbol, withUnit } from '../lib/units.js';
 import type { ExtrasModule } from '../lazy.js';
 import { DISCLAIMER, isHazard, resultCautions, warningId, withheldOutputs } from '../lib/view.js';
+import { pure } from './pure.js';
 
 export { DISCLAIMER, isHazard, resultCautions, warningId } from '../lib/view.js';
 
@@ -107,8 +108,12 @@ export function Readout({
   );
 }
 
-/** The result of the last calculation: figures, band, warnings, working, cautions and the standing disclaimer. */
-export function Result({
+/**
+ * The result of the last calculation: figures, band, warnings, working, cautions and the standing
+ * disclaimer. Rendered again only when its props change (a new answer, its full run, its report,
+ * the answer going stale), not on every keystroke in the form.
+ */
+export const Result = pure(function Result({
   calculator,
   result,
   full,
@@ -222,4 +227,4 @@ export function Result({
       </p>
     </section>
   );
-}
+});
