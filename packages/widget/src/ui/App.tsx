@@ -9,6 +9,7 @@ import {
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { EmbedWidget } from '@wickstone/contracts';
+import type { ComponentProps } from 'preact';
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'preact/hooks';
 import {
   applicable,
@@ -38,7 +39,7 @@ import {
 } from '../lib/view.js';
 import { afterThisPaint } from './after-paint.js';
 import { Field } from './Field.js';
-import { useExtras } from '../lazy.js';
+import { useExtras, type ExtrasModule } from '../lazy.js';
 import type { LeadTarget } from './LeadForm.js';
 import { pure } from './pure.js';
 import { Result } from './Result.js';
@@ -104,6 +105,21 @@ const UnitSwitch = pure(function UnitSwitch({
       ))}
     </div>
   );
+});
+
+// The sheet and lead form come with the extras chunk: rendered again, like the fields, only when
+// their own props change (a new run to attach to), not on every keystroke beside an answer.
+const Sheet = pure(function Sheet({
+  extras,
+  ...props
+}: { extras: ExtrasModule } & ComponentProps<ExtrasModule['SheetBlock']>) {
+  return <extras.SheetBlock {...props} />;
+});
+const Lead = pure(function Lead({
+  extras,
+  ...props
+}: { extras: ExtrasModule } & ComponentProps<ExtrasModule['LeadForm']>) {
+  return <extras.LeadForm {...props} />;
 });
 
 /** The whole widget: header, inputs, result and lead form for one calculator. */
@@ -328,7 +344,8 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
         <ChartSlot result={outcome.full} />
       )}
       {extras && (outcome !== null || preview) && settings.sheet.enabled && (
-        <extras.SheetBlock
+        <Sheet
+          extras={extras}
           publicKey={widget.publicKey}
           apiBase={preview ? null : apiBase}
           target={leadTarget}
@@ -336,7 +353,8 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
       )}
       {/* In preview the form shows from the start, so an admin sees the fields as they set them. */}
       {extras && (outcome !== null || preview) && settings.leadForm.enabled && (
-        <extras.LeadForm
+        <Lead
+          extras={extras}
           form={settings.leadForm}
           publicKey={widget.publicKey}
           apiBase={preview ? null : apiBase}
