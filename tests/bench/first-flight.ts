@@ -11,7 +11,9 @@
 // (`npm run build`) and the test database's DB_* variables exported (see DEVELOPERS.md):
 //   npm run bench -w tests            (BENCH_PORT, default 5670; the firm's site on BENCH_PORT + 1;
 //                                      BENCH_ONLY=<calculator id>,… measures those widgets alone;
-//                                      BENCH_PROFILE=1 prints where a click's CPU time went)
+//                                      BENCH_PROFILE=1 prints where a click's CPU time went,
+//                                      BENCH_PROFILE=all for every round and their medians;
+//                                      BENCH_ROUNDS=<n> types to result n times, default 3)
 import { readFileSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import { loadavg } from 'node:os';
@@ -62,9 +64,15 @@ interface Typing {
   full: number | null;
   /** From the click to the frame after the one with the report's answer. */
   stored: number | null;
+  /**
+   * The keystroke before the click: from its input event to the end of the microtasks it queued
+   * (the widget's render of the form), script alone, without style, layout or paint.
+   */
+  keystroke: number | null;
 }
 
-const TYPING_ROUNDS = 3;
+// BENCH_ROUNDS: more rounds give steadier medians on a shared, loaded machine.
+const TYPING_ROUNDS = Math.max(1, Number(process.env.BENCH_ROUNDS ?? 3) || 3);
 
 interface Figures {
   requests: number;
@@ -174,7 +182,11 @@ const typeAndReady = (factor: number) => `(() => {
   });
   observer.observe(root, { subtree: true, childList: true, attributes: true, characterData: true });
   control.value = String(Number(control.value) * ${factor});
+  const typedAt = performance.now();
   control.dispatchEvent(new Event('input', { bubbles: true }));
+  // Queued after the render the input event queued, so it runs once that render is done.
+  let keystroke = null;
+  queueMicrotask(() => { keystroke = performance.now() - typedAt; });
   const button = root.querySelector('[data-wickstone="calculate"]');
   button.scrollIntoView({ block: 'center' });
   window.__typed = (async () => {
@@ -199,6 +211,7 @@ const typeAndReady = (factor: number) => `(() => {
       inFirst: c ? at.shown !== null && at.shown <= c.processingEnd : at.shown !== null,
       full: t0 !== null && at.full > 0 ? at.full - t0 : null,
       stored: t0 !== null && at.stored > 0 ? at.stored - t0 : null,
+      keystroke,
     };
   })();
   const r = button.getBoundingClientRect();
@@ -216,12 +229,13 @@ interface ProfileNode {
  * BENCH_PROFILE: the CPU profile of a round's click until its report's answer, self time summed per
  * chunk file (the engine's compute, Preact's render in the app chunk, the working in extras), the
  * browser's own calls from script (DOM, fetch) and the rest: "(program)" is the browser's work
- * outside script (style, layout, paint), "(idle)" the main thread waiting.
+ * outside script (style, layout, paint), "(idle)" the main thread waiting. BENCH_PROFILE=all: every
+ * round's, and then the median of each over the rounds (steadier on a loaded machine).
  */
 function printProfile(
   rate: number,
   profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] },
-): void {
+): Map<string, number> {
   const byId = new Map(profile.nodes.map((n) => [n.id, n] as const));
   const self = new Map<string, number>();
   profile.samples.forEach((id, i) => {
@@ -242,16 +256,18 @@ function printProfile(
         .map(([key, msSelf]) => `${key} ${msSelf.toFixed(1)} ms`)
         .join(', '),
   );
+  return self;
 }
 
 async function typing(page: Page, cdp: CDPSession, rate: number, rounds: number): Promise<Typing> {
   const all: Typing[] = [];
+  const profiles: Map<string, number>[] = [];
   for (let i = 0; i < rounds; i++) {
     const { x, y } = (await page.evaluate(typeAndReady(i % 2 === 0 ? 1.5 : 1 / 1.5))) as {
       x: number;
       y: number;
     };
-    const profiling = process.env.BENCH_PROFILE && i === 0;
+    const profiling = process.env.BENCH_PROFILE && (i === 0 || process.env.BENCH_PROFILE === 'all');
     if (profiling) {
       await cdp.send('Profiler.enable');
       await cdp.send('Profiler.setSamplingInterval', { interval: 100 });
@@ -259,10 +275,24 @@ async function typing(page: Page, cdp: CDPSession, rate: number, rounds: number)
     }
     await page.mouse.click(x, y);
     all.push((await page.evaluate('window.__typed')) as Typing);
-    if (profiling) printProfile(rate, (await cdp.send('Profiler.stop')).profile as never);
+    if (profiling) profiles.push(printProfile(rate, (await cdp.send('Profiler.stop')).profile as never));
     for (const f of await page.evaluate(() => (window as unknown as { __frames: string[] }).__frames))
       if (process.env.BENCH_DEBUG) console.error(`  long frame ${f}`);
     if (process.env.BENCH_DEBUG) console.error(JSON.stringify(all[all.length - 1]));
+  }
+  if (profiles.length > 1) {
+    const keys = [...new Set(profiles.flatMap((p) => [...p.keys()]))];
+    const medians = keys.map((key) => {
+      const v = profiles.map((p) => p.get(key) ?? 0).sort((a, b) => a - b);
+      return [key, v[Math.floor(v.length / 2)]!] as const;
+    });
+    console.error(
+      `  profile at CPU ${rate}×, median of ${profiles.length} rounds: ` +
+        medians
+          .sort((a, b) => b[1] - a[1])
+          .map(([key, msSelf]) => `${key} ${msSelf.toFixed(1)} ms`)
+          .join(', '),
+    );
   }
   const median = (pick: (t: Typing) => number | null): number | null => {
     const v = all.map(pick).filter((n): n is number => n !== null && n >= 0);
@@ -274,6 +304,7 @@ async function typing(page: Page, cdp: CDPSession, rate: number, rounds: number)
     inFirst: all.every((t) => t.inFirst),
     full: median((t) => t.full),
     stored: median((t) => t.stored),
+    keystroke: median((t) => t.keystroke),
   };
 }
 
@@ -432,6 +463,7 @@ try {
 
   const kb = (n: number) => `${(n / 1024).toFixed(1)} KB`;
   const ms = (n: number | null) => (n === null ? '—' : `${Math.round(n)} ms`);
+  const ms1 = (n: number | null) => (n === null ? '—' : `${n.toFixed(1)} ms`);
   console.log(
     `first flight, Chromium over ${NETWORK.latency} ms RTT at ${(NETWORK.downloadThroughput / 1024).toFixed(0)} KB/s, CPU ${CPU_SLOWDOWN}× slower; bytes as sent (compressed), from the app's origin`,
   );
@@ -465,7 +497,8 @@ try {
   // Typing to result once the full widget has taken over (the first widget on the page; medians of
   // the rounds), from a trusted click's time stamp: "shown" is what the visitor sees, the frame
   // presented after the click (1st: the new result was in it, every round; later: not); "working" the
-  // frame after the full run's working and its run report; "stored" after the report's answer.
+  // frame after the full run's working and its run report; "stored" after the report's answer;
+  // "keystroke" the script time of the keystroke before the click (its event and the form's render).
   const shown = (t: Typing | null) =>
     t === null || t.shown === null
       ? '—'
@@ -476,11 +509,11 @@ try {
       .join(' ')}`,
   );
   console.log(
-    `${'page'.padEnd(24)}${`shown ${CPU_SLOWDOWN}×`.padStart(16)}${`working ${CPU_SLOWDOWN}×`.padStart(12)}${`stored ${CPU_SLOWDOWN}×`.padStart(12)}${'shown 1×'.padStart(16)}${'working 1×'.padStart(12)}${'stored 1×'.padStart(12)}`,
+    `${'page'.padEnd(24)}${`shown ${CPU_SLOWDOWN}×`.padStart(16)}${`working ${CPU_SLOWDOWN}×`.padStart(12)}${`stored ${CPU_SLOWDOWN}×`.padStart(12)}${'shown 1×'.padStart(16)}${'working 1×'.padStart(12)}${'stored 1×'.padStart(12)}${`keystroke ${CPU_SLOWDOWN}×`.padStart(14)}${'keystroke 1×'.padStart(14)}`,
   );
   for (const [name, f] of typed)
     console.log(
-      `${name.padEnd(24)}${shown(f.slow).padStart(16)}${ms(f.slow?.full ?? null).padStart(12)}${ms(f.slow?.stored ?? null).padStart(12)}${shown(f.fast).padStart(16)}${ms(f.fast?.full ?? null).padStart(12)}${ms(f.fast?.stored ?? null).padStart(12)}`,
+      `${name.padEnd(24)}${shown(f.slow).padStart(16)}${ms(f.slow?.full ?? null).padStart(12)}${ms(f.slow?.stored ?? null).padStart(12)}${shown(f.fast).padStart(16)}${ms(f.fast?.full ?? null).padStart(12)}${ms(f.fast?.stored ?? null).padStart(12)}${ms1(f.slow?.keystroke ?? null).padStart(14)}${ms1(f.fast?.keystroke ?? null).padStart(14)}`,
     );
 
   // BENCH_SHOTS=<dir>: the demo page at desktop and phone widths, unthrottled: demo-<width>-first.png

@@ -4,11 +4,13 @@ import {
   type CalculatorDefinition,
   type ComputedResult,
   type FieldIssue,
+  type TableInput,
   type TableRow,
   type UnitSystemId,
 } from '@wickstone/calc-core';
 import type { EmbedWidget } from '@wickstone/contracts';
-import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'preact/hooks';
+import type { ComponentProps } from 'preact';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'preact/hooks';
 import {
   applicable,
   collectInputs,
@@ -17,6 +19,7 @@ import {
   reformat,
   settleChoices,
   typed,
+  type FieldState,
   type FormState,
 } from '../lib/form.js';
 import { lookVariables } from '../lib/look.js';
@@ -36,8 +39,9 @@ import {
 } from '../lib/view.js';
 import { afterThisPaint } from './after-paint.js';
 import { Field } from './Field.js';
-import { useExtras } from '../lazy.js';
+import { useExtras, type ExtrasModule } from '../lazy.js';
 import type { LeadTarget } from './LeadForm.js';
+import { pure } from './pure.js';
 import { Result } from './Result.js';
 import { ChartSlot, TableSlot } from './TableSlot.js';
 
@@ -56,6 +60,11 @@ export interface AppProps {
   readonly initial?: ViewState | undefined;
 }
 
+// Held once, so a field with no problems, warnings or text is handed the same props on every render.
+const NO_ISSUES: readonly FieldIssue[] = [];
+const NO_WARNINGS: readonly string[] = [];
+const EMPTY: FieldState = { text: '', value: null };
+
 interface Outcome extends ShownOutcome {
   /** The same run with its working and input hash, made after the answer is painted; null until then. */
   readonly full: CalculationResult | null;
@@ -66,7 +75,7 @@ interface Outcome extends ShownOutcome {
  * The unit choice: a short line of two plain radio buttons in the header ("Figures in ◉ metric
  * ○ US"), named after the widget so two widgets on a page have distinct groups.
  */
-function UnitSwitch({
+const UnitSwitch = pure(function UnitSwitch({
   name,
   system,
   onChange,
@@ -96,7 +105,22 @@ function UnitSwitch({
       ))}
     </div>
   );
-}
+});
+
+// The sheet and lead form come with the extras chunk: rendered again, like the fields, only when
+// their own props change (a new run to attach to), not on every keystroke beside an answer.
+const Sheet = pure(function Sheet({
+  extras,
+  ...props
+}: { extras: ExtrasModule } & ComponentProps<ExtrasModule['SheetBlock']>) {
+  return <extras.SheetBlock {...props} />;
+});
+const Lead = pure(function Lead({
+  extras,
+  ...props
+}: { extras: ExtrasModule } & ComponentProps<ExtrasModule['LeadForm']>) {
+  return <extras.LeadForm {...props} />;
+});
 
 /** The whole widget: header, inputs, result and lead form for one calculator. */
 export function App({ widget, calculator, compute, run, apiBase, reporter, initial }: AppProps) {
@@ -109,7 +133,7 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
   const [form, setForm] = useState<FormState>(
     () => initial?.form ?? initialForm(inputs, settings.units.system),
   );
-  const [issues, setIssues] = useState<readonly FieldIssue[]>(initial?.issues ?? []);
+  const [issues, setIssues] = useState<readonly FieldIssue[]>(initial?.issues ?? NO_ISSUES);
   const [outcome, setOutcome] = useState<Outcome | null>(() =>
     initial?.outcome ? { ...initial.outcome, full: null, target: null } : null,
   );
@@ -128,7 +152,7 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
     appliedKeyRef.current = settingsKey;
     setSystem(settings.units.system);
     setForm(initialForm(inputs, settings.units.system));
-    setIssues([]);
+    setIssues(NO_ISSUES);
     setOutcome(null);
     setReport(null);
   }, [settingsKey, inputs, settings.units.system]);
@@ -139,19 +163,36 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
   const { fieldErrors, otherErrors } = placeIssues(issues, inputs, visible, shownSystem);
   const warned = warnedFields(outcome && !stale ? outcome.result : null);
 
-  const edit = (next: FormState): void => {
-    setForm(next);
-    if (outcome) setStale(true);
-  };
-  const onText = (input: ResolvedInput, text: string): void =>
-    edit({ ...form, [input.def.id]: typed(input, text, shownSystem) });
+  // The handlers keep their identity from render to render (they change the form through updater
+  // functions), so a field whose own props are unchanged is not rendered again. `stale` is only
+  // read beside an answer, and every new answer clears it: an edit may set it whether or not one is shown.
+  const edit = useCallback((change: (form: FormState) => FormState): void => {
+    setForm(change);
+    setStale(true);
+  }, []);
+  const onText = useCallback(
+    (input: ResolvedInput, text: string): void =>
+      edit((f) => ({ ...f, [input.def.id]: typed(input, text, shownSystem) })),
+    [edit, shownSystem],
+  );
   // A new liquid may leave the chosen preset unoffered: the form settles on one that goes with it.
-  const onChoice = (input: ResolvedInput, value: string): void =>
-    edit(settleChoices(inputs, { ...form, [input.def.id]: { text: value, value } }));
-  const onSystem = (next: UnitSystemId): void => {
-    setSystem(next);
-    setForm(reformat(form, inputs, next));
-  };
+  const onChoice = useCallback(
+    (input: ResolvedInput, value: string): void =>
+      edit((f) => settleChoices(inputs, { ...f, [input.def.id]: { text: value, value } })),
+    [edit, inputs],
+  );
+  const onRows = useCallback(
+    (input: TableInput, rows: readonly Readonly<Record<string, number | null>>[]): void =>
+      edit((f) => ({ ...f, [input.id]: { text: '', value: rows as TableRow[] } })),
+    [edit],
+  );
+  const onSystem = useCallback(
+    (next: UnitSystemId): void => {
+      setSystem(next);
+      setForm((f) => reformat(f, inputs, next));
+    },
+    [inputs],
+  );
 
   // The working and the run report need the full run: made once the answer is on screen (and the
   // full run has arrived with the texts), so typing to answer costs compute's numbers alone. A
@@ -199,7 +240,7 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
       if (first) rootRef.current?.querySelector<HTMLElement>(`#${controlId(first.field)}`)?.focus();
       return;
     }
-    setIssues([]);
+    setIssues(NO_ISSUES);
     setStale(false);
     setAnnouncement(answerAnnouncement(calculator, result, shownSystem));
     setReport(null);
@@ -248,17 +289,17 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
                   Array.isArray(form[input.def.id]?.value) ? (form[input.def.id]?.value as TableRow[]) : null
                 }
                 system={shownSystem}
-                onRows={(rows) => edit({ ...form, [input.def.id]: { text: '', value: rows as TableRow[] } })}
+                onRows={onRows}
               />
             ) : (
               <Field
                 key={input.def.id}
                 input={input}
-                state={form[input.def.id] ?? { text: '', value: null }}
+                state={form[input.def.id] ?? EMPTY}
                 system={shownSystem}
                 error={fieldErrors.get(input.def.id)}
                 options={offeredOptions(input, inputs, form)}
-                warningIds={warned.get(input.def.id) ?? []}
+                warningIds={warned.get(input.def.id) ?? NO_WARNINGS}
                 onText={onText}
                 onChoice={onChoice}
               />
@@ -303,7 +344,8 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
         <ChartSlot result={outcome.full} />
       )}
       {extras && (outcome !== null || preview) && settings.sheet.enabled && (
-        <extras.SheetBlock
+        <Sheet
+          extras={extras}
           publicKey={widget.publicKey}
           apiBase={preview ? null : apiBase}
           target={leadTarget}
@@ -311,7 +353,8 @@ export function App({ widget, calculator, compute, run, apiBase, reporter, initi
       )}
       {/* In preview the form shows from the start, so an admin sees the fields as they set them. */}
       {extras && (outcome !== null || preview) && settings.leadForm.enabled && (
-        <extras.LeadForm
+        <Lead
+          extras={extras}
           form={settings.leadForm}
           publicKey={widget.publicKey}
           apiBase={preview ? null : apiBase}

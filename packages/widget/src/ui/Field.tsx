@@ -3,6 +3,7 @@ import type { FieldState } from '../lib/form.js';
 import type { ResolvedInput } from '../lib/settings.js';
 import { displayUnitOf, unitSymbol } from '../lib/units.js';
 import { controlId } from '../lib/view.js';
+import { pure } from './pure.js';
 
 export interface FieldProps {
   readonly input: ResolvedInput;
@@ -19,8 +20,21 @@ export interface FieldProps {
 
 export { controlId } from '../lib/view.js';
 
-/** One calculator input: label with its unit, the control, help, lock note and error tied to it. */
-export function Field({ input, state, system, error, options, warningIds, onText, onChoice }: FieldProps) {
+/**
+ * One calculator input: label with its unit, the control, help, lock note and error tied to it.
+ * Rendered again only when its own props change: typing in another field, or a new answer that
+ * warns about other inputs, leaves it as it is.
+ */
+export const Field = pure(function Field({
+  input,
+  state,
+  system,
+  error,
+  options,
+  warningIds,
+  onText,
+  onChoice,
+}: FieldProps) {
   const def = input.def;
   const id = controlId(def.id);
   const locked = input.mode === 'locked';
@@ -113,4 +127,4 @@ export function Field({ input, state, system, error, options, warningIds, onText
       )}
     </div>
   );
-}
+});

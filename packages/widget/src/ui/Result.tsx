@@ -10,6 +10,7 @@ import { outputHelp } from '@wickstone/calc-core/display';
 import { outputUnitFor, toDisplay, unitGap, unitSymbol, withUnit } from '../lib/units.js';
 import type { ExtrasModule } from '../lazy.js';
 import { DISCLAIMER, isHazard, resultCautions, warningId, withheldOutputs } from '../lib/view.js';
+import { pure } from './pure.js';
 
 export { DISCLAIMER, isHazard, resultCautions, warningId } from '../lib/view.js';
 
@@ -107,20 +108,24 @@ export function Readout({
   );
 }
 
-/** The result of the last calculation: figures, band, warnings, working, cautions and the standing disclaimer. */
-export function Result({
+/** The answer itself, without its stale mark and report state. */
+type AnswerProps = Omit<ResultProps, 'stale' | 'runId' | 'report'>;
+
+/**
+ * What the answer says: figures, band, hazards, warnings, working and cautions, then the standing
+ * disclaimer. Rendered again only when the answer changes (a new one, its full run), not when it
+ * goes stale or its run report is answered.
+ */
+const Answer = pure(function Answer({
   calculator,
   result,
   full,
   system,
-  stale,
   firmCautions,
-  runId,
-  report,
   name,
   secondary,
   extras,
-}: ResultProps) {
+}: AnswerProps) {
   const answer = headline(calculator, result, system);
   const figures = calculator.outputs.filter((o) => typeof result.outputs[o.id] === 'number');
   const main = figures.filter((o) => !isSecondaryOutput(o));
@@ -129,20 +134,7 @@ export function Result({
   const inputLabel = (id: string): string => calculator.inputs.find((i) => i.id === id)?.label ?? id;
   const hazards = resultCautions(calculator, result).filter(isHazard);
   return (
-    <section
-      class={stale ? 'result is-stale' : 'result'}
-      data-wickstone="result"
-      data-result=""
-      data-stale={stale ? '' : undefined}
-      data-run-id={runId ?? undefined}
-      data-report={report ?? undefined}
-      aria-label={`${name}: answer`}
-    >
-      {stale && (
-        <p class="stale" data-wickstone="stale">
-          The inputs have changed since this answer. Work it out again to update it.
-        </p>
-      )}
+    <>
       <div class="answer">
         {extras && full && (
           <extras.Picture calculator={calculator} result={full} system={system} output={answer.output} />
@@ -220,6 +212,31 @@ export function Result({
       <p class="disclaimer" data-wickstone="disclaimer">
         {DISCLAIMER}
       </p>
+    </>
+  );
+});
+
+/**
+ * The result of the last calculation: the answer, marked stale once the inputs change, with its
+ * run's id and report state. Rendered again only when its props change, not on every keystroke.
+ */
+export const Result = pure(function Result({ stale, runId, report, ...answer }: ResultProps) {
+  return (
+    <section
+      class={stale ? 'result is-stale' : 'result'}
+      data-wickstone="result"
+      data-result=""
+      data-stale={stale ? '' : undefined}
+      data-run-id={runId ?? undefined}
+      data-report={report ?? undefined}
+      aria-label={`${answer.name}: answer`}
+    >
+      {stale && (
+        <p class="stale" data-wickstone="stale">
+          The inputs have changed since this answer. Work it out again to update it.
+        </p>
+      )}
+      <Answer {...answer} />
     </section>
   );
-}
+});
