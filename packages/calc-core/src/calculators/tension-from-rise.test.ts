@@ -98,7 +98,22 @@ describe('tension-from-rise: contact angle', () => {
           expect(cos(back.outputs.contactAngleDeg ?? NaN)).toBeCloseTo(cos(angle), 12);
         },
       ),
+      // A CI run's counterexample: at θ ≈ 3e-15° tube-rise's rise came out a unit in the last place
+      // above tension-from-rise's own fully wetting rise, which was refused as "above" itself.
+      { examples: [[0.02, 3.180554681463517e-15, 0.001999999999999996]] },
     );
+  });
+
+  it('reads a rise that is the fully wetting rise to within rounding as 0°, and one 1 µm above it as no angle', () => {
+    const base = { solveFor: 'contactAngle', diameter: 0.002, density: 1000, surfaceTension: 0.02 } as const;
+    // 4σ/(ρgd) − d/6 = 4 × 0.02 / (1000 × 9.80665 × 0.002) − 0.002/6 = 0.0037455315186 m (python3)
+    const wetting = (4 * 0.02) / (1000 * 9.80665 * 0.002) - 0.002 / 6;
+    const atRounding = calculate('tension-from-rise', { ...base, rise: wetting * (1 + 4e-16) });
+    expect(atRounding.outputs.contactAngleDeg).toBe(0);
+    expect(atRounding.warnings.map((w) => w.code)).not.toContain('NO_ANGLE_FOR_RISE');
+    const above = calculate('tension-from-rise', { ...base, rise: wetting + 1e-6 });
+    expect(above.outputs.contactAngleDeg).toBeNull();
+    expect(above.warnings[0]?.code).toBe('NO_ANGLE_FOR_RISE');
   });
 
   it('refuses a rise above the fully wetting rise, naming how high that is', () => {

@@ -37,11 +37,21 @@ function riseFor(sigma: number, angleDeg: number, rho: number, g: number, d: num
 }
 
 /**
+ * How far above the fully wetting rise a rise may lie and still read as θ = 0: the rounding of the
+ * same rise worked out in another order (tube-rise's Jurin's law and meniscus term give it a few
+ * units in the last place apart), not a tolerance on measurement.
+ */
+const ROUNDING = 1e-12;
+
+/**
  * The contact angle, 0–90°, whose corrected rise is `h`, by bisection on a rise that falls as the
- * angle grows (null when `h` is above the fully wetting rise). 60 halvings put it within 1e-16 of 90°.
+ * angle grows (null when `h` is above the fully wetting rise by more than rounding). 60 halvings put
+ * it within 1e-16 of 90°.
  */
 export function angleForRise(h: number, sigma: number, rho: number, g: number, d: number): number | null {
-  if (h > riseFor(sigma, 0, rho, g, d)) return null;
+  const wetting = riseFor(sigma, 0, rho, g, d);
+  if (h > wetting * (1 + ROUNDING)) return null;
+  if (h >= wetting) return 0;
   let lo = 0;
   let hi = 90;
   for (let i = 0; i < 60; i++) {
